@@ -1,0 +1,97 @@
+// The spring file of `coilfront analyze`: one given spring and how it is used.
+import type { Catalog } from '../catalogs/types.js';
+import type { MaterialFigures, ServiceConditions, SpringGeometry } from '../model/analysis.js';
+import { SEATINGS, type Seating } from '../model/buckling.js';
+import { FATIGUE_CRITERIA, type FatigueCriterion } from '../model/fatigue.js';
+import { END_TYPES, inactiveCoils, solidLength, type EndType } from '../model/geometry.js';
+import { springRate } from '../model/rate.js';
+import type { StressCorrection } from '../model/stressFactor.js';
+import { formatQuantity } from '../units/format.js';
+import { InputError, parseNumber, parseQuantity } from '../units/parse.js';
+import type { UnitSystem } from '../units/systems.js';
+import { Fields } from './fields.js';
+import { materialFigures, parseMaterialChoice, strengthRangeNote, type MaterialChoice } from './material.js';
+
+export interface SpringCase {
+  system: UnitSystem;
+  materialChoice: MaterialChoice;
+  figures: MaterialFigures;
+  geometry: SpringGeometry;
+  service: ServiceConditions;
+  setRemoved: boolean;
+  notes: string[];
+}
+
+export function parseCycles(raw: unknown, field: string): number | undefined {
+  if (raw === undefined || raw === null) return undefined;
+  if (raw === 'infinite' || raw === 'inf') return Infinity;
+  return parseNumber(raw, field, { positive: true });
+}
+
+export function readSpringCase(raw: unknown, catalog: Catalog): SpringCase {
+  const system = Fields.of(raw, '', 'si').choice('units', ['si', 'us'] as const) ?? 'si';
+  const f = Fields.of(raw, '', system);
+  f.get('units');
+  const choice = parseMaterialChoice(f.require('material', 'a material id or { like: <id>, ... }'), system, catalog, 'material');
+  const d = f.requiredQuantity('wire_diameter', 'length', { positive: true });
+  const which = f.exactlyOne(['mean_diameter', 'outer_diameter', 'inner_diameter']);
+  const given = f.requiredQuantity(which, 'length', { positive: true });
+  const D = which === 'mean_diameter' ? given : which === 'outer_diameter' ? given - d : given + d;
+  if (!(D > d)) throw new InputError(which, `a diameter that leaves a mean diameter above the wire diameter ${formatQuantity(d, 'length', system)}`, f.get(which));
+  const ends = (f.choice('ends', END_TYPES) ?? 'squared-ground') as EndType;
+  const coilsKey = f.exactlyOne(['active_coils', 'total_coils']);
+  const coils = f.number(coilsKey, { positive: true }) as number;
+  const Na = coilsKey === 'active_coils' ? coils : coils - inactiveCoils(ends);
+  if (!(Na > 0)) throw new InputError(coilsKey, `more total coils than the ${inactiveCoils(ends)} inactive coils of ${ends} ends`, coils);
+  const L0 = f.requiredQuantity('free_length', 'length', { positive: true });
+  const Ls = solidLength(d, Na + inactiveCoils(ends), ends);
+  if (L0 <= Ls) throw new InputError('free_length', `a free length above the solid length ${formatQuantity(Ls, 'length', system)} (the coils overlap at free length)`, f.get('free_length'));
+  const seating = (f.choice('seating', SEATINGS) ?? 'fixed-fixed') as Seating;
+  const criterion = (f.choice('fatigue_criterion', FATIGUE_CRITERIA) ?? 'gerber') as FatigueCriterion;
+  const correction = (f.choice('stress_factor', ['bergstrasser', 'wahl'] as const) ?? 'bergstrasser') as StressCorrection;
+  const directShear = f.bool('direct_shear_rate') ?? false;
+  const setRemoved = f.bool('set_removed') ?? false;
+  const figures = materialFigures(choice, d, setRemoved);
+  const k = springRate(figures.shearModulus, d, D, Na, directShear);
+
+  const lengthsRaw = f.has('lengths') ? 'lengths' : undefined;
+  const forcesRaw = f.has('forces') ? 'forces' : undefined;
+  if (lengthsRaw && forcesRaw) throw new InputError('lengths, forces', 'only one of lengths | forces (both given)');
+  let lengths: number[] = [];
+  if (lengthsRaw) {
+    lengths = (f.list('lengths') ?? []).map((v, i) => {
+      const L = parseQuantity(v, 'length', system, `lengths[${i}]`, { positive: true });
+      if (L < Ls - 1e-9) throw new InputError(`lengths[${i}]`, `a length at or above the solid length ${formatQuantity(Ls, 'length', system)}`, v);
+      if (L > L0) throw new InputError(`lengths[${i}]`, `a length at or below the free length ${formatQuantity(L0, 'length', system)} (a compression spring)`, v);
+      return L;
+    });
+  } else if (forcesRaw) {
+    lengths = (f.list('forces') ?? []).map((v, i) => {
+      const F = parseQuantity(v, 'force', system, `forces[${i}]`, { nonNegative: true });
+      const L = L0 - F / k;
+      if (L < Ls - 1e-9) throw new InputError(`forces[${i}]`, `a force the spring can carry before it is solid (at most ${formatQuantity(k * (L0 - Ls), 'force', system)})`, v);
+      return L;
+    });
+  }
+  const cycles = parseCycles(f.get('cycles'), 'cycles');
+  const service: ServiceConditions = {
+    lengths,
+    cycles,
+    peened: f.bool('peened') ?? false,
+    criterion,
+    correction,
+    directShear,
+    seating,
+    temperature: f.quantity('temperature', 'temperature'),
+    forcingFrequency: f.quantity('forcing_frequency', 'frequency', { nonNegative: true }),
+    clashAllowance: f.fraction('clash_allowance') ?? 0.15,
+    gapRule: f.bool('coil_gap_rule') ?? false,
+    surgeMargin: f.number('surge_margin', { positive: true }) ?? 15,
+  };
+  f.rejectUnknown();
+  const notes: string[] = [];
+  const range = strengthRangeNote(choice, d);
+  if (range) notes.push(range);
+  if (cycles !== undefined && cycles < 1e4) notes.push(`${cycles} cycles is below 1e4: judged as static service`);
+  return { system, materialChoice: choice, figures, geometry: { wireDiameter: d, meanDiameter: D, activeCoils: Na, ends, freeLength: L0 }, service, setRemoved, notes };
+}

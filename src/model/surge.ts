@@ -1,0 +1,14 @@
+// Surge (first natural) frequency of a helical compression spring, from the wave equation for the
+// coil (Budynas and Nisbett, Shigley, eqs. 10-24 to 10-26; Wolford and Smith):
+//   both ends on plates:  f = (1/2) sqrt(k / m_a);  one end free: f = (1/4) sqrt(k / m_a)
+// with m_a the mass of the active coils, rho pi^2 d^2 D Na / 4.
+
+export function activeCoilMass(wireDiameter: number, meanDiameter: number, activeCoils: number, density: number): number {
+  return ((Math.PI * Math.PI * wireDiameter * wireDiameter * meanDiameter * activeCoils) / 4) * 1e-9 * density;
+}
+
+/** rate in N/mm, mass in kg, frequency in Hz. */
+export function surgeFrequency(rate: number, activeMass: number, oneEndFree: boolean): number {
+  const f = Math.sqrt((rate * 1000) / activeMass);
+  return oneEndFree ? f / 4 : f / 2;
+}

@@ -1,0 +1,26 @@
+// Writing quantities for people: core (SI) values into the chosen system with a sensible number
+// of significant figures. Non-finite values never reach output: they are written as a dash.
+import type { Kind } from './kinds.js';
+import { displayUnit, type UnitSystem } from './systems.js';
+
+export function sig(v: number, digits = 4): string {
+  if (!Number.isFinite(v)) return '-';
+  if (v === 0) return '0';
+  const a = Math.abs(v);
+  if (a >= 1e6 || a < 1e-4) return v.toExponential(digits - 1);
+  const decimals = Math.max(0, digits - 1 - Math.floor(Math.log10(a)));
+  return v.toFixed(Math.min(decimals, 8));
+}
+
+export function formatQuantity(core: number, kind: Kind, system: UnitSystem, digits = 4): string {
+  const u = displayUnit(system, kind);
+  return `${sig(u.fromCore(core), digits)} ${u.symbol}`;
+}
+
+export function inUnit(core: number, kind: Kind, system: UnitSystem): number {
+  return displayUnit(system, kind).fromCore(core);
+}
+
+export function unitSymbol(kind: Kind, system: UnitSystem): string {
+  return displayUnit(system, kind).symbol;
+}
