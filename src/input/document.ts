@@ -17,6 +17,13 @@ export function readInputFile(path: string): unknown {
 }
 
 export function parseText(text: string, label: string): unknown {
+  if (label.toLowerCase().endsWith('.json')) {
+    try {
+      return JSON.parse(text);
+    } catch (e) {
+      throw new InputError(label, 'well-formed YAML or JSON', (e as Error).message);
+    }
+  }
   // YAML 1.2 is a superset of JSON, so one parser reads both.
   const doc = parseDocument(text, { prettyErrors: false, uniqueKeys: true });
   if (doc.errors.length > 0) {
