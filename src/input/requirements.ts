@@ -1,0 +1,195 @@
+// The requirements file of `coilfront design`, `frontier` and `sweep`: what the spring must do and
+// where it must fit. Every field but load, material and envelope has a default, documented in the README.
+import { FAMILIES, type Catalog } from '../catalogs/types.js';
+import { findSeries } from '../catalogs/load.js';
+import { SEATINGS, type Seating } from '../model/buckling.js';
+import { FATIGUE_CRITERIA, type FatigueCriterion } from '../model/fatigue.js';
+import { END_TYPES, type EndType } from '../model/geometry.js';
+import type { StressCorrection } from '../model/stressFactor.js';
+import { InputError, parseNumber, parseQuantity } from '../units/parse.js';
+import type { UnitSystem } from '../units/systems.js';
+import { Fields, isRecord } from './fields.js';
+import { parseMaterialChoice, type MaterialChoice } from './material.js';
+import { parseCycles } from './springFile.js';
+
+export const RANK_KEYS = ['mass', 'wire_volume', 'outer_diameter', 'free_length', 'safety_factor'] as const;
+export type RankKey = (typeof RANK_KEYS)[number];
+
+export interface Requirements {
+  system: UnitSystem;
+  materials: MaterialChoice[];
+  ends: EndType[];
+  seating: Seating;
+  workingForce: number;
+  workingLength: number;
+  loadTolerance: number;
+  operatingLength?: number;
+  operatingForce?: number;
+  maxOuterDiameter?: number;
+  minInnerDiameter?: number;
+  maxFreeLength?: number;
+  maxSolidLength?: number;
+  cycles?: number;
+  peened: boolean;
+  criterion: FatigueCriterion;
+  correction: StressCorrection;
+  directShear: boolean;
+  setRemoved: boolean;
+  temperature?: number;
+  forcingFrequency?: number;
+  /** Per material: the wire diameters to try (mm). */
+  wireSizes: (m: MaterialChoice) => number[];
+  wireSizesLabel: string;
+  activeCoils: [number, number];
+  coilStep: number;
+  index: [number, number];
+  allowableStress?: number;
+  safety: { static: number; fatigue: number; surge: number };
+  clashAllowance: number;
+  gapRule: boolean;
+  solidSafe: boolean;
+  rank: RankKey;
+  top: number;
+  seed: number;
+  /** Mean-diameter scan step (mm) for the checks that are not monotone in it. */
+  diameterResolution: number;
+}
+
+export const DEFAULTS = {
+  ends: 'squared-ground' as EndType,
+  seating: 'fixed-fixed' as Seating,
+  loadTolerance: 0,
+  activeCoils: [3, 30] as [number, number],
+  coilStep: 0.25,
+  index: [4, 12] as [number, number],
+  safety: { static: 1.2, fatigue: 1.5, surge: 15 },
+  clashAllowance: 0.15,
+  rank: 'mass' as RankKey,
+  top: 10,
+  seed: 1,
+  diameterResolution: 0.01,
+};
+
+function pair(f: Fields, key: string, fallback: [number, number], rule: { positive?: boolean; integer?: boolean }): [number, number] {
+  const list = f.list(key);
+  if (!list) return fallback;
+  if (list.length !== 2) throw new InputError(f.name(key), 'a list of two numbers [low, high]', f.get(key));
+  const a = parseNumber(list[0], `${f.name(key)}[0]`, rule);
+  const b = parseNumber(list[1], `${f.name(key)}[1]`, rule);
+  if (!(b >= a)) throw new InputError(f.name(key), '[low, high] with high at or above low', f.get(key));
+  return [a, b];
+}
+
+export function readRequirements(raw: unknown, catalog: Catalog): Requirements {
+  const system = Fields.of(raw, '', 'si').choice('units', ['si', 'us'] as const) ?? 'si';
+  const f = Fields.of(raw, '', system);
+  f.get('units');
+
+  // Materials: an id, a list of ids, a family, any, or an override object.
+  const rawMaterial = f.require('material', `a material id, a list of ids, { family: ${FAMILIES.join(' | ')} }, "any", or { like: <id>, ... }`);
+  let materials: MaterialChoice[];
+  if (rawMaterial === 'any') materials = catalog.materials.map((material) => ({ material }));
+  else if (Array.isArray(rawMaterial)) {
+    if (rawMaterial.length === 0) throw new InputError('material', 'a non-empty list of material ids');
+    materials = rawMaterial.map((id, i) => parseMaterialChoice(id, system, catalog, `material[${i}]`));
+  } else if (isRecord(rawMaterial) && 'family' in rawMaterial) {
+    const g = Fields.of(rawMaterial, 'material', system);
+    const fam = g.choice('family', [...FAMILIES, 'any'] as const);
+    g.rejectUnknown();
+    materials = catalog.materials.filter((m) => fam === 'any' || m.family === fam).map((material) => ({ material }));
+  } else materials = [parseMaterialChoice(rawMaterial, system, catalog, 'material')];
+
+  const endsRaw = f.get('ends');
+  const ends: EndType[] = endsRaw === undefined || endsRaw === null ? [DEFAULTS.ends]
+    : (Array.isArray(endsRaw) ? endsRaw : [endsRaw]).map((e, i) => {
+      if (typeof e !== 'string' || !(END_TYPES as readonly string[]).includes(e)) throw new InputError(Array.isArray(endsRaw) ? `ends[${i}]` : 'ends', `one of ${END_TYPES.join(' | ')}`, e);
+      return e as EndType;
+    });
+
+  const load = Fields.of(f.require('load', 'the force at the working length: { force, length }'), 'load', system);
+  const workingForce = load.requiredQuantity('force', 'force', { positive: true });
+  const workingLength = load.requiredQuantity('length', 'length', { positive: true });
+  load.rejectUnknown();
+
+  const operatingLength = f.quantity('operating_length', 'length', { positive: true });
+  const operatingForce = f.quantity('operating_force', 'force', { positive: true });
+  if (operatingLength !== undefined && operatingLength >= workingLength) throw new InputError('operating_length', `a length shorter than the working length (the end of the stroke)`, f.get('operating_length'));
+  if (operatingForce !== undefined && operatingLength === undefined) throw new InputError('operating_length', 'a value: operating_force needs the length it acts at (the field is missing)');
+  if (operatingForce !== undefined && operatingForce <= workingForce) throw new InputError('operating_force', 'a force above the working force (the spring is compressed further)', f.get('operating_force'));
+
+  const env = Fields.of(f.require('envelope', 'a mapping of envelope limits (max_outer_diameter, min_inner_diameter, max_free_length, max_solid_length)'), 'envelope', system);
+  const maxOuterDiameter = env.quantity('max_outer_diameter', 'length', { positive: true });
+  const minInnerDiameter = env.quantity('min_inner_diameter', 'length', { positive: true });
+  const maxFreeLength = env.quantity('max_free_length', 'length', { positive: true });
+  const maxSolidLength = env.quantity('max_solid_length', 'length', { positive: true });
+  env.rejectUnknown();
+  if (maxOuterDiameter !== undefined && minInnerDiameter !== undefined && minInnerDiameter >= maxOuterDiameter) {
+    throw new InputError('envelope.min_inner_diameter', 'a diameter below envelope.max_outer_diameter', env.get('min_inner_diameter'));
+  }
+  if (maxFreeLength !== undefined && maxFreeLength <= workingLength) throw new InputError('envelope.max_free_length', 'a length above the working length', env.get('max_free_length'));
+
+  // Wire sizes: a series id for every material, or an explicit list of diameters.
+  const wsRaw = f.get('wire_sizes');
+  let wireSizes: (m: MaterialChoice) => number[];
+  let wireSizesLabel: string;
+  if (wsRaw === undefined || wsRaw === null) {
+    wireSizes = (m) => findSeries(catalog, m.material.wireSeries)!.diameters;
+    wireSizesLabel = 'each material\'s own series';
+  } else if (typeof wsRaw === 'string') {
+    const series = findSeries(catalog, wsRaw);
+    if (!series) throw new InputError('wire_sizes', `a wire series (${catalog.series.map((s) => s.id).join(' | ')}) or a list of diameters`, wsRaw);
+    wireSizes = () => series.diameters;
+    wireSizesLabel = series.id;
+  } else if (Array.isArray(wsRaw)) {
+    if (wsRaw.length === 0) throw new InputError('wire_sizes', 'a non-empty list of diameters');
+    const list = wsRaw.map((v, i) => parseQuantity(v, 'length', system, `wire_sizes[${i}]`, { positive: true })).sort((a, b) => a - b);
+    wireSizes = () => list;
+    wireSizesLabel = 'the listed diameters';
+  } else throw new InputError('wire_sizes', 'a wire series id or a list of diameters', wsRaw);
+
+  const activeCoils = pair(f, 'active_coils', DEFAULTS.activeCoils, { positive: true });
+  const coilStep = f.number('coil_step', { positive: true }) ?? DEFAULTS.coilStep;
+  if ((activeCoils[1] - activeCoils[0]) / coilStep > 100000) throw new InputError('coil_step', 'a step that gives at most 100000 coil counts in active_coils');
+  const index = pair(f, 'index', DEFAULTS.index, { positive: true });
+  if (index[0] <= 1) throw new InputError('index[0]', 'a spring index above 1', index[0]);
+
+  const safetyRaw = f.get('safety');
+  const safety = { ...DEFAULTS.safety };
+  if (safetyRaw !== undefined && safetyRaw !== null) {
+    const sf = Fields.of(safetyRaw, 'safety', system);
+    safety.static = sf.number('static', { positive: true }) ?? safety.static;
+    safety.fatigue = sf.number('fatigue', { positive: true }) ?? safety.fatigue;
+    safety.surge = sf.number('surge', { positive: true }) ?? safety.surge;
+    sf.rejectUnknown();
+  }
+  const req: Requirements = {
+    system, materials, ends,
+    seating: (f.choice('seating', SEATINGS) ?? DEFAULTS.seating) as Seating,
+    workingForce, workingLength,
+    loadTolerance: f.fraction('load_tolerance') ?? DEFAULTS.loadTolerance,
+    operatingLength, operatingForce,
+    maxOuterDiameter, minInnerDiameter, maxFreeLength, maxSolidLength,
+    cycles: parseCycles(f.get('cycles'), 'cycles'),
+    peened: f.bool('peened') ?? false,
+    criterion: (f.choice('fatigue_criterion', FATIGUE_CRITERIA) ?? 'gerber') as FatigueCriterion,
+    correction: (f.choice('stress_factor', ['bergstrasser', 'wahl'] as const) ?? 'bergstrasser') as StressCorrection,
+    directShear: f.bool('direct_shear_rate') ?? false,
+    setRemoved: f.bool('set_removed') ?? false,
+    temperature: f.quantity('temperature', 'temperature'),
+    forcingFrequency: f.quantity('forcing_frequency', 'frequency', { nonNegative: true }),
+    wireSizes, wireSizesLabel,
+    activeCoils, coilStep, index,
+    allowableStress: f.quantity('allowable_stress', 'stress', { positive: true }),
+    safety,
+    clashAllowance: f.fraction('clash_allowance') ?? DEFAULTS.clashAllowance,
+    gapRule: f.bool('coil_gap_rule') ?? false,
+    solidSafe: f.bool('solid_safe') ?? false,
+    rank: (f.choice('rank', RANK_KEYS) ?? DEFAULTS.rank) as RankKey,
+    top: f.number('top', { integer: true, positive: true, max: 1000 }) ?? DEFAULTS.top,
+    seed: f.number('seed', { integer: true }) ?? DEFAULTS.seed,
+    diameterResolution: f.quantity('diameter_resolution', 'length', { positive: true }) ?? DEFAULTS.diameterResolution,
+  };
+  if (req.loadTolerance >= 1) throw new InputError('load_tolerance', 'a fraction below 1 (such as 0.1 or "10%")', f.get('load_tolerance'));
+  f.rejectUnknown();
+  return req;
+}

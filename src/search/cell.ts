@@ -1,0 +1,169 @@
+// One cell of the search: the discrete (and scanned) variables fixed, the solved variable free.
+// The feasible interval of the solved variable is bracketed by bisection on the constraints that are
+// monotone in it, then scanned at its resolution for the rest. This is the shared inner routine of
+// the grid and of the genetic search's repair, so both judge candidates alike.
+import { FEASIBILITY_TOLERANCE as EPS, TREND, type Problem } from './problem.js';
+
+export interface CellWorkspace {
+  g: Float64Array;
+  f: Float64Array;
+  bounds: Float64Array;
+  /** Evaluations spent, cumulative. */
+  evaluations: number;
+  /** Per constraint: cells it cut (the worst violation at the cell's least-violation point). */
+  cutBy: Float64Array;
+  /** Per constraint: the smallest violation seen where it was the only one violated (what to relax). */
+  soleViolation: Float64Array;
+  /** The least-violation point of the current cell (read after an infeasible cell). */
+  missX: Float64Array;
+  missG: Float64Array;
+  missF: Float64Array;
+  missViolation: number;
+  incMask: Uint8Array;
+  decMask: Uint8Array;
+  /** Bisection stops when the interval is this fraction of its value. */
+  relativeTolerance: number;
+}
+
+export function makeWorkspace(p: Problem, relativeTolerance = 1e-10): CellWorkspace {
+  const m = p.constraintNames.length;
+  const incMask = new Uint8Array(m);
+  const decMask = new Uint8Array(m);
+  for (let j = 0; j < m; j++) {
+    const t = p.constraintTrend ? p.constraintTrend[j] : TREND.unknown;
+    if (t === TREND.increasing) incMask[j] = 1;
+    else if (t === TREND.decreasing) decMask[j] = 1;
+  }
+  return {
+    g: new Float64Array(m), f: new Float64Array(p.objectiveNames.length), bounds: new Float64Array(2),
+    evaluations: 0, cutBy: new Float64Array(m), soleViolation: new Float64Array(m).fill(Infinity),
+    missX: new Float64Array(p.variables.length), missG: new Float64Array(m), missF: new Float64Array(p.objectiveNames.length), missViolation: Infinity,
+    incMask, decMask, relativeTolerance,
+  };
+}
+
+/** Evaluate at x and keep the bookkeeping that every evaluation feeds. Returns the total violation. */
+function evaluateAt(p: Problem, x: Float64Array, ws: CellWorkspace): number {
+  p.evaluate(x, ws.g, ws.f);
+  ws.evaluations++;
+  const g = ws.g;
+  let total = 0;
+  let count = 0;
+  let sole = -1;
+  for (let j = 0; j < g.length; j++) {
+    if (g[j] > EPS) { total += g[j]; count++; sole = j; }
+  }
+  if (count === 1 && g[sole] < ws.soleViolation[sole]) ws.soleViolation[sole] = g[sole];
+  if (count > 0 && total < ws.missViolation) {
+    ws.missViolation = total;
+    ws.missX.set(x);
+    ws.missG.set(g);
+    ws.missF.set(ws.f);
+  }
+  return total;
+}
+
+function worst(g: Float64Array, mask: Uint8Array | null): number {
+  let w = -Infinity;
+  for (let j = 0; j < g.length; j++) if ((mask === null || mask[j] === 1) && g[j] > w) w = g[j];
+  return w;
+}
+
+function attributeCut(ws: CellWorkspace, g: Float64Array): void {
+  let jw = 0;
+  for (let j = 1; j < g.length; j++) if (g[j] > g[jw]) jw = j;
+  ws.cutBy[jw]++;
+}
+
+function infeasibleCell(ws: CellWorkspace): false {
+  attributeCut(ws, ws.missG);
+  return false;
+}
+
+export const enum CellMode { First = 0, All = 1 }
+
+/**
+ * Solve one cell. x holds the cell's fixed values; on return with `true`, x[s] holds the first
+ * feasible value of the solved variable (mode First) and ws.f / ws.g its evaluation. In mode All
+ * every feasible scan point is passed to `visit` and the return says whether any was found.
+ * `prune(f)`: return true to abandon the cell when the objective at its lowest bound shows it cannot win.
+ */
+export function solveCell(
+  p: Problem, s: number, x: Float64Array, ws: CellWorkspace, mode: CellMode,
+  visit: ((x: Float64Array, f: Float64Array, g: Float64Array) => void) | null,
+  prune: ((f: Float64Array) => boolean) | null,
+): boolean | 'pruned' {
+  const v = p.variables[s];
+  if (v.kind !== 'continuous') throw new Error('solved variable must be continuous');
+  let lo = v.min;
+  let hi = v.max;
+  if (p.solvedBounds) {
+    ws.bounds[0] = lo; ws.bounds[1] = hi;
+    p.solvedBounds(x, ws.bounds);
+    lo = Math.max(lo, ws.bounds[0]);
+    hi = Math.min(hi, ws.bounds[1]);
+  }
+  ws.missViolation = Infinity;
+  if (!(hi >= lo)) {
+    // The bounds hook found no interval: evaluate at the bound it gave to learn which checks cut it.
+    x[s] = lo;
+    evaluateAt(p, x, ws);
+    return infeasibleCell(ws);
+  }
+  const tol = ws.relativeTolerance * Math.max(Math.abs(lo), Math.abs(hi), 1e-12);
+
+  // Increasing constraints only get worse upwards: if violated at lo, the cell is lost.
+  x[s] = lo;
+  let total = evaluateAt(p, x, ws);
+  if (prune !== null && p.objectiveTrend && p.objectiveTrend[0] === TREND.increasing && prune(ws.f)) return 'pruned';
+  if (worst(ws.g, ws.incMask) > EPS) return infeasibleCell(ws);
+  if (total === 0 && mode === CellMode.First && p.objectiveTrend && p.objectiveTrend[0] === TREND.increasing) return true;
+  // Decreasing constraints tighten downwards: find the smallest value that meets them.
+  if (worst(ws.g, ws.decMask) > EPS) {
+    x[s] = hi;
+    evaluateAt(p, x, ws);
+    if (worst(ws.g, ws.decMask) > EPS) return infeasibleCell(ws);
+    let a = lo;
+    let b = hi;
+    while (b - a > tol) {
+      const m = 0.5 * (a + b);
+      x[s] = m;
+      evaluateAt(p, x, ws);
+      if (worst(ws.g, ws.decMask) > EPS) a = m; else b = m;
+    }
+    lo = b;
+  }
+  // And the largest value that still meets the increasing ones.
+  x[s] = hi;
+  evaluateAt(p, x, ws);
+  if (worst(ws.g, ws.incMask) > EPS) {
+    let a = lo;
+    let b = hi;
+    x[s] = lo;
+    evaluateAt(p, x, ws);
+    if (worst(ws.g, ws.incMask) > EPS) return infeasibleCell(ws);
+    while (b - a > tol) {
+      const m = 0.5 * (a + b);
+      x[s] = m;
+      evaluateAt(p, x, ws);
+      if (worst(ws.g, ws.incMask) > EPS) b = m; else a = m;
+    }
+    hi = a;
+  }
+  // Scan the bracket at the variable's resolution for the constraints of unknown trend.
+  const step = v.resolution;
+  let found = false;
+  for (let t = lo; ; t += step) {
+    const at = t > hi ? hi : t;
+    x[s] = at;
+    total = evaluateAt(p, x, ws);
+    if (total === 0) {
+      found = true;
+      if (mode === CellMode.First) return true;
+      if (visit !== null) visit(x, ws.f, ws.g);
+    }
+    if (at >= hi) break;
+  }
+  if (!found) return infeasibleCell(ws);
+  return true;
+}

@@ -1,0 +1,188 @@
+// Genetic strategy for spaces too large to enumerate. Mixed encoding: list and range variables are
+// integer genes (indices into their values), scanned continuous variables are real genes, and the
+// solved variable is not a gene at all: each individual is repaired by solving its cell exactly as
+// the grid does (cell.ts). Constraint handling by Deb's feasibility rules (feasible beats infeasible,
+// then objective, then total violation), binary tournaments, uniform crossover, neighbour-step
+// mutation, elitism, and a closing hill-climb over the integer genes. Every random draw comes from one
+// seeded generator (seedrandom): the same seed gives the same result.
+import seedrandom from 'seedrandom';
+import { TopK } from './archive.js';
+import { CellMode, makeWorkspace, solveCell } from './cell.js';
+import { NearestMisses } from './misses.js';
+import { TREND, solvedIndex, valueAt, valueCount, type Problem } from './problem.js';
+import type { SearchResult } from './result.js';
+import { packResult } from './grid.js';
+
+export interface GeneticOptions {
+  seed: number | string;
+  /** Stop once this many problem evaluations are spent (bisection steps count). */
+  maxEvaluations: number;
+  populationSize?: number;
+  /** Stop after this many generations without improvement. */
+  stallGenerations?: number;
+  top?: number;
+}
+
+interface Individual { genes: Float64Array; f: number; violation: number; x: Float64Array }
+
+function better(a: Individual, b: Individual): boolean {
+  if (a.violation === 0 && b.violation === 0) return a.f < b.f;
+  if (a.violation === 0) return true;
+  if (b.violation === 0) return false;
+  return a.violation < b.violation;
+}
+
+export function geneticSearch(p: Problem, opts: GeneticOptions): SearchResult {
+  const rng = seedrandom(String(opts.seed));
+  const s = solvedIndex(p);
+  const n = p.variables.length;
+  const ws = makeWorkspace(p);
+  const top = new TopK(Math.max(1, opts.top ?? 10), n, p.objectiveNames.length);
+  const misses = new NearestMisses(5);
+  const counts = { cells: 0, feasible: 0, pruned: 0 };
+  const popSize = opts.populationSize ?? 24;
+  const stall = opts.stallGenerations ?? 25;
+  const sizes = p.variables.map((v) => (v.kind === 'continuous' ? 0 : valueCount(v)));
+  const discreteOnly = p.variables.every((v, i) => i === s || v.kind !== 'continuous');
+  const memo = new Map<number, { f: number; violation: number; x: Float64Array }>();
+  const increasing = p.objectiveTrend !== undefined && p.objectiveTrend[0] === TREND.increasing;
+  const x = new Float64Array(n);
+  const cellBest = { f: Infinity, x: new Float64Array(n) };
+  const visitAll = (px: Float64Array, f: Float64Array) => {
+    top.offer(px, f);
+    if (f[0] < cellBest.f) { cellBest.f = f[0]; cellBest.x.set(px); }
+  };
+
+  let bestFeasible = Infinity;
+  const prune = (f: Float64Array) => f[0] >= bestFeasible;
+
+  const key = (genes: Float64Array): number => {
+    let k = 0;
+    for (let i = 0; i < n; i++) if (i !== s) k = k * sizes[i] + genes[i];
+    return k;
+  };
+
+  const decode = (genes: Float64Array): void => {
+    for (let i = 0; i < n; i++) {
+      const v = p.variables[i];
+      if (i === s) continue;
+      x[i] = v.kind === 'continuous' ? genes[i] : valueAt(v, genes[i]);
+    }
+  };
+
+  const assess = (genes: Float64Array): Individual => {
+    const k = discreteOnly ? key(genes) : -1;
+    const known = k >= 0 ? memo.get(k) : undefined;
+    if (known) return { genes, f: known.f, violation: known.violation, x: known.x };
+    decode(genes);
+    counts.cells++;
+    let f = Infinity;
+    let violation = 0;
+    if (s >= 0) {
+      cellBest.f = Infinity;
+      const r = solveCell(p, s, x, ws, increasing ? CellMode.First : CellMode.All, increasing ? null : visitAll, increasing ? prune : null);
+      if (r === 'pruned') {
+        // The objective at the cell's lower bound already loses to the best found: its value stands in.
+        counts.pruned++;
+        f = ws.f[0];
+      } else if (r === true) {
+        counts.feasible++;
+        if (increasing) { f = ws.f[0]; top.offer(x, ws.f); } else { f = cellBest.f; x.set(cellBest.x); }
+      } else {
+        violation = ws.missViolation;
+        misses.offer(ws.missX, ws.missG, ws.missF, ws.missViolation);
+        x.set(ws.missX);
+      }
+    } else {
+      p.evaluate(x, ws.g, ws.f);
+      ws.evaluations++;
+      for (let j = 0; j < ws.g.length; j++) if (ws.g[j] > 1e-9) violation += ws.g[j];
+      if (violation === 0) { f = ws.f[0]; top.offer(x, ws.f); counts.feasible++; } else misses.offer(x, ws.g, ws.f, violation);
+    }
+    if (violation === 0 && f < bestFeasible && top.size > 0) bestFeasible = top.f(0)[0];
+    const ind = { genes, f, violation, x: Float64Array.from(x) };
+    if (k >= 0) memo.set(k, { f, violation, x: ind.x });
+    return ind;
+  };
+
+  const randomGenes = (): Float64Array => {
+    const g = new Float64Array(n);
+    p.variables.forEach((v, i) => {
+      if (i === s) return;
+      g[i] = v.kind === 'continuous' ? v.min + rng() * (v.max - v.min) : Math.floor(rng() * sizes[i]);
+    });
+    return g;
+  };
+
+  const mutate = (g: Float64Array, rate: number): void => {
+    p.variables.forEach((v, i) => {
+      if (i === s || rng() >= rate) return;
+      if (v.kind === 'continuous') {
+        const span = v.max - v.min;
+        const gauss = Math.sqrt(-2 * Math.log(1 - rng())) * Math.cos(2 * Math.PI * rng());
+        g[i] = Math.min(v.max, Math.max(v.min, g[i] + gauss * 0.05 * span));
+      } else if (rng() < 0.15) {
+        g[i] = Math.floor(rng() * sizes[i]);
+      } else {
+        const reach = Math.max(1, Math.round(sizes[i] / 12));
+        const step = 1 + Math.floor(rng() * reach);
+        g[i] = Math.min(sizes[i] - 1, Math.max(0, g[i] + (rng() < 0.5 ? -step : step)));
+      }
+    });
+  };
+
+  const tournament = (pop: Individual[]): Individual => {
+    const a = pop[Math.floor(rng() * pop.length)];
+    const b = pop[Math.floor(rng() * pop.length)];
+    return better(a, b) ? a : b;
+  };
+
+  let pop: Individual[] = [];
+  for (let i = 0; i < popSize; i++) pop.push(assess(randomGenes()));
+  let best = pop.reduce((a, b) => (better(b, a) ? b : a));
+  let sinceBetter = 0;
+  const rate = 1.5 / Math.max(1, n - (s >= 0 ? 1 : 0));
+  while (ws.evaluations < opts.maxEvaluations && sinceBetter < stall) {
+    pop.sort((a, b) => (better(a, b) ? -1 : better(b, a) ? 1 : 0));
+    const next: Individual[] = [pop[0], pop[1]];
+    while (next.length < popSize && ws.evaluations < opts.maxEvaluations) {
+      const pa = tournament(pop);
+      const pb = tournament(pop);
+      const child = new Float64Array(n);
+      for (let i = 0; i < n; i++) {
+        const v = p.variables[i];
+        if (v.kind === 'continuous' && i !== s) {
+          const lo = Math.min(pa.genes[i], pb.genes[i]);
+          const hi = Math.max(pa.genes[i], pb.genes[i]);
+          const ext = 0.5 * (hi - lo);
+          child[i] = Math.min(v.max, Math.max(v.min, lo - ext + rng() * (hi - lo + 2 * ext)));
+        } else {
+          child[i] = rng() < 0.5 ? pa.genes[i] : pb.genes[i];
+        }
+      }
+      mutate(child, rate);
+      next.push(assess(child));
+    }
+    pop = next;
+    const genBest = pop.reduce((a, b) => (better(b, a) ? b : a));
+    if (better(genBest, best)) { best = genBest; sinceBetter = 0; } else sinceBetter++;
+  }
+
+  // Closing hill-climb over the integer genes: step each by one while that improves.
+  let improved = true;
+  while (improved && ws.evaluations < opts.maxEvaluations * 1.2) {
+    improved = false;
+    for (let i = 0; i < n && !improved; i++) {
+      if (i === s || p.variables[i].kind === 'continuous') continue;
+      for (const delta of [-1, 1]) {
+        const gi = best.genes[i] + delta;
+        if (gi < 0 || gi >= sizes[i]) continue;
+        const g = Float64Array.from(best.genes);
+        g[i] = gi;
+        const cand = assess(g);
+        if (better(cand, best)) { best = cand; improved = true; break; }
+      }
+    }
+  }
+  return packResult('genetic', p, top, null, ws, counts, misses);
+}

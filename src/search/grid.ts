@@ -1,0 +1,185 @@
+// Grid strategy: every combination of the list and range variables, continuous variables scanned at
+// their resolution, the solved variable bracketed and scanned per cell (cell.ts). It is the reference
+// answer. Whole cells are skipped when the objective at their lowest bound already loses to the
+// k-th best (valid when objective 0 grows with the solved variable). Optional refinement passes
+// zoom the scanned continuous variables around the incumbent.
+import { PointBuffer, TopK } from './archive.js';
+import { CellMode, makeWorkspace, solveCell } from './cell.js';
+import { NearestMisses } from './misses.js';
+import { TREND, solvedIndex, valueAt, valueCount, type Problem, type Variable } from './problem.js';
+import type { SearchResult } from './result.js';
+
+export interface GridOptions {
+  /** How many best points to keep. */
+  top: number;
+  /** Keep every feasible point (for frontiers); disables pruning. */
+  collectAll?: boolean;
+  /** Polish the scanned continuous variables of the best point by a Hooke-Jeeves pattern search
+   * with at most this many step halvings (0: none). */
+  refine?: number;
+  /** Bisection tolerance, relative. */
+  relativeTolerance?: number;
+  onProgress?: (done: number, total: number) => void;
+}
+
+function gridPass(p: Problem, vars: readonly Variable[], s: number, opts: GridOptions, top: TopK, cloud: PointBuffer | null,
+  misses: NearestMisses, ws: ReturnType<typeof makeWorkspace>, counts: { cells: number; feasible: number; pruned: number }): void {
+  const n = vars.length;
+  const sizes = new Int32Array(n);
+  const idx = new Int32Array(n);
+  const x = new Float64Array(n);
+  let total = 1;
+  for (let i = 0; i < n; i++) {
+    sizes[i] = i === s ? 1 : valueCount(vars[i]);
+    total *= sizes[i];
+    if (i !== s) x[i] = valueAt(vars[i], 0);
+  }
+  const increasing = p.objectiveTrend !== undefined && p.objectiveTrend[0] === TREND.increasing;
+  const mode = opts.collectAll || !increasing ? CellMode.All : CellMode.First;
+  const visit = (px: Float64Array, f: Float64Array) => {
+    top.offer(px, f);
+    if (cloud) cloud.push(px, f);
+  };
+  const prune = opts.collectAll ? null : (f: Float64Array) => f[0] >= top.threshold();
+  const progressEvery = Math.max(1, Math.floor(total / 100));
+  for (let done = 0; done < total; done++) {
+    counts.cells++;
+    const r = s >= 0 ? solveCell(p, s, x, ws, mode, visit, prune) : evaluatePoint(p, x, ws);
+    if (r === 'pruned') counts.pruned++;
+    else if (r) {
+      counts.feasible++;
+      if (mode === CellMode.First) visit(x, ws.f);
+    } else if (ws.missViolation < misses.threshold()) {
+      misses.offer(ws.missX, ws.missG, ws.missF, ws.missViolation);
+    }
+    if (opts.onProgress && done % progressEvery === 0) opts.onProgress(done, total);
+    // Odometer step over the non-solved variables, last variable fastest.
+    for (let i = n - 1; i >= 0; i--) {
+      if (i === s) continue;
+      if (++idx[i] < sizes[i]) { x[i] = valueAt(vars[i], idx[i]); break; }
+      idx[i] = 0;
+      x[i] = valueAt(vars[i], 0);
+    }
+  }
+  opts.onProgress?.(total, total);
+}
+
+/** A problem with no solved variable: each grid point is one evaluation. */
+function evaluatePoint(p: Problem, x: Float64Array, ws: ReturnType<typeof makeWorkspace>): boolean {
+  p.evaluate(x, ws.g, ws.f);
+  ws.evaluations++;
+  let total = 0;
+  let jw = 0;
+  for (let j = 0; j < ws.g.length; j++) {
+    if (ws.g[j] > 1e-9) total += ws.g[j];
+    if (ws.g[j] > ws.g[jw]) jw = j;
+  }
+  if (total === 0) return true;
+  ws.cutBy[jw]++;
+  ws.missViolation = total;
+  ws.missX.set(x); ws.missG.set(ws.g); ws.missF.set(ws.f);
+  return false;
+}
+
+export function gridSearch(p: Problem, opts: GridOptions): SearchResult {
+  const s = solvedIndex(p);
+  const ws = makeWorkspace(p, opts.relativeTolerance);
+  const nx = p.variables.length;
+  const top = new TopK(Math.max(1, opts.top), nx, p.objectiveNames.length);
+  const cloud = opts.collectAll ? new PointBuffer(nx, p.objectiveNames.length) : null;
+  const misses = new NearestMisses(5);
+  const counts = { cells: 0, feasible: 0, pruned: 0 };
+  gridPass(p, p.variables, s, opts, top, cloud, misses, ws, counts);
+  if ((opts.refine ?? 0) > 0 && top.size > 0) patternSearch(p, s, opts.refine ?? 0, top, ws);
+  return packResult('grid', p, top, cloud, ws, counts, misses);
+}
+
+export function packResult(strategy: SearchResult['strategy'], p: Problem, top: TopK, cloud: PointBuffer | null,
+  ws: ReturnType<typeof makeWorkspace>, counts: { cells: number; feasible: number; pruned: number }, misses: NearestMisses): SearchResult {
+  const cutBy: Record<string, number> = {};
+  const sole: Record<string, number> = {};
+  p.constraintNames.forEach((name, j) => { cutBy[name] = ws.cutBy[j]; sole[name] = ws.soleViolation[j]; });
+  const best = [];
+  for (let i = 0; i < top.size; i++) best.push({ x: Float64Array.from(top.x(i)), f: Float64Array.from(top.f(i)) });
+  return {
+    strategy, best, cloud, evaluations: ws.evaluations, cells: counts.cells, feasibleCells: counts.feasible,
+    prunedCells: counts.pruned, cutBy, soleViolation: sole, nearestMisses: misses.items,
+  };
+}
+
+/**
+ * Hooke and Jeeves (1961) pattern search over the scanned continuous variables, starting from the grid's
+ * best at the grid's resolution; each trial point solves its cell like the grid. Exploratory moves
+ * along each axis, then a pattern move along the last successful direction, which lets it follow a
+ * curved valley that an axis-aligned zoom cannot.
+ */
+function patternSearch(p: Problem, s: number, halvings: number, top: TopK, ws: ReturnType<typeof makeWorkspace>): void {
+  const n = p.variables.length;
+  const axes = p.variables.map((v, i) => (v.kind === 'continuous' && i !== s ? i : -1)).filter((i) => i >= 0);
+  if (axes.length === 0) return;
+  const steps = new Float64Array(n);
+  for (const i of axes) steps[i] = (p.variables[i] as { resolution: number }).resolution;
+  const x = new Float64Array(n);
+  const base = Float64Array.from(top.x(0));
+  let baseF = top.f(0)[0];
+  const trial = (pt: Float64Array): number => {
+    for (const i of axes) {
+      const v = p.variables[i] as { min: number; max: number };
+      if (pt[i] < v.min || pt[i] > v.max) return Infinity;
+    }
+    x.set(pt);
+    if (s >= 0 ? solveCell(p, s, x, ws, CellMode.First, null, null) !== true : !evaluatePoint(p, x, ws)) return Infinity;
+    top.offer(x, ws.f);
+    pt.set(x);
+    return ws.f[0];
+  };
+  const explore = (from: Float64Array, fromF: number): [Float64Array, number] => {
+    const cur = Float64Array.from(from);
+    let curF = fromF;
+    for (const i of axes) {
+      for (const dir of [1, -1]) {
+        const t = Float64Array.from(cur);
+        t[i] += dir * steps[i];
+        let ft = trial(t);
+        if (!Number.isFinite(ft)) {
+          // Infeasible: slide to the feasibility boundary along this move (bisection), since the
+          // optimum of a constrained problem usually sits on it.
+          let a = 0;
+          let b = 1;
+          let fa = Infinity;
+          const at = Float64Array.from(cur);
+          for (let k = 0; k < 30; k++) {
+            const m = 0.5 * (a + b);
+            at.set(cur);
+            at[i] += m * dir * steps[i];
+            const fm = trial(at);
+            if (Number.isFinite(fm)) { a = m; fa = fm; t.set(at); } else b = m;
+          }
+          ft = a > 0 ? fa : Infinity;
+        }
+        if (ft < curF) { cur.set(t); curF = ft; break; }
+      }
+    }
+    return [cur, curF];
+  };
+  let halved = 0;
+  let guard = 0;
+  while (halved < halvings && guard++ < 100000) {
+    let [next, nextF] = explore(base, baseF);
+    if (nextF < baseF) {
+      // Pattern moves: keep going in the direction that worked while it keeps working.
+      let prev = Float64Array.from(base);
+      base.set(next); baseF = nextF;
+      for (;;) {
+        const jump = Float64Array.from(base);
+        for (const i of axes) jump[i] = 2 * base[i] - prev[i];
+        const jf = trial(jump);
+        const [after, afterF] = explore(Number.isFinite(jf) ? jump : base, Number.isFinite(jf) ? jf : baseF);
+        if (afterF < baseF) { prev = Float64Array.from(base); base.set(after); baseF = afterF; } else break;
+      }
+    } else {
+      for (const i of axes) steps[i] /= 2;
+      halved++;
+    }
+  }
+}

@@ -1,0 +1,58 @@
+// The general optimisation problem the search strategies work on, after pymoo's split of Problem,
+// Algorithm, Termination and Result. A problem declares its design variables, its constraints
+// (g <= 0, normalised so that 0.1 means "10% past the limit") and its objectives (minimised), and
+// evaluates a point in place: no allocation per candidate.
+
+export type Variable =
+  /** A list of allowed values (standard wire sizes, codes of catalog entries...). */
+  | { kind: 'list'; name: string; values: readonly number[] }
+  /** An integer or stepped range: min, min + step, ..., up to max. */
+  | { kind: 'range'; name: string; min: number; max: number; step: number }
+  /** A continuous range. The grid scans it at `resolution`; the variable marked `solve` is
+   * instead bracketed by bisection on the constraints that are monotone in it. */
+  | { kind: 'continuous'; name: string; min: number; max: number; resolution: number; solve?: boolean };
+
+/** How a constraint or objective moves when the solved variable grows. */
+export const TREND = { decreasing: -1, unknown: 0, increasing: 1 } as const;
+
+export interface Problem {
+  readonly name: string;
+  readonly variables: readonly Variable[];
+  readonly constraintNames: readonly string[];
+  readonly objectiveNames: readonly string[];
+  /** Per constraint, its trend in the solved variable (TREND values); a constant counts as increasing. */
+  readonly constraintTrend?: Int8Array;
+  /** Per objective, its trend in the solved variable. */
+  readonly objectiveTrend?: Int8Array;
+  /** Write constraints into g and objectives into f for the point x. */
+  evaluate(x: Float64Array, g: Float64Array, f: Float64Array): void;
+  /** Optionally narrow the solved variable's interval for the other values in x: write [lo, hi] into out. */
+  solvedBounds?(x: Float64Array, out: Float64Array): void;
+}
+
+/** A constraint counts as met within this normalised tolerance (floating-point noise at active limits). */
+export const FEASIBILITY_TOLERANCE = 1e-9;
+
+export function valueCount(v: Variable): number {
+  if (v.kind === 'list') return v.values.length;
+  if (v.kind === 'range') return Math.floor((v.max - v.min) / v.step + 1e-9) + 1;
+  return Math.floor((v.max - v.min) / v.resolution + 1e-9) + 1;
+}
+
+/** Value of a non-solved variable at index i of its grid. */
+export function valueAt(v: Variable, i: number): number {
+  if (v.kind === 'list') return v.values[i];
+  if (v.kind === 'range') return v.min + i * v.step;
+  return Math.min(v.max, v.min + i * v.resolution);
+}
+
+export function solvedIndex(p: Problem): number {
+  return p.variables.findIndex((v) => v.kind === 'continuous' && v.solve === true);
+}
+
+/** Total violation: the sum of positive normalised constraint values. */
+export function violation(g: Float64Array): number {
+  let s = 0;
+  for (let i = 0; i < g.length; i++) if (g[i] > FEASIBILITY_TOLERANCE) s += g[i];
+  return s;
+}

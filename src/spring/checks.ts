@@ -1,0 +1,102 @@
+// The checks a spring must pass to meet a set of requirements, named in the trade's words. The search
+// evaluates them in its hot loop (problem.ts); `checkAnalysis` evaluates the same checks on a full
+// single-spring analysis, so every spring the search reports can be re-verified independently.
+import type { Requirements } from '../input/requirements.js';
+import type { SpringAnalysis } from '../model/analysis.js';
+import { STATIC_SERVICE_CYCLES } from '../model/fatigue.js';
+
+export const CHECKS = [
+  'index_min', 'index_max', 'outer_diameter', 'inner_diameter', 'free_length', 'solid_length', 'clash', 'coil_gaps',
+  'outer_diameter_at_solid', 'static_stress', 'solid_stress', 'fatigue', 'buckling', 'surge', 'operating_force_min',
+  'operating_force_max', 'temperature',
+] as const;
+export type CheckName = (typeof CHECKS)[number];
+export const CHECK = Object.fromEntries(CHECKS.map((c, i) => [c, i])) as Record<CheckName, number>;
+
+export const CHECK_LABELS: Record<CheckName, string> = {
+  index_min: 'spring index below the lower bound',
+  index_max: 'spring index above the upper bound',
+  outer_diameter: 'outer diameter too large for the bore',
+  inner_diameter: 'inner diameter too small for the rod',
+  free_length: 'free length above the limit',
+  solid_length: 'solid length above the limit',
+  clash: 'too little overrun to solid (clash allowance)',
+  coil_gaps: 'coil gaps below the EN 13906-1 minimum',
+  outer_diameter_at_solid: 'outer diameter at solid too large for the bore',
+  static_stress: 'stress above the static allowable (with its safety factor)',
+  solid_stress: 'stress at solid above the allowable (not solid-safe)',
+  fatigue: 'fatigue safety factor below the target',
+  buckling: 'buckles before the operating length',
+  surge: 'surge frequency too close to the forcing frequency',
+  operating_force_min: 'operating force too low (rate too soft)',
+  operating_force_max: 'operating force too high (rate too stiff)',
+  temperature: 'service temperature above the material\'s maximum',
+};
+
+/** Which checks apply to these requirements. */
+export function activeChecks(req: Requirements): boolean[] {
+  const fatigue = req.cycles !== undefined && req.cycles >= STATIC_SERVICE_CYCLES && req.operatingLength !== undefined;
+  const on: Record<CheckName, boolean> = {
+    index_min: true, index_max: true,
+    outer_diameter: req.maxOuterDiameter !== undefined,
+    inner_diameter: req.minInnerDiameter !== undefined,
+    free_length: req.maxFreeLength !== undefined,
+    solid_length: req.maxSolidLength !== undefined,
+    clash: true,
+    coil_gaps: req.gapRule,
+    outer_diameter_at_solid: req.maxOuterDiameter !== undefined,
+    static_stress: true,
+    solid_stress: req.solidSafe,
+    fatigue,
+    buckling: true,
+    surge: req.forcingFrequency !== undefined && req.forcingFrequency > 0,
+    operating_force_min: req.operatingForce !== undefined,
+    operating_force_max: req.operatingForce !== undefined,
+    temperature: req.temperature !== undefined,
+  };
+  return CHECKS.map((c) => on[c]);
+}
+
+/** The shortest length in service: the operating length, or the working length when there is no stroke. */
+export function shortestLength(req: Requirements): number {
+  return req.operatingLength ?? req.workingLength;
+}
+
+/** Required static allowable and the factor applied to the stress. */
+export function staticLimit(req: Requirements, allowable: number): { limit: number; factor: number } {
+  return req.allowableStress !== undefined ? { limit: req.allowableStress, factor: 1 } : { limit: allowable, factor: req.safety.static };
+}
+
+/** Normalised check values (g <= 0 passes) computed from a full analysis; inactive checks are -1. */
+export function checkAnalysis(a: SpringAnalysis, req: Requirements): Float64Array {
+  const g = new Float64Array(CHECKS.length).fill(-1);
+  const on = activeChecks(req);
+  const geo = a.geometry;
+  const Lmin = shortestLength(req);
+  const set = (name: CheckName, v: number) => { if (on[CHECK[name]]) g[CHECK[name]] = v; };
+  set('index_min', (req.index[0] - geo.springIndex) / req.index[0]);
+  set('index_max', (geo.springIndex - req.index[1]) / req.index[1]);
+  if (req.maxOuterDiameter !== undefined) {
+    set('outer_diameter', (geo.outerDiameter - req.maxOuterDiameter) / req.maxOuterDiameter);
+    set('outer_diameter_at_solid', (a.solid.outerDiameter - req.maxOuterDiameter) / req.maxOuterDiameter);
+  }
+  if (req.minInnerDiameter !== undefined) set('inner_diameter', (req.minInnerDiameter - geo.innerDiameter) / req.minInnerDiameter);
+  if (req.maxFreeLength !== undefined) set('free_length', (geo.freeLength - req.maxFreeLength) / req.maxFreeLength);
+  if (req.maxSolidLength !== undefined) set('solid_length', (geo.solidLength - req.maxSolidLength) / req.maxSolidLength);
+  set('clash', (geo.solidLength + req.clashAllowance * (geo.freeLength - Lmin) - Lmin) / Lmin);
+  set('coil_gaps', (a.clash.minGapSum - (Lmin - geo.solidLength)) / Math.max(a.clash.minGapSum, 1e-12));
+  const { limit, factor } = staticLimit(req, a.material.allowableStress);
+  const maxStress = Math.max(...a.points.map((p) => p.stress));
+  set('static_stress', (maxStress * factor - limit) / limit);
+  set('solid_stress', (a.solid.stress - limit) / limit);
+  if (a.fatigue) set('fatigue', (req.safety.fatigue - a.fatigue.safetyFactor) / req.safety.fatigue);
+  set('buckling', a.buckling.absolutelyStable ? -1 : (a.buckling.maxDeflection - a.buckling.criticalDeflection) / a.buckling.maxDeflection);
+  if (req.forcingFrequency) set('surge', (req.safety.surge * req.forcingFrequency - a.surge.relevant) / (req.safety.surge * req.forcingFrequency));
+  if (req.operatingForce !== undefined) {
+    const F2 = a.points[a.points.length - 1].force;
+    set('operating_force_min', (req.operatingForce * (1 - req.loadTolerance) - F2) / req.operatingForce);
+    set('operating_force_max', (F2 - req.operatingForce * (1 + req.loadTolerance)) / req.operatingForce);
+  }
+  if (req.temperature !== undefined) set('temperature', (req.temperature - a.material.maxTemperature) / Math.max(Math.abs(a.material.maxTemperature), 1));
+  return g;
+}

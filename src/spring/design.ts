@@ -1,0 +1,85 @@
+// Requirements -> candidates -> evaluation -> filters -> ranking: one design run, whichever strategy.
+import type { Requirements } from '../input/requirements.js';
+import { analyzeSpring, type SpringAnalysis, type SpringGeometry } from '../model/analysis.js';
+import { geneticSearch } from '../search/genetic.js';
+import { gridSearch } from '../search/grid.js';
+import { valueCount } from '../search/problem.js';
+import type { SearchResult } from '../search/result.js';
+import { CHECKS, activeChecks, checkAnalysis } from './checks.js';
+import { lpLowerBound, type LpBound } from './lpBound.js';
+import { OBJ, buildSpringProblem, type SpringProblem, type StockItem } from './problem.js';
+
+export type StrategyChoice = 'auto' | 'grid' | 'genetic';
+
+export interface DesignOptions {
+  strategy?: StrategyChoice;
+  /** Keep every feasible spring (one per cell at its smallest feasible diameter) for the frontier. */
+  collectAll?: boolean;
+  /** Budget of the genetic search, in evaluations. */
+  maxEvaluations?: number;
+  onProgress?: (done: number, total: number) => void;
+}
+
+export interface Candidate {
+  item: StockItem;
+  geometry: SpringGeometry;
+  analysis: SpringAnalysis;
+  checks: Float64Array;
+  objectives: Float64Array;
+}
+
+export interface DesignRun {
+  req: Requirements;
+  problem: SpringProblem;
+  result: SearchResult;
+  candidates: Candidate[];
+  lp: LpBound;
+  /** (best - bound) / best, when both exist. */
+  gap: number | null;
+  cells: number;
+  searchMs: number;
+}
+
+/** Grid cells of the problem: stock x end types x coil counts. */
+export function cellCount(p: SpringProblem): number {
+  return p.variables.filter((v) => v.kind !== 'continuous').reduce((a, v) => a * valueCount(v), 1);
+}
+
+/** Build the full analysis of the spring at point x, the same way `analyze` would. */
+export function candidateAt(problem: SpringProblem, x: ArrayLike<number>, objectives: Float64Array): Candidate {
+  const { item, geometry } = problem.decode(x);
+  const analysis = analyzeSpring(geometry, item.figures, problem.service());
+  return { item, geometry, analysis, checks: checkAnalysis(analysis, problem.req), objectives };
+}
+
+export const AUTO_GRID_CELL_LIMIT = 2_000_000;
+
+export function runDesign(req: Requirements, opts: DesignOptions = {}): DesignRun {
+  const problem = buildSpringProblem(req);
+  const cells = cellCount(problem);
+  const strategy = opts.strategy === 'genetic' || (opts.strategy !== 'grid' && cells > AUTO_GRID_CELL_LIMIT) ? 'genetic' : 'grid';
+  const t0 = performance.now();
+  const result = problem.stock.length === 0
+    ? emptyResult()
+    : strategy === 'grid'
+      ? gridSearch(problem, { top: req.top, collectAll: opts.collectAll, onProgress: opts.onProgress })
+      : geneticSearch(problem, { seed: req.seed, maxEvaluations: opts.maxEvaluations ?? 2_000_000, top: req.top });
+  const searchMs = performance.now() - t0;
+  const candidates = result.best.map((b) => candidateAt(problem, b.x, b.f));
+  const lp = lpLowerBound(problem);
+  const bestValue = candidates.length ? (req.rank === 'mass' ? candidates[0].objectives[OBJ.mass] : candidates[0].objectives[OBJ.wire_volume]) : NaN;
+  const gap = lp.value !== null && Number.isFinite(bestValue) ? (bestValue - lp.value) / bestValue : null;
+  return { req, problem, result, candidates, lp, gap, cells, searchMs };
+}
+
+function emptyResult(): SearchResult {
+  const zeros = Object.fromEntries(CHECKS.map((c) => [c, 0]));
+  const inf = Object.fromEntries(CHECKS.map((c) => [c, Infinity]));
+  return { strategy: 'grid', best: [], cloud: null, evaluations: 0, cells: 0, feasibleCells: 0, prunedCells: 0, cutBy: zeros, soleViolation: inf, nearestMisses: [] };
+}
+
+/** Checks that apply, in report order. */
+export function reportedChecks(req: Requirements): string[] {
+  const on = activeChecks(req);
+  return CHECKS.filter((_, i) => on[i]);
+}

@@ -1,0 +1,218 @@
+// The spring-design problem as one instance of the general search problem. Variables: stock (a
+// material and one of its standard wire sizes), end type, active coils (stepped), mean diameter
+// (continuous, solved per cell). The free length follows from the working load and the rate.
+// Everything per stock item is computed once into typed arrays; evaluate() allocates nothing.
+import { inStrengthRange } from '../catalogs/properties.js';
+import type { Requirements } from '../input/requirements.js';
+import { materialFigures, type MaterialChoice } from '../input/material.js';
+import type { MaterialFigures, ServiceConditions, SpringGeometry } from '../model/analysis.js';
+import { criticalDeflection, endConditionConstant } from '../model/buckling.js';
+import { minimumGapSum, solidOuterDiameter } from '../model/clash.js';
+import { INFINITE_LIFE_CYCLES, fatigueSafetyFactor, finiteLifePoint, repeatedStressFraction, zimmerliPoint, type EndurancePoint } from '../model/fatigue.js';
+import { END_TYPES, inactiveCoils, pitch, solidLength, springMass, wireVolume, type EndType } from '../model/geometry.js';
+import { springRate } from '../model/rate.js';
+import { shearStress } from '../model/stress.js';
+import { bergstrasserFactor, wahlFactor } from '../model/stressFactor.js';
+import { ultimateShearStrength } from '../model/strength.js';
+import { activeCoilMass, surgeFrequency } from '../model/surge.js';
+import { TREND, type Problem } from '../search/problem.js';
+import { CHECKS, activeChecks, shortestLength, staticLimit } from './checks.js';
+
+export const OBJECTIVES = ['rank', 'mass', 'wire_volume', 'outer_diameter', 'free_length', 'neg_safety_factor', 'neg_static_safety', 'neg_fatigue_safety', 'relative_cost'] as const;
+export const OBJ = Object.fromEntries(OBJECTIVES.map((o, i) => [o, i])) as Record<(typeof OBJECTIVES)[number], number>;
+
+export interface StockItem { choice: MaterialChoice; wireDiameter: number; figures: MaterialFigures }
+
+export interface SpringProblem extends Problem {
+  readonly req: Requirements;
+  readonly stock: StockItem[];
+  readonly ends: EndType[];
+  readonly active: boolean[];
+  /** Decode a point into the spring it stands for. */
+  decode(x: ArrayLike<number>): { item: StockItem; geometry: SpringGeometry };
+  service(): ServiceConditions;
+}
+
+export function springServiceConditions(req: Requirements): ServiceConditions {
+  return {
+    lengths: req.operatingLength !== undefined ? [req.workingLength, req.operatingLength] : [req.workingLength],
+    cycles: req.cycles, peened: req.peened, criterion: req.criterion, correction: req.correction,
+    directShear: req.directShear, seating: req.seating, temperature: req.temperature,
+    forcingFrequency: req.forcingFrequency, clashAllowance: req.clashAllowance, gapRule: req.gapRule, surgeMargin: req.safety.surge,
+  };
+}
+
+export function buildSpringProblem(req: Requirements): SpringProblem {
+  const stock: StockItem[] = [];
+  for (const choice of req.materials) {
+    for (const d of req.wireSizes(choice)) {
+      if (choice.tensileStrength === undefined && !inStrengthRange(choice.material, d)) continue;
+      if (req.maxOuterDiameter !== undefined && d * (req.index[0] + 1) > req.maxOuterDiameter) continue;
+      stock.push({ choice, wireDiameter: d, figures: materialFigures(choice, d, req.setRemoved) });
+    }
+  }
+  const n = stock.length;
+  const sd = new Float64Array(n);
+  const sG = new Float64Array(n);
+  const sE = new Float64Array(n);
+  const sRho = new Float64Array(n);
+  const sLimit = new Float64Array(n);
+  const sSsu = new Float64Array(n);
+  const sTmax = new Float64Array(n);
+  const sCost = new Float64Array(n);
+  const sPoint: EndurancePoint[] = [];
+  const fatigueOn = req.cycles !== undefined && req.operatingLength !== undefined;
+  stock.forEach((s, i) => {
+    sd[i] = s.wireDiameter;
+    sG[i] = s.figures.shearModulus;
+    sE[i] = s.figures.elasticModulus;
+    sRho[i] = s.figures.density;
+    sLimit[i] = staticLimit(req, s.figures.allowableStress).limit;
+    sSsu[i] = ultimateShearStrength(s.figures.tensileStrength);
+    sTmax[i] = s.figures.maxTemperature;
+    sCost[i] = s.choice.material.relativeCost.value;
+    const cycles = req.cycles ?? INFINITE_LIFE_CYCLES;
+    sPoint.push(fatigueOn && cycles >= INFINITE_LIFE_CYCLES && s.figures.zimmerli
+      ? zimmerliPoint(req.peened)
+      : finiteLifePoint(s.figures.tensileStrength, repeatedStressFraction(s.figures.finiteLife, Math.min(cycles, INFINITE_LIFE_CYCLES), req.peened)));
+  });
+  const ends = req.ends;
+  const endQ = Int32Array.from(ends.map(inactiveCoils));
+  const active = activeChecks(req);
+  const activeMask = Uint8Array.from(active.map((a) => (a ? 1 : 0)));
+  const m = CHECKS.length;
+
+  const F1 = req.workingForce;
+  const L1 = req.workingLength;
+  const Lmin = shortestLength(req);
+  const travel = L1 - Lmin;
+  const F2req = req.operatingForce ?? 0;
+  const tol = req.loadTolerance;
+  const wahl = req.correction === 'wahl';
+  const staticFactor = staticLimit(req, 1).factor;
+  const alpha = endConditionConstant(req.seating);
+  const oneEndFree = req.seating === 'fixed-free';
+  const surgeNeed = req.forcingFrequency ? req.safety.surge * req.forcingFrequency : 0;
+  const Cmin = req.index[0];
+  const Cmax = req.index[1];
+  const ODmax = req.maxOuterDiameter ?? Infinity;
+  const IDmin = req.minInnerDiameter ?? 0;
+  const L0max = req.maxFreeLength ?? Infinity;
+  const Lsmax = req.maxSolidLength ?? Infinity;
+  const xi = req.clashAllowance;
+  const nfTarget = req.safety.fatigue;
+  const temperature = req.temperature ?? -Infinity;
+  const rankObjective = OBJ[req.rank === 'safety_factor' ? 'neg_safety_factor' : req.rank];
+  const criterion = req.criterion;
+  const directShear = req.directShear;
+  const noStroke = req.operatingLength === undefined;
+
+  const inc = TREND.increasing;
+  const dec = TREND.decreasing;
+  const unk = TREND.unknown;
+  // Trends in the mean diameter D (rate k falls as D^-3, so the free length rises). The stresses mix a
+  // lever arm that rises with D and forces that fall with k: monotone only when the force is fixed
+  // (no stroke). Buckling mixes a longer free length with a wider coil. Those are scanned.
+  const trends: Record<string, number> = {
+    index_min: dec, index_max: inc, outer_diameter: inc, inner_diameter: dec, free_length: inc, solid_length: inc,
+    clash: inc, coil_gaps: inc, outer_diameter_at_solid: inc,
+    static_stress: noStroke ? inc : unk,
+    solid_stress: unk,
+    fatigue: unk,
+    buckling: unk,
+    surge: inc, operating_force_min: inc, operating_force_max: dec, temperature: inc,
+  };
+  const dMin = sd.length ? Math.min(...sd) : 1;
+  const dMax = sd.length ? Math.max(...sd) : 1;
+
+  const problem: SpringProblem = {
+    name: 'helical compression spring',
+    req, stock, ends, active,
+    variables: [
+      { kind: 'list', name: 'stock', values: stock.map((_, i) => i) },
+      { kind: 'list', name: 'ends', values: ends.map((_, i) => i) },
+      { kind: 'range', name: 'active_coils', min: req.activeCoils[0], max: req.activeCoils[1], step: req.coilStep },
+      { kind: 'continuous', name: 'mean_diameter', min: Cmin * dMin, max: Cmax * dMax, resolution: req.diameterResolution, solve: true },
+    ],
+    constraintNames: CHECKS,
+    objectiveNames: OBJECTIVES,
+    constraintTrend: Int8Array.from(CHECKS.map((c) => trends[c])),
+    objectiveTrend: Int8Array.from(OBJECTIVES.map((o, i) => (i === 0 ? (req.rank === 'safety_factor' ? unk : inc) : unk))),
+
+    // The index bounds clip the diameter interval directly. The bore and rod limits are left to the
+    // bisection so that the points just past them are evaluated: they tell what relaxing them would buy.
+    solvedBounds(x, out) {
+      const d = sd[x[0]];
+      out[0] = Math.max(out[0], Cmin * d);
+      out[1] = Math.min(out[1], Cmax * d);
+    },
+
+    evaluate(x, g, f) {
+      const i = x[0];
+      const e = x[1];
+      const Na = x[2];
+      const D = x[3];
+      const d = sd[i];
+      const endType = ends[e];
+      const C = D / d;
+      const K = wahl ? wahlFactor(C) : bergstrasserFactor(C);
+      const k = springRate(sG[i], d, D, Na, directShear);
+      const L0 = L1 + F1 / k;
+      const Nt = Na + endQ[e];
+      const Ls = solidLength(d, Nt, endType);
+      const F2 = F1 + k * travel;
+      const limit = sLimit[i];
+      const tauMax = shearStress(F2, D, d, K);
+      const tauSolid = shearStress(k * (L0 - Ls), D, d, K);
+
+      g[0] = (Cmin - C) / Cmin;
+      g[1] = (C - Cmax) / Cmax;
+      g[2] = (D + d - ODmax) / ODmax;
+      g[3] = (IDmin - (D - d)) / IDmin;
+      g[4] = (L0 - L0max) / L0max;
+      g[5] = (Ls - Lsmax) / Lsmax;
+      g[6] = (Ls + xi * (L0 - Lmin) - Lmin) / Lmin;
+      const minGap = minimumGapSum(D, d, Na);
+      g[7] = (minGap - (Lmin - Ls)) / minGap;
+      g[8] = (solidOuterDiameter(D, d, pitch(L0, Na, d, endType)) - ODmax) / ODmax;
+      const staticSafety = limit / tauMax;
+      g[9] = (tauMax * staticFactor - limit) / limit;
+      g[10] = (tauSolid - limit) / limit;
+      let fatigueSafety = NaN;
+      if (activeMask[11] === 1) {
+        const tauMin = shearStress(F1, D, d, K);
+        const alt = 0.5 * (tauMax - tauMin);
+        const mean = 0.5 * (tauMax + tauMin);
+        fatigueSafety = fatigueSafetyFactor(alt, mean, sPoint[i], sSsu[i], criterion);
+        g[11] = (nfTarget - fatigueSafety) / nfTarget;
+      }
+      const ymax = L0 - Lmin;
+      const ycr = criticalDeflection(L0, D, sE[i], sG[i], alpha);
+      g[12] = ycr === ycr ? (ymax - ycr) / ymax : -1;
+      g[13] = surgeNeed > 0 ? (surgeNeed - surgeFrequency(k, activeCoilMass(d, D, Na, sRho[i]), oneEndFree)) / surgeNeed : -1;
+      g[14] = (F2req * (1 - tol) - F2) / F2req;
+      g[15] = (F2 - F2req * (1 + tol)) / F2req;
+      g[16] = (temperature - sTmax[i]) / Math.max(Math.abs(sTmax[i]), 1);
+      for (let j = 0; j < m; j++) if (activeMask[j] === 0) g[j] = -1;
+
+      const mass = springMass(d, D, Nt, sRho[i]);
+      f[1] = mass;
+      f[2] = wireVolume(d, D, Nt);
+      f[3] = D + d;
+      f[4] = L0;
+      const sf = fatigueSafety === fatigueSafety && fatigueSafety < staticSafety ? fatigueSafety : staticSafety;
+      f[5] = -sf;
+      f[6] = -staticSafety;
+      f[7] = fatigueSafety === fatigueSafety ? -fatigueSafety : 0;
+      f[8] = mass * sCost[i];
+      f[0] = f[rankObjective];
+    },
+
+    decode(x) {
+      const item = stock[x[0]];
+      return { item, geometry: { wireDiameter: item.wireDiameter, meanDiameter: x[3], activeCoils: x[2], ends: ends[x[1]], freeLength: L1 + F1 / springRate(item.figures.shearModulus, item.wireDiameter, x[3], x[2], directShear) } };
+    },
+    service: () => springServiceConditions(req),
+  };
+  return problem;
+}
