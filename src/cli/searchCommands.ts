@@ -1,4 +1,252 @@
+// `coilfront design`, `frontier` and `sweep`: thin commands over runDesign.
 import type { Command } from 'commander';
-import type { Io } from './io.js';
+import { Option } from 'commander';
+import { loadCatalog } from '../catalogs/load.js';
+import { readInputFile } from '../input/document.js';
+import { ENVELOPE_SHORTHANDS, parseAssignment, sweepValues, withValue } from '../input/overrides.js';
+import { RANK_KEYS, readRequirements, type Requirements } from '../input/requirements.js';
+import { candidateRecord, countsRecord, designJson, designText, relaxSuggestions } from '../report/designReport.js';
+import { toCsv } from '../report/csv.js';
+import { toJson, SI_UNITS } from '../report/json.js';
+import { writeOutputFile } from '../report/writeFile.js';
+import { cautionText } from '../report/cautions.js';
+import { candidateAt, runDesign, type Candidate, type DesignRun, type StrategyChoice } from '../spring/design.js';
+import { OBJ } from '../spring/problem.js';
+import { paretoFront2 } from '../search/pareto.js';
+import { inUnit, sig, unitSymbol } from '../units/format.js';
+import { InputError } from '../units/parse.js';
+import type { UnitSystem } from '../units/systems.js';
+import { EXIT, type Io } from './io.js';
+import { unitsOption } from './run.js';
+import { writeDesignReport } from '../report/html/designHtml.js';
 
-export function registerSearchCommands(_program: Command, _io: Io, _setCode: (c: number) => void): void {}
+interface CommonOptions {
+  json?: boolean; units?: UnitSystem; set?: string[]; strategy?: StrategyChoice; seed?: string; top?: string; rank?: string;
+  maxOd?: string; minId?: string; maxFreeLength?: string; maxSolidLength?: string; report?: string; force?: boolean;
+}
+
+function collect(value: string, previous: string[] = []): string[] {
+  return [...previous, value];
+}
+
+function addCommon(cmd: Command): Command {
+  cmd
+    .option('--json', 'machine-readable output on stdout (always SI units)')
+    .addOption(unitsOption())
+    .option('--set <path=value>', 'override a requirement, e.g. envelope.max_outer_diameter=18 (repeatable)', collect)
+    .addOption(new Option('--strategy <name>', 'search strategy').choices(['auto', 'grid', 'genetic']).default('auto'))
+    .option('--seed <n>', 'random seed for the genetic strategy (overrides the file)')
+    .option('--top <n>', 'how many candidates to list (overrides the file)')
+    .addOption(new Option('--rank <key>', 'ranking objective (overrides the file)').choices([...RANK_KEYS]));
+  for (const [flags, , path] of ENVELOPE_SHORTHANDS) cmd.option(flags, `shorthand for --set ${path}=<value>`);
+  return cmd;
+}
+
+/** The raw requirements document with every command-line override applied. */
+function rawWithOverrides(file: string, opts: CommonOptions): unknown {
+  let doc = readInputFile(file);
+  for (const [, key, path] of ENVELOPE_SHORTHANDS) {
+    const v = (opts as Record<string, unknown>)[key];
+    if (typeof v === 'string') doc = withValue(doc, path.split('.'), parseAssignment(`${path}=${v}`).value);
+  }
+  for (const s of opts.set ?? []) {
+    const { path, value } = parseAssignment(s);
+    doc = withValue(doc, path, value);
+  }
+  if (opts.seed !== undefined) doc = withValue(doc, ['seed'], Number(opts.seed));
+  if (opts.top !== undefined) doc = withValue(doc, ['top'], Number(opts.top));
+  if (opts.rank !== undefined) doc = withValue(doc, ['rank'], opts.rank);
+  return doc;
+}
+
+function progress(io: Io, label: string): ((done: number, total: number) => void) | undefined {
+  if (!io.interactive) return undefined;
+  let last = -1;
+  return (done, total) => {
+    const pct = Math.floor((100 * done) / Math.max(1, total));
+    if (pct === last) return;
+    last = pct;
+    const bar = '#'.repeat(Math.floor(pct / 4)).padEnd(25, ' ');
+    io.stderr(`\r${label} [${bar}] ${pct}%${pct >= 100 ? '\r' + ' '.repeat(50) + '\r' : ''}`);
+  };
+}
+
+function designCommand(file: string, opts: CommonOptions, io: Io): number {
+  const req = readRequirements(rawWithOverrides(file, opts), loadCatalog());
+  const run = runDesign(req, { strategy: opts.strategy, onProgress: progress(io, 'searching') });
+  const system = opts.units ?? req.system;
+  if (opts.json) io.stdout(toJson(designJson(run)) + '\n');
+  else io.stdout(designText(run, system));
+  if (opts.report) {
+    writeDesignReport(opts.report, run, system, !!opts.force);
+    io.stderr(`coilfront: report written to ${opts.report}\n`);
+  }
+  if (run.candidates.length === 0) {
+    if (opts.json) io.stderr('coilfront: no spring meets every requirement (see "infeasible" in the JSON)\n');
+    return EXIT.infeasible;
+  }
+  return EXIT.ok;
+}
+
+export const FRONTIER_KEYS = {
+  mass: { objective: OBJ.mass, sign: 1, kind: 'mass' as const, label: 'mass' },
+  wire_volume: { objective: OBJ.wire_volume, sign: 1, kind: null, label: 'wire volume' },
+  outer_diameter: { objective: OBJ.outer_diameter, sign: 1, kind: 'length' as const, label: 'outer diameter' },
+  free_length: { objective: OBJ.free_length, sign: 1, kind: 'length' as const, label: 'free length' },
+  relative_cost: { objective: OBJ.relative_cost, sign: 1, kind: null, label: 'relative cost (mass x cost factor)' },
+  safety_factor: { objective: OBJ.neg_safety_factor, sign: -1, kind: null, label: 'safety factor (lowest of static and fatigue)' },
+  static_safety: { objective: OBJ.neg_static_safety, sign: -1, kind: null, label: 'static safety factor' },
+  fatigue_safety: { objective: OBJ.neg_fatigue_safety, sign: -1, kind: null, label: 'fatigue safety factor' },
+} as const;
+export type FrontierKey = keyof typeof FRONTIER_KEYS;
+
+/** Column names and rows of springs for CSV, in the chosen unit system with units in the names. */
+export function springColumns(system: UnitSystem): string[] {
+  const u = (k: Parameters<typeof unitSymbol>[0]) => unitSymbol(k, system);
+  return ['material', 'ends', `wire_diameter_${u('length')}`, `mean_diameter_${u('length')}`, `outer_diameter_${u('length')}`, `inner_diameter_${u('length')}`,
+    'spring_index', 'active_coils', 'total_coils', `free_length_${u('length')}`, `solid_length_${u('length')}`, `rate_${u('rate')}`,
+    `working_force_${u('force')}`, `operating_force_${u('force')}`, `max_stress_${u('stress')}`, `solid_stress_${u('stress')}`,
+    'static_safety_factor', 'fatigue_safety_factor', `natural_frequency_Hz`, `mass_${u('mass')}`, 'relative_cost'];
+}
+
+export function springRow(c: Candidate, system: UnitSystem): (string | number | null)[] {
+  const a = c.analysis;
+  const g = a.geometry;
+  const L = (v: number) => Number(sig(inUnit(v, 'length', system), 6));
+  const F = (v: number) => Number(sig(inUnit(v, 'force', system), 6));
+  const S = (v: number) => Number(sig(inUnit(v, 'stress', system), 6));
+  const last = a.points[a.points.length - 1];
+  return [c.item.choice.material.id, g.ends, L(g.wireDiameter), L(g.meanDiameter), L(g.outerDiameter), L(g.innerDiameter),
+    Number(sig(g.springIndex, 6)), g.activeCoils, g.totalCoils, L(g.freeLength), L(g.solidLength), Number(sig(inUnit(a.rate, 'rate', system), 6)),
+    F(a.points[0].force), a.points.length > 1 ? F(last.force) : null, S(Math.max(...a.points.map((p) => p.stress))), S(a.solid.stress),
+    Number(sig(a.staticSafetyFactor, 5)), a.fatigue ? Number(sig(a.fatigue.safetyFactor, 5)) : null, Number(sig(a.surge.relevant, 5)),
+    Number(sig(inUnit(g.mass, 'mass', system), 6)), Number(sig(g.mass * c.item.choice.material.relativeCost.value, 6))];
+}
+
+export interface Frontier { run: DesignRun; x: FrontierKey; y: FrontierKey; cloud: { x: number; y: number }[]; front: Candidate[] }
+
+export function computeFrontier(req: Requirements, x: FrontierKey, y: FrontierKey, onProgress?: (d: number, t: number) => void): Frontier {
+  // Mass, volume, diameter, free length and cost all grow with the mean diameter within a cell, so the
+  // cell's first feasible diameter dominates the rest; a safety factor does not, so then every step counts.
+  const everyFeasiblePoint = FRONTIER_KEYS[x].sign < 0 || FRONTIER_KEYS[y].sign < 0;
+  const run = runDesign(req, { strategy: 'grid', collectAll: true, everyFeasiblePoint, onProgress });
+  const cloudBuf = run.result.cloud!;
+  const xs = new Float64Array(cloudBuf.size);
+  const ys = new Float64Array(cloudBuf.size);
+  for (let i = 0; i < cloudBuf.size; i++) {
+    const f = cloudBuf.f(i);
+    xs[i] = f[FRONTIER_KEYS[x].objective];
+    ys[i] = f[FRONTIER_KEYS[y].objective];
+  }
+  const front = paretoFront2(xs, ys).map((i) => candidateAt(run.problem, cloudBuf.x(i), Float64Array.from(cloudBuf.f(i))));
+  const cloud = Array.from(xs, (v, i) => ({ x: FRONTIER_KEYS[x].sign * v, y: FRONTIER_KEYS[y].sign * ys[i] }));
+  return { run, x, y, cloud, front };
+}
+
+interface FrontierOptions extends CommonOptions { x: FrontierKey; y: FrontierKey; output?: string }
+
+function frontierCommand(file: string, opts: FrontierOptions, io: Io): number {
+  if (opts.x === opts.y) throw new InputError('--y', 'an objective other than --x');
+  const req = readRequirements(rawWithOverrides(file, opts), loadCatalog());
+  const system = opts.units ?? req.system;
+  const fr = computeFrontier(req, opts.x, opts.y, progress(io, 'mapping'));
+  const keyValue = (c: Candidate, k: FrontierKey) => FRONTIER_KEYS[k].sign * c.objectives[FRONTIER_KEYS[k].objective];
+  if (opts.json) {
+    io.stdout(toJson({ units: SI_UNITS, x: opts.x, y: opts.y, feasible: fr.cloud.length, ...countsRecord(fr.run),
+      frontier: fr.front.map((c) => ({ [opts.x]: keyValue(c, opts.x), [opts.y]: keyValue(c, opts.y), ...candidateRecord(c) })) }) + '\n');
+  } else {
+    const csv = toCsv(['rank', ...springColumns(system)], fr.front.map((c, i) => [i + 1, ...springRow(c, system)]));
+    if (opts.output) {
+      writeOutputFile(opts.output, csv, !!opts.force, '--output');
+      io.stderr(`coilfront: ${fr.front.length} springs on the ${opts.x} / ${opts.y} frontier (of ${fr.cloud.length} feasible) written to ${opts.output}\n`);
+    } else io.stdout(csv);
+  }
+  if (opts.report) {
+    writeDesignReport(opts.report, fr.run, system, !!opts.force, fr);
+    io.stderr(`coilfront: report written to ${opts.report}\n`);
+  }
+  if (!opts.json) io.stderr(cautionText() + '\n');
+  return fr.front.length ? EXIT.ok : EXIT.infeasible;
+}
+
+interface SweepOptions extends CommonOptions { vary: string; output?: string }
+
+export interface SweepRow { value: number; run: DesignRun; best: Candidate | null; limiting: string | null }
+
+export function runSweep(file: string, opts: CommonOptions, vary: string, io: Io | null): { path: string[]; rows: SweepRow[]; system: UnitSystem } {
+  const eq = vary.indexOf('=');
+  if (eq <= 0) throw new InputError('--vary', 'path=from:to:step, such as envelope.max_outer_diameter=14:24:0.5', vary);
+  const path = parseAssignment(`${vary.slice(0, eq)}=0`, '--vary').path;
+  const values = sweepValues(vary.slice(eq + 1));
+  const base = rawWithOverrides(file, opts);
+  const catalog = loadCatalog();
+  const rows: SweepRow[] = [];
+  let system: UnitSystem = 'si';
+  values.forEach((value, i) => {
+    const req = readRequirements(withValue(base, path, value), catalog);
+    system = req.system;
+    const run = runDesign(req, { strategy: opts.strategy });
+    let limiting: string | null = null;
+    if (!run.candidates.length) {
+      const s = relaxSuggestions(run, opts.units ?? req.system)[0];
+      const worst = Object.entries(run.result.cutBy).sort((a, b) => b[1] - a[1])[0];
+      limiting = s ? `${s.check}: ${s.message}` : worst ? `${worst[0]} cut most combinations` : 'no wire stock fits';
+    }
+    rows.push({ value, run, best: run.candidates[0] ?? null, limiting });
+    if (io?.interactive) io.stderr(`\rsweep ${i + 1}/${values.length}`);
+  });
+  if (io?.interactive) io.stderr('\r' + ' '.repeat(30) + '\r');
+  return { path, rows, system };
+}
+
+function sweepCommand(file: string, opts: SweepOptions, io: Io): number {
+  const { path, rows, system: fileSystem } = runSweep(file, opts, opts.vary, io);
+  const system = opts.units ?? fileSystem;
+  const name = path.join('.');
+  if (opts.json) {
+    io.stdout(toJson({ units: SI_UNITS, vary: name, note: `${name} values are as given on the command line, in the file's unit system`,
+      rows: rows.map((r) => ({ value: r.value, feasible: r.run.result.feasibleCells, best: r.best ? candidateRecord(r.best) : null, limiting_check: r.limiting })) }) + '\n');
+  } else {
+    const csv = toCsv([`${name} (${fileSystem === 'us' ? 'in/lbf/psi' : 'mm/N/MPa'})`, 'feasible_combinations', ...springColumns(system), 'limiting_check'],
+      rows.map((r) => [r.value, r.run.result.feasibleCells, ...(r.best ? springRow(r.best, system) : springColumns(system).map((_, i) => (i === 0 ? 'none' : null))), r.limiting]));
+    if (opts.output) {
+      writeOutputFile(opts.output, csv, !!opts.force, '--output');
+      io.stderr(`coilfront: ${rows.length} runs of ${name} written to ${opts.output}\n`);
+    } else io.stdout(csv);
+  }
+  if (opts.report) {
+    writeDesignReport(opts.report, rows.find((r) => r.best)?.run ?? rows[0].run, system, !!opts.force, undefined, { name, rows });
+    io.stderr(`coilfront: report written to ${opts.report}\n`);
+  }
+  if (!opts.json) io.stderr(cautionText() + '\n');
+  return rows.some((r) => r.best) ? EXIT.ok : EXIT.infeasible;
+}
+
+export function registerSearchCommands(program: Command, io: Io, setCode: (c: number) => void): void {
+  addCommon(program.command('design')
+    .description('search every standard wire size, coil count and end type for the springs that meet the requirements, best first')
+    .argument('<requirements-file>', 'YAML or JSON requirements file (see README)'))
+    .option('--report <file.html>', 'also write a self-contained HTML design report')
+    .option('--force', 'overwrite an existing report file')
+    .action((file: string, opts: CommonOptions) => setCode(designCommand(file, opts, io)));
+
+  const keys = Object.keys(FRONTIER_KEYS);
+  addCommon(program.command('frontier')
+    .description('the Pareto set of all feasible springs on two objectives, as CSV')
+    .argument('<requirements-file>', 'YAML or JSON requirements file'))
+    .addOption(new Option('--x <key>', 'objective on the x axis').choices(keys).default('mass'))
+    .addOption(new Option('--y <key>', 'objective on the y axis').choices(keys).default('outer_diameter'))
+    .option('-o, --output <file.csv>', 'write the CSV here instead of stdout')
+    .option('--report <file.html>', 'also write a self-contained HTML report with the frontier plot')
+    .option('--force', 'overwrite existing output files')
+    .action((file: string, opts: FrontierOptions) => setCode(frontierCommand(file, opts, io)));
+
+  addCommon(program.command('sweep')
+    .description('re-run the design for each value of one requirement: what a tighter envelope costs')
+    .argument('<requirements-file>', 'YAML or JSON requirements file'))
+    .requiredOption('--vary <path=from:to:step>', 'the requirement to vary, e.g. envelope.max_outer_diameter=14:24:0.5')
+    .option('-o, --output <file.csv>', 'write the CSV here instead of stdout')
+    .option('--report <file.html>', 'also write a self-contained HTML report with the sweep plot')
+    .option('--force', 'overwrite existing output files')
+    .action((file: string, opts: SweepOptions) => setCode(sweepCommand(file, opts, io)));
+}

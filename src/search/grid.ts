@@ -14,6 +14,9 @@ export interface GridOptions {
   top: number;
   /** Keep every feasible point (for frontiers); disables pruning. */
   collectAll?: boolean;
+  /** With collectAll: every feasible scan point of a cell, not only its first (needed when an
+   * objective is not monotone in the solved variable). */
+  everyFeasiblePoint?: boolean;
   /** Polish the scanned continuous variables of the best point by a Hooke-Jeeves pattern search
    * with at most this many step halvings (0: none). */
   refine?: number;
@@ -35,7 +38,7 @@ function gridPass(p: Problem, vars: readonly Variable[], s: number, opts: GridOp
     if (i !== s) x[i] = valueAt(vars[i], 0);
   }
   const increasing = p.objectiveTrend !== undefined && p.objectiveTrend[0] === TREND.increasing;
-  const mode = opts.collectAll || !increasing ? CellMode.All : CellMode.First;
+  const mode = (opts.collectAll && opts.everyFeasiblePoint) || !increasing ? CellMode.All : CellMode.First;
   const visit = (px: Float64Array, f: Float64Array) => {
     top.offer(px, f);
     if (cloud) cloud.push(px, f);

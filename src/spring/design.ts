@@ -15,6 +15,8 @@ export interface DesignOptions {
   strategy?: StrategyChoice;
   /** Keep every feasible spring (one per cell at its smallest feasible diameter) for the frontier. */
   collectAll?: boolean;
+  /** With collectAll, every feasible diameter step of each cell too (for non-monotone objectives). */
+  everyFeasiblePoint?: boolean;
   /** Budget of the genetic search, in evaluations. */
   maxEvaluations?: number;
   onProgress?: (done: number, total: number) => void;
@@ -62,7 +64,7 @@ export function runDesign(req: Requirements, opts: DesignOptions = {}): DesignRu
   const result = problem.stock.length === 0
     ? emptyResult()
     : strategy === 'grid'
-      ? gridSearch(problem, { top: req.top, collectAll: opts.collectAll, onProgress: opts.onProgress })
+      ? gridSearch(problem, { top: req.top, collectAll: opts.collectAll, everyFeasiblePoint: opts.everyFeasiblePoint, onProgress: opts.onProgress })
       : geneticSearch(problem, { seed: req.seed, maxEvaluations: opts.maxEvaluations ?? 2_000_000, top: req.top });
   const searchMs = performance.now() - t0;
   const candidates = result.best.map((b) => candidateAt(problem, b.x, b.f));
