@@ -36,12 +36,14 @@ export function geneticSearch(p: Problem, opts: GeneticOptions): SearchResult {
   const rng = seedrandom(String(opts.seed));
   const s = solvedIndex(p);
   const n = p.variables.length;
-  const ws = makeWorkspace(p);
+  // Bisection to 1e-7 during the search is ample to rank cells; the final top cells are solved again
+  // to the grid's 1e-10 before they are reported.
+  const ws = makeWorkspace(p, 1e-7);
   const top = new TopK(Math.max(1, opts.top ?? 10), n, p.objectiveNames.length);
   const misses = new NearestMisses(5);
   const counts = { cells: 0, feasible: 0, pruned: 0 };
-  const popSize = opts.populationSize ?? 24;
-  const stall = opts.stallGenerations ?? 25;
+  const popSize = opts.populationSize ?? 12;
+  const stall = opts.stallGenerations ?? 80;
   const sizes = p.variables.map((v) => (v.kind === 'continuous' ? 0 : valueCount(v)));
   const discreteOnly = p.variables.every((v, i) => i === s || v.kind !== 'continuous');
   const memo = new Map<number, { f: number; violation: number; x: Float64Array }>();
@@ -168,21 +170,32 @@ export function geneticSearch(p: Problem, opts: GeneticOptions): SearchResult {
     if (better(genBest, best)) { best = genBest; sinceBetter = 0; } else sinceBetter++;
   }
 
-  // Closing hill-climb over the integer genes: step each by one while that improves.
+  // Closing hill-climb over the integer genes: moves of one step in one gene or in two genes at once
+  // (a thicker wire wants fewer coils), taken while they improve.
+  const integerGenes = p.variables.map((v, i) => (i !== s && v.kind !== 'continuous' ? i : -1)).filter((i) => i >= 0);
+  const moves: [number, number, number, number][] = [];
+  for (const i of integerGenes) for (const di of [-1, 1]) moves.push([i, di, -1, 0]);
+  for (const i of integerGenes) for (const j of integerGenes) if (j > i) for (const di of [-1, 1]) for (const dj of [-1, 1]) moves.push([i, di, j, dj]);
   let improved = true;
   while (improved && ws.evaluations < opts.maxEvaluations * 1.2) {
     improved = false;
-    for (let i = 0; i < n && !improved; i++) {
-      if (i === s || p.variables[i].kind === 'continuous') continue;
-      for (const delta of [-1, 1]) {
-        const gi = best.genes[i] + delta;
-        if (gi < 0 || gi >= sizes[i]) continue;
-        const g = Float64Array.from(best.genes);
-        g[i] = gi;
-        const cand = assess(g);
-        if (better(cand, best)) { best = cand; improved = true; break; }
-      }
+    for (const [i, di, j, dj] of moves) {
+      const g = Float64Array.from(best.genes);
+      g[i] += di;
+      if (j >= 0) g[j] += dj;
+      if (g[i] < 0 || g[i] >= sizes[i] || (j >= 0 && (g[j] < 0 || g[j] >= sizes[j]))) continue;
+      const cand = assess(g);
+      if (better(cand, best)) { best = cand; improved = true; break; }
     }
   }
-  return packResult('genetic', p, top, null, ws, counts, misses);
+  if (s < 0) return packResult('genetic', p, top, null, ws, counts, misses);
+  // Solve the reported cells again at the grid's tolerance.
+  const fine = makeWorkspace(p);
+  const finalTop = new TopK(top.k, n, p.objectiveNames.length);
+  for (let r = 0; r < top.size; r++) {
+    x.set(top.x(r));
+    if (solveCell(p, s, x, fine, increasing ? CellMode.First : CellMode.All, increasing ? null : (px, f) => finalTop.offer(px, f), null) === true && increasing) finalTop.offer(x, fine.f);
+  }
+  ws.evaluations += fine.evaluations;
+  return packResult('genetic', p, finalTop.size ? finalTop : top, null, ws, counts, misses);
 }
