@@ -23,6 +23,8 @@ export interface CellWorkspace {
   decMask: Uint8Array;
   /** Bisection stops when the interval is this fraction of its value. */
   relativeTolerance: number;
+  /** In mode All, scan at most this many points per cell (the step grows past the resolution). */
+  maxScanPoints: number;
 }
 
 export function makeWorkspace(p: Problem, relativeTolerance = 1e-10): CellWorkspace {
@@ -38,7 +40,7 @@ export function makeWorkspace(p: Problem, relativeTolerance = 1e-10): CellWorksp
     g: new Float64Array(m), f: new Float64Array(p.objectiveNames.length), bounds: new Float64Array(2),
     evaluations: 0, cutBy: new Float64Array(m), soleViolation: new Float64Array(m).fill(Infinity),
     missX: new Float64Array(p.variables.length), missG: new Float64Array(m), missF: new Float64Array(p.objectiveNames.length), missViolation: Infinity,
-    incMask, decMask, relativeTolerance,
+    incMask, decMask, relativeTolerance, maxScanPoints: Infinity,
   };
 }
 
@@ -151,7 +153,7 @@ export function solveCell(
     hi = a;
   }
   // Scan the bracket at the variable's resolution for the constraints of unknown trend.
-  const step = v.resolution;
+  const step = mode === CellMode.All ? Math.max(v.resolution, (hi - lo) / ws.maxScanPoints) : v.resolution;
   let found = false;
   for (let t = lo; ; t += step) {
     const at = t > hi ? hi : t;

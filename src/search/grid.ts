@@ -17,6 +17,8 @@ export interface GridOptions {
   /** With collectAll: every feasible scan point of a cell, not only its first (needed when an
    * objective is not monotone in the solved variable). */
   everyFeasiblePoint?: boolean;
+  /** With everyFeasiblePoint: sample each cell's feasible interval at no more than this many points. */
+  maxScanPoints?: number;
   /** Polish the scanned continuous variables of the best point by a Hooke-Jeeves pattern search
    * with at most this many step halvings (0: none). */
   refine?: number;
@@ -87,6 +89,7 @@ function evaluatePoint(p: Problem, x: Float64Array, ws: ReturnType<typeof makeWo
 export function gridSearch(p: Problem, opts: GridOptions): SearchResult {
   const s = solvedIndex(p);
   const ws = makeWorkspace(p, opts.relativeTolerance);
+  if (opts.everyFeasiblePoint && opts.maxScanPoints) ws.maxScanPoints = opts.maxScanPoints;
   const nx = p.variables.length;
   const top = new TopK(Math.max(1, opts.top), nx, p.objectiveNames.length);
   const cloud = opts.collectAll ? new PointBuffer(nx, p.objectiveNames.length) : null;

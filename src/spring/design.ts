@@ -64,7 +64,7 @@ export function runDesign(req: Requirements, opts: DesignOptions = {}): DesignRu
   const result = problem.stock.length === 0
     ? emptyResult()
     : strategy === 'grid'
-      ? gridSearch(problem, { top: req.top, collectAll: opts.collectAll, everyFeasiblePoint: opts.everyFeasiblePoint, onProgress: opts.onProgress })
+      ? gridSearch(problem, { top: req.top, collectAll: opts.collectAll, everyFeasiblePoint: opts.everyFeasiblePoint, maxScanPoints: 40, onProgress: opts.onProgress })
       : geneticSearch(problem, { seed: req.seed, maxEvaluations: opts.maxEvaluations ?? 2_000_000, top: req.top });
   const searchMs = performance.now() - t0;
   const candidates = result.best.map((b) => candidateAt(problem, b.x, b.f));

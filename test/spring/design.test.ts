@@ -1,0 +1,107 @@
+// Invariants of the spring search (property tests with fast-check, over requirements of our own making).
+import fc from 'fast-check';
+import { describe, expect, it } from 'vitest';
+import { loadCatalog } from '../../src/catalogs/load.js';
+import { readRequirements } from '../../src/input/requirements.js';
+import { readSpringCase } from '../../src/input/springFile.js';
+import { analyzeSpring } from '../../src/model/analysis.js';
+import { paretoFront2, dominates } from '../../src/search/pareto.js';
+import { checkAnalysis } from '../../src/spring/checks.js';
+import { runDesign } from '../../src/spring/design.js';
+import { springDocument } from '../../src/spring/springDoc.js';
+import { computeFrontier } from '../../src/cli/searchCommands.js';
+
+const catalog = loadCatalog();
+
+const reqArb = fc.record({
+  force: fc.double({ min: 5, max: 200, noNaN: true }),
+  length: fc.double({ min: 20, max: 80, noNaN: true }),
+  stroke: fc.double({ min: 0.1, max: 0.5, noNaN: true }),
+  rateFixed: fc.boolean(),
+  forceRise: fc.double({ min: 1.2, max: 2.5, noNaN: true }),
+  od: fc.double({ min: 8, max: 40, noNaN: true }),
+  material: fc.constantFrom('music-wire', 'stainless-302', 'chrome-silicon', 'phosphor-bronze', 'en10270-1-dm'),
+  ends: fc.constantFrom('squared-ground', 'squared', 'plain', 'plain-ground'),
+  seating: fc.constantFrom('fixed-fixed', 'fixed-pivoted', 'pivoted-pivoted', 'fixed-free'),
+  cycles: fc.constantFrom(undefined, 1e5, 1e6, 'infinite'),
+  peened: fc.boolean(),
+  solidSafe: fc.boolean(),
+  tolerance: fc.constantFrom(0, 0.05, 0.1),
+});
+
+function requirementsDoc(r: fc.infer<typeof reqArb>): Record<string, unknown> {
+  const doc: Record<string, unknown> = {
+    units: 'si', material: r.material, ends: r.ends, seating: r.seating,
+    load: { force: r.force, length: r.length },
+    operating_length: r.length * (1 - r.stroke),
+    envelope: { max_outer_diameter: r.od, max_free_length: r.length * 3 },
+    peened: r.peened, solid_safe: r.solidSafe, load_tolerance: r.tolerance, coil_step: 0.5, top: 5,
+  };
+  if (r.rateFixed) doc.operating_force = r.force * r.forceRise;
+  if (r.cycles !== undefined) doc.cycles = r.cycles;
+  return doc;
+}
+
+describe('spring search invariants (property)', () => {
+  it('every spring the search reports re-verifies through the single-spring analysis, read from its own spring file', () => {
+    let withSprings = 0;
+    fc.assert(fc.property(reqArb, (r) => {
+      const req = readRequirements(requirementsDoc(r), catalog);
+      const run = runDesign(req, { strategy: 'grid' });
+      for (const c of run.candidates) {
+        const springCase = readSpringCase(springDocument(c, req), catalog);
+        const a = analyzeSpring(springCase.geometry, springCase.figures, springCase.service);
+        const g = checkAnalysis(a, req);
+        for (let i = 0; i < g.length; i++) expect(g[i]).toBeLessThanOrEqual(1e-6);
+        expect(a.geometry.mass).toBeCloseTo(c.analysis.geometry.mass, 12);
+        // Sorted best first.
+      }
+      for (let i = 1; i < run.candidates.length; i++) expect(run.candidates[i].objectives[0]).toBeGreaterThanOrEqual(run.candidates[i - 1].objectives[0]);
+      if (run.candidates.length) withSprings++;
+    }), { numRuns: 40, seed: 7 });
+    expect(withSprings).toBeGreaterThan(5);
+  });
+
+  it('the LP bound is never above the grid\'s best, and the genetic search never beats the grid', () => {
+    fc.assert(fc.property(reqArb, fc.integer({ min: 1, max: 1000 }), (r, seed) => {
+      const req = readRequirements({ ...requirementsDoc(r), seed }, catalog);
+      const grid = runDesign(req, { strategy: 'grid' });
+      const ga = runDesign(req, { strategy: 'genetic', maxEvaluations: 20000 });
+      if (grid.candidates.length === 0) {
+        expect(ga.candidates).toHaveLength(0);
+        return;
+      }
+      const best = grid.candidates[0].objectives[0];
+      if (grid.lp.value !== null) expect(grid.lp.value).toBeLessThanOrEqual(best * (1 + 1e-9));
+      if (ga.candidates.length) expect(ga.candidates[0].objectives[0]).toBeGreaterThanOrEqual(best * (1 - 1e-9));
+    }), { numRuns: 25, seed: 11 });
+  });
+
+  it('tightening the bore never lowers the best mass', () => {
+    fc.assert(fc.property(reqArb, fc.double({ min: 0.6, max: 0.98, noNaN: true }), (r, shrink) => {
+      const wide = runDesign(readRequirements(requirementsDoc(r), catalog), { strategy: 'grid' });
+      const narrow = runDesign(readRequirements(requirementsDoc({ ...r, od: r.od * shrink }), catalog), { strategy: 'grid' });
+      if (narrow.candidates.length) {
+        expect(wide.candidates.length).toBeGreaterThan(0);
+        expect(narrow.candidates[0].objectives[0]).toBeGreaterThanOrEqual(wide.candidates[0].objectives[0] * (1 - 1e-9));
+      }
+    }), { numRuns: 20, seed: 3 });
+  });
+
+  it('the frontier is non-dominated and every feasible spring is dominated by or on it', () => {
+    const req = readRequirements({ units: 'si', material: ['music-wire', 'stainless-302'], load: { force: 30, length: 40 }, operating_length: 30,
+      envelope: { max_outer_diameter: 22, max_free_length: 90 }, cycles: 1e6, coil_step: 0.5 }, catalog);
+    for (const [x, y] of [['mass', 'outer_diameter'], ['mass', 'fatigue_safety']] as const) {
+      const fr = computeFrontier(req, x, y);
+      expect(fr.front.length).toBeGreaterThan(1);
+      const xs = fr.cloud.map((p) => p.x);
+      const ys = fr.cloud.map((p) => (y === 'fatigue_safety' ? -p.y : p.y));
+      const idx = paretoFront2(xs, ys);
+      for (const i of idx) for (const j of idx) if (i !== j) expect(dominates(xs[j], ys[j], xs[i], ys[i])).toBe(false);
+      for (let k = 0; k < xs.length; k++) {
+        const onOrDominated = idx.some((i) => i === k || dominates(xs[i], ys[i], xs[k], ys[k]) || (xs[i] === xs[k] && ys[i] === ys[k]));
+        expect(onOrDominated).toBe(true);
+      }
+    }
+  });
+});
