@@ -80,7 +80,6 @@ export function buildSpringProblem(req: Requirements): SpringProblem {
   const endQ = Int32Array.from(ends.map(inactiveCoils));
   const active = activeChecks(req);
   const activeMask = Uint8Array.from(active.map((a) => (a ? 1 : 0)));
-  const m = CHECKS.length;
 
   const F1 = req.workingForce;
   const L1 = req.workingLength;
@@ -163,21 +162,23 @@ export function buildSpringProblem(req: Requirements): SpringProblem {
       const F2 = F1 + k * travel;
       const limit = sLimit[i];
       const tauMax = shearStress(F2, D, d, K);
-      const tauSolid = shearStress(k * (L0 - Ls), D, d, K);
 
+      // Checks that do not apply stay at -1 and cost nothing.
       g[0] = (Cmin - C) / Cmin;
       g[1] = (C - Cmax) / Cmax;
-      g[2] = (D + d - ODmax) / ODmax;
-      g[3] = (IDmin - (D - d)) / IDmin;
-      g[4] = (L0 - L0max) / L0max;
-      g[5] = (Ls - Lsmax) / Lsmax;
+      g[2] = activeMask[2] === 1 ? (D + d - ODmax) / ODmax : -1;
+      g[3] = activeMask[3] === 1 ? (IDmin - (D - d)) / IDmin : -1;
+      g[4] = activeMask[4] === 1 ? (L0 - L0max) / L0max : -1;
+      g[5] = activeMask[5] === 1 ? (Ls - Lsmax) / Lsmax : -1;
       g[6] = (Ls + xi * (L0 - Lmin) - Lmin) / Lmin;
-      const minGap = minimumGapSum(D, d, Na);
-      g[7] = (minGap - (Lmin - Ls)) / minGap;
-      g[8] = (solidOuterDiameter(D, d, pitch(L0, Na, d, endType)) - ODmax) / ODmax;
+      if (activeMask[7] === 1) {
+        const minGap = minimumGapSum(D, d, Na);
+        g[7] = (minGap - (Lmin - Ls)) / minGap;
+      } else g[7] = -1;
+      g[8] = activeMask[8] === 1 ? (solidOuterDiameter(D, d, pitch(L0, Na, d, endType)) - ODmax) / ODmax : -1;
       const staticSafety = limit / tauMax;
       g[9] = (tauMax * staticFactor - limit) / limit;
-      g[10] = (tauSolid - limit) / limit;
+      g[10] = activeMask[10] === 1 ? (shearStress(k * (L0 - Ls), D, d, K) - limit) / limit : -1;
       let fatigueSafety = NaN;
       if (activeMask[11] === 1) {
         const tauMin = shearStress(F1, D, d, K);
@@ -185,15 +186,16 @@ export function buildSpringProblem(req: Requirements): SpringProblem {
         const mean = 0.5 * (tauMax + tauMin);
         fatigueSafety = fatigueSafetyFactor(alt, mean, sPoint[i], sSsu[i], criterion);
         g[11] = (nfTarget - fatigueSafety) / nfTarget;
-      }
+      } else g[11] = -1;
       const ymax = L0 - Lmin;
       const ycr = criticalDeflection(L0, D, sE[i], sG[i], alpha);
       g[12] = ycr === ycr ? (ymax - ycr) / ymax : -1;
       g[13] = surgeNeed > 0 ? (surgeNeed - surgeFrequency(k, activeCoilMass(d, D, Na, sRho[i]), oneEndFree)) / surgeNeed : -1;
-      g[14] = (F2req * (1 - tol) - F2) / F2req;
-      g[15] = (F2 - F2req * (1 + tol)) / F2req;
-      g[16] = (temperature - sTmax[i]) / Math.max(Math.abs(sTmax[i]), 1);
-      for (let j = 0; j < m; j++) if (activeMask[j] === 0) g[j] = -1;
+      if (activeMask[14] === 1) {
+        g[14] = (F2req * (1 - tol) - F2) / F2req;
+        g[15] = (F2 - F2req * (1 + tol)) / F2req;
+      } else { g[14] = -1; g[15] = -1; }
+      g[16] = activeMask[16] === 1 ? (temperature - sTmax[i]) / Math.max(Math.abs(sTmax[i]), 1) : -1;
 
       const mass = springMass(d, D, Nt, sRho[i]);
       f[1] = mass;
