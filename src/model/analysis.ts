@@ -188,7 +188,7 @@ export function analyzeSpring(g: SpringGeometry, m: MaterialFigures, s: ServiceC
 /** The rules of thumb a designer checks by habit; each broken one becomes a warning. */
 function rulesOfThumb(a: SpringAnalysis, s: ServiceConditions): Warning[] {
   const w: Warning[] = [];
-  const f = (v: number, n = 3) => Number(v.toPrecision(n)).toString();
+  const f = (v: number, n = 4) => Number(v.toPrecision(n)).toString();
   const C = a.geometry.springIndex;
   if (C < 4 || C > 12) w.push({ code: 'index', message: `spring index ${f(C)} is outside 4 to 12 (common practice): ${C < 4 ? 'hard to coil, high curvature stress' : 'prone to tangling and buckling, poor tolerances'}` });
   if (a.geometry.activeCoils < 3) w.push({ code: 'few-coils', message: `${f(a.geometry.activeCoils)} active coils: fewer than 3 makes the rate sensitive to end seating (common practice)` });
