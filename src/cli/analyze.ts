@@ -5,6 +5,7 @@ import { readSpringCase } from '../input/springFile.js';
 import { analyzeSpring } from '../model/analysis.js';
 import { analysisJson, analysisText } from '../report/analysisReport.js';
 import { toJson } from '../report/json.js';
+import { writeSpringReport } from '../report/html/springHtml.js';
 import type { UnitSystem } from '../units/systems.js';
 import type { Io } from './io.js';
 import { EXIT } from './io.js';
@@ -15,6 +16,10 @@ export function analyzeCommand(file: string, opts: AnalyzeOptions, io: Io): numb
   const catalog = loadCatalog();
   const c = readSpringCase(readInputFile(file), catalog);
   const a = analyzeSpring(c.geometry, c.figures, c.service);
+  if (opts.report) {
+    writeSpringReport(opts.report, c, a, opts.units ?? c.system, !!opts.force);
+    io.stderr(`coilfront: report written to ${opts.report}\n`);
+  }
   if (opts.json) io.stdout(toJson(analysisJson(c, a, c.notes)) + '\n');
   else io.stdout(analysisText(c, a, opts.units ?? c.system, c.notes));
   return EXIT.ok;

@@ -2,7 +2,8 @@
 import { readFileSync } from 'node:fs';
 import { dirname, join } from 'node:path';
 import { fileURLToPath } from 'node:url';
-import { Command, CommanderError, Option } from 'commander';
+import { Command, CommanderError } from 'commander';
+import { unitsOption } from './options.js';
 import { CatalogError } from '../catalogs/load.js';
 import { InputError } from '../units/parse.js';
 import { analyzeCommand } from './analyze.js';
@@ -21,7 +22,6 @@ export function packageVersion(): string {
   return '0.0.0';
 }
 
-export const unitsOption = () => new Option('--units <system>', 'units for the human-readable output (default: the input file\'s)').choices(['si', 'us']);
 
 export function buildProgram(io: Io, setCode: (c: number) => void): Command {
   const program = new Command('coilfront');

@@ -11,13 +11,12 @@ import { toJson, SI_UNITS } from '../report/json.js';
 import { writeOutputFile } from '../report/writeFile.js';
 import { cautionText } from '../report/cautions.js';
 import { candidateAt, runDesign, type Candidate, type DesignRun, type StrategyChoice } from '../spring/design.js';
-import { OBJ } from '../spring/problem.js';
-import { paretoFront2 } from '../search/pareto.js';
+import { FRONTIER_KEYS, computeFrontier, type FrontierKey } from '../spring/frontier.js';
 import { inUnit, sig, unitSymbol } from '../units/format.js';
 import { InputError } from '../units/parse.js';
 import type { UnitSystem } from '../units/systems.js';
 import { EXIT, type Io } from './io.js';
-import { unitsOption } from './run.js';
+import { unitsOption } from './options.js';
 import { writeDesignReport } from '../report/html/designHtml.js';
 
 interface CommonOptions {
@@ -75,30 +74,18 @@ function designCommand(file: string, opts: CommonOptions, io: Io): number {
   const req = readRequirements(rawWithOverrides(file, opts), loadCatalog());
   const run = runDesign(req, { strategy: opts.strategy, onProgress: progress(io, 'searching') });
   const system = opts.units ?? req.system;
-  if (opts.json) io.stdout(toJson(designJson(run)) + '\n');
-  else io.stdout(designText(run, system));
   if (opts.report) {
     writeDesignReport(opts.report, run, system, !!opts.force);
     io.stderr(`coilfront: report written to ${opts.report}\n`);
   }
+  if (opts.json) io.stdout(toJson(designJson(run)) + '\n');
+  else io.stdout(designText(run, system));
   if (run.candidates.length === 0) {
     if (opts.json) io.stderr('coilfront: no spring meets every requirement (see "infeasible" in the JSON)\n');
     return EXIT.infeasible;
   }
   return EXIT.ok;
 }
-
-export const FRONTIER_KEYS = {
-  mass: { objective: OBJ.mass, sign: 1, kind: 'mass' as const, label: 'mass' },
-  wire_volume: { objective: OBJ.wire_volume, sign: 1, kind: null, label: 'wire volume' },
-  outer_diameter: { objective: OBJ.outer_diameter, sign: 1, kind: 'length' as const, label: 'outer diameter' },
-  free_length: { objective: OBJ.free_length, sign: 1, kind: 'length' as const, label: 'free length' },
-  relative_cost: { objective: OBJ.relative_cost, sign: 1, kind: null, label: 'relative cost (mass x cost factor)' },
-  safety_factor: { objective: OBJ.neg_safety_factor, sign: -1, kind: null, label: 'safety factor (lowest of static and fatigue)' },
-  static_safety: { objective: OBJ.neg_static_safety, sign: -1, kind: null, label: 'static safety factor' },
-  fatigue_safety: { objective: OBJ.neg_fatigue_safety, sign: -1, kind: null, label: 'fatigue safety factor' },
-} as const;
-export type FrontierKey = keyof typeof FRONTIER_KEYS;
 
 /** Column names and rows of springs for CSV, in the chosen unit system with units in the names. */
 export function springColumns(system: UnitSystem): string[] {
@@ -121,26 +108,6 @@ export function springRow(c: Candidate, system: UnitSystem): (string | number | 
     F(a.points[0].force), a.points.length > 1 ? F(last.force) : null, S(Math.max(...a.points.map((p) => p.stress))), S(a.solid.stress),
     Number(sig(a.staticSafetyFactor, 5)), a.fatigue ? Number(sig(a.fatigue.safetyFactor, 5)) : null, Number(sig(a.surge.relevant, 5)),
     Number(sig(inUnit(g.mass, 'mass', system), 6)), Number(sig(g.mass * c.item.choice.material.relativeCost.value, 6))];
-}
-
-export interface Frontier { run: DesignRun; x: FrontierKey; y: FrontierKey; cloud: { x: number; y: number }[]; front: Candidate[] }
-
-export function computeFrontier(req: Requirements, x: FrontierKey, y: FrontierKey, onProgress?: (d: number, t: number) => void): Frontier {
-  // Mass, volume, diameter, free length and cost all grow with the mean diameter within a cell, so the
-  // cell's first feasible diameter dominates the rest; a safety factor does not, so then every step counts.
-  const everyFeasiblePoint = FRONTIER_KEYS[x].sign < 0 || FRONTIER_KEYS[y].sign < 0;
-  const run = runDesign(req, { strategy: 'grid', collectAll: true, everyFeasiblePoint, onProgress });
-  const cloudBuf = run.result.cloud!;
-  const xs = new Float64Array(cloudBuf.size);
-  const ys = new Float64Array(cloudBuf.size);
-  for (let i = 0; i < cloudBuf.size; i++) {
-    const f = cloudBuf.f(i);
-    xs[i] = f[FRONTIER_KEYS[x].objective];
-    ys[i] = f[FRONTIER_KEYS[y].objective];
-  }
-  const front = paretoFront2(xs, ys).map((i) => candidateAt(run.problem, cloudBuf.x(i), Float64Array.from(cloudBuf.f(i))));
-  const cloud = Array.from(xs, (v, i) => ({ x: FRONTIER_KEYS[x].sign * v, y: FRONTIER_KEYS[y].sign * ys[i] }));
-  return { run, x, y, cloud, front };
 }
 
 interface FrontierOptions extends CommonOptions { x: FrontierKey; y: FrontierKey; output?: string }

@@ -9,7 +9,7 @@ import { paretoFront2, dominates } from '../../src/search/pareto.js';
 import { checkAnalysis } from '../../src/spring/checks.js';
 import { runDesign } from '../../src/spring/design.js';
 import { springDocument } from '../../src/spring/springDoc.js';
-import { computeFrontier } from '../../src/cli/searchCommands.js';
+import { computeFrontier } from '../../src/spring/frontier.js';
 
 const catalog = loadCatalog();
 

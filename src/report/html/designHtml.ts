@@ -1,7 +1,136 @@
-import type { DesignRun } from '../../spring/design.js';
+// The HTML design report: requirements and counts, the feasible cloud and its front with the chosen
+// spring marked, the ranked table, the chosen spring's force-length and fatigue diagrams and its
+// drawing to scale, the sweep when one was run, conventions and cautions.
+import type { Requirements } from '../../input/requirements.js';
+import type { SpringAnalysis } from '../../model/analysis.js';
+import type { Candidate, DesignRun } from '../../spring/design.js';
+import { reportedChecks } from '../../spring/design.js';
+import { CHECK_LABELS, type CheckName } from '../../spring/checks.js';
+import { computeFrontier, FRONTIER_KEYS, type Frontier } from '../../spring/frontier.js';
+import { formatQuantity, inUnit, sig, unitSymbol } from '../../units/format.js';
 import type { UnitSystem } from '../../units/systems.js';
-import type { Frontier, SweepRow } from '../../cli/searchCommands.js';
+import { writeOutputFile } from '../writeFile.js';
+import { CONVENTIONS, figure, htmlTable, page } from './page.js';
+import { cloudPlot, fatiguePlot, forceLengthPlot, sideView, sweepPlot } from './plots.js';
+import { relaxSuggestions } from '../designReport.js';
+import { esc } from './svg.js';
 
-export function writeDesignReport(_path: string, _run: DesignRun, _system: UnitSystem, _force: boolean, _frontier?: Frontier, _sweep?: { name: string; rows: SweepRow[] }): void {
-  throw new Error('HTML reports are not built yet');
+export interface SweepSummary { name: string; rows: { value: number; best: Candidate | null }[] }
+
+function requirementRows(req: Requirements, system: UnitSystem): string[][] {
+  const L = (v: number | undefined) => (v === undefined ? '-' : formatQuantity(v, 'length', system));
+  const F = (v: number | undefined) => (v === undefined ? '-' : formatQuantity(v, 'force', system));
+  return [
+    ['material', req.materials.map((m) => m.material.id).join(', ')],
+    ['end types', req.ends.join(', ')],
+    ['seating (buckling)', req.seating],
+    ['working load', `${F(req.workingForce)} at ${L(req.workingLength)}`],
+    ['operating point', req.operatingLength === undefined ? '-' : `${req.operatingForce === undefined ? 'free force' : F(req.operatingForce)} at ${L(req.operatingLength)}${req.loadTolerance ? `, tolerance ${sig(req.loadTolerance * 100, 3)}%` : ''}`],
+    ['largest outer diameter (bore)', L(req.maxOuterDiameter)],
+    ['smallest inner diameter (rod)', L(req.minInnerDiameter)],
+    ['largest free length', L(req.maxFreeLength)],
+    ['largest solid length', L(req.maxSolidLength)],
+    ['cycles', req.cycles === undefined ? 'static' : Number.isFinite(req.cycles) ? req.cycles.toExponential(1) : 'infinite'],
+    ['wire sizes', req.wireSizesLabel],
+    ['active coils', `${req.activeCoils[0]} to ${req.activeCoils[1]} by ${req.coilStep}`],
+    ['spring index', `${req.index[0]} to ${req.index[1]}`],
+    ['safety factors', `static ${req.safety.static}, fatigue ${req.safety.fatigue}, surge ${req.safety.surge}`],
+    ['clash allowance', `${sig(req.clashAllowance * 100, 3)}%`],
+    ['ranked by', req.rank.replace('_', ' ')],
+  ];
+}
+
+function candidateRows(cands: Candidate[], system: UnitSystem): { header: string[]; rows: string[][] } {
+  const u = (k: Parameters<typeof unitSymbol>[0]) => unitSymbol(k, system);
+  const n = (v: number, k: Parameters<typeof unitSymbol>[0]) => sig(inUnit(v, k, system), 4);
+  return {
+    header: ['#', 'material', `d (${u('length')})`, `D (${u('length')})`, `OD (${u('length')})`, `ID (${u('length')})`, 'Na', 'Nt', 'ends', `L0 (${u('length')})`, `Ls (${u('length')})`, `k (${u('rate')})`, `forces (${u('force')})`, 'SF static', 'SF fatigue', `mass (${u('mass')})`],
+    rows: cands.map((c, i) => {
+      const a = c.analysis;
+      const g = a.geometry;
+      return [String(i + 1), c.item.choice.material.id, n(g.wireDiameter, 'length'), n(g.meanDiameter, 'length'), n(g.outerDiameter, 'length'), n(g.innerDiameter, 'length'),
+        sig(g.activeCoils, 4), sig(g.totalCoils, 4), g.ends, n(g.freeLength, 'length'), n(g.solidLength, 'length'), n(a.rate, 'rate'),
+        a.points.map((p) => n(p.force, 'force')).join(' / '), sig(a.staticSafetyFactor, 3), a.fatigue ? sig(a.fatigue.safetyFactor, 3) : '-', sig(inUnit(g.mass, 'mass', system), 3)];
+    }),
+  };
+}
+
+/** The sections that show one spring: its figures, force-length, fatigue and drawing. */
+export function springSections(a: SpringAnalysis, system: UnitSystem, clashAllowance: number, heading: string): string[] {
+  const g = a.geometry;
+  const L = (v: number) => formatQuantity(v, 'length', system);
+  const S = (v: number) => formatQuantity(v, 'stress', system);
+  const kv = [
+    ['wire / mean / outer diameter', `${L(g.wireDiameter)} / ${L(g.meanDiameter)} / ${L(g.outerDiameter)}`],
+    ['active / total coils, ends', `${g.activeCoils} / ${g.totalCoils}, ${g.ends}`],
+    ['free / solid length', `${L(g.freeLength)} / ${L(g.solidLength)}`],
+    ['rate', formatQuantity(a.rate, 'rate', system)],
+    ['stress at solid', `${S(a.solid.stress)} (${a.solid.solidSafe ? 'solid-safe' : 'not solid-safe'})`],
+    ['static safety factor', sig(a.staticSafetyFactor, 3)],
+    ['fatigue safety factor', a.fatigue ? sig(a.fatigue.safetyFactor, 3) : 'static service'],
+    ['buckling', a.buckling.absolutelyStable ? 'absolutely stable' : `critical deflection ${L(a.buckling.criticalDeflection)}${a.buckling.buckles ? ' (buckles: guide it)' : ''}`],
+    ['surge frequency', `${sig(a.surge.relevant, 4)} Hz`],
+    ['mass', formatQuantity(g.mass, 'mass', system)],
+  ];
+  const out = [`<h2>${esc(heading)}</h2>`, htmlTable(['figure', 'value'], kv, { cls: 'kv' })];
+  if (a.warnings.length) out.push(`<ul class="warn">${a.warnings.map((w) => `<li>${esc(w.message)}</li>`).join('')}</ul>`);
+  out.push('<div class="grid2">');
+  out.push(figure(forceLengthPlot(a, system, clashAllowance), 'Force against length from free length to solid; the working and operating points, the solid length and the clash allowance.'));
+  out.push(figure(fatiguePlot(a, system), a.fatigue ? `Fatigue diagram (${a.fatigue.criterion}): the criterion through the endurance point, the load line and the operating point.` : ''));
+  out.push('</div>');
+  out.push(figure(sideView(a, system), 'Side view at free length, to scale.'));
+  return out;
+}
+
+function conventionsSection(): string {
+  return `<h2>Conventions</h2>${htmlTable(['item', 'method and source'], CONVENTIONS.map(([a, b]) => [a, b]), { cls: 'kv' })}`;
+}
+
+export function designHtml(run: DesignRun, system: UnitSystem, frontier?: Frontier, sweep?: SweepSummary): string {
+  const req = run.req;
+  const sections: string[] = [];
+  sections.push('<h2>Requirements</h2>');
+  sections.push(htmlTable(['requirement', 'value'], requirementRows(req, system), { cls: 'kv' }));
+  const r = run.result;
+  const counts = [
+    ['strategy', r.strategy], ['combinations', String(r.cells)], ['candidate evaluations', String(r.evaluations)], ['feasible combinations', String(r.feasibleCells)],
+    ['pruned by the incumbent bound', String(r.prunedCells)],
+    ...reportedChecks(req).filter((c) => r.cutBy[c] > 0).map((c) => [`cut: ${CHECK_LABELS[c as CheckName]}`, String(r.cutBy[c])]),
+    ['LP lower bound', run.lp.value !== null ? (req.rank === 'mass' ? formatQuantity(run.lp.value, 'mass', system) : `${sig(run.lp.value, 4)} mm^3`) : run.lp.status],
+    ['gap of the best spring to the bound', run.gap !== null ? `${sig(run.gap * 100, 3)}%` : '-'],
+  ];
+  sections.push(htmlTable(['count', 'value'], counts, { cls: 'kv' }));
+  const best = run.candidates[0];
+  if (!best) {
+    sections.push('<h2>No feasible spring</h2>');
+    sections.push(`<ul>${relaxSuggestions(run, system).map((s) => `<li>${esc(s.message)}</li>`).join('') || '<li>no single limit, relaxed alone, admits a spring</li>'}</ul>`);
+  } else {
+    const fr = frontier ?? computeFrontier(req, 'mass', 'outer_diameter');
+    const kx = FRONTIER_KEYS[fr.x];
+    const ky = FRONTIER_KEYS[fr.y];
+    const label = (k: typeof kx, key: string) => (k.kind ? `${k.label} (${unitSymbol(k.kind, system)})` : key === 'wire_volume' ? 'wire volume (mm^3)' : k.label);
+    const conv = (k: typeof kx, v: number) => (k.kind ? inUnit(v, k.kind, system) : v);
+    const pt = (c: Candidate) => ({ x: conv(kx, kx.sign * c.objectives[kx.objective]), y: conv(ky, ky.sign * c.objectives[ky.objective]) });
+    const cloud = fr.cloud.map((p) => ({ x: conv(kx, p.x), y: conv(ky, p.y) }));
+    sections.push('<h2>Feasible springs and the trade-off front</h2>');
+    sections.push(figure(cloudPlot(cloud, fr.front.map(pt), pt(best), label(kx, fr.x), label(ky, fr.y), {
+      material: best.item.choice.material.id, wire: String(best.geometry.wireDiameter), 'mean-diameter': String(best.geometry.meanDiameter), 'active-coils': String(best.geometry.activeCoils), ends: best.geometry.ends,
+    }), `${cloud.length} feasible springs (each combination of material, wire, ends and coils at its smallest feasible mean diameter); the line joins the ${fr.front.length} non-dominated ones; the ring marks the chosen spring, first in the table below.`));
+    sections.push('<h2>Ranked candidates</h2>');
+    const t = candidateRows(run.candidates, system);
+    sections.push(htmlTable(t.header, t.rows, { bestFirst: true }));
+    sections.push(...springSections(best.analysis, system, req.clashAllowance, 'The chosen spring'));
+  }
+  if (sweep) {
+    const pts = sweep.rows.map((row) => ({ x: row.value, y: row.best ? inUnit(row.best.analysis.geometry.mass, 'mass', system) : null }));
+    sections.push('<h2>Envelope sweep</h2>');
+    sections.push(figure(sweepPlot(pts, `${sweep.name} (as given)`, `best mass (${unitSymbol('mass', system)})`), 'The lightest feasible spring for each value; "none" where nothing fits.'));
+  }
+  sections.push(conventionsSection());
+  const subtitle = `${formatQuantity(req.workingForce, 'force', system)} at ${formatQuantity(req.workingLength, 'length', system)}${req.operatingLength !== undefined ? `, stroke to ${formatQuantity(req.operatingLength, 'length', system)}` : ''}. Written by coilfront.`;
+  return page('coilfront design report', subtitle, sections);
+}
+
+export function writeDesignReport(path: string, run: DesignRun, system: UnitSystem, force: boolean, frontier?: Frontier, sweep?: SweepSummary): void {
+  writeOutputFile(path, designHtml(run, system, frontier, sweep), force, '--report');
 }

@@ -1,0 +1,39 @@
+// The trade-off frontier: every feasible spring (one per combination at its smallest feasible mean
+// diameter, or sampled along it for a safety factor) and its Pareto set on two objectives.
+import type { Requirements } from '../input/requirements.js';
+import { paretoFront2 } from '../search/pareto.js';
+import { candidateAt, runDesign, type Candidate, type DesignRun } from './design.js';
+import { OBJ } from './problem.js';
+
+export const FRONTIER_KEYS = {
+  mass: { objective: OBJ.mass, sign: 1, kind: 'mass' as const, label: 'mass' },
+  wire_volume: { objective: OBJ.wire_volume, sign: 1, kind: null, label: 'wire volume' },
+  outer_diameter: { objective: OBJ.outer_diameter, sign: 1, kind: 'length' as const, label: 'outer diameter' },
+  free_length: { objective: OBJ.free_length, sign: 1, kind: 'length' as const, label: 'free length' },
+  relative_cost: { objective: OBJ.relative_cost, sign: 1, kind: null, label: 'relative cost (mass x cost factor)' },
+  safety_factor: { objective: OBJ.neg_safety_factor, sign: -1, kind: null, label: 'safety factor (lowest of static and fatigue)' },
+  static_safety: { objective: OBJ.neg_static_safety, sign: -1, kind: null, label: 'static safety factor' },
+  fatigue_safety: { objective: OBJ.neg_fatigue_safety, sign: -1, kind: null, label: 'fatigue safety factor' },
+} as const;
+export type FrontierKey = keyof typeof FRONTIER_KEYS;
+
+export interface Frontier { run: DesignRun; x: FrontierKey; y: FrontierKey; cloud: { x: number; y: number }[]; front: Candidate[] }
+
+export function computeFrontier(req: Requirements, x: FrontierKey, y: FrontierKey, onProgress?: (d: number, t: number) => void): Frontier {
+  // Mass, volume, diameter, free length and cost all grow with the mean diameter within a cell, so the
+  // cell's first feasible diameter dominates the rest; a safety factor does not, so then every step counts.
+  const everyFeasiblePoint = FRONTIER_KEYS[x].sign < 0 || FRONTIER_KEYS[y].sign < 0;
+  const run = runDesign(req, { strategy: 'grid', collectAll: true, everyFeasiblePoint, onProgress });
+  const cloudBuf = run.result.cloud!;
+  const xs = new Float64Array(cloudBuf.size);
+  const ys = new Float64Array(cloudBuf.size);
+  for (let i = 0; i < cloudBuf.size; i++) {
+    const f = cloudBuf.f(i);
+    xs[i] = f[FRONTIER_KEYS[x].objective];
+    ys[i] = f[FRONTIER_KEYS[y].objective];
+  }
+  const front = paretoFront2(xs, ys).map((i) => candidateAt(run.problem, cloudBuf.x(i), Float64Array.from(cloudBuf.f(i))));
+  const cloud = Array.from(xs, (v, i) => ({ x: FRONTIER_KEYS[x].sign * v, y: FRONTIER_KEYS[y].sign * ys[i] }));
+  return { run, x, y, cloud, front };
+}
+

@@ -1,0 +1,124 @@
+// The HTML reports end to end in a real browser: Debian's Chromium driven by playwright-core. The
+// page must load offline (no network request of any kind), with no console errors, every plot drawn,
+// and the marked spring equal to the CLI's best candidate. Screenshots go to test-output/.
+import { existsSync, mkdirSync, readFileSync, rmSync } from 'node:fs';
+import { join, resolve } from 'node:path';
+import { pathToFileURL } from 'node:url';
+import { chromium, type Browser } from 'playwright-core';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { cli } from '../helpers.js';
+
+const OUT = resolve('test-output');
+const CHROMIUM = '/usr/bin/chromium';
+let browser: Browser;
+
+beforeAll(async () => {
+  mkdirSync(OUT, { recursive: true });
+  if (!existsSync(CHROMIUM)) throw new Error(`${CHROMIUM} is missing: install Debian's chromium package (.ci/run does)`);
+  browser = await chromium.launch({
+    executablePath: CHROMIUM,
+    args: ['--no-sandbox', '--disable-gpu', '--disable-quic', '--no-first-run', '--disable-background-networking', '--disable-component-update', '--disable-sync'],
+  });
+});
+
+afterAll(async () => {
+  await browser?.close();
+});
+
+async function openReport(path: string) {
+  const page = await browser.newPage({ viewport: { width: 1200, height: 900 } });
+  const errors: string[] = [];
+  const requests: string[] = [];
+  page.on('console', (m) => { if (m.type() === 'error') errors.push(m.text()); });
+  page.on('pageerror', (e) => errors.push(String(e)));
+  page.on('request', (r) => { if (!r.url().startsWith('file:') && !r.url().startsWith('data:')) requests.push(r.url()); });
+  const url = pathToFileURL(path).href;
+  await page.goto(url);
+  await page.waitForLoadState('load');
+  return { page, errors, requests, url };
+}
+
+async function geometry(page: import('playwright-core').Page, id: string) {
+  return page.$eval(`#${id}`, (svg) => {
+    const box = svg.getBoundingClientRect();
+    const marks = svg.querySelectorAll('circle, polyline, line').length;
+    const longest = Math.max(0, ...Array.from(svg.querySelectorAll('polyline')).map((p) => (p.getAttribute('points') ?? '').split(' ').length));
+    return { width: box.width, height: box.height, marks, longest };
+  });
+}
+
+describe('design report in headless Chromium', () => {
+  const file = join(OUT, 'design-report.html');
+  it('loads offline with every plot drawn and the CLI\'s best spring marked', async () => {
+    rmSync(file, { force: true });
+    const r = await cli('design', 'examples/washer-trigger.yaml', '--report', file);
+    expect(r.code).toBe(0);
+    expect(r.stderr).toMatch(/report written/);
+    const html = readFileSync(file, 'utf8');
+    expect(html).not.toMatch(/<script|<link|@import|url\(|\ssrc=|\shref=/i);
+    const best = JSON.parse((await cli('design', 'examples/washer-trigger.yaml', '--json')).stdout).candidates[0];
+
+    const { page, errors, requests } = await openReport(file);
+    expect(errors).toEqual([]);
+    expect(requests).toEqual([]);
+    for (const id of ['plot-cloud', 'plot-force', 'plot-fatigue', 'plot-drawing']) {
+      const g = await geometry(page, id);
+      expect(g.width, id).toBeGreaterThan(100);
+      expect(g.height, id).toBeGreaterThan(100);
+      expect(g.marks, id).toBeGreaterThan(3);
+    }
+    expect((await geometry(page, 'plot-cloud')).longest).toBeGreaterThan(1);
+    const chosen = await page.$eval('#chosen-spring', (c) => ({ ...(c as HTMLElement).dataset }));
+    expect(chosen.material).toBe(best.material);
+    expect(Number(chosen.wire)).toBeCloseTo(best.wire_diameter, 9);
+    expect(Number(chosen.meanDiameter)).toBeCloseTo(best.mean_diameter, 9);
+    expect(Number(chosen.activeCoils)).toBe(best.active_coils);
+    const firstRow = await page.$eval('tr.best', (tr) => Array.from(tr.querySelectorAll('td')).map((td) => td.textContent));
+    expect(firstRow[1]).toBe(best.material);
+    expect(await page.textContent('body')).toMatch(/verify material figures/);
+    await page.screenshot({ path: join(OUT, 'design-report.png'), fullPage: true });
+    await page.emulateMedia({ colorScheme: 'dark' });
+    await page.screenshot({ path: join(OUT, 'design-report-dark.png') });
+    await page.close();
+  });
+
+  it('is written atomically and never replaces a file without --force', async () => {
+    const again = await cli('design', 'examples/washer-trigger.yaml', '--report', file);
+    expect(again.code).toBe(2);
+    expect(again.stderr).toMatch(/--report: expected a file that does not exist yet .*--force/);
+    expect(again.stdout).toBe('');
+    const forced = await cli('design', 'examples/washer-trigger.yaml', '--report', file, '--force');
+    expect(forced.code).toBe(0);
+  });
+
+  it('a sweep report carries the sweep plot', async () => {
+    const sweepFile = join(OUT, 'sweep-report.html');
+    rmSync(sweepFile, { force: true });
+    const r = await cli('sweep', 'examples/washer-trigger.yaml', '--vary', 'envelope.max_outer_diameter=12:18:1', '--report', sweepFile);
+    expect(r.code).toBe(0);
+    const { page, errors, requests } = await openReport(sweepFile);
+    expect(errors).toEqual([]);
+    expect(requests).toEqual([]);
+    const g = await geometry(page, 'plot-sweep');
+    expect(g.marks).toBeGreaterThan(3);
+    expect(await page.$$eval('#plot-sweep text.none', (t) => t.length)).toBeGreaterThan(0);
+    await page.close();
+  });
+});
+
+describe('spring report in headless Chromium', () => {
+  it('shows the force-length and fatigue diagrams and the drawing with the right coil count', async () => {
+    const file = join(OUT, 'spring-report.html');
+    rmSync(file, { force: true });
+    const r = await cli('analyze', 'examples/valve-return-spring.yaml', '--report', file);
+    expect(r.code).toBe(0);
+    const { page, errors, requests } = await openReport(file);
+    expect(errors).toEqual([]);
+    expect(requests).toEqual([]);
+    for (const id of ['plot-force', 'plot-fatigue', 'plot-drawing']) expect((await geometry(page, id)).marks, id).toBeGreaterThan(3);
+    expect(await page.$eval('#plot-drawing', (s) => s.getAttribute('data-coils'))).toBe('10');
+    expect(await page.$$eval('#plot-drawing .section circle', (c) => c.length)).toBe(21);
+    await page.screenshot({ path: join(OUT, 'spring-report.png'), fullPage: true });
+    await page.close();
+  });
+});
