@@ -21,6 +21,8 @@ export interface GeneticOptions {
   /** Stop after this many generations without improvement. */
   stallGenerations?: number;
   top?: number;
+  /** Relative bisection tolerance while searching (default 1e-3 with discrete genes only, else 1e-7). */
+  searchTolerance?: number;
 }
 
 interface Individual { genes: Float64Array; f: number; violation: number; x: Float64Array }
@@ -36,16 +38,19 @@ export function geneticSearch(p: Problem, opts: GeneticOptions): SearchResult {
   const rng = seedrandom(String(opts.seed));
   const s = solvedIndex(p);
   const n = p.variables.length;
-  // Bisection to 1e-7 during the search is ample to rank cells; the final top cells are solved again
-  // to the grid's 1e-10 before they are reported.
-  const ws = makeWorkspace(p, 1e-7);
+  // Bisection to 1e-3 (relative) while searching discrete genes: the kept end of each bracket is always
+  // on the feasible side, so a cell is never judged feasible wrongly, only up to about 0.1% worse, which
+  // is far below the steps between neighbouring cells. Real genes move by small amounts, so there it is
+  // 1e-7. The final top cells are solved again to the grid's 1e-10 before they are reported.
+  const discreteGenes = p.variables.every((v, i) => i === s || v.kind !== 'continuous');
+  const ws = makeWorkspace(p, opts.searchTolerance ?? (discreteGenes ? 1e-3 : 1e-7));
   const top = new TopK(Math.max(1, opts.top ?? 10), n, p.objectiveNames.length);
   const misses = new NearestMisses(5);
   const counts = { cells: 0, feasible: 0, pruned: 0 };
   const popSize = opts.populationSize ?? 12;
   const stall = opts.stallGenerations ?? 80;
   const sizes = p.variables.map((v) => (v.kind === 'continuous' ? 0 : valueCount(v)));
-  const discreteOnly = p.variables.every((v, i) => i === s || v.kind !== 'continuous');
+  const discreteOnly = discreteGenes;
   const memo = new Map<number, { f: number; violation: number; x: Float64Array }>();
   const increasing = p.objectiveTrend !== undefined && p.objectiveTrend[0] === TREND.increasing;
   const x = new Float64Array(n);
