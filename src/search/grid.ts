@@ -162,6 +162,38 @@ function patternSearch(p: Problem, s: number, halvings: number, top: TopK, ws: R
             if (Number.isFinite(fm)) { a = m; fa = fm; t.set(at); } else b = m;
           }
           ft = a > 0 ? fa : Infinity;
+          // Restoration: take the full move, then regain feasibility along another axis (expanding,
+          // then bisecting back to the boundary). This walks along a ridge where one constraint is
+          // active, which axis moves alone cannot.
+          for (const j of axes) {
+            if (j === i) continue;
+            for (const dj of [1, -1]) {
+              const moved = Float64Array.from(cur);
+              moved[i] += dir * steps[i];
+              let reach = steps[j];
+              let found = -1;
+              for (let e = 0; e < 16 && found < 0; e++, reach *= 2) {
+                const probe = Float64Array.from(moved);
+                probe[j] += dj * reach;
+                if (Number.isFinite(trial(probe))) found = reach;
+              }
+              if (found < 0) continue;
+              let lo = found / 2;
+              let hi = found;
+              if (found === steps[j]) lo = 0;
+              let bestProbe = Float64Array.from(moved);
+              bestProbe[j] += dj * hi;
+              let bestF = trial(Float64Array.from(bestProbe));
+              for (let k = 0; k < 30; k++) {
+                const m = 0.5 * (lo + hi);
+                const probe = Float64Array.from(moved);
+                probe[j] += dj * m;
+                const fm = trial(probe);
+                if (Number.isFinite(fm)) { hi = m; if (fm < bestF) { bestF = fm; bestProbe = probe; } } else lo = m;
+              }
+              if (bestF < ft) { ft = bestF; t.set(bestProbe); }
+            }
+          }
         }
         if (ft < curF) { cur.set(t); curF = ft; break; }
       }
