@@ -77,6 +77,22 @@ function attributeCut(ws: CellWorkspace, g: Float64Array): void {
   ws.cutBy[jw]++;
 }
 
+/**
+ * Bisect [a, b] for the boundary of the masked constraints, keeping the feasible end: with
+ * `badBelow` they fail at a and hold at b (return the smallest value that holds), otherwise they
+ * hold at a and fail at b (return the largest).
+ */
+function boundary(p: Problem, s: number, x: Float64Array, ws: CellWorkspace, a: number, b: number, mask: Uint8Array, badBelow: boolean, tol: number): number {
+  while (b - a > tol) {
+    const m = 0.5 * (a + b);
+    x[s] = m;
+    evaluateAt(p, x, ws);
+    const bad = worst(ws.g, mask) > EPS;
+    if (bad === badBelow) a = m; else b = m;
+  }
+  return badBelow ? b : a;
+}
+
 function infeasibleCell(ws: CellWorkspace): false {
   attributeCut(ws, ws.missG);
   return false;
@@ -125,32 +141,16 @@ export function solveCell(
     x[s] = hi;
     evaluateAt(p, x, ws);
     if (worst(ws.g, ws.decMask) > EPS) return infeasibleCell(ws);
-    let a = lo;
-    let b = hi;
-    while (b - a > tol) {
-      const m = 0.5 * (a + b);
-      x[s] = m;
-      evaluateAt(p, x, ws);
-      if (worst(ws.g, ws.decMask) > EPS) a = m; else b = m;
-    }
-    lo = b;
+    lo = boundary(p, s, x, ws, lo, hi, ws.decMask, true, tol);
   }
   // And the largest value that still meets the increasing ones.
   x[s] = hi;
   evaluateAt(p, x, ws);
   if (worst(ws.g, ws.incMask) > EPS) {
-    let a = lo;
-    let b = hi;
     x[s] = lo;
     evaluateAt(p, x, ws);
     if (worst(ws.g, ws.incMask) > EPS) return infeasibleCell(ws);
-    while (b - a > tol) {
-      const m = 0.5 * (a + b);
-      x[s] = m;
-      evaluateAt(p, x, ws);
-      if (worst(ws.g, ws.incMask) > EPS) b = m; else a = m;
-    }
-    hi = a;
+    hi = boundary(p, s, x, ws, lo, hi, ws.incMask, false, tol);
   }
   // Scan the bracket at the variable's resolution for the constraints of unknown trend.
   const step = mode === CellMode.All ? Math.max(v.resolution, (hi - lo) / ws.maxScanPoints) : v.resolution;
