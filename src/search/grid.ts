@@ -41,19 +41,26 @@ function gridPass(p: Problem, vars: readonly Variable[], s: number, opts: GridOp
   }
   const increasing = p.objectiveTrend !== undefined && p.objectiveTrend[0] === TREND.increasing;
   const mode = (opts.collectAll && opts.everyFeasiblePoint) || !increasing ? CellMode.All : CellMode.First;
+  // A cell enters the ranking once, with its best point; the cloud may keep every feasible point.
+  const cellX = new Float64Array(n);
+  const cellF = new Float64Array(p.objectiveNames.length);
+  let cellBest = Infinity;
   const visit = (px: Float64Array, f: Float64Array) => {
-    top.offer(px, f);
+    if (f[0] < cellBest) { cellBest = f[0]; cellX.set(px); cellF.set(f); }
     if (cloud) cloud.push(px, f);
   };
   const prune = opts.collectAll ? null : (f: Float64Array) => f[0] >= top.threshold();
   const progressEvery = Math.max(1, Math.floor(total / 100));
   for (let done = 0; done < total; done++) {
     counts.cells++;
+    cellBest = Infinity;
     const r = s >= 0 ? solveCell(p, s, x, ws, mode, visit, prune) : evaluatePoint(p, x, ws);
     if (r === 'pruned') counts.pruned++;
     else if (r) {
       counts.feasible++;
       if (mode === CellMode.First) visit(x, ws.f);
+      if (cellBest < Infinity) top.offer(cellX, cellF);
+      else top.offer(x, ws.f);
     } else if (ws.missViolation < misses.threshold()) {
       misses.offer(ws.missX, ws.missG, ws.missF, ws.missViolation);
     }
