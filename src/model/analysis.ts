@@ -185,21 +185,30 @@ export function analyzeSpring(g: SpringGeometry, m: MaterialFigures, s: ServiceC
   return analysis;
 }
 
+/** How warnings write quantities; SI by default, the report's system when it rewrites them. */
+export interface QuantityWriter { stress(v: number): string; length(v: number): string; temperature(v: number): string }
+
+const SI_WRITER: QuantityWriter = {
+  stress: (v) => `${Number(v.toPrecision(4))} MPa`,
+  length: (v) => `${Number(v.toPrecision(4))} mm`,
+  temperature: (v) => `${Number(v.toPrecision(4))} degC`,
+};
+
 /** The rules of thumb a designer checks by habit; each broken one becomes a warning. */
-function rulesOfThumb(a: SpringAnalysis, s: ServiceConditions): Warning[] {
+export function rulesOfThumb(a: SpringAnalysis, s: ServiceConditions, q: QuantityWriter = SI_WRITER): Warning[] {
   const w: Warning[] = [];
   const f = (v: number, n = 4) => Number(v.toPrecision(n)).toString();
   const C = a.geometry.springIndex;
   if (C < 4 || C > 12) w.push({ code: 'index', message: `spring index ${f(C)} is outside 4 to 12 (common practice): ${C < 4 ? 'hard to coil, high curvature stress' : 'prone to tangling and buckling, poor tolerances'}` });
   if (a.geometry.activeCoils < 3) w.push({ code: 'few-coils', message: `${f(a.geometry.activeCoils)} active coils: fewer than 3 makes the rate sensitive to end seating (common practice)` });
   if (Number.isFinite(a.staticSafetyFactor) && a.staticSafetyFactor < 1) w.push({ code: 'overstress', message: `stress at the shortest evaluated length is ${f(1 / a.staticSafetyFactor)} times the static allowable: the spring will take a set` });
-  if (!a.solid.solidSafe) w.push({ code: 'not-solid-safe', message: `stress at solid (${f(a.solid.stress)} MPa) exceeds the allowable (${f(a.material.allowableStress)} MPa): the spring takes a set if closed solid` });
+  if (!a.solid.solidSafe) w.push({ code: 'not-solid-safe', message: `stress at solid (${q.stress(a.solid.stress)}) exceeds the allowable (${q.stress(a.material.allowableStress)}): the spring takes a set if closed solid` });
   if (a.fatigue && Number.isFinite(a.fatigue.safetyFactor) && a.fatigue.safetyFactor < 1) w.push({ code: 'fatigue', message: `fatigue safety factor ${f(a.fatigue.safetyFactor)} is below 1: expect failure before ${a.fatigue.life === 'infinite' ? 'infinite life' : `${a.fatigue.cycles.toExponential(0)} cycles`}` });
   if (a.fatigue && !a.material.zimmerli && a.fatigue.life === 'infinite') w.push({ code: 'endurance-data', message: 'Zimmerli\'s endurance data cover steels only: infinite life is judged from the 1e7-cycle row of the finite-life table' });
-  if (a.buckling.buckles) w.push({ code: 'buckling', message: `deflection ${f(a.buckling.maxDeflection)} mm reaches the critical buckling deflection ${f(a.buckling.criticalDeflection)} mm: guide it on a rod or in a bore, or change seating or proportions` });
+  if (a.buckling.buckles) w.push({ code: 'buckling', message: `deflection ${q.length(a.buckling.maxDeflection)} reaches the critical buckling deflection ${q.length(a.buckling.criticalDeflection)}: guide it on a rod or in a bore, or change seating or proportions` });
   if (s.forcingFrequency && s.forcingFrequency > 0 && a.surge.relevant < s.surgeMargin * s.forcingFrequency) w.push({ code: 'surge', message: `surge frequency ${f(a.surge.relevant)} Hz is less than ${s.surgeMargin} times the forcing frequency ${f(s.forcingFrequency)} Hz (common practice)` });
-  if (a.points.length && !a.clash.ok) w.push({ code: 'clash', message: `only ${f(a.clash.overrun * 100)}% force overrun to solid at the shortest length; at least ${f(s.clashAllowance * 100)}% is asked${s.gapRule ? ` and a coil-gap sum of ${f(a.clash.minGapSum)} mm (EN 13906-1)` : ''}` });
-  if (s.temperature !== undefined && s.temperature > a.material.maxTemperature) w.push({ code: 'temperature', message: `service temperature ${f(s.temperature)} degC exceeds the material's maximum ${f(a.material.maxTemperature)} degC: expect relaxation` });
+  if (a.points.length && !a.clash.ok) w.push({ code: 'clash', message: `only ${f(a.clash.overrun * 100)}% force overrun to solid at the shortest length; at least ${f(s.clashAllowance * 100)}% is asked${s.gapRule ? ` and a coil-gap sum of ${q.length(a.clash.minGapSum)} (EN 13906-1)` : ''}` });
+  if (s.temperature !== undefined && s.temperature > a.material.maxTemperature) w.push({ code: 'temperature', message: `service temperature ${q.temperature(s.temperature)} exceeds the material's maximum ${q.temperature(a.material.maxTemperature)}: expect relaxation` });
   if (a.geometry.helixAngleDeg > 12) w.push({ code: 'pitch-angle', message: `pitch angle ${f(a.geometry.helixAngleDeg)} degrees exceeds 12: the stress and rate formulas lose accuracy (common practice)` });
   return w;
 }

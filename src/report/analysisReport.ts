@@ -1,7 +1,7 @@
 // The analysis of one spring for people (text) and for machines (JSON, SI).
-import type { SpringAnalysis } from '../model/analysis.js';
+import { rulesOfThumb, type SpringAnalysis } from '../model/analysis.js';
 import type { SpringCase } from '../input/springFile.js';
-import { formatQuantity as q, sig } from '../units/format.js';
+import { formatQuantity as q, quantityWriter, sig } from '../units/format.js';
 import type { UnitSystem } from '../units/systems.js';
 import { cautionText } from './cautions.js';
 import { SI_UNITS } from './json.js';
@@ -96,7 +96,7 @@ export function analysisText(c: SpringCase, a: SpringAnalysis, system: UnitSyste
   out.push(`Clash: force overrun to solid ${sig(a.clash.overrun * 100, 3)}% (asked ${sig(a.clash.required * 100, 3)}%), coil-gap sum ${L(a.clash.gapSum)} (EN 13906-1 static minimum ${L(a.clash.minGapSum)})`);
   out.push(`Surge: ${sig(a.surge.bothEndsOnPlates)} Hz with both ends on plates, ${sig(a.surge.oneEndFree)} Hz with one end free`);
   out.push('');
-  const all = [...notes, ...a.warnings.map((w) => w.message)];
+  const all = [...notes, ...rulesOfThumb(a, c.service, quantityWriter(system)).map((w) => w.message)];
   out.push(all.length ? 'Warnings' : 'Warnings: none');
   for (const w of all) out.push(`  ! ${w}`);
   out.push('');

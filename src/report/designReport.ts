@@ -3,7 +3,8 @@
 import type { Requirements } from '../input/requirements.js';
 import { CHECK_LABELS, CHECKS, type CheckName } from '../spring/checks.js';
 import { candidateAt, reportedChecks, type Candidate, type DesignRun } from '../spring/design.js';
-import { formatQuantity, inUnit, sig, unitSymbol } from '../units/format.js';
+import { formatQuantity, inUnit, quantityWriter, sig, unitSymbol } from '../units/format.js';
+import { rulesOfThumb } from '../model/analysis.js';
 import type { Kind } from '../units/kinds.js';
 import type { UnitSystem } from '../units/systems.js';
 import { cautionText } from './cautions.js';
@@ -192,7 +193,7 @@ export function designText(run: DesignRun, system: UnitSystem): string {
     out.push(candidateTable(run.candidates, system));
     out.push('');
     out.push(countsText(run, system));
-    const warn = run.candidates[0].analysis.warnings;
+    const warn = rulesOfThumb(run.candidates[0].analysis, run.problem.service(), quantityWriter(system));
     if (warn.length) {
       out.push('');
       out.push('Notes on the best spring:');

@@ -24,3 +24,12 @@ export function inUnit(core: number, kind: Kind, system: UnitSystem): number {
 export function unitSymbol(kind: Kind, system: UnitSystem): string {
   return displayUnit(system, kind).symbol;
 }
+
+/** Writers for warnings in the chosen system. */
+export function quantityWriter(system: UnitSystem): { stress(v: number): string; length(v: number): string; temperature(v: number): string } {
+  return {
+    stress: (v) => formatQuantity(v, 'stress', system),
+    length: (v) => formatQuantity(v, 'length', system),
+    temperature: (v) => formatQuantity(v, 'temperature', system),
+  };
+}

@@ -2,12 +2,12 @@
 // spring marked, the ranked table, the chosen spring's force-length and fatigue diagrams and its
 // drawing to scale, the sweep when one was run, conventions and cautions.
 import type { Requirements } from '../../input/requirements.js';
-import type { SpringAnalysis } from '../../model/analysis.js';
+import { rulesOfThumb, type ServiceConditions, type SpringAnalysis } from '../../model/analysis.js';
 import type { Candidate, DesignRun } from '../../spring/design.js';
 import { reportedChecks } from '../../spring/design.js';
 import { CHECK_LABELS, type CheckName } from '../../spring/checks.js';
 import { computeFrontier, FRONTIER_KEYS, type Frontier } from '../../spring/frontier.js';
-import { formatQuantity, inUnit, sig, unitSymbol } from '../../units/format.js';
+import { formatQuantity, inUnit, quantityWriter, sig, unitSymbol } from '../../units/format.js';
 import type { UnitSystem } from '../../units/systems.js';
 import { writeOutputFile } from '../writeFile.js';
 import { CONVENTIONS, figure, htmlTable, page } from './page.js';
@@ -56,7 +56,8 @@ function candidateRows(cands: Candidate[], system: UnitSystem): { header: string
 }
 
 /** The sections that show one spring: its figures, force-length, fatigue and drawing. */
-export function springSections(a: SpringAnalysis, system: UnitSystem, clashAllowance: number, heading: string): string[] {
+export function springSections(a: SpringAnalysis, system: UnitSystem, service: ServiceConditions, heading: string): string[] {
+  const clashAllowance = service.clashAllowance;
   const g = a.geometry;
   const L = (v: number) => formatQuantity(v, 'length', system);
   const S = (v: number) => formatQuantity(v, 'stress', system);
@@ -73,7 +74,8 @@ export function springSections(a: SpringAnalysis, system: UnitSystem, clashAllow
     ['mass', formatQuantity(g.mass, 'mass', system)],
   ];
   const out = [`<h2>${esc(heading)}</h2>`, htmlTable(['figure', 'value'], kv, { cls: 'kv' })];
-  if (a.warnings.length) out.push(`<ul class="warn">${a.warnings.map((w) => `<li>${esc(w.message)}</li>`).join('')}</ul>`);
+  const warnings = rulesOfThumb(a, service, quantityWriter(system));
+  if (warnings.length) out.push(`<ul class="warn">${warnings.map((w) => `<li>${esc(w.message)}</li>`).join('')}</ul>`);
   out.push('<div class="grid2">');
   out.push(figure(forceLengthPlot(a, system, clashAllowance), 'Force against length from free length to solid; the working and operating points, the solid length and the clash allowance.'));
   out.push(figure(fatiguePlot(a, system), a.fatigue ? `Fatigue diagram (${a.fatigue.criterion}): the criterion through the endurance point, the load line and the operating point.` : ''));
@@ -119,7 +121,7 @@ export function designHtml(run: DesignRun, system: UnitSystem, frontier?: Fronti
     sections.push('<h2>Ranked candidates</h2>');
     const t = candidateRows(run.candidates, system);
     sections.push(htmlTable(t.header, t.rows, { bestFirst: true }));
-    sections.push(...springSections(best.analysis, system, req.clashAllowance, 'The chosen spring'));
+    sections.push(...springSections(best.analysis, system, run.problem.service(), 'The chosen spring'));
   }
   if (sweep) {
     const pts = sweep.rows.map((row) => ({ x: row.value, y: row.best ? inUnit(row.best.analysis.geometry.mass, 'mass', system) : null }));
