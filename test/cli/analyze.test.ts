@@ -133,7 +133,9 @@ temperature: 150
     for (const s of ['Geometry', 'Working points', 'solid-safe', 'static safety factor', 'Fatigue (1.00e+6 cycles, gerber, finite-life table)', 'Buckling', 'Surge', 'Cautions:', 'verify material figures', 'test prototypes', 'licensed engineering practice']) {
       expect(r.stdout).toContain(s);
     }
-    expect(r.stdout).toMatch(/service temperature 150 degC exceeds/);
+    expect(r.stdout).toMatch(/service temperature 150(\.0)? degC exceeds/);
+    const usText = (await cli('analyze', file, '--units', 'us')).stdout;
+    expect(usText).toMatch(/service temperature 302(\.0)? degF exceeds/);
     expect(r.stdout).toContain(' mm');
     const us = await cli('analyze', file, '--units', 'us');
     expect(us.stdout).toContain(' in ');
