@@ -1,3 +1,4 @@
+// No outside values here (helpers only; each test file names the sources of its checks).
 // Shared test helpers: run the CLI in-process and capture what a user would see.
 import { mkdtempSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';

@@ -4,8 +4,3 @@
 export function shearStress(force: number, meanDiameter: number, wireDiameter: number, factor: number): number {
   return (factor * 8 * force * meanDiameter) / (Math.PI * wireDiameter * wireDiameter * wireDiameter);
 }
-
-/** The force that raises the corrected stress to tau. */
-export function forceAtStress(stress: number, meanDiameter: number, wireDiameter: number, factor: number): number {
-  return (stress * Math.PI * wireDiameter * wireDiameter * wireDiameter) / (factor * 8 * meanDiameter);
-}

@@ -49,10 +49,3 @@ export function valueAt(v: Variable, i: number): number {
 export function solvedIndex(p: Problem): number {
   return p.variables.findIndex((v) => v.kind === 'continuous' && v.solve === true);
 }
-
-/** Total violation: the sum of positive normalised constraint values. */
-export function violation(g: Float64Array): number {
-  let s = 0;
-  for (let i = 0; i < g.length; i++) if (g[i] > FEASIBILITY_TOLERANCE) s += g[i];
-  return s;
-}

@@ -1,4 +1,4 @@
-// Bad input: one clear message naming the field and what was expected, exit code 2, no stack trace,
+// Invariant of the CLI, no outside values: bad input gets one clear message naming the field and what was expected, exit code 2, no stack trace,
 // nothing on stdout.
 import { describe, expect, it } from 'vitest';
 import { cli, inputFile } from '../helpers.js';
