@@ -1,4 +1,4 @@
-// No outside values here: these are properties of our own behaviour on our own demo scenario (the
+// No outside values here: each check is a property of our own behaviour on our own demo scenario (the
 // published references are checked in test/search/benchmarks.test.ts and test/cli/analyze.test.ts).
 // `coilfront design`, `frontier` and `sweep` end to end, on the demo requirements (a scenario of our own).
 import { readFileSync } from 'node:fs';

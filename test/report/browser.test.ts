@@ -1,4 +1,4 @@
-// Properties of our own reports (no outside values): the HTML reports end to end in a real browser: Debian's Chromium driven by playwright-core. The
+// Each check is a property of our own reports (no outside values): the HTML reports end to end in a real browser: Debian's Chromium driven by playwright-core. The
 // page must load offline (no network request of any kind), with no console errors, every plot drawn,
 // and the marked spring equal to the CLI's best candidate. Screenshots go to test-output/.
 import { existsSync, mkdirSync, readFileSync, rmSync } from 'node:fs';
