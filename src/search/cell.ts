@@ -25,6 +25,8 @@ export interface CellWorkspace {
   relativeTolerance: number;
   /** In mode All, scan at most this many points per cell (the step grows past the resolution). */
   maxScanPoints: number;
+  /** Scan at this many times the variable's resolution (1 for the grid; coarser for a quick look). */
+  scanCoarsening: number;
 }
 
 export function makeWorkspace(p: Problem, relativeTolerance = 1e-10): CellWorkspace {
@@ -40,7 +42,7 @@ export function makeWorkspace(p: Problem, relativeTolerance = 1e-10): CellWorksp
     g: new Float64Array(m), f: new Float64Array(p.objectiveNames.length), bounds: new Float64Array(2),
     evaluations: 0, cutBy: new Float64Array(m), soleViolation: new Float64Array(m).fill(Infinity),
     missX: new Float64Array(p.variables.length), missG: new Float64Array(m), missF: new Float64Array(p.objectiveNames.length), missViolation: Infinity,
-    incMask, decMask, relativeTolerance, maxScanPoints: Infinity,
+    incMask, decMask, relativeTolerance, maxScanPoints: Infinity, scanCoarsening: 1,
   };
 }
 
@@ -153,7 +155,8 @@ export function solveCell(
     hi = boundary(p, s, x, ws, lo, hi, ws.incMask, false, tol);
   }
   // Scan the bracket at the variable's resolution for the constraints of unknown trend.
-  const step = mode === CellMode.All ? Math.max(v.resolution, (hi - lo) / ws.maxScanPoints) : v.resolution;
+  const resolution = v.resolution * ws.scanCoarsening;
+  const step = mode === CellMode.All ? Math.max(resolution, (hi - lo) / ws.maxScanPoints) : resolution;
   let found = false;
   for (let t = lo; ; t += step) {
     const at = t > hi ? hi : t;

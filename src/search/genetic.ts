@@ -23,6 +23,8 @@ export interface GeneticOptions {
   top?: number;
   /** Relative bisection tolerance while searching (default 1e-3 with discrete genes only, else 1e-7). */
   searchTolerance?: number;
+  /** Scan step while searching, in multiples of the solved variable's resolution (default 4 with discrete genes only). */
+  scanCoarsening?: number;
 }
 
 interface Individual { genes: Float64Array; f: number; violation: number; x: Float64Array }
@@ -44,6 +46,8 @@ export function geneticSearch(p: Problem, opts: GeneticOptions): SearchResult {
   // 1e-7. The final top cells are solved again to the grid's 1e-10 before they are reported.
   const discreteGenes = p.variables.every((v, i) => i === s || v.kind !== 'continuous');
   const ws = makeWorkspace(p, opts.searchTolerance ?? (discreteGenes ? 1e-3 : 1e-7));
+  // Likewise the scan of the non-monotone checks looks at every 4th diameter step while searching.
+  if (discreteGenes) ws.scanCoarsening = opts.scanCoarsening ?? 4;
   const top = new TopK(Math.max(1, opts.top ?? 10), n, p.objectiveNames.length);
   const misses = new NearestMisses(5);
   const counts = { cells: 0, feasible: 0, pruned: 0 };
@@ -149,10 +153,12 @@ export function geneticSearch(p: Problem, opts: GeneticOptions): SearchResult {
   let best = pop.reduce((a, b) => (better(b, a) ? b : a));
   let sinceBetter = 0;
   const rate = 1.5 / Math.max(1, n - (s >= 0 ? 1 : 0));
-  while (ws.evaluations < opts.maxEvaluations && sinceBetter < stall) {
+  // The generations get 70% of the budget; the closing hill-climb the rest.
+  const evolveBudget = 0.7 * opts.maxEvaluations;
+  while (ws.evaluations < evolveBudget && sinceBetter < stall) {
     pop.sort((a, b) => (better(a, b) ? -1 : better(b, a) ? 1 : 0));
     const next: Individual[] = [pop[0], pop[1]];
-    while (next.length < popSize && ws.evaluations < opts.maxEvaluations) {
+    while (next.length < popSize && ws.evaluations < evolveBudget) {
       const pa = tournament(pop);
       const pb = tournament(pop);
       const child = new Float64Array(n);
@@ -182,7 +188,7 @@ export function geneticSearch(p: Problem, opts: GeneticOptions): SearchResult {
   for (const i of integerGenes) for (const di of [-1, 1]) moves.push([i, di, -1, 0]);
   for (const i of integerGenes) for (const j of integerGenes) if (j > i) for (const di of [-1, 1]) for (const dj of [-1, 1]) moves.push([i, di, j, dj]);
   let improved = true;
-  while (improved && ws.evaluations < opts.maxEvaluations * 1.2) {
+  while (improved && ws.evaluations < opts.maxEvaluations) {
     improved = false;
     for (const [i, di, j, dj] of moves) {
       const g = Float64Array.from(best.genes);
