@@ -116,10 +116,10 @@ function frontierCommand(file: string, opts: FrontierOptions, io: Io): number {
   if (opts.x === opts.y) throw new InputError('--y', 'an objective other than --x');
   const req = readRequirements(rawWithOverrides(file, opts), loadCatalog());
   const system = opts.units ?? req.system;
-  const fr = computeFrontier(req, opts.x, opts.y, progress(io, 'mapping'));
+  const fr = computeFrontier(req, opts.x, opts.y, progress(io, 'mapping'), opts.strategy);
   const keyValue = (c: Candidate, k: FrontierKey) => FRONTIER_KEYS[k].sign * c.objectives[FRONTIER_KEYS[k].objective];
   if (opts.json) {
-    io.stdout(toJson({ units: SI_UNITS, x: opts.x, y: opts.y, feasible: fr.cloud.length, ...countsRecord(fr.run),
+    io.stdout(toJson({ units: SI_UNITS, x: opts.x, y: opts.y, feasible: fr.cloud.length, ...countsRecord(fr.run), frontier_strategy: fr.strategy,
       frontier: fr.front.map((c) => ({ [opts.x]: keyValue(c, opts.x), [opts.y]: keyValue(c, opts.y), ...candidateRecord(c) })) }) + '\n');
   } else {
     const csv = toCsv(['rank', ...springColumns(system)], fr.front.map((c, i) => [i + 1, ...springRow(c, system)]));

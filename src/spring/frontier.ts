@@ -2,8 +2,9 @@
 // diameter, or sampled along it for a safety factor) and its Pareto set on two objectives.
 import type { Requirements } from '../input/requirements.js';
 import { paretoFront2 } from '../search/pareto.js';
-import { candidateAt, runDesign, type Candidate, type DesignRun } from './design.js';
-import { OBJ } from './problem.js';
+import { geneticFront } from '../search/geneticFront.js';
+import { AUTO_GRID_CELL_LIMIT, candidateAt, cellCount, runDesign, type Candidate, type DesignRun, type StrategyChoice } from './design.js';
+import { OBJ, buildSpringProblem } from './problem.js';
 
 export const FRONTIER_KEYS = {
   mass: { objective: OBJ.mass, sign: 1, kind: 'mass' as const, label: 'mass' },
@@ -17,12 +18,16 @@ export const FRONTIER_KEYS = {
 } as const;
 export type FrontierKey = keyof typeof FRONTIER_KEYS;
 
-export interface Frontier { run: DesignRun; x: FrontierKey; y: FrontierKey; cloud: { x: number; y: number }[]; front: Candidate[] }
+export interface Frontier { run: DesignRun; x: FrontierKey; y: FrontierKey; strategy: 'grid' | 'genetic'; cloud: { x: number; y: number }[]; front: Candidate[] }
 
-export function computeFrontier(req: Requirements, x: FrontierKey, y: FrontierKey, onProgress?: (d: number, t: number) => void): Frontier {
+export function computeFrontier(req: Requirements, x: FrontierKey, y: FrontierKey, onProgress?: (d: number, t: number) => void, strategy: StrategyChoice = 'auto'): Frontier {
   // Mass, volume, diameter, free length and cost all grow with the mean diameter within a cell, so the
-  // cell's first feasible diameter dominates the rest; a safety factor does not, so then every step counts.
+  // cell's first feasible diameter dominates the rest; a safety factor does not, so then every step counts
+  // and only the grid samples it.
   const everyFeasiblePoint = FRONTIER_KEYS[x].sign < 0 || FRONTIER_KEYS[y].sign < 0;
+  const problem = buildSpringProblem(req);
+  const genetic = !everyFeasiblePoint && (strategy === 'genetic' || (strategy === 'auto' && cellCount(problem) > AUTO_GRID_CELL_LIMIT));
+  if (genetic) return geneticFrontier(req, x, y);
   const run = runDesign(req, { strategy: 'grid', collectAll: true, everyFeasiblePoint, onProgress });
   const cloudBuf = run.result.cloud!;
   const xs = new Float64Array(cloudBuf.size);
@@ -34,6 +39,17 @@ export function computeFrontier(req: Requirements, x: FrontierKey, y: FrontierKe
   }
   const front = paretoFront2(xs, ys).map((i) => candidateAt(run.problem, cloudBuf.x(i), Float64Array.from(cloudBuf.f(i))));
   const cloud = Array.from(xs, (v, i) => ({ x: FRONTIER_KEYS[x].sign * v, y: FRONTIER_KEYS[y].sign * ys[i] }));
-  return { run, x, y, cloud, front };
+  return { run, x, y, strategy: 'grid', cloud, front };
+}
+
+/** The front from the two-objective genetic search, for spaces too large to enumerate. */
+function geneticFrontier(req: Requirements, x: FrontierKey, y: FrontierKey): Frontier {
+  const run = runDesign(req, { strategy: 'genetic', maxEvaluations: 500_000 });
+  const ox = FRONTIER_KEYS[x].objective;
+  const oy = FRONTIER_KEYS[y].objective;
+  const r = geneticFront(run.problem, { seed: req.seed, objectives: [ox, oy], maxEvaluations: 1_000_000 });
+  const front = paretoFront2(r.points.map((p) => p.f[ox]), r.points.map((p) => p.f[oy])).map((i) => candidateAt(run.problem, r.points[i].x, r.points[i].f));
+  const cloud = r.cloud.map((p) => ({ x: FRONTIER_KEYS[x].sign * p.f[ox], y: FRONTIER_KEYS[y].sign * p.f[oy] }));
+  return { run, x, y, strategy: 'genetic', cloud, front };
 }
 

@@ -104,4 +104,18 @@ describe('spring search invariants (property)', () => {
       }
     }
   });
+
+  it('the two-objective genetic search finds a front that never beats the grid\'s and covers most of it', () => {
+    const req = readRequirements({ units: 'si', material: 'stainless-302', load: { force: 20, length: 35 }, operating_length: 25, operating_force: 32,
+      load_tolerance: '5%', envelope: { max_outer_diameter: 16, min_inner_diameter: 6.5, max_free_length: 60 }, cycles: 5e5, wire_sizes: 'metric' }, catalog);
+    const grid = computeFrontier(req, 'mass', 'outer_diameter', undefined, 'grid');
+    const ga = computeFrontier(req, 'mass', 'outer_diameter', undefined, 'genetic');
+    expect(ga.strategy).toBe('genetic');
+    const pts = (fr: typeof grid) => fr.front.map((c) => [c.analysis.geometry.mass, c.analysis.geometry.outerDiameter]);
+    const g = pts(grid);
+    const h = pts(ga);
+    for (const [a, b] of h) for (const [c, d] of g) expect(dominates(a, b, c, d) && (a < c * (1 - 1e-9) || b < d * (1 - 1e-9))).toBe(false);
+    const covered = g.filter(([c, d]) => h.some(([a, b]) => Math.abs(a / c - 1) < 1e-6 && Math.abs(b / d - 1) < 1e-6)).length;
+    expect(covered / g.length).toBeGreaterThanOrEqual(0.8);
+  });
 });
