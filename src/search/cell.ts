@@ -92,7 +92,20 @@ function boundary(p: Problem, s: number, x: Float64Array, ws: CellWorkspace, a: 
     const bad = worst(ws.g, mask) > EPS;
     if (bad === badBelow) a = m; else b = m;
   }
+  // The other (failing) end is left in ws.bounds for a later refinement.
+  ws.bounds[0] = badBelow ? a : b;
   return badBelow ? b : a;
+}
+
+/** The feasible point at `good` came from a coarse bracket: move it down to the decreasing
+ * constraints' boundary at full precision, if every check still holds there. Leaves x, ws.f and ws.g
+ * at the point kept. */
+function refineLow(p: Problem, s: number, x: Float64Array, ws: CellWorkspace, bad: number, good: number, tol: number): void {
+  const fine = boundary(p, s, x, ws, bad, good, ws.decMask, true, tol);
+  x[s] = fine;
+  if (fine < good && evaluateAt(p, x, ws) === 0) return;
+  x[s] = good;
+  evaluateAt(p, x, ws);
 }
 
 function infeasibleCell(ws: CellWorkspace): false {
@@ -131,6 +144,10 @@ export function solveCell(
     return infeasibleCell(ws);
   }
   const tol = ws.relativeTolerance * Math.max(Math.abs(lo), Math.abs(hi), 1e-12);
+  // Bracket first to a fraction of the scan step; only the end that turns out to be the answer is
+  // then refined to full precision (most cells fail elsewhere, and this halves their cost).
+  const coarse = Math.max(tol, (v.resolution * ws.scanCoarsening) / 64);
+  let loBad = NaN;
 
   // Increasing constraints only get worse upwards: if violated at lo, the cell is lost.
   x[s] = lo;
@@ -143,7 +160,8 @@ export function solveCell(
     x[s] = hi;
     evaluateAt(p, x, ws);
     if (worst(ws.g, ws.decMask) > EPS) return infeasibleCell(ws);
-    lo = boundary(p, s, x, ws, lo, hi, ws.decMask, true, tol);
+    lo = boundary(p, s, x, ws, lo, hi, ws.decMask, true, coarse);
+    loBad = ws.bounds[0];
   }
   // And the largest value that still meets the increasing ones.
   x[s] = hi;
@@ -151,8 +169,18 @@ export function solveCell(
   if (worst(ws.g, ws.incMask) > EPS) {
     x[s] = lo;
     evaluateAt(p, x, ws);
+    const w = worst(ws.g, ws.incMask);
+    // A hair's breadth of violation: the feasible interval may be narrower than the coarse bracket, so
+    // settle lo exactly and look again. Normalised checks move by a few units per unit of relative
+    // change of the solved variable; a violation 100 times what the coarse step could undo is real.
+    if (w > EPS && w < (300 * coarse) / Math.max(Math.abs(lo), 1e-12) && loBad === loBad) {
+      lo = boundary(p, s, x, ws, loBad, lo, ws.decMask, true, tol);
+      loBad = NaN;
+      x[s] = lo;
+      evaluateAt(p, x, ws);
+    }
     if (worst(ws.g, ws.incMask) > EPS) return infeasibleCell(ws);
-    hi = boundary(p, s, x, ws, lo, hi, ws.incMask, false, tol);
+    hi = boundary(p, s, x, ws, lo, hi, ws.incMask, false, coarse);
   }
   // Scan the bracket at the variable's resolution for the constraints of unknown trend.
   const resolution = v.resolution * ws.scanCoarsening;
@@ -164,7 +192,10 @@ export function solveCell(
     total = evaluateAt(p, x, ws);
     if (total === 0) {
       found = true;
-      if (mode === CellMode.First) return true;
+      if (mode === CellMode.First) {
+        if (at === lo && loBad === loBad) refineLow(p, s, x, ws, loBad, lo, tol);
+        return true;
+      }
       if (visit !== null) visit(x, ws.f, ws.g);
     }
     if (at >= hi) break;
