@@ -19,16 +19,27 @@ export function endConditionConstant(seating: Seating): number {
 
 /** Longest free length that is absolutely stable: L0 < pi D / alpha * sqrt(2(E-G)/(2G+E)). */
 export function stableFreeLengthLimit(meanDiameter: number, elasticModulus: number, shearModulus: number, alpha: number): number {
-  const c2 = (2 * Math.PI * Math.PI * (elasticModulus - shearModulus)) / (2 * shearModulus + elasticModulus);
-  return (meanDiameter / alpha) * Math.sqrt(c2);
+  return (meanDiameter / alpha) * Math.sqrt(bucklingConstant2(elasticModulus, shearModulus));
 }
 
-/** Critical deflection in mm, or NaN when the spring is absolutely stable. */
-export function criticalDeflection(freeLength: number, meanDiameter: number, elasticModulus: number, shearModulus: number, alpha: number): number {
-  const c1 = elasticModulus / (2 * (elasticModulus - shearModulus));
-  const c2 = (2 * Math.PI * Math.PI * (elasticModulus - shearModulus)) / (2 * shearModulus + elasticModulus);
+/** The elastic constants C1 = E / (2(E - G)) and C2 = 2 pi^2 (E - G)/(2G + E) of the material. */
+export function bucklingConstant1(elasticModulus: number, shearModulus: number): number {
+  return elasticModulus / (2 * (elasticModulus - shearModulus));
+}
+
+export function bucklingConstant2(elasticModulus: number, shearModulus: number): number {
+  return (2 * Math.PI * Math.PI * (elasticModulus - shearModulus)) / (2 * shearModulus + elasticModulus);
+}
+
+/** Critical deflection from the material's constants (for loops that hold them per material). */
+export function criticalDeflectionFrom(freeLength: number, meanDiameter: number, c1: number, c2: number, alpha: number): number {
   const lambda = (alpha * freeLength) / meanDiameter;
   const q = c2 / (lambda * lambda);
   if (q >= 1) return NaN;
   return freeLength * c1 * (1 - Math.sqrt(1 - q));
+}
+
+/** Critical deflection in mm, or NaN when the spring is absolutely stable. */
+export function criticalDeflection(freeLength: number, meanDiameter: number, elasticModulus: number, shearModulus: number, alpha: number): number {
+  return criticalDeflectionFrom(freeLength, meanDiameter, bucklingConstant1(elasticModulus, shearModulus), bucklingConstant2(elasticModulus, shearModulus), alpha);
 }

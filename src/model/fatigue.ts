@@ -56,7 +56,11 @@ export function fullyReversedEndurance(point: EndurancePoint, ultimateShear: num
  * r = Infinity (no mean stress) gives the fully reversed endurance.
  */
 export function alternatingStrength(slope: number, point: EndurancePoint, ultimateShear: number, criterion: FatigueCriterion): number {
-  const sse = fullyReversedEndurance(point, ultimateShear, criterion);
+  return alternatingStrengthFrom(slope, point, ultimateShear, fullyReversedEndurance(point, ultimateShear, criterion), criterion);
+}
+
+/** The same with the fully reversed endurance Sse given (for loops that hold it per material). */
+export function alternatingStrengthFrom(slope: number, point: EndurancePoint, ultimateShear: number, sse: number, criterion: FatigueCriterion): number {
   if (criterion === 'sines') return point.alternating;
   if (!(slope < 1e12)) return sse;
   if (criterion === 'goodman') return (slope * sse * ultimateShear) / (slope * ultimateShear + sse);
@@ -73,7 +77,12 @@ export function cycleStresses(minStress: number, maxStress: number): EndurancePo
 
 /** Fatigue safety factor n_f = Ssa(limit) / tau_a; NaN when there is no alternating stress. */
 export function fatigueSafetyFactor(alternating: number, mean: number, point: EndurancePoint, ultimateShear: number, criterion: FatigueCriterion): number {
+  return fatigueSafetyFactorFrom(alternating, mean, point, ultimateShear, fullyReversedEndurance(point, ultimateShear, criterion), criterion);
+}
+
+/** The same with the fully reversed endurance Sse given. */
+export function fatigueSafetyFactorFrom(alternating: number, mean: number, point: EndurancePoint, ultimateShear: number, sse: number, criterion: FatigueCriterion): number {
   if (!(alternating > 0)) return NaN;
   const slope = mean > 0 ? alternating / mean : Infinity;
-  return alternatingStrength(slope, point, ultimateShear, criterion) / alternating;
+  return alternatingStrengthFrom(slope, point, ultimateShear, sse, criterion) / alternating;
 }

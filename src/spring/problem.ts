@@ -6,9 +6,9 @@ import { inStrengthRange } from '../catalogs/properties.js';
 import type { Requirements } from '../input/requirements.js';
 import { materialFigures, type MaterialChoice } from '../input/material.js';
 import type { MaterialFigures, ServiceConditions, SpringGeometry } from '../model/analysis.js';
-import { criticalDeflection, endConditionConstant } from '../model/buckling.js';
+import { bucklingConstant1, bucklingConstant2, criticalDeflectionFrom, endConditionConstant } from '../model/buckling.js';
 import { minimumGapSum, solidOuterDiameter } from '../model/clash.js';
-import { INFINITE_LIFE_CYCLES, fatigueSafetyFactor, finiteLifePoint, repeatedStressFraction, zimmerliPoint, type EndurancePoint } from '../model/fatigue.js';
+import { INFINITE_LIFE_CYCLES, fatigueSafetyFactorFrom, finiteLifePoint, fullyReversedEndurance, repeatedStressFraction, zimmerliPoint, type EndurancePoint } from '../model/fatigue.js';
 import { END_TYPES, inactiveCoils, pitch, solidLength, springMass, wireVolume, type EndType } from '../model/geometry.js';
 import { springRate } from '../model/rate.js';
 import { shearStress } from '../model/stress.js';
@@ -60,6 +60,9 @@ export function buildSpringProblem(req: Requirements): SpringProblem {
   const sSsu = new Float64Array(n);
   const sTmax = new Float64Array(n);
   const sCost = new Float64Array(n);
+  const sC1 = new Float64Array(n);
+  const sC2 = new Float64Array(n);
+  const sSse = new Float64Array(n);
   const sPoint: EndurancePoint[] = [];
   const fatigueOn = req.cycles !== undefined && req.operatingLength !== undefined;
   stock.forEach((s, i) => {
@@ -72,9 +75,13 @@ export function buildSpringProblem(req: Requirements): SpringProblem {
     sTmax[i] = s.figures.maxTemperature;
     sCost[i] = s.choice.material.relativeCost.value;
     const cycles = req.cycles ?? INFINITE_LIFE_CYCLES;
-    sPoint.push(fatigueOn && cycles >= INFINITE_LIFE_CYCLES && s.figures.zimmerli
+    const point = fatigueOn && cycles >= INFINITE_LIFE_CYCLES && s.figures.zimmerli
       ? zimmerliPoint(req.peened)
-      : finiteLifePoint(s.figures.tensileStrength, repeatedStressFraction(s.figures.finiteLife, Math.min(cycles, INFINITE_LIFE_CYCLES), req.peened)));
+      : finiteLifePoint(s.figures.tensileStrength, repeatedStressFraction(s.figures.finiteLife, Math.min(cycles, INFINITE_LIFE_CYCLES), req.peened));
+    sPoint.push(point);
+    sSse[i] = fullyReversedEndurance(point, sSsu[i], req.criterion);
+    sC1[i] = bucklingConstant1(sE[i], sG[i]);
+    sC2[i] = bucklingConstant2(sE[i], sG[i]);
   });
   const ends = req.ends;
   const endQ = Int32Array.from(ends.map(inactiveCoils));
@@ -184,11 +191,11 @@ export function buildSpringProblem(req: Requirements): SpringProblem {
         const tauMin = shearStress(F1, D, d, K);
         const alt = 0.5 * (tauMax - tauMin);
         const mean = 0.5 * (tauMax + tauMin);
-        fatigueSafety = fatigueSafetyFactor(alt, mean, sPoint[i], sSsu[i], criterion);
+        fatigueSafety = fatigueSafetyFactorFrom(alt, mean, sPoint[i], sSsu[i], sSse[i], criterion);
         g[11] = (nfTarget - fatigueSafety) / nfTarget;
       } else g[11] = -1;
       const ymax = L0 - Lmin;
-      const ycr = criticalDeflection(L0, D, sE[i], sG[i], alpha);
+      const ycr = criticalDeflectionFrom(L0, D, sC1[i], sC2[i], alpha);
       g[12] = ycr === ycr ? (ymax - ycr) / ymax : -1;
       g[13] = surgeNeed > 0 ? (surgeNeed - surgeFrequency(k, activeCoilMass(d, D, Na, sRho[i]), oneEndFree)) / surgeNeed : -1;
       if (activeMask[14] === 1) {
