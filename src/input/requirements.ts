@@ -48,6 +48,8 @@ export interface Requirements {
   clashAllowance: number;
   gapRule: boolean;
   solidSafe: boolean;
+  /** The spring runs over a rod or in a bore that keeps it from buckling: the buckling check is off. */
+  guided: boolean;
   rank: RankKey;
   top: number;
   seed: number;
@@ -184,6 +186,7 @@ export function readRequirements(raw: unknown, catalog: Catalog): Requirements {
     clashAllowance: f.fraction('clash_allowance') ?? DEFAULTS.clashAllowance,
     gapRule: f.bool('coil_gap_rule') ?? false,
     solidSafe: f.bool('solid_safe') ?? false,
+    guided: f.bool('guided') ?? false,
     rank: (f.choice('rank', RANK_KEYS) ?? DEFAULTS.rank) as RankKey,
     top: f.number('top', { integer: true, positive: true, max: 1000 }) ?? DEFAULTS.top,
     seed: f.number('seed', { integer: true }) ?? DEFAULTS.seed,

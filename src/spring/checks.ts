@@ -48,7 +48,7 @@ export function activeChecks(req: Requirements): boolean[] {
     static_stress: true,
     solid_stress: req.solidSafe,
     fatigue,
-    buckling: true,
+    buckling: !req.guided,
     surge: req.forcingFrequency !== undefined && req.forcingFrequency > 0,
     operating_force_min: req.operatingForce !== undefined,
     operating_force_max: req.operatingForce !== undefined,

@@ -194,9 +194,11 @@ export function buildSpringProblem(req: Requirements): SpringProblem {
         fatigueSafety = fatigueSafetyFactorFrom(alt, mean, sPoint[i], sSsu[i], sSse[i], criterion);
         g[11] = (nfTarget - fatigueSafety) / nfTarget;
       } else g[11] = -1;
-      const ymax = L0 - Lmin;
-      const ycr = criticalDeflectionFrom(L0, D, sC1[i], sC2[i], alpha);
-      g[12] = ycr === ycr ? (ymax - ycr) / ymax : -1;
+      if (activeMask[12] === 1) {
+        const ymax = L0 - Lmin;
+        const ycr = criticalDeflectionFrom(L0, D, sC1[i], sC2[i], alpha);
+        g[12] = ycr === ycr ? (ymax - ycr) / ymax : -1;
+      } else g[12] = -1;
       g[13] = surgeNeed > 0 ? (surgeNeed - surgeFrequency(k, activeCoilMass(d, D, Na, sRho[i]), oneEndFree)) / surgeNeed : -1;
       if (activeMask[14] === 1) {
         g[14] = (F2req * (1 - tol) - F2) / F2req;

@@ -27,6 +27,7 @@ const reqArb = fc.record({
   peened: fc.boolean(),
   solidSafe: fc.boolean(),
   tolerance: fc.constantFrom(0, 0.05, 0.1),
+  guided: fc.boolean(),
 });
 
 function requirementsDoc(r: fc.infer<typeof reqArb>): Record<string, unknown> {
@@ -35,7 +36,7 @@ function requirementsDoc(r: fc.infer<typeof reqArb>): Record<string, unknown> {
     load: { force: r.force, length: r.length },
     operating_length: r.length * (1 - r.stroke),
     envelope: { max_outer_diameter: r.od, max_free_length: r.length * 3 },
-    peened: r.peened, solid_safe: r.solidSafe, load_tolerance: r.tolerance, coil_step: 0.5, top: 5,
+    peened: r.peened, solid_safe: r.solidSafe, guided: r.guided, load_tolerance: r.tolerance, coil_step: 0.5, top: 5,
   };
   if (r.rateFixed) doc.operating_force = r.force * r.forceRise;
   if (r.cycles !== undefined) doc.cycles = r.cycles;
