@@ -9,7 +9,7 @@ import type { MaterialFigures, ServiceConditions, SpringGeometry } from '../mode
 import { bucklingConstant1, bucklingConstant2, criticalDeflectionFrom, endConditionConstant } from '../model/buckling.js';
 import { minimumGapSum, solidOuterDiameter } from '../model/clash.js';
 import { INFINITE_LIFE_CYCLES, fatigueSafetyFactorFrom, finiteLifePoint, fullyReversedEndurance, repeatedStressFraction, zimmerliPoint, type EndurancePoint } from '../model/fatigue.js';
-import { END_TYPES, inactiveCoils, pitch, solidLength, springMass, wireVolume, type EndType } from '../model/geometry.js';
+import { inactiveCoils, pitch, solidLength, springMass, wireVolume, type EndType } from '../model/geometry.js';
 import { springRate } from '../model/rate.js';
 import { shearStress } from '../model/stress.js';
 import { bergstrasserFactor, wahlFactor } from '../model/stressFactor.js';
