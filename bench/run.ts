@@ -24,7 +24,7 @@ const median = (xs: number[]) => [...xs].sort((a, b) => a - b)[Math.floor(xs.len
 const fmt = (v: number, d = 3) => Number(v.toPrecision(d)).toLocaleString('en-US', { maximumSignificantDigits: d });
 
 /** Candidate evaluations per second of the problem's evaluate() alone, over random points held in one typed array. */
-function innerLoopRate(p: Problem, count: number): number {
+function innerLoopRate(p: Problem, count: number): { best: number; median: number } {
   const rng = seedrandom('inner-loop');
   const n = p.variables.length;
   const xs = new Float64Array(count * n);
@@ -36,19 +36,22 @@ function innerLoopRate(p: Problem, count: number): number {
   const g = new Float64Array(p.constraintNames.length);
   const f = new Float64Array(p.objectiveNames.length);
   let best = Infinity;
+  const rates: number[] = [];
   const x = new Float64Array(n);
   let sink = 0;
-  for (let rep = 0; rep < 5; rep++) {
+  for (let rep = 0; rep < 12; rep++) {
     const t = performance.now();
     for (let c = 0; c < count; c++) {
       for (let i = 0; i < n; i++) x[i] = xs[c * n + i];
       p.evaluate(x, g, f);
       sink += g[0];
     }
-    best = Math.min(best, performance.now() - t);
+    const ms = performance.now() - t;
+    best = Math.min(best, ms);
+    if (rep >= 2) rates.push(count / (ms / 1000));
   }
   if (sink === 42) say('');
-  return count / (best / 1000);
+  return { best: count / (best / 1000), median: median(rates) };
 }
 
 function timed<T>(fn: () => T, reps: number): { value: T; ms: number } {
@@ -73,7 +76,7 @@ const demoReq = readRequirements(readInputFile(DEMO), catalog);
 const demoProblem = buildSpringProblem(demoReq);
 const rate = innerLoopRate(demoProblem, 1_000_000);
 say('## Inner loop');
-say(`- Spring problem evaluate() on 1,000,000 random candidates held in one Float64Array: **${fmt(rate / 1e6)} million candidate evaluations per second** on one core (target: at least 10 million).`);
+say(`- Spring problem evaluate() on 1,000,000 random candidates held in one Float64Array, 12 passes (the first two are warm-up): **${fmt(rate.median / 1e6)} million candidate evaluations per second** median, ${fmt(rate.best / 1e6)} million best, on one core (target: at least 10 million). This shared 2-core machine varies by about 20% from run to run.`);
 say();
 
 // 2. The demo design.
@@ -129,7 +132,7 @@ for (const share of [0.1, 0.25, 1]) {
   const h = hitRate(sandgrenProblem(), sg.best[0].f[0], sg.evaluations, share);
   say(`| Sandgren mixed-discrete spring | ${share} | ${h.hits}/50 | ${fmt(h.share, 2)} |`);
 }
-say('Target: 95% of seeds at no more than 10% of the grid\'s evaluations. The grid is frugal (it brackets the diameter and prunes on the incumbent): on the Sandgren problem it spends 3.6 evaluations per combination, so 10% of its evaluations buys the genetic search only about a hundred combinations.');
+say('Target: 95% of seeds at no more than 10% of the grid\'s evaluations. The grid is frugal (it brackets the diameter and prunes on the incumbent): on the Sandgren problem it spends about 3 evaluations per combination, so 10% of its evaluations buys the genetic search only about a hundred combinations.');
 say();
 
 // 5. Published benchmarks.
