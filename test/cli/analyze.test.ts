@@ -52,6 +52,32 @@ forces: ["6.46 lbf"]
   });
 });
 
+describe('Shigley Example 10-1, part (g): buckling between flat plates (source: Budynas and Nisbett, Shigley 9th ed., Example 10-1 and eq. 10-13; from memory)', () => {
+  // The book judges (L0)cr = 2.63 D / alpha = 2.10 in with its steel constant (E 30, G 11.5 Mpsi) and calls
+  // the 2.06 in spring stable. With Table 10-5's moduli for this wire (E 29.0, G 11.85 Mpsi) the limit is
+  // 2.03 in: coilfront then reports a critical deflection instead. Both are checked, and why they differ.
+  const spring = (material: string) => `units: us
+material: ${material}
+wire_diameter: 0.037
+outer_diameter: 0.4375
+total_coils: 12.5
+ends: squared
+free_length: 2.06
+lengths: [0.6]
+`;
+  it('with the book\'s steel constants the limit is 2.10 in and the spring is absolutely stable', async () => {
+    const j = await analyzeJson(spring('{ like: music-wire, elastic_modulus: "30 Mpsi", shear_modulus: "11.5 Mpsi" }'));
+    expect(j.buckling.stable_free_length_limit / IN).toBeCloseTo(2.10 * (0.4005 / 0.4), 2);
+    expect(j.buckling.absolutely_stable).toBe(true);
+  });
+  it('with Table 10-5 moduli the limit is 2.03 in and a critical deflection is reported', async () => {
+    const j = await analyzeJson(spring('music-wire'));
+    expect(j.buckling.stable_free_length_limit / IN).toBeCloseTo(2.03, 2);
+    expect(j.buckling.absolutely_stable).toBe(false);
+    expect(j.buckling.critical_deflection).toBeGreaterThan(0);
+  });
+});
+
 describe('Shigley Example 10-2, solid-safe hard-drawn spring (source: Budynas and Nisbett, Shigley 9th ed., Example 10-2; figures from memory, recomputed by hand)', () => {
   // 0.080 in hard-drawn wire, OD 0.880 in, plain-ground ends, 8 total coils. Book: Sut 226.2 kpsi,
   // Ssy 101.8 kpsi, C 10, K_B 1.135, force at Ssy 22.6 lbf, Na 7, k 16.4 lbf/in (G 11.5 Mpsi),
