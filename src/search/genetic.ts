@@ -56,6 +56,11 @@ export function geneticSearch(p: Problem, opts: GeneticOptions): SearchResult {
   const sizes = p.variables.map((v) => (v.kind === 'continuous' ? 0 : valueCount(v)));
   const discreteOnly = discreteGenes;
   const memo = new Map<number, { f: number; violation: number; x: Float64Array }>();
+  // The workspace and memo in use: coarse while searching, fine for the closing hill-climb.
+  const fineWs = makeWorkspace(p);
+  let cw = ws;
+  let cm = memo;
+  const spent = () => ws.evaluations + fineWs.evaluations;
   const increasing = p.objectiveTrend !== undefined && p.objectiveTrend[0] === TREND.increasing;
   const x = new Float64Array(n);
   const cellBest = { f: Infinity, x: new Float64Array(n) };
@@ -83,7 +88,7 @@ export function geneticSearch(p: Problem, opts: GeneticOptions): SearchResult {
 
   const assess = (genes: Float64Array): Individual => {
     const k = discreteOnly ? key(genes) : -1;
-    const known = k >= 0 ? memo.get(k) : undefined;
+    const known = k >= 0 ? cm.get(k) : undefined;
     if (known) return { genes, f: known.f, violation: known.violation, x: known.x };
     decode(genes);
     counts.cells++;
@@ -91,28 +96,28 @@ export function geneticSearch(p: Problem, opts: GeneticOptions): SearchResult {
     let violation = 0;
     if (s >= 0) {
       cellBest.f = Infinity;
-      const r = solveCell(p, s, x, ws, increasing ? CellMode.First : CellMode.All, increasing ? null : visitAll, increasing ? prune : null);
+      const r = solveCell(p, s, x, cw, increasing ? CellMode.First : CellMode.All, increasing ? null : visitAll, increasing ? prune : null);
       if (r === 'pruned') {
         // The objective at the cell's lower bound already loses to the best found: its value stands in.
         counts.pruned++;
-        f = ws.f[0];
+        f = cw.f[0];
       } else if (r === true) {
         counts.feasible++;
-        if (increasing) { f = ws.f[0]; top.offer(x, ws.f); } else { f = cellBest.f; x.set(cellBest.x); }
+        if (increasing) { f = cw.f[0]; top.offer(x, cw.f); } else { f = cellBest.f; x.set(cellBest.x); }
       } else {
-        violation = ws.missViolation;
-        misses.offer(ws.missX, ws.missG, ws.missF, ws.missViolation);
-        x.set(ws.missX);
+        violation = cw.missViolation;
+        misses.offer(cw.missX, cw.missG, cw.missF, cw.missViolation);
+        x.set(cw.missX);
       }
     } else {
-      p.evaluate(x, ws.g, ws.f);
-      ws.evaluations++;
-      for (let j = 0; j < ws.g.length; j++) if (ws.g[j] > 1e-9) violation += ws.g[j];
-      if (violation === 0) { f = ws.f[0]; top.offer(x, ws.f); counts.feasible++; } else misses.offer(x, ws.g, ws.f, violation);
+      p.evaluate(x, cw.g, cw.f);
+      cw.evaluations++;
+      for (let j = 0; j < cw.g.length; j++) if (cw.g[j] > 1e-9) violation += cw.g[j];
+      if (violation === 0) { f = cw.f[0]; top.offer(x, cw.f); counts.feasible++; } else misses.offer(x, cw.g, cw.f, violation);
     }
     if (violation === 0 && f < bestFeasible && top.size > 0) bestFeasible = top.f(0)[0];
     const ind = { genes, f, violation, x: Float64Array.from(x) };
-    if (k >= 0) memo.set(k, { f, violation, x: ind.x });
+    if (k >= 0) cm.set(k, { f, violation, x: ind.x });
     return ind;
   };
 
@@ -148,57 +153,84 @@ export function geneticSearch(p: Problem, opts: GeneticOptions): SearchResult {
     return better(a, b) ? a : b;
   };
 
-  let pop: Individual[] = [];
-  for (let i = 0; i < popSize; i++) pop.push(assess(randomGenes()));
-  let best = pop.reduce((a, b) => (better(b, a) ? b : a));
-  let sinceBetter = 0;
-  const rate = 1.5 / Math.max(1, n - (s >= 0 ? 1 : 0));
-  // The generations get 70% of the budget; the closing hill-climb the rest.
-  const evolveBudget = 0.7 * opts.maxEvaluations;
-  while (ws.evaluations < evolveBudget && sinceBetter < stall) {
-    pop.sort((a, b) => (better(a, b) ? -1 : better(b, a) ? 1 : 0));
-    const next: Individual[] = [pop[0], pop[1]];
-    while (next.length < popSize && ws.evaluations < evolveBudget) {
-      const pa = tournament(pop);
-      const pb = tournament(pop);
-      const child = new Float64Array(n);
-      for (let i = 0; i < n; i++) {
-        const v = p.variables[i];
-        if (v.kind === 'continuous' && i !== s) {
-          const lo = Math.min(pa.genes[i], pb.genes[i]);
-          const hi = Math.max(pa.genes[i], pb.genes[i]);
-          const ext = 0.5 * (hi - lo);
-          child[i] = Math.min(v.max, Math.max(v.min, lo - ext + rng() * (hi - lo + 2 * ext)));
-        } else {
-          child[i] = rng() < 0.5 ? pa.genes[i] : pb.genes[i];
-        }
-      }
-      mutate(child, rate);
-      next.push(assess(child));
-    }
-    pop = next;
-    const genBest = pop.reduce((a, b) => (better(b, a) ? b : a));
-    if (better(genBest, best)) { best = genBest; sinceBetter = 0; } else sinceBetter++;
-  }
-
   // Closing hill-climb over the integer genes: moves of one step in one gene or in two genes at once
   // (a thicker wire wants fewer coils), taken while they improve.
   const integerGenes = p.variables.map((v, i) => (i !== s && v.kind !== 'continuous' ? i : -1)).filter((i) => i >= 0);
   const moves: [number, number, number, number][] = [];
   for (const i of integerGenes) for (const di of [-1, 1]) moves.push([i, di, -1, 0]);
   for (const i of integerGenes) for (const j of integerGenes) if (j > i) for (const di of [-1, 1]) for (const dj of [-1, 1]) moves.push([i, di, j, dj]);
-  let improved = true;
-  while (improved && ws.evaluations < opts.maxEvaluations) {
-    improved = false;
-    for (const [i, di, j, dj] of moves) {
-      const g = Float64Array.from(best.genes);
-      g[i] += di;
-      if (j >= 0) g[j] += dj;
-      if (g[i] < 0 || g[i] >= sizes[i] || (j >= 0 && (g[j] < 0 || g[j] >= sizes[j]))) continue;
-      const cand = assess(g);
-      if (better(cand, best)) { best = cand; improved = true; break; }
+  const hillClimb = (from: Individual, limit: number): Individual => {
+    let here = from;
+    let last = -1;
+    let improved = true;
+    while (improved && spent() < limit) {
+      improved = false;
+      // The move that worked last is tried first: descents along one gene are common.
+      for (let t = -1; t < moves.length && spent() < limit; t++) {
+        const m = t < 0 ? last : t;
+        if (m < 0 || (t >= 0 && t === last)) continue;
+        const [i, di, j, dj] = moves[m];
+        const g = Float64Array.from(here.genes);
+        g[i] += di;
+        if (j >= 0) g[j] += dj;
+        if (g[i] < 0 || g[i] >= sizes[i] || (j >= 0 && (g[j] < 0 || g[j] >= sizes[j]))) continue;
+        const cand = assess(g);
+        if (better(cand, here)) { here = cand; last = m; improved = true; break; }
+      }
     }
+    return here;
+  };
+
+  const rate = 1.5 / Math.max(1, n - (s >= 0 ? 1 : 0));
+  // Generations until they stall, a hill-climb from the best, then a restart around the best with a
+  // fresh random population while 70% of the budget lasts; the last hill-climb may use the rest.
+  const evolveBudget = 0.7 * opts.maxEvaluations;
+  let pop: Individual[] = [];
+  for (let i = 0; i < popSize; i++) pop.push(assess(randomGenes()));
+  let best = pop.reduce((a, b) => (better(b, a) ? b : a));
+  for (let restart = 0; restart < 50; restart++) {
+    const cellsBefore = counts.cells;
+    let sinceBetter = 0;
+    while (ws.evaluations < evolveBudget && sinceBetter < stall) {
+      pop.sort((a, b) => (better(a, b) ? -1 : better(b, a) ? 1 : 0));
+      const next: Individual[] = [pop[0], pop[1]];
+      while (next.length < popSize && ws.evaluations < evolveBudget) {
+        const pa = tournament(pop);
+        const pb = tournament(pop);
+        const child = new Float64Array(n);
+        for (let i = 0; i < n; i++) {
+          const v = p.variables[i];
+          if (v.kind === 'continuous' && i !== s) {
+            const lo = Math.min(pa.genes[i], pb.genes[i]);
+            const hi = Math.max(pa.genes[i], pb.genes[i]);
+            const ext = 0.5 * (hi - lo);
+            child[i] = Math.min(v.max, Math.max(v.min, lo - ext + rng() * (hi - lo + 2 * ext)));
+          } else {
+            child[i] = rng() < 0.5 ? pa.genes[i] : pb.genes[i];
+          }
+        }
+        mutate(child, rate);
+        next.push(assess(child));
+      }
+      pop = next;
+      const genBest = pop.reduce((a, b) => (better(b, a) ? b : a));
+      if (better(genBest, best)) { best = genBest; sinceBetter = 0; } else sinceBetter++;
+    }
+    best = hillClimb(best, evolveBudget);
+    // Stop when the budget is spent or a whole round met no combination it had not seen.
+    if (ws.evaluations >= evolveBudget || counts.cells === cellsBefore) break;
+    pop = [best];
+    for (let i = 1; i < popSize; i++) pop.push(assess(randomGenes()));
   }
+  // The closing hill-climb judges cells at full precision: the best combination may be feasible only
+  // in a sliver of diameters that the coarse scan stepped over.
+  if (s >= 0 && discreteGenes) {
+    cw = fineWs;
+    cm = new Map();
+    bestFeasible = Infinity;
+    best = hillClimb(assess(Float64Array.from(best.genes)), opts.maxEvaluations);
+  } else best = hillClimb(best, opts.maxEvaluations);
+  ws.evaluations += fineWs.evaluations;
   if (s < 0) return packResult('genetic', p, top, null, ws, counts, misses);
   // Solve the reported cells again at the grid's tolerance.
   const fine = makeWorkspace(p);
