@@ -21,7 +21,7 @@ import { writeDesignReport } from '../report/html/designHtml.js';
 
 interface CommonOptions {
   json?: boolean; units?: UnitSystem; set?: string[]; strategy?: StrategyChoice; seed?: string; top?: string; rank?: string;
-  maxOd?: string; minId?: string; maxFreeLength?: string; maxSolidLength?: string; report?: string; force?: boolean;
+  maxOd?: string; minId?: string; maxFreeLength?: string; maxSolidLength?: string; report?: string; force?: boolean; perWire?: boolean;
 }
 
 function collect(value: string, previous: string[] = []): string[] {
@@ -36,7 +36,8 @@ function addCommon(cmd: Command): Command {
     .addOption(new Option('--strategy <name>', 'search strategy').choices(['auto', 'grid', 'genetic']).default('auto'))
     .option('--seed <n>', 'random seed for the genetic strategy (overrides the file)')
     .option('--top <n>', 'how many candidates to list (overrides the file)')
-    .addOption(new Option('--rank <key>', 'ranking objective (overrides the file)').choices([...RANK_KEYS]));
+    .addOption(new Option('--rank <key>', 'ranking objective (overrides the file)').choices([...RANK_KEYS]))
+    .option('--per-wire', 'list the best spring of each material and wire size (overrides the file\'s best_per_wire)');
   for (const [flags, , path] of ENVELOPE_SHORTHANDS) cmd.option(flags, `shorthand for --set ${path}=<value>`);
   return cmd;
 }
@@ -55,6 +56,7 @@ function rawWithOverrides(file: string, opts: CommonOptions): unknown {
   if (opts.seed !== undefined) doc = withValue(doc, ['seed'], Number(opts.seed));
   if (opts.top !== undefined) doc = withValue(doc, ['top'], Number(opts.top));
   if (opts.rank !== undefined) doc = withValue(doc, ['rank'], opts.rank);
+  if (opts.perWire) doc = withValue(doc, ['best_per_wire'], true);
   return doc;
 }
 

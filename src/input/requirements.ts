@@ -50,6 +50,8 @@ export interface Requirements {
   solidSafe: boolean;
   /** The spring runs over a rod or in a bore that keeps it from buckling: the buckling check is off. */
   guided: boolean;
+  /** List the best spring of each material and wire size instead of the overall best ones. */
+  bestPerWire: boolean;
   rank: RankKey;
   top: number;
   seed: number;
@@ -187,6 +189,7 @@ export function readRequirements(raw: unknown, catalog: Catalog): Requirements {
     gapRule: f.bool('coil_gap_rule') ?? false,
     solidSafe: f.bool('solid_safe') ?? false,
     guided: f.bool('guided') ?? false,
+    bestPerWire: f.bool('best_per_wire') ?? false,
     rank: (f.choice('rank', RANK_KEYS) ?? DEFAULTS.rank) as RankKey,
     top: f.number('top', { integer: true, positive: true, max: 1000 }) ?? DEFAULTS.top,
     seed: f.number('seed', { integer: true }) ?? DEFAULTS.seed,

@@ -166,7 +166,8 @@ export function countsText(run: DesignRun, system: UnitSystem): string {
   const r = run.result;
   const lines: string[] = [];
   lines.push(`Searched ${r.cells} combinations of material, wire, ends and coil count (${run.problem.stock.length} wire stock items) with the ${r.strategy} strategy: ${r.evaluations} candidate evaluations in ${sig(run.searchMs, 3)} ms.`);
-  lines.push(`Feasible combinations: ${r.feasibleCells}${r.prunedCells ? `; ${r.prunedCells} skipped because their lightest possible spring could not enter the top ${run.req.top}` : ''}.`);
+  const skipped = run.req.bestPerWire ? 'could not beat the best found for its wire' : `could not enter the top ${run.req.top}`;
+  lines.push(`Feasible combinations: ${r.feasibleCells}${r.prunedCells ? `; ${r.prunedCells} skipped because their lightest possible spring ${skipped}` : ''}.`);
   const cut = reportedChecks(run.req).filter((c) => r.cutBy[c] > 0).map((c) => [c, String(r.cutBy[c]), CHECK_LABELS[c as CheckName]]);
   if (cut.length) {
     lines.push('Combinations cut, by the check that failed worst:');
@@ -187,7 +188,7 @@ export function designText(run: DesignRun, system: UnitSystem): string {
   const req = run.req;
   out.push(`Spring design: ${formatQuantity(req.workingForce, 'force', system)} at ${formatQuantity(req.workingLength, 'length', system)}` +
     (req.operatingLength !== undefined ? `, stroke to ${formatQuantity(req.operatingLength, 'length', system)}${req.operatingForce !== undefined ? ` at ${formatQuantity(req.operatingForce, 'force', system)}` : ''}` : '') +
-    `; ranked by ${req.rank.replace('_', ' ')}`);
+    `; ranked by ${req.rank.replace('_', ' ')}${req.bestPerWire ? ', the best spring of each material and wire size' : ''}`);
   out.push('');
   if (run.candidates.length) {
     out.push(candidateTable(run.candidates, system));

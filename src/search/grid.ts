@@ -19,6 +19,9 @@ export interface GridOptions {
   everyFeasiblePoint?: boolean;
   /** With everyFeasiblePoint: sample each cell's feasible interval at no more than this many points. */
   maxScanPoints?: number;
+  /** Keep the best point for each value of this (list or range) variable, then rank those: the best
+   * spring per wire size, say. Pruning then compares a cell with its own group's best only. */
+  bestPerValueOf?: number;
   /** Polish the scanned continuous variables of the best point by a Hooke-Jeeves pattern search
    * with at most this many step halvings (0: none). */
   refine?: number;
@@ -28,7 +31,7 @@ export interface GridOptions {
 }
 
 function gridPass(p: Problem, vars: readonly Variable[], s: number, opts: GridOptions, top: TopK, cloud: PointBuffer | null,
-  misses: NearestMisses, ws: ReturnType<typeof makeWorkspace>, counts: { cells: number; feasible: number; pruned: number }): void {
+  misses: NearestMisses, ws: ReturnType<typeof makeWorkspace>, counts: { cells: number; feasible: number; pruned: number }, groups: TopK[] | null = null): void {
   const n = vars.length;
   const sizes = new Int32Array(n);
   const idx = new Int32Array(n);
@@ -49,7 +52,9 @@ function gridPass(p: Problem, vars: readonly Variable[], s: number, opts: GridOp
     if (f[0] < cellBest) { cellBest = f[0]; cellX.set(px); cellF.set(f); }
     if (cloud) cloud.push(px, f);
   };
-  const prune = opts.collectAll ? null : (f: Float64Array) => f[0] >= top.threshold();
+  const group = opts.bestPerValueOf ?? -1;
+  const sink = (): TopK => (groups !== null ? groups[idx[group]] : top);
+  const prune = opts.collectAll ? null : (f: Float64Array) => f[0] >= sink().threshold();
   const progressEvery = Math.max(1, Math.floor(total / 100));
   for (let done = 0; done < total; done++) {
     counts.cells++;
@@ -59,8 +64,8 @@ function gridPass(p: Problem, vars: readonly Variable[], s: number, opts: GridOp
     else if (r) {
       counts.feasible++;
       if (mode === CellMode.First) visit(x, ws.f);
-      if (cellBest < Infinity) top.offer(cellX, cellF);
-      else top.offer(x, ws.f);
+      if (cellBest < Infinity) sink().offer(cellX, cellF);
+      else sink().offer(x, ws.f);
     } else if (ws.missViolation < misses.threshold()) {
       misses.offer(ws.missX, ws.missG, ws.missF, ws.missViolation);
     }
@@ -102,7 +107,10 @@ export function gridSearch(p: Problem, opts: GridOptions): SearchResult {
   const cloud = opts.collectAll ? new PointBuffer(nx, p.objectiveNames.length) : null;
   const misses = new NearestMisses(5);
   const counts = { cells: 0, feasible: 0, pruned: 0 };
-  gridPass(p, p.variables, s, opts, top, cloud, misses, ws, counts);
+  const g = opts.bestPerValueOf;
+  const groups = g !== undefined ? Array.from({ length: valueCount(p.variables[g]) }, () => new TopK(1, nx, p.objectiveNames.length)) : null;
+  gridPass(p, p.variables, s, opts, top, cloud, misses, ws, counts, groups);
+  if (groups) for (const one of groups) if (one.size) top.offer(one.x(0), one.f(0));
   if ((opts.refine ?? 0) > 0 && top.size > 0) patternSearch(p, s, opts.refine ?? 0, top, ws);
   return packResult('grid', p, top, cloud, ws, counts, misses);
 }

@@ -59,12 +59,13 @@ export const AUTO_GRID_CELL_LIMIT = 2_000_000;
 export function runDesign(req: Requirements, opts: DesignOptions = {}): DesignRun {
   const problem = buildSpringProblem(req);
   const cells = cellCount(problem);
-  const strategy = opts.strategy === 'genetic' || (opts.strategy !== 'grid' && cells > AUTO_GRID_CELL_LIMIT) ? 'genetic' : 'grid';
+  // The best spring per wire size needs every wire looked at: that is the grid's job.
+  const strategy = !req.bestPerWire && (opts.strategy === 'genetic' || (opts.strategy !== 'grid' && cells > AUTO_GRID_CELL_LIMIT)) ? 'genetic' : 'grid';
   const t0 = performance.now();
   const result = problem.stock.length === 0
     ? emptyResult()
     : strategy === 'grid'
-      ? gridSearch(problem, { top: req.top, collectAll: opts.collectAll, everyFeasiblePoint: opts.everyFeasiblePoint, maxScanPoints: 40, onProgress: opts.onProgress })
+      ? gridSearch(problem, { top: req.top, collectAll: opts.collectAll, everyFeasiblePoint: opts.everyFeasiblePoint, maxScanPoints: 40, onProgress: opts.onProgress, bestPerValueOf: req.bestPerWire && !opts.collectAll ? 0 : undefined })
       : geneticSearch(problem, { seed: req.seed, maxEvaluations: opts.maxEvaluations ?? 2_000_000, top: req.top });
   const searchMs = performance.now() - t0;
   const candidates = result.best.map((b) => candidateAt(problem, b.x, b.f));

@@ -79,6 +79,28 @@ describe('coilfront design', () => {
     expect(again.code).toBe(0);
   });
 
+  it('--per-wire lists the best spring of each material and wire size, each the best its wire can give', async () => {
+    const req = inputFile(`units: si
+material: [music-wire, stainless-302]
+load: { force: 30, length: 40 }
+operating_length: 30
+envelope: { max_outer_diameter: 22, max_free_length: 90 }
+wire_sizes: metric
+coil_step: 0.5
+top: 6
+`);
+    const all = JSON.parse((await cli('design', req, '--json')).stdout);
+    const per = JSON.parse((await cli('design', req, '--json', '--per-wire')).stdout);
+    const keys = per.candidates.map((c: { material: string; wire_diameter: number }) => `${c.material}@${c.wire_diameter}`);
+    expect(new Set(keys).size).toBe(keys.length);
+    expect(keys.length).toBeGreaterThan(2);
+    expect(per.candidates[0].mass).toBeCloseTo(all.candidates[0].mass, 12);
+    for (const c of per.candidates.slice(0, 3)) {
+      const only = JSON.parse((await cli('design', req, '--json', '--set', `material=${c.material}`, '--set', `wire_sizes=[${c.wire_diameter}]`, '--top', '1')).stdout);
+      expect(only.candidates[0].mass).toBeCloseTo(c.mass, 12);
+    }
+  });
+
   it('the genetic strategy is reproducible: same seed, same output, byte for byte', async () => {
     const a = await cli('design', demo, '--strategy', 'genetic', '--seed', '42', '--json');
     const b = await cli('design', demo, '--strategy', 'genetic', '--seed', '42', '--json');
