@@ -40,6 +40,8 @@ export function sandgrenProblem(): Problem {
     objectiveNames: ['volume'],
     constraintTrend: Int8Array.from([inc, inc, inc, inc, dec, inc, inc, dec]),
     objectiveTrend: Int8Array.from([inc]),
+    // The volume at the smallest coil diameter grows with the coil count N.
+    boundGrowsAlong: 1,
     evaluate(x, g, f) {
       const d = x[0];
       const N = x[1];

@@ -56,12 +56,23 @@ function gridPass(p: Problem, vars: readonly Variable[], s: number, opts: GridOp
   const sink = (): TopK => (groups !== null ? groups[idx[group]] : top);
   const prune = opts.collectAll ? null : (f: Float64Array) => f[0] >= sink().threshold();
   const progressEvery = Math.max(1, Math.floor(total / 100));
+  // The odometer's fastest variable; a pruned cell ends its branch when the bound grows along it.
+  const innermost = s === n - 1 ? n - 2 : n - 1;
+  const branchPrune = p.boundGrowsAlong !== undefined && p.boundGrowsAlong === innermost && innermost >= 0;
   for (let done = 0; done < total; done++) {
     counts.cells++;
     cellBest = Infinity;
     const r = s >= 0 ? solveCell(p, s, x, ws, mode, visit, prune) : evaluatePoint(p, x, ws);
-    if (r === 'pruned') counts.pruned++;
-    else if (r) {
+    if (r === 'pruned') {
+      counts.pruned++;
+      if (branchPrune) {
+        const rest = sizes[innermost] - 1 - idx[innermost];
+        counts.cells += rest;
+        counts.pruned += rest;
+        done += rest;
+        idx[innermost] = sizes[innermost] - 1;
+      }
+    } else if (r) {
       counts.feasible++;
       if (mode === CellMode.First) visit(x, ws.f);
       if (cellBest < Infinity) sink().offer(cellX, cellF);

@@ -26,6 +26,10 @@ export interface Problem {
   readonly objectiveTrend?: Int8Array;
   /** Write constraints into g and objectives into f for the point x. */
   evaluate(x: Float64Array, g: Float64Array, f: Float64Array): void;
+  /** Index of a list or range variable along which objective 0, taken at the solved variable's lowest
+   * bound, never decreases (the mass of the thinnest coil grows with the coil count). When a cell is
+   * pruned on that bound, the rest of this variable's values in the same branch are pruned with it. */
+  readonly boundGrowsAlong?: number;
   /** Optionally narrow the solved variable's interval for the other values in x: write [lo, hi] into out. */
   solvedBounds?(x: Float64Array, out: Float64Array): void;
 }

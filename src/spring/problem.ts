@@ -140,6 +140,8 @@ export function buildSpringProblem(req: Requirements): SpringProblem {
       { kind: 'range', name: 'active_coils', min: req.activeCoils[0], max: req.activeCoils[1], step: req.coilStep },
       { kind: 'continuous', name: 'mean_diameter', min: Cmin * dMin, max: Cmax * dMax, resolution: req.diameterResolution, solve: true },
     ],
+    // Mass, volume, outer diameter and free length at the smallest allowed diameter grow with the coil count.
+    boundGrowsAlong: req.rank === 'safety_factor' ? undefined : 2,
     constraintNames: CHECKS,
     objectiveNames: OBJECTIVES,
     constraintTrend: Int8Array.from(CHECKS.map((c) => trends[c])),
