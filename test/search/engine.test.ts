@@ -1,0 +1,80 @@
+// The general engine on small problems of our own (each check is a property of the engine, no outside
+// values): bracketing, scanning, pruning, archives, Pareto fronts.
+import fc from 'fast-check';
+import { describe, expect, it } from 'vitest';
+import { sandgrenProblem } from '../../bench/problems/sandgren.js';
+import { TopK } from '../../src/search/archive.js';
+import { gridSearch } from '../../src/search/grid.js';
+import { dominates, paretoFront2 } from '../../src/search/pareto.js';
+import { TREND, type Problem } from '../../src/search/problem.js';
+
+/** Minimise c * (x + a) over integer c in 1..5 and continuous x in [0, 10], with x >= lo (decreasing
+ * constraint), x <= hi (increasing) and a band (x - 4)^2 >= 1 of unknown trend. */
+function toy(lo: number, hi: number): Problem {
+  return {
+    name: 'toy',
+    variables: [
+      { kind: 'range', name: 'c', min: 1, max: 5, step: 1 },
+      { kind: 'continuous', name: 'x', min: 0, max: 10, resolution: 0.01, solve: true },
+    ],
+    constraintNames: ['low', 'high', 'band'],
+    objectiveNames: ['f'],
+    constraintTrend: Int8Array.from([TREND.decreasing, TREND.increasing, TREND.unknown]),
+    objectiveTrend: Int8Array.from([TREND.increasing]),
+    evaluate(x, g, f) {
+      g[0] = (lo - x[1]) / 10;
+      g[1] = (x[1] - hi) / 10;
+      g[2] = 1 - (x[1] - 4) ** 2;
+      f[0] = x[0] * (x[1] + 1);
+    },
+  };
+}
+
+describe('grid and cell solver', () => {
+  it('brackets to the exact boundary of the monotone checks', () => {
+    const r = gridSearch(toy(2.345678, 9), { top: 1 });
+    expect(r.best[0].x[0]).toBe(1);
+    expect(r.best[0].x[1]).toBeCloseTo(2.345678, 7); // within the feasibility tolerance (1e-9 of the normalised check)
+  });
+  it('scans past a band of unknown trend to the first feasible step', () => {
+    const r = gridSearch(toy(3.5, 9), { top: 1 });
+    // (x - 4)^2 >= 1 fails on (3, 5): the first feasible step from 3.5 is 5.
+    expect(r.best[0].x[1]).toBeGreaterThanOrEqual(5);
+    expect(r.best[0].x[1]).toBeLessThan(5.01);
+  });
+  it('reports an empty bracket as infeasible and counts what cut it', () => {
+    const r = gridSearch(toy(6, 5), { top: 1 });
+    expect(r.best).toHaveLength(0);
+    expect(r.cutBy.low + r.cutBy.high).toBe(5);
+  });
+  it('branch pruning along the coil count changes nothing but the work (Sandgren problem)', () => {
+    const withCut = gridSearch(sandgrenProblem(), { top: 5 });
+    const without = gridSearch({ ...sandgrenProblem(), boundGrowsAlong: undefined }, { top: 5 });
+    expect(withCut.best.map((b) => b.f[0])).toEqual(without.best.map((b) => b.f[0]));
+    expect(withCut.evaluations).toBeLessThan(without.evaluations);
+  });
+});
+
+describe('archives and fronts (property)', () => {
+  it('TopK keeps the k smallest, sorted', () => {
+    fc.assert(fc.property(fc.array(fc.double({ min: -1e6, max: 1e6, noNaN: true }), { maxLength: 200 }), fc.integer({ min: 1, max: 20 }), (vals, k) => {
+      const t = new TopK(k, 1, 1);
+      for (const v of vals) t.offer(Float64Array.of(v), Float64Array.of(v));
+      const want = [...vals].sort((a, b) => a - b).slice(0, k);
+      expect(Array.from({ length: t.size }, (_, i) => t.f(i)[0])).toEqual(want);
+    }));
+  });
+  it('paretoFront2 returns exactly the non-dominated points', () => {
+    fc.assert(fc.property(fc.array(fc.tuple(fc.integer({ min: 0, max: 50 }), fc.integer({ min: 0, max: 50 })), { minLength: 1, maxLength: 120 }), (pts) => {
+      const xs = pts.map((p) => p[0]);
+      const ys = pts.map((p) => p[1]);
+      const front = new Set(paretoFront2(xs, ys));
+      pts.forEach((p, i) => {
+        const dominated = pts.some((q) => dominates(q[0], q[1], p[0], p[1]));
+        const duplicateKept = [...front].some((j) => xs[j] === p[0] && ys[j] === p[1]);
+        if (front.has(i)) expect(dominated).toBe(false);
+        else expect(dominated || duplicateKept).toBe(true);
+      });
+    }));
+  });
+});
