@@ -1,18 +1,26 @@
 // A lower bound on the lightest spring (or the smallest wire volume) from a linear programme in
-// logarithmic variables u = ln d, v = ln D, w = ln Na. Rate, stress, index, envelope and surge
-// relations are monomials, hence linear in logs, once the stress factor is bounded below by its
-// value at the largest index, the dead coils are dropped (Nt >= Na), and each strength law is taken
-// per segment. Every simplification loosens the constraints, so the LP optimum is a valid lower bound
+// logarithmic variables u = ln d, v = ln D, w = ln Na, t = ln(Na + dead coils). Rate, stress, index,
+// envelope and surge relations are monomials, hence linear in logs, once the terms that are not
+// (the stress factor, 1 +- 1/C in the bore and rod limits, the dead coils) are replaced by their
+// tangents in log space on the side that loosens the constraint (outer approximation of convex
+// terms), and each strength law is taken per segment. Every simplification loosens the constraints, so the LP optimum is a valid lower bound
 // on every discrete spring the grid could find: the gap between the grid's best and this bound says
 // how much any finer wire or coil choice could still gain.
 import { tensileStrength } from '../catalogs/properties.js';
 import type { Requirements } from '../input/requirements.js';
+import { inactiveCoils } from '../model/geometry.js';
 import { bergstrasserFactor, wahlFactor } from '../model/stressFactor.js';
 import { minimiseLinear, type LinearRow } from '../search/lp.js';
 import { shortestLength } from './checks.js';
 import type { SpringProblem, StockItem } from './problem.js';
 
-type V = 'u' | 'v' | 'w';
+type V = 'u' | 'v' | 'w' | 't';
+
+/** Points spread evenly in log space over [a, b], where tangents are taken. */
+function logPoints(a: number, b: number, count = 8): number[] {
+  if (!(b > a)) return [a];
+  return Array.from({ length: count }, (_, i) => a * Math.pow(b / a, i / (count - 1)));
+}
 
 export interface LpBound { value: number | null; status: 'bound' | 'infeasible' | 'not-applicable'; models: number }
 
@@ -35,6 +43,12 @@ function groups(stock: StockItem[]): StockItem[][] {
 export function lpLowerBound(problem: SpringProblem): LpBound {
   const req: Requirements = problem.req;
   if (req.rank !== 'mass' && req.rank !== 'wire_volume') return { value: null, status: 'not-applicable', models: 0 };
+  // Dead coils: the least any allowed end type adds to Na in the mass (Q) and in the solid length (Qs).
+  const Q = Math.min(...req.ends.map(inactiveCoils));
+  const Qs = Math.min(...req.ends.map((e) => inactiveCoils(e) + (e === 'plain-ground' || e === 'squared-ground' ? 0 : 1)));
+  const coilPoints = logPoints(req.activeCoils[0], req.activeCoils[1]);
+  const indexPoints = logPoints(req.index[0], req.index[1]);
+  const stressFactorOf = (c: number) => (req.correction === 'wahl' ? wahlFactor(c) : bergstrasserFactor(c));
   let best = Infinity;
   let models = 0;
   for (const group of groups(problem.stock)) {
@@ -49,28 +63,47 @@ export function lpLowerBound(problem: SpringProblem): LpBound {
       { coefficients: { w: 1 }, min: Math.log(req.activeCoils[0]), max: Math.log(req.activeCoils[1]) },
       { coefficients: { v: 1, u: -1 }, min: Math.log(req.index[0]), max: Math.log(req.index[1]) },
     ];
-    if (req.maxOuterDiameter !== undefined) rows.push({ coefficients: { v: 1 }, max: Math.log(req.maxOuterDiameter - dLo) });
-    if (req.minInnerDiameter !== undefined) rows.push({ coefficients: { v: 1 }, min: Math.log(req.minInnerDiameter + dLo) });
-    // Static stress at the largest force: K(Cmax) 8 F D / (pi d^3) * n <= allowable(d).
-    const Kmin = req.correction === 'wahl' ? wahlFactor(req.index[1]) : bergstrasserFactor(req.index[1]);
+    // t >= ln(Na + Q): ln(e^w + Q) is convex in w, so its tangents lie below it and t above them all.
+    for (const n0 of coilPoints) {
+      const slope = n0 / (n0 + Q);
+      rows.push({ coefficients: { t: 1, w: -slope }, min: Math.log(n0 + Q) - slope * Math.log(n0) });
+    }
+    // Bore: D (1 + 1/C) <= ODmax; ln(1 + 1/C) is convex in ln C, its tangents are below it.
+    if (req.maxOuterDiameter !== undefined) {
+      for (const c0 of indexPoints) {
+        const h = Math.log(1 + 1 / c0);
+        const dh = -1 / (1 + c0);
+        rows.push({ coefficients: { v: 1 + dh, u: -dh }, max: Math.log(req.maxOuterDiameter) - h + dh * Math.log(c0) });
+      }
+    }
+    // Rod: D (1 - 1/C) >= IDmin; ln(1 - 1/C) is concave in ln C, its tangents are above it.
+    if (req.minInnerDiameter !== undefined) {
+      for (const c0 of indexPoints) {
+        if (c0 <= 1) continue;
+        const g = Math.log(1 - 1 / c0);
+        const dg = 1 / (c0 - 1);
+        rows.push({ coefficients: { v: 1 + dg, u: -dg }, min: Math.log(req.minInnerDiameter) - g + dg * Math.log(c0) });
+      }
+    }
+    // Static stress at the largest force: K(C) 8 F D / (pi d^3) * n <= allowable(d). ln K is convex in
+    // ln C for both stress factors over the index range, so each tangent is a lower bound on it.
     const Flow = req.operatingForce !== undefined ? req.operatingForce * (1 - req.loadTolerance) : req.workingForce;
     const n = req.allowableStress !== undefined ? 1 : req.safety.static;
-    const lever = Math.log((Kmin * 8 * Flow * n) / Math.PI);
-    if (req.allowableStress !== undefined) {
-      rows.push({ coefficients: { v: 1, u: -3 }, max: Math.log(req.allowableStress) - lever });
-    } else {
-      // allowable = fraction * Sut(d); within the group Sut = A d^-m exactly (power law) or is bounded
-      // above by its value at the group's smallest diameter (tables fall with diameter).
-      const s0 = group[0];
-      const fraction = s0.figures.allowableStress / s0.figures.tensileStrength;
-      const law = s0.choice.material.strength;
-      const seg = law.law === 'power' && s0.choice.tensileStrength === undefined ? law.segments.find((g) => dLo >= g.minDiameter - 1e-12 && dLo <= g.maxDiameter + 1e-12) : undefined;
-      if (seg) {
-        rows.push({ coefficients: { v: 1, u: -3 + seg.exponent }, max: Math.log(fraction * seg.coefficient) - lever });
-      } else {
-        const sutMax = Math.max(...group.map((s) => s.choice.tensileStrength ?? tensileStrength(s.choice.material, s.wireDiameter)));
-        rows.push({ coefficients: { v: 1, u: -3 }, max: Math.log(fraction * sutMax) - lever });
-      }
+    const lever = Math.log((8 * Flow * n) / Math.PI);
+    const s0 = group[0];
+    const law = s0.choice.material.strength;
+    const seg = req.allowableStress === undefined && law.law === 'power' && s0.choice.tensileStrength === undefined
+      ? law.segments.find((g) => dLo >= g.minDiameter - 1e-12 && dLo <= g.maxDiameter + 1e-12) : undefined;
+    const fraction = s0.figures.allowableStress / s0.figures.tensileStrength;
+    // Allowable as A' d^-m: exact for a power-law segment; otherwise bounded above by its largest value.
+    const allowCoefficient = req.allowableStress ?? (seg ? fraction * seg.coefficient : fraction * Math.max(...group.map((s) => s.choice.tensileStrength ?? tensileStrength(s.choice.material, s.wireDiameter))));
+    const allowExponent = seg ? seg.exponent : 0;
+    for (const c0 of indexPoints) {
+      const k0 = Math.log(stressFactorOf(c0));
+      const h = 1e-6 * c0;
+      const slope = (Math.log(stressFactorOf(c0 + h)) - Math.log(stressFactorOf(c0 - h))) / (Math.log(c0 + h) - Math.log(c0 - h));
+      // k0 + slope (v - u - ln c0) + lever + v - 3u <= ln A' - m u
+      rows.push({ coefficients: { v: 1 + slope, u: -3 - slope + allowExponent }, max: Math.log(allowCoefficient) - lever - k0 + slope * Math.log(c0) });
     }
     // Rate: k = G d^4 / (8 D^3 Na), in [k_lo, k_hi] when the operating force is given; the free-length
     // limit asks k >= F1 / (L0max - L1).
@@ -84,15 +117,25 @@ export function lpLowerBound(problem: SpringProblem): LpBound {
     }
     if (req.maxFreeLength !== undefined) kLo = Math.max(kLo, req.workingForce / (req.maxFreeLength - req.workingLength));
     if (kLo > 0) rows.push({ coefficients: { u: 4, v: -3, w: -1 }, min: Math.log((8 * kLo) / Gmax) });
-    // Solid: d Na <= Ls <= shortest length (and the solid-length limit).
-    rows.push({ coefficients: { u: 1, w: 1 }, max: Math.log(Math.min(shortestLength(req), req.maxSolidLength ?? Infinity)) });
+    // Solid: d (Na + Qs) <= Ls, and the clash allowance asks Ls + xi (L0 - Lmin) <= Lmin with
+    // L0 - Lmin >= L1 - Lmin, so Ls <= Lmin - xi (L1 - Lmin) (and the solid-length limit). Tangents of
+    // the convex ln(e^w + Qs) from below make each row implied by the true one.
+    const Lmin = shortestLength(req);
+    const room = Math.min(Lmin - req.clashAllowance * (req.workingLength - Lmin), req.maxSolidLength ?? Infinity);
+    if (!(room > 0)) return { value: null, status: 'infeasible', models };
+    const solidRoom = Math.log(room);
+    for (const n0 of coilPoints) {
+      const slope = n0 / (n0 + Qs);
+      rows.push({ coefficients: { u: 1, w: slope }, max: solidRoom - Math.log(n0 + Qs) + slope * Math.log(n0) });
+    }
     // Surge: f = c d / (D^2 Na) >= margin * forcing.
     if (req.forcingFrequency) {
       const c = (req.seating === 'fixed-free' ? 0.25 : 0.5) * Math.sqrt((4000 * Gmax) / (8 * Math.PI * Math.PI * rhoMin * 1e-9));
       rows.push({ coefficients: { u: 1, v: -2, w: -1 }, min: Math.log((req.safety.surge * req.forcingFrequency) / c) });
     }
     models++;
-    const r = minimiseLinear<V>(['u', 'v', 'w'], { u: 2, v: 1, w: 1 }, rows);
+    // Mass >= rho pi^2 d^2 D (Na + Q) / 4: minimise 2u + v + t.
+    const r = minimiseLinear<V>(['u', 'v', 'w', 't'], { u: 2, v: 1, t: 1 }, rows);
     if (r.status !== 'optimal') continue;
     const scale = (Math.PI * Math.PI) / 4 * (req.rank === 'mass' ? rhoMin * 1e-9 : 1);
     best = Math.min(best, scale * Math.exp(r.objective));

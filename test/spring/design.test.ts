@@ -78,6 +78,34 @@ describe('spring search invariants (property)', () => {
     }), { numRuns: 25, seed: 11 });
   });
 
+  it('the LP bound stays below the best spring across envelopes, end-type lists, rods, surge and solid limits', () => {
+    let compared = 0;
+    fc.assert(fc.property(reqArb, fc.record({
+      id: fc.option(fc.double({ min: 0.3, max: 0.8, noNaN: true })),
+      solid: fc.option(fc.double({ min: 0.3, max: 0.9, noNaN: true })),
+      forcing: fc.option(fc.double({ min: 5, max: 60, noNaN: true })),
+      allowable: fc.option(fc.double({ min: 300, max: 900, noNaN: true })),
+      ends: fc.subarray(['plain', 'plain-ground', 'squared', 'squared-ground'], { minLength: 1 }),
+      rank: fc.constantFrom('mass', 'wire_volume'),
+    }), (r, extra) => {
+      const doc = requirementsDoc(r);
+      const env = doc.envelope as Record<string, number>;
+      if (extra.id !== null) env.min_inner_diameter = r.od * extra.id * 0.5;
+      if (extra.solid !== null) env.max_solid_length = r.length * (1 - r.stroke) * extra.solid;
+      if (extra.forcing !== null) doc.forcing_frequency = extra.forcing;
+      if (extra.allowable !== null) doc.allowable_stress = extra.allowable;
+      doc.ends = extra.ends;
+      doc.rank = extra.rank;
+      const run = runDesign(readRequirements(doc, catalog), { strategy: 'grid' });
+      if (run.candidates.length && run.lp.value !== null) {
+        expect(run.lp.value).toBeLessThanOrEqual(run.candidates[0].objectives[0] * (1 + 1e-9));
+        compared++;
+      }
+      if (run.candidates.length) expect(run.lp.status).toBe('bound');
+    }), { numRuns: 60, seed: 5 });
+    expect(compared).toBeGreaterThan(10);
+  });
+
   it('tightening the bore never lowers the best mass', () => {
     fc.assert(fc.property(reqArb, fc.double({ min: 0.6, max: 0.98, noNaN: true }), (r, shrink) => {
       const wide = runDesign(readRequirements(requirementsDoc(r), catalog), { strategy: 'grid' });
