@@ -21,7 +21,7 @@ import { writeDesignReport } from '../report/html/designHtml.js';
 
 interface CommonOptions {
   json?: boolean; units?: UnitSystem; set?: string[]; strategy?: StrategyChoice; seed?: string; top?: string; rank?: string;
-  maxOd?: string; minId?: string; maxFreeLength?: string; maxSolidLength?: string; report?: string; force?: boolean; perWire?: boolean;
+  maxOd?: string; minId?: string; maxFreeLength?: string; maxSolidLength?: string; report?: string; force?: boolean; perWire?: boolean; timing?: boolean;
 }
 
 function collect(value: string, previous: string[] = []): string[] {
@@ -37,7 +37,8 @@ function addCommon(cmd: Command): Command {
     .option('--seed <n>', 'random seed for the genetic strategy (overrides the file)')
     .option('--top <n>', 'how many candidates to list (overrides the file)')
     .addOption(new Option('--rank <key>', 'ranking objective (overrides the file)').choices([...RANK_KEYS]))
-    .option('--per-wire', 'list the best spring of each material and wire size (overrides the file\'s best_per_wire)');
+    .option('--per-wire', 'list the best spring of each material and wire size (overrides the file\'s best_per_wire)')
+    .option('--timing', 'also report the search time (which makes the output differ from run to run)');
   for (const [flags, , path] of ENVELOPE_SHORTHANDS) cmd.option(flags, `shorthand for --set ${path}=<value>`);
   return cmd;
 }
@@ -80,8 +81,8 @@ function designCommand(file: string, opts: CommonOptions, io: Io): number {
     writeDesignReport(opts.report, run, system, !!opts.force);
     io.stderr(`coilfront: report written to ${opts.report}\n`);
   }
-  if (opts.json) io.stdout(toJson(designJson(run)) + '\n');
-  else io.stdout(designText(run, system));
+  if (opts.json) io.stdout(toJson(designJson(run, !!opts.timing)) + '\n');
+  else io.stdout(designText(run, system, !!opts.timing));
   if (run.candidates.length === 0) {
     if (opts.json) io.stderr('coilfront: no spring meets every requirement (see "infeasible" in the JSON)\n');
     return EXIT.infeasible;

@@ -63,7 +63,9 @@ export function requirementsRecord(req: Requirements): Record<string, unknown> {
   };
 }
 
-export function countsRecord(run: DesignRun): Record<string, unknown> {
+// Wall-clock figures break byte-for-byte reproducibility, so they appear only when asked for (--timing).
+
+export function countsRecord(run: DesignRun, showTiming = false): Record<string, unknown> {
   const cut: Record<string, number> = {};
   for (const c of reportedChecks(run.req)) cut[c] = run.result.cutBy[c];
   return {
@@ -76,15 +78,15 @@ export function countsRecord(run: DesignRun): Record<string, unknown> {
     lp_bound: run.lp.value,
     lp_status: run.lp.status,
     gap: run.gap,
-    search_ms: run.searchMs,
+    ...(showTiming ? { search_ms: run.searchMs } : {}),
   };
 }
 
-export function designJson(run: DesignRun): Record<string, unknown> {
+export function designJson(run: DesignRun, showTiming = false): Record<string, unknown> {
   return {
     units: SI_UNITS,
     requirements: requirementsRecord(run.req),
-    ...countsRecord(run),
+    ...countsRecord(run, showTiming),
     candidates: run.candidates.map(candidateRecord),
     ...(run.candidates.length === 0 ? { infeasible: infeasibleRecord(run) } : {}),
   };
@@ -162,10 +164,10 @@ export function candidateTable(cands: Candidate[], system: UnitSystem): string {
   return table(rows);
 }
 
-export function countsText(run: DesignRun, system: UnitSystem): string {
+export function countsText(run: DesignRun, system: UnitSystem, showTiming = false): string {
   const r = run.result;
   const lines: string[] = [];
-  lines.push(`Searched ${r.cells} combinations of material, wire, ends and coil count (${run.problem.stock.length} wire stock items) with the ${r.strategy} strategy: ${r.evaluations} candidate evaluations in ${sig(run.searchMs, 3)} ms.`);
+  lines.push(`Searched ${r.cells} combinations of material, wire, ends and coil count (${run.problem.stock.length} wire stock items) with the ${r.strategy} strategy: ${r.evaluations} candidate evaluations${showTiming ? ` in ${sig(run.searchMs, 3)} ms` : ''}.`);
   const skipped = run.req.bestPerWire ? 'could not beat the best found for its wire' : `could not enter the top ${run.req.top}`;
   lines.push(`Feasible combinations: ${r.feasibleCells}${r.prunedCells ? `; ${r.prunedCells} skipped because their lightest possible spring ${skipped}` : ''}.`);
   const cut = reportedChecks(run.req).filter((c) => r.cutBy[c] > 0).map((c) => [c, String(r.cutBy[c]), CHECK_LABELS[c as CheckName]]);
@@ -183,7 +185,7 @@ export function countsText(run: DesignRun, system: UnitSystem): string {
   return lines.join('\n');
 }
 
-export function designText(run: DesignRun, system: UnitSystem): string {
+export function designText(run: DesignRun, system: UnitSystem, showTiming = false): string {
   const out: string[] = [];
   const req = run.req;
   out.push(`Spring design: ${formatQuantity(req.workingForce, 'force', system)} at ${formatQuantity(req.workingLength, 'length', system)}` +
@@ -193,7 +195,7 @@ export function designText(run: DesignRun, system: UnitSystem): string {
   if (run.candidates.length) {
     out.push(candidateTable(run.candidates, system));
     out.push('');
-    out.push(countsText(run, system));
+    out.push(countsText(run, system, showTiming));
     const warn = rulesOfThumb(run.candidates[0].analysis, run.problem.service(), quantityWriter(system));
     if (warn.length) {
       out.push('');
