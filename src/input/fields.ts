@@ -81,7 +81,8 @@ export class Fields {
     if (typeof v !== 'string' || !(options as readonly string[]).includes(v)) {
       throw new InputError(this.name(key), `one of ${options.join(' | ')}`, v);
     }
-    return v as T;
+    // The option's own (interned) string: the hot loop compares end types by identity.
+    return options[(options as readonly string[]).indexOf(v)];
   }
 
   list(key: string): unknown[] | undefined {

@@ -107,7 +107,7 @@ export function readRequirements(raw: unknown, catalog: Catalog): Requirements {
   const ends: EndType[] = endsRaw === undefined || endsRaw === null ? [DEFAULTS.ends]
     : (Array.isArray(endsRaw) ? endsRaw : [endsRaw]).map((e, i) => {
       if (typeof e !== 'string' || !(END_TYPES as readonly string[]).includes(e)) throw new InputError(Array.isArray(endsRaw) ? `ends[${i}]` : 'ends', `one of ${END_TYPES.join(' | ')}`, e);
-      return e as EndType;
+      return END_TYPES[(END_TYPES as readonly string[]).indexOf(e)];
     });
 
   const load = Fields.of(f.require('load', 'the force at the working length: { force, length }'), 'load', system);
