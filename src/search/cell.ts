@@ -27,6 +27,13 @@ export interface CellWorkspace {
   maxScanPoints: number;
   /** Scan at this many times the variable's resolution (1 for the grid; coarser for a quick look). */
   scanCoarsening: number;
+  /** Scratch for the problem's bracket bounds. */
+  lower: Float64Array;
+  /** Cells proved infeasible by the bracket bounds, without a scan. */
+  boundedOut: number;
+  /** The worst increasing and decreasing constraint of the last evaluation. */
+  worstInc: number;
+  worstDec: number;
 }
 
 export function makeWorkspace(p: Problem, relativeTolerance = 1e-10): CellWorkspace {
@@ -42,7 +49,8 @@ export function makeWorkspace(p: Problem, relativeTolerance = 1e-10): CellWorksp
     g: new Float64Array(m), f: new Float64Array(p.objectiveNames.length), bounds: new Float64Array(2),
     evaluations: 0, cutBy: new Float64Array(m), soleViolation: new Float64Array(m).fill(Infinity),
     missX: new Float64Array(p.variables.length), missG: new Float64Array(m), missF: new Float64Array(p.objectiveNames.length), missViolation: Infinity,
-    incMask, decMask, relativeTolerance, maxScanPoints: Infinity, scanCoarsening: 1,
+    incMask, decMask, relativeTolerance, maxScanPoints: Infinity, scanCoarsening: 1, worstInc: -Infinity, worstDec: -Infinity,
+    lower: new Float64Array(m), boundedOut: 0,
   };
 }
 
@@ -51,12 +59,19 @@ function evaluateAt(p: Problem, x: Float64Array, ws: CellWorkspace): number {
   p.evaluate(x, ws.g, ws.f);
   ws.evaluations++;
   const g = ws.g;
+  const inc = ws.incMask;
   let total = 0;
   let count = 0;
   let sole = -1;
+  let wInc = -Infinity;
+  let wDec = -Infinity;
   for (let j = 0; j < g.length; j++) {
-    if (g[j] > EPS) { total += g[j]; count++; sole = j; }
+    const v = g[j];
+    if (v > EPS) { total += v; count++; sole = j; }
+    if (inc[j] === 1) { if (v > wInc) wInc = v; } else if (ws.decMask[j] === 1 && v > wDec) wDec = v;
   }
+  ws.worstInc = wInc;
+  ws.worstDec = wDec;
   if (count === 1 && g[sole] < ws.soleViolation[sole]) ws.soleViolation[sole] = g[sole];
   if (count > 0 && total < ws.missViolation) {
     ws.missViolation = total;
@@ -67,11 +82,6 @@ function evaluateAt(p: Problem, x: Float64Array, ws: CellWorkspace): number {
   return total;
 }
 
-function worst(g: Float64Array, mask: Uint8Array | null): number {
-  let w = -Infinity;
-  for (let j = 0; j < g.length; j++) if ((mask === null || mask[j] === 1) && g[j] > w) w = g[j];
-  return w;
-}
 
 function attributeCut(ws: CellWorkspace, g: Float64Array): void {
   let jw = 0;
@@ -89,7 +99,7 @@ function boundary(p: Problem, s: number, x: Float64Array, ws: CellWorkspace, a: 
     const m = 0.5 * (a + b);
     x[s] = m;
     evaluateAt(p, x, ws);
-    const bad = worst(ws.g, mask) > EPS;
+    const bad = (mask === ws.incMask ? ws.worstInc : ws.worstDec) > EPS;
     if (bad === badBelow) a = m; else b = m;
   }
   // The other (failing) end is left in ws.bounds for a later refinement.
@@ -153,23 +163,23 @@ export function solveCell(
   x[s] = lo;
   let total = evaluateAt(p, x, ws);
   if (prune !== null && p.objectiveTrend && p.objectiveTrend[0] === TREND.increasing && prune(ws.f)) return 'pruned';
-  if (worst(ws.g, ws.incMask) > EPS) return infeasibleCell(ws);
+  if (ws.worstInc > EPS) return infeasibleCell(ws);
   if (total === 0 && mode === CellMode.First && p.objectiveTrend && p.objectiveTrend[0] === TREND.increasing) return true;
   // Decreasing constraints tighten downwards: find the smallest value that meets them.
-  if (worst(ws.g, ws.decMask) > EPS) {
+  if (ws.worstDec > EPS) {
     x[s] = hi;
     evaluateAt(p, x, ws);
-    if (worst(ws.g, ws.decMask) > EPS) return infeasibleCell(ws);
+    if (ws.worstDec > EPS) return infeasibleCell(ws);
     lo = boundary(p, s, x, ws, lo, hi, ws.decMask, true, coarse);
     loBad = ws.bounds[0];
   }
   // And the largest value that still meets the increasing ones.
   x[s] = hi;
   evaluateAt(p, x, ws);
-  if (worst(ws.g, ws.incMask) > EPS) {
+  if (ws.worstInc > EPS) {
     x[s] = lo;
     evaluateAt(p, x, ws);
-    const w = worst(ws.g, ws.incMask);
+    const w = ws.worstInc;
     // A hair's breadth of violation: the feasible interval may be narrower than the coarse bracket, so
     // settle lo exactly and look again. Normalised checks move by a few units per unit of relative
     // change of the solved variable; a violation 100 times what the coarse step could undo is real.
@@ -179,8 +189,19 @@ export function solveCell(
       x[s] = lo;
       evaluateAt(p, x, ws);
     }
-    if (worst(ws.g, ws.incMask) > EPS) return infeasibleCell(ws);
+    if (ws.worstInc > EPS) return infeasibleCell(ws);
     hi = boundary(p, s, x, ws, lo, hi, ws.incMask, false, coarse);
+  }
+  // A bound may prove the whole bracket infeasible for a check of unknown trend: then no scan.
+  if (p.bracketBounds) {
+    ws.lower.fill(-Infinity);
+    p.bracketBounds(x, lo, hi, ws.lower);
+    for (let j = 0; j < ws.lower.length; j++) {
+      if (ws.lower[j] > EPS && ws.incMask[j] === 0 && ws.decMask[j] === 0) {
+        ws.boundedOut++;
+        return infeasibleCell(ws);
+      }
+    }
   }
   // Scan the bracket at the variable's resolution for the constraints of unknown trend.
   const resolution = v.resolution * ws.scanCoarsening;

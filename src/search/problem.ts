@@ -30,6 +30,10 @@ export interface Problem {
    * bound, never decreases (the mass of the thinnest coil grows with the coil count). When a cell is
    * pruned on that bound, the rest of this variable's values in the same branch are pruned with it. */
   readonly boundGrowsAlong?: number;
+  /** Optionally, lower bounds on the constraints of unknown trend over a whole bracket [lo, hi] of the
+   * solved variable (x holds the other values): written into out; -Infinity where there is none. A
+   * bound above zero proves the bracket infeasible without scanning it. */
+  bracketBounds?(x: Float64Array, lo: number, hi: number, out: Float64Array): void;
   /** Optionally narrow the solved variable's interval for the other values in x: write [lo, hi] into out. */
   solvedBounds?(x: Float64Array, out: Float64Array): void;
 }

@@ -155,6 +155,26 @@ export function buildSpringProblem(req: Requirements): SpringProblem {
       out[1] = Math.min(out[1], Cmax * d);
     },
 
+    // Over a bracket [lo, hi] of mean diameters the rate is at least k(hi), so every force is at least
+    // its value there, the lever arm at least lo and the curvature factor at least K(hi / d): the
+    // stresses cannot fall below that. One bound can rule out a whole bracket without scanning it.
+    bracketBounds(x, lo, hi, out) {
+      const i = x[0];
+      const e = x[1];
+      const Na = x[2];
+      const d = sd[i];
+      const kMin = springRate(sG[i], d, hi, Na, directShear);
+      const Kmin = wahl ? wahlFactor(hi / d) : bergstrasserFactor(hi / d);
+      const limit = sLimit[i];
+      out[9] = (shearStress(F1 + kMin * travel, lo, d, Kmin) * staticFactor - limit) / limit;
+      if (activeMask[10] === 1) {
+        // The solid force F1 + k (L1 - Ls) is least at the softest rate. (With L1 < Ls the coils would
+        // be solid before the working length: no bound is offered, the clash check rules that out.)
+        const room = L1 - solidLength(d, Na + endQ[e], ends[e]);
+        if (room >= 0) out[10] = (shearStress(F1 + kMin * room, lo, d, Kmin) - limit) / limit;
+      }
+    },
+
     evaluate(x, g, f) {
       const i = x[0];
       const e = x[1];

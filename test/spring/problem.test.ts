@@ -1,0 +1,79 @@
+// The spring problem's own promises to the engine (each check is a property, no outside values):
+// declared trends hold, and bracket bounds are true lower bounds.
+import fc from 'fast-check';
+import { describe, expect, it } from 'vitest';
+import { loadCatalog } from '../../src/catalogs/load.js';
+import { readRequirements } from '../../src/input/requirements.js';
+import { TREND, valueAt, valueCount } from '../../src/search/problem.js';
+import { CHECKS } from '../../src/spring/checks.js';
+import { buildSpringProblem } from '../../src/spring/problem.js';
+
+const catalog = loadCatalog();
+
+const problemArb = fc.record({
+  force: fc.double({ min: 5, max: 150, noNaN: true }),
+  length: fc.double({ min: 20, max: 80, noNaN: true }),
+  stroke: fc.double({ min: 0.1, max: 0.5, noNaN: true }),
+  rise: fc.option(fc.double({ min: 1.2, max: 2.5, noNaN: true })),
+  tolerance: fc.constantFrom(0.02, 0.1),
+  material: fc.constantFrom('music-wire', 'stainless-302', 'phosphor-bronze'),
+  ends: fc.constantFrom('squared-ground', 'plain'),
+  solidSafe: fc.boolean(),
+  cycles: fc.constantFrom(undefined, 1e6),
+}).map((r) => ({
+  units: 'si', material: r.material, ends: r.ends, load: { force: r.force, length: r.length }, operating_length: r.length * (1 - r.stroke),
+  ...(r.rise !== null ? { operating_force: r.force * r.rise, load_tolerance: r.tolerance } : {}),
+  envelope: { max_outer_diameter: 30, min_inner_diameter: 3, max_free_length: r.length * 3 }, solid_safe: r.solidSafe, forcing_frequency: 20,
+  ...(r.cycles ? { cycles: r.cycles } : {}),
+}));
+
+const build = (doc: Record<string, unknown>) => buildSpringProblem(readRequirements(doc, catalog));
+
+describe('spring problem', () => {
+  it('every check declared monotone in the mean diameter is monotone', () => {
+    fc.assert(fc.property(problemArb, fc.nat(), fc.nat(), (doc, a, b) => {
+      const p = build(doc);
+      const x = new Float64Array(4);
+      x[0] = valueAt(p.variables[0], a % valueCount(p.variables[0]));
+      x[1] = 0;
+      x[2] = valueAt(p.variables[2], b % valueCount(p.variables[2]));
+      const d = p.stock[x[0]].wireDiameter;
+      const g = new Float64Array(CHECKS.length);
+      const f = new Float64Array(p.objectiveNames.length);
+      let prev: Float64Array | null = null;
+      for (let c = 4; c <= 12; c += 0.25) {
+        x[3] = c * d;
+        p.evaluate(x, g, f);
+        if (prev) {
+          CHECKS.forEach((_, j) => {
+            if (g[j] === -1 || prev![j] === -1) return;
+            if (p.constraintTrend![j] === TREND.increasing) expect(g[j]).toBeGreaterThanOrEqual(prev![j] - 1e-12);
+            if (p.constraintTrend![j] === TREND.decreasing) expect(g[j]).toBeLessThanOrEqual(prev![j] + 1e-12);
+          });
+        }
+        prev = Float64Array.from(g);
+      }
+    }), { numRuns: 60, seed: 2 });
+  });
+
+  it('bracket bounds never exceed the checks anywhere in the bracket', () => {
+    fc.assert(fc.property(problemArb, fc.nat(), fc.nat(), fc.double({ min: 4, max: 11, noNaN: true }), fc.double({ min: 0.01, max: 1, noNaN: true }), (doc, a, b, c0, w) => {
+      const p = build(doc);
+      const x = new Float64Array(4);
+      x[0] = valueAt(p.variables[0], a % valueCount(p.variables[0]));
+      x[2] = valueAt(p.variables[2], b % valueCount(p.variables[2]));
+      const d = p.stock[x[0]].wireDiameter;
+      const lo = c0 * d;
+      const hi = lo * (1 + w);
+      const lower = new Float64Array(CHECKS.length).fill(-Infinity);
+      p.bracketBounds!(x, lo, hi, lower);
+      const g = new Float64Array(CHECKS.length);
+      const f = new Float64Array(p.objectiveNames.length);
+      for (let t = 0; t <= 20; t++) {
+        x[3] = lo + ((hi - lo) * t) / 20;
+        p.evaluate(x, g, f);
+        CHECKS.forEach((_, j) => { if (g[j] !== -1) expect(lower[j]).toBeLessThanOrEqual(g[j] + 1e-12); });
+      }
+    }), { numRuns: 80, seed: 4 });
+  });
+});
