@@ -60,7 +60,12 @@ export function wireVolume(wireDiameter: number, meanDiameter: number, totalCoil
   return (Math.PI * Math.PI * wireDiameter * wireDiameter * meanDiameter * totalCoils) / 4;
 }
 
-/** Mass in kg from wire volume (mm^3) and density (kg/m^3). */
+/** Mass in kg of a wire volume (mm^3) at a density (kg/m^3). */
+export function massOfVolume(volume: number, density: number): number {
+  return volume * 1e-9 * density;
+}
+
+/** Mass in kg from the coil's dimensions and density (kg/m^3). */
 export function springMass(wireDiameter: number, meanDiameter: number, totalCoils: number, density: number): number {
-  return wireVolume(wireDiameter, meanDiameter, totalCoils) * 1e-9 * density;
+  return massOfVolume(wireVolume(wireDiameter, meanDiameter, totalCoils), density);
 }

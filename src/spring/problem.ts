@@ -9,7 +9,7 @@ import type { MaterialFigures, ServiceConditions, SpringGeometry } from '../mode
 import { bucklingConstant1, bucklingConstant2, criticalDeflectionFrom, endConditionConstant } from '../model/buckling.js';
 import { minimumGapSum, solidOuterDiameter } from '../model/clash.js';
 import { INFINITE_LIFE_CYCLES, fatigueSafetyFactorFrom, finiteLifePoint, fullyReversedEndurance, repeatedStressFraction, zimmerliPoint, type EndurancePoint } from '../model/fatigue.js';
-import { inactiveCoils, pitch, solidLength, springMass, wireVolume, type EndType } from '../model/geometry.js';
+import { inactiveCoils, massOfVolume, pitch, solidLength, wireVolume, type EndType } from '../model/geometry.js';
 import { springRate } from '../model/rate.js';
 import { shearStress } from '../model/stress.js';
 import { bergstrasserFactor, wahlFactor } from '../model/stressFactor.js';
@@ -107,6 +107,16 @@ export function buildSpringProblem(req: Requirements): SpringProblem {
   const Lsmax = req.maxSolidLength ?? Infinity;
   const xi = req.clashAllowance;
   const nfTarget = req.safety.fatigue;
+  const invCmin = 1 / Cmin;
+  const invCmax = 1 / Cmax;
+  const invODmax = 1 / ODmax;
+  const invIDmin = 1 / IDmin;
+  const invL0max = 1 / L0max;
+  const invLsmax = 1 / Lsmax;
+  const invLmin = 1 / Lmin;
+  const invF2req = 1 / F2req;
+  const invNfTarget = 1 / nfTarget;
+  const sInvLimit = Float64Array.from(sLimit, (v) => 1 / v);
   const temperature = req.temperature ?? -Infinity;
   const rankObjective = OBJ[req.rank === 'safety_factor' ? 'neg_safety_factor' : req.rank];
   const criterion = req.criterion;
@@ -193,28 +203,30 @@ export function buildSpringProblem(req: Requirements): SpringProblem {
       const tauMax = shearStress(F2, D, d, K);
 
       // Checks that do not apply stay at -1 and cost nothing.
-      g[0] = (Cmin - C) / Cmin;
-      g[1] = (C - Cmax) / Cmax;
-      g[2] = activeMask[2] === 1 ? (D + d - ODmax) / ODmax : -1;
-      g[3] = activeMask[3] === 1 ? (IDmin - (D - d)) / IDmin : -1;
-      g[4] = activeMask[4] === 1 ? (L0 - L0max) / L0max : -1;
-      g[5] = activeMask[5] === 1 ? (Ls - Lsmax) / Lsmax : -1;
-      g[6] = (Ls + xi * (L0 - Lmin) - Lmin) / Lmin;
+      // Normalised by the limit; reciprocals are held outside the loop (a multiply is cheaper).
+      g[0] = (Cmin - C) * invCmin;
+      g[1] = (C - Cmax) * invCmax;
+      g[2] = activeMask[2] === 1 ? (D + d - ODmax) * invODmax : -1;
+      g[3] = activeMask[3] === 1 ? (IDmin - (D - d)) * invIDmin : -1;
+      g[4] = activeMask[4] === 1 ? (L0 - L0max) * invL0max : -1;
+      g[5] = activeMask[5] === 1 ? (Ls - Lsmax) * invLsmax : -1;
+      g[6] = (Ls + xi * (L0 - Lmin) - Lmin) * invLmin;
       if (activeMask[7] === 1) {
         const minGap = minimumGapSum(D, d, Na);
         g[7] = (minGap - (Lmin - Ls)) / minGap;
       } else g[7] = -1;
-      g[8] = activeMask[8] === 1 ? (solidOuterDiameter(D, d, pitch(L0, Na, d, endType)) - ODmax) / ODmax : -1;
+      g[8] = activeMask[8] === 1 ? (solidOuterDiameter(D, d, pitch(L0, Na, d, endType)) - ODmax) * invODmax : -1;
       const staticSafety = limit / tauMax;
-      g[9] = (tauMax * staticFactor - limit) / limit;
-      g[10] = activeMask[10] === 1 ? (shearStress(k * (L0 - Ls), D, d, K) - limit) / limit : -1;
+      const invLimit = sInvLimit[i];
+      g[9] = (tauMax * staticFactor - limit) * invLimit;
+      g[10] = activeMask[10] === 1 ? (shearStress(k * (L0 - Ls), D, d, K) - limit) * invLimit : -1;
       let fatigueSafety = NaN;
       if (activeMask[11] === 1) {
         const tauMin = shearStress(F1, D, d, K);
         const alt = 0.5 * (tauMax - tauMin);
         const mean = 0.5 * (tauMax + tauMin);
         fatigueSafety = fatigueSafetyFactorFrom(alt, mean, sPoint[i], sSsu[i], sSse[i], criterion);
-        g[11] = (nfTarget - fatigueSafety) / nfTarget;
+        g[11] = (nfTarget - fatigueSafety) * invNfTarget;
       } else g[11] = -1;
       if (activeMask[12] === 1) {
         const ymax = L0 - Lmin;
@@ -223,14 +235,15 @@ export function buildSpringProblem(req: Requirements): SpringProblem {
       } else g[12] = -1;
       g[13] = surgeNeed > 0 ? (surgeNeed - surgeFrequency(k, activeCoilMass(d, D, Na, sRho[i]), oneEndFree)) / surgeNeed : -1;
       if (activeMask[14] === 1) {
-        g[14] = (F2req * (1 - tol) - F2) / F2req;
-        g[15] = (F2 - F2req * (1 + tol)) / F2req;
+        g[14] = (F2req * (1 - tol) - F2) * invF2req;
+        g[15] = (F2 - F2req * (1 + tol)) * invF2req;
       } else { g[14] = -1; g[15] = -1; }
       g[16] = activeMask[16] === 1 ? (temperature - sTmax[i]) / Math.max(Math.abs(sTmax[i]), 1) : -1;
 
-      const mass = springMass(d, D, Nt, sRho[i]);
+      const volume = wireVolume(d, D, Nt);
+      const mass = massOfVolume(volume, sRho[i]);
       f[1] = mass;
-      f[2] = wireVolume(d, D, Nt);
+      f[2] = volume;
       f[3] = D + d;
       f[4] = L0;
       const sf = fatigueSafety === fatigueSafety && fatigueSafety < staticSafety ? fatigueSafety : staticSafety;
