@@ -54,8 +54,8 @@ function rawWithOverrides(file: string, opts: CommonOptions): unknown {
     const { path, value } = parseAssignment(s);
     doc = withValue(doc, path, value);
   }
-  if (opts.seed !== undefined) doc = withValue(doc, ['seed'], Number(opts.seed));
-  if (opts.top !== undefined) doc = withValue(doc, ['top'], Number(opts.top));
+  if (opts.seed !== undefined) doc = withValue(doc, ['seed'], opts.seed);
+  if (opts.top !== undefined) doc = withValue(doc, ['top'], opts.top);
   if (opts.rank !== undefined) doc = withValue(doc, ['rank'], opts.rank);
   if (opts.perWire) doc = withValue(doc, ['best_per_wire'], true);
   return doc;
