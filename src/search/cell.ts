@@ -118,6 +118,19 @@ function refineLow(p: Problem, s: number, x: Float64Array, ws: CellWorkspace, ba
   evaluateAt(p, x, ws);
 }
 
+/** True when the problem's bracket bounds prove [lo, hi] infeasible for a check of unknown trend. */
+function boundedOut(p: Problem, x: Float64Array, lo: number, hi: number, ws: CellWorkspace): boolean {
+  ws.lower.fill(-Infinity);
+  p.bracketBounds!(x, lo, hi, ws.lower);
+  for (let j = 0; j < ws.lower.length; j++) {
+    if (ws.lower[j] > EPS && ws.incMask[j] === 0 && ws.decMask[j] === 0) {
+      ws.boundedOut++;
+      return true;
+    }
+  }
+  return false;
+}
+
 function infeasibleCell(ws: CellWorkspace): false {
   attributeCut(ws, ws.missG);
   return false;
@@ -165,6 +178,8 @@ export function solveCell(
   if (prune !== null && p.objectiveTrend && p.objectiveTrend[0] === TREND.increasing && prune(ws.f)) return 'pruned';
   if (ws.worstInc > EPS) return infeasibleCell(ws);
   if (total === 0 && mode === CellMode.First && p.objectiveTrend && p.objectiveTrend[0] === TREND.increasing) return true;
+  // The same bound over the whole interval often settles a hopeless cell before any bisection.
+  if (p.bracketBounds && boundedOut(p, x, lo, hi, ws)) return infeasibleCell(ws);
   // Decreasing constraints tighten downwards: find the smallest value that meets them.
   if (ws.worstDec > EPS) {
     x[s] = hi;
@@ -193,16 +208,7 @@ export function solveCell(
     hi = boundary(p, s, x, ws, lo, hi, ws.incMask, false, coarse);
   }
   // A bound may prove the whole bracket infeasible for a check of unknown trend: then no scan.
-  if (p.bracketBounds) {
-    ws.lower.fill(-Infinity);
-    p.bracketBounds(x, lo, hi, ws.lower);
-    for (let j = 0; j < ws.lower.length; j++) {
-      if (ws.lower[j] > EPS && ws.incMask[j] === 0 && ws.decMask[j] === 0) {
-        ws.boundedOut++;
-        return infeasibleCell(ws);
-      }
-    }
-  }
+  if (p.bracketBounds && boundedOut(p, x, lo, hi, ws)) return infeasibleCell(ws);
   // Scan the bracket at the variable's resolution for the constraints of unknown trend.
   const resolution = v.resolution * ws.scanCoarsening;
   const step = mode === CellMode.All ? Math.max(resolution, (hi - lo) / ws.maxScanPoints) : resolution;
