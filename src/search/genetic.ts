@@ -52,7 +52,7 @@ export function geneticSearch(p: Problem, opts: GeneticOptions): SearchResult {
   const misses = new NearestMisses(5);
   const counts = { cells: 0, feasible: 0, pruned: 0 };
   const popSize = opts.populationSize ?? 12;
-  const stall = opts.stallGenerations ?? 80;
+  const stall = opts.stallGenerations ?? 30;
   const sizes = p.variables.map((v) => (v.kind === 'continuous' ? 0 : valueCount(v)));
   const discreteOnly = discreteGenes;
   const memo = new Map<number, { f: number; violation: number; x: Float64Array }>();
@@ -183,8 +183,8 @@ export function geneticSearch(p: Problem, opts: GeneticOptions): SearchResult {
 
   const rate = 1.5 / Math.max(1, n - (s >= 0 ? 1 : 0));
   // Generations until they stall, a hill-climb from the best, then a restart around the best with a
-  // fresh random population while 70% of the budget lasts; the last hill-climb may use the rest.
-  const evolveBudget = 0.7 * opts.maxEvaluations;
+  // fresh random population while half of the budget lasts; the last hill-climb may use the rest.
+  const evolveBudget = 0.5 * opts.maxEvaluations;
   let pop: Individual[] = [];
   for (let i = 0; i < popSize; i++) pop.push(assess(randomGenes()));
   let best = pop.reduce((a, b) => (better(b, a) ? b : a));
