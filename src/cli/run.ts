@@ -7,6 +7,7 @@ import { unitsOption } from './options.js';
 import { CatalogError } from '../catalogs/load.js';
 import { InputError } from '../units/parse.js';
 import { analyzeCommand } from './analyze.js';
+import { materialsCommand } from './materials.js';
 import { CliExit, EXIT, type Io } from './io.js';
 import { registerSearchCommands } from './searchCommands.js';
 
@@ -41,6 +42,13 @@ export function buildProgram(io: Io, setCode: (c: number) => void): Command {
     .option('--report <file.html>', 'also write a self-contained HTML report')
     .option('--force', 'overwrite an existing report file')
     .action((file: string, opts) => setCode(analyzeCommand(file, opts, io)));
+
+  program
+    .command('materials')
+    .description('list the catalog materials and wire-size series, with their sources')
+    .option('--json', 'machine-readable output (SI units)')
+    .addOption(unitsOption())
+    .action((opts) => setCode(materialsCommand(opts, io)));
 
   registerSearchCommands(program, io, setCode);
   return program;

@@ -61,4 +61,14 @@ describe('coilfront program', () => {
     expect(r.stdout).toMatch(/forces lbf/);
     expect(r.stdout).toMatch(/tau max psi/);
   });
+
+  it('materials lists every catalog material and series with its source; JSON carries every source', async () => {
+    const r = await cli('materials');
+    expect(r.code).toBe(0);
+    for (const id of ['music-wire', 'stainless-302', 'en10270-1-dm', 'steel-wire-gauge']) expect(r.stdout).toContain(id);
+    const j = JSON.parse((await cli('materials', '--json')).stdout);
+    expect(j.materials.length).toBeGreaterThanOrEqual(10);
+    for (const m of j.materials) for (const src of Object.values(m.sources)) expect(String(src).length).toBeGreaterThan(3);
+    expect(j.wire_series.every((s: { source: string }) => s.source.length > 3)).toBe(true);
+  });
 });
