@@ -25,6 +25,7 @@ export interface GeneticOptions {
   searchTolerance?: number;
   /** Scan step while searching, in multiples of the solved variable's resolution (default 4 with discrete genes only). */
   scanCoarsening?: number;
+
 }
 
 interface Individual { genes: Float64Array; f: number; violation: number; x: Float64Array }
@@ -60,6 +61,7 @@ export function geneticSearch(p: Problem, opts: GeneticOptions): SearchResult {
   const fineWs = makeWorkspace(p);
   let cw = ws;
   let cm = memo;
+  const fineMemo = new Map<number, { f: number; violation: number; x: Float64Array }>();
   const spent = () => ws.evaluations + fineWs.evaluations;
   const increasing = p.objectiveTrend !== undefined && p.objectiveTrend[0] === TREND.increasing;
   const x = new Float64Array(n);
@@ -182,19 +184,24 @@ export function geneticSearch(p: Problem, opts: GeneticOptions): SearchResult {
   };
 
   const rate = 1.5 / Math.max(1, n - (s >= 0 ? 1 : 0));
-  // Generations until they stall, a hill-climb from the best, then a restart around the best with a
-  // fresh random population while half of the budget lasts; the last hill-climb may use the rest.
-  const evolveBudget = 0.5 * opts.maxEvaluations;
+  // Rounds until the budget is spent: generations on coarse cells until they stall, then a hill-climb
+  // from the best judged at full precision (the best combination may be feasible only in a sliver of
+  // diameters that the coarse scan stepped over), then a restart around the best with fresh random
+  // individuals. Half the budget at most goes to a round's generations before its hill-climb.
+  const fineClimb = s >= 0 && discreteGenes;
   let pop: Individual[] = [];
-  for (let i = 0; i < popSize; i++) pop.push(assess(randomGenes()));
+  while (pop.length < popSize) pop.push(assess(randomGenes()));
   let best = pop.reduce((a, b) => (better(b, a) ? b : a));
-  for (let restart = 0; restart < 50; restart++) {
+  for (let round = 0; round < 10_000 && spent() < opts.maxEvaluations; round++) {
     const cellsBefore = counts.cells;
+    const roundEnd = spent() + 0.5 * (opts.maxEvaluations - spent());
     let sinceBetter = 0;
-    while (ws.evaluations < evolveBudget && sinceBetter < stall) {
+    cw = ws;
+    cm = memo;
+    while (spent() < roundEnd && sinceBetter < stall) {
       pop.sort((a, b) => (better(a, b) ? -1 : better(b, a) ? 1 : 0));
       const next: Individual[] = [pop[0], pop[1]];
-      while (next.length < popSize && ws.evaluations < evolveBudget) {
+      while (next.length < popSize && spent() < roundEnd) {
         const pa = tournament(pop);
         const pb = tournament(pop);
         const child = new Float64Array(n);
@@ -216,20 +223,19 @@ export function geneticSearch(p: Problem, opts: GeneticOptions): SearchResult {
       const genBest = pop.reduce((a, b) => (better(b, a) ? b : a));
       if (better(genBest, best)) { best = genBest; sinceBetter = 0; } else sinceBetter++;
     }
-    best = hillClimb(best, evolveBudget);
-    // Stop when the budget is spent or a whole round met no combination it had not seen.
-    if (ws.evaluations >= evolveBudget || counts.cells === cellsBefore) break;
+    if (fineClimb) {
+      cw = fineWs;
+      cm = fineMemo;
+      bestFeasible = Infinity;
+      best = hillClimb(assess(Float64Array.from(best.genes)), opts.maxEvaluations);
+    } else best = hillClimb(best, opts.maxEvaluations);
+    // A whole round that met no combination it had not seen means the space is exhausted.
+    if (counts.cells === cellsBefore) break;
     pop = [best];
-    for (let i = 1; i < popSize; i++) pop.push(assess(randomGenes()));
+    cw = ws;
+    cm = memo;
+    while (pop.length < popSize) pop.push(assess(randomGenes()));
   }
-  // The closing hill-climb judges cells at full precision: the best combination may be feasible only
-  // in a sliver of diameters that the coarse scan stepped over.
-  if (s >= 0 && discreteGenes) {
-    cw = fineWs;
-    cm = new Map();
-    bestFeasible = Infinity;
-    best = hillClimb(assess(Float64Array.from(best.genes)), opts.maxEvaluations);
-  } else best = hillClimb(best, opts.maxEvaluations);
   ws.evaluations += fineWs.evaluations;
   if (s < 0) return packResult('genetic', p, top, null, ws, counts, misses);
   // Solve the reported cells again at the grid's tolerance.
