@@ -169,7 +169,7 @@ export function solveCell(
   const tol = ws.relativeTolerance * Math.max(Math.abs(lo), Math.abs(hi), 1e-12);
   // Bracket first to a fraction of the scan step; only the end that turns out to be the answer is
   // then refined to full precision (most cells fail elsewhere, and this halves their cost).
-  const coarse = Math.max(tol, (v.resolution * ws.scanCoarsening) / 64);
+  const coarse = Math.max(tol, (v.resolution * ws.scanCoarsening) / 4);
   let loBad = NaN;
 
   // Increasing constraints only get worse upwards: if violated at lo, the cell is lost.
