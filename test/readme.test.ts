@@ -17,6 +17,16 @@ describe('README', () => {
     expect(pkg.scripts.demo).toContain('design examples/washer-trigger.yaml');
   });
 
+  it('the demo script\'s commands all run and succeed', async () => {
+    const steps = pkg.scripts.demo.split('&&').map((c) => c.trim().replace(/^node dist\/src\/cli\/main\.js\s+/, '').split(/\s+/));
+    expect(steps.length).toBeGreaterThanOrEqual(2);
+    for (const args of steps) {
+      const r = await cli(...args);
+      expect(r.code, args.join(' ')).toBe(0);
+      expect(r.stdout).toMatch(/Cautions:/);
+    }
+  });
+
   it('shows demo output that the demo really prints', async () => {
     const section = readme.slice(readme.indexOf('## The demo'));
     const block = section.slice(section.indexOf('```\n') + 4, section.indexOf('\n```', section.indexOf('```\n') + 4));
