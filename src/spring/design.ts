@@ -54,6 +54,13 @@ export function candidateAt(problem: SpringProblem, x: ArrayLike<number>, object
   return { item, geometry, analysis, checks: checkAnalysis(analysis, problem.req), objectives };
 }
 
+/** Every reported spring is judged again by the full single-spring analysis; a disagreement is a
+ * defect of ours, and no spring that fails it is ever printed. */
+export function assertVerified(c: Candidate): void {
+  const worst = Math.max(...c.checks);
+  if (worst > 1e-6) throw new Error(`a reported spring failed re-verification (${CHECKS[c.checks.indexOf(worst)]} by ${worst.toExponential(2)}); please report this`);
+}
+
 export const AUTO_GRID_CELL_LIMIT = 2_000_000;
 
 export function runDesign(req: Requirements, opts: DesignOptions = {}): DesignRun {
@@ -69,12 +76,7 @@ export function runDesign(req: Requirements, opts: DesignOptions = {}): DesignRu
       : geneticSearch(problem, { seed: req.seed, maxEvaluations: opts.maxEvaluations ?? 2_000_000, top: req.top });
   const searchMs = performance.now() - t0;
   const candidates = result.best.map((b) => candidateAt(problem, b.x, b.f));
-  // Every reported spring is judged again by the full single-spring analysis; a disagreement is a
-  // defect of ours, and no spring that fails it is ever printed.
-  for (const c of candidates) {
-    const worst = Math.max(...c.checks);
-    if (worst > 1e-6) throw new Error(`a reported spring failed re-verification (${CHECKS[c.checks.indexOf(worst)]} by ${worst.toExponential(2)}); please report this`);
-  }
+  candidates.forEach(assertVerified);
   const lp = lpLowerBound(problem);
   const bestValue = candidates.length ? (req.rank === 'mass' ? candidates[0].objectives[OBJ.mass] : candidates[0].objectives[OBJ.wire_volume]) : NaN;
   const gap = lp.value !== null && Number.isFinite(bestValue) ? (bestValue - lp.value) / bestValue : null;

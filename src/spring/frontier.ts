@@ -3,7 +3,7 @@
 import type { Requirements } from '../input/requirements.js';
 import { paretoFront2 } from '../search/pareto.js';
 import { geneticFront } from '../search/geneticFront.js';
-import { AUTO_GRID_CELL_LIMIT, candidateAt, cellCount, runDesign, type Candidate, type DesignRun, type StrategyChoice } from './design.js';
+import { AUTO_GRID_CELL_LIMIT, assertVerified, candidateAt, cellCount, runDesign, type Candidate, type DesignRun, type StrategyChoice } from './design.js';
 import { OBJ, buildSpringProblem } from './problem.js';
 
 export const FRONTIER_KEYS = {
@@ -38,6 +38,7 @@ export function computeFrontier(req: Requirements, x: FrontierKey, y: FrontierKe
     ys[i] = f[FRONTIER_KEYS[y].objective];
   }
   const front = paretoFront2(xs, ys).map((i) => candidateAt(run.problem, cloudBuf.x(i), Float64Array.from(cloudBuf.f(i))));
+  front.forEach(assertVerified);
   const cloud = Array.from(xs, (v, i) => ({ x: FRONTIER_KEYS[x].sign * v, y: FRONTIER_KEYS[y].sign * ys[i] }));
   return { run, x, y, strategy: 'grid', cloud, front };
 }
@@ -49,6 +50,7 @@ function geneticFrontier(req: Requirements, x: FrontierKey, y: FrontierKey): Fro
   const oy = FRONTIER_KEYS[y].objective;
   const r = geneticFront(run.problem, { seed: req.seed, objectives: [ox, oy], maxEvaluations: 1_000_000 });
   const front = paretoFront2(r.points.map((p) => p.f[ox]), r.points.map((p) => p.f[oy])).map((i) => candidateAt(run.problem, r.points[i].x, r.points[i].f));
+  front.forEach(assertVerified);
   const cloud = r.cloud.map((p) => ({ x: FRONTIER_KEYS[x].sign * p.f[ox], y: FRONTIER_KEYS[y].sign * p.f[oy] }));
   return { run, x, y, strategy: 'genetic', cloud, front };
 }
