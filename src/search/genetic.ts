@@ -55,9 +55,8 @@ export function geneticSearch(p: Problem, opts: GeneticOptions): SearchResult {
   const popSize = opts.populationSize ?? 12;
   const stall = opts.stallGenerations ?? 30;
   const sizes = p.variables.map((v) => (v.kind === 'continuous' ? 0 : valueCount(v)));
-  const discreteOnly = discreteGenes;
   const memo = new Map<number, { f: number; violation: number; x: Float64Array }>();
-  // The workspace and memo in use: coarse while searching, fine for the closing hill-climb.
+  // The workspace and memo in use: coarse for the generations, fine for each round's hill-climb.
   const fineWs = makeWorkspace(p);
   let cw = ws;
   let cm = memo;
@@ -89,7 +88,7 @@ export function geneticSearch(p: Problem, opts: GeneticOptions): SearchResult {
   };
 
   const assess = (genes: Float64Array): Individual => {
-    const k = discreteOnly ? key(genes) : -1;
+    const k = discreteGenes ? key(genes) : -1;
     const known = k >= 0 ? cm.get(k) : undefined;
     if (known) return { genes, f: known.f, violation: known.violation, x: known.x };
     decode(genes);
