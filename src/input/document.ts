@@ -2,8 +2,6 @@
 import { readFileSync } from 'node:fs';
 import { parseDocument } from 'yaml';
 import { InputError } from '../units/parse.js';
-import type { UnitSystem } from '../units/systems.js';
-import { Fields } from './fields.js';
 
 export function readInputFile(path: string): unknown {
   let text: string;
@@ -33,8 +31,4 @@ export function parseText(text: string, label: string): unknown {
     throw new InputError(`${label}${where}`, what, e.message.split('\n')[0].replace(/ at line \d+, column \d+.*$/, ''));
   }
   return doc.toJS();
-}
-
-export function unitSystemOf(f: Fields): UnitSystem {
-  return f.choice('units', ['si', 'us'] as const) ?? 'si';
 }

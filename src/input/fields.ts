@@ -20,6 +20,14 @@ export class Fields {
     return new Fields(raw, path, system);
   }
 
+  /** A whole input file: its `units` field (si | us, default si) sets how plain numbers are read. */
+  static document(raw: unknown): Fields {
+    const system = Fields.of(raw, '', 'si').choice('units', ['si', 'us'] as const) ?? 'si';
+    const f = Fields.of(raw, '', system);
+    f.get('units');
+    return f;
+  }
+
   name(key: string): string {
     return this.path ? `${this.path}.${key}` : key;
   }

@@ -85,9 +85,8 @@ function pair(f: Fields, key: string, fallback: [number, number], rule: { positi
 }
 
 export function readRequirements(raw: unknown, catalog: Catalog): Requirements {
-  const system = Fields.of(raw, '', 'si').choice('units', ['si', 'us'] as const) ?? 'si';
-  const f = Fields.of(raw, '', system);
-  f.get('units');
+  const f = Fields.document(raw);
+  const system = f.system;
 
   // Materials: an id, a list of ids, a family, any, or an override object.
   const rawMaterial = f.require('material', `a material id, a list of ids, { family: ${FAMILIES.join(' | ')} }, "any", or { like: <id>, ... }`);

@@ -29,9 +29,8 @@ export function parseCycles(raw: unknown, field: string): number | undefined {
 }
 
 export function readSpringCase(raw: unknown, catalog: Catalog): SpringCase {
-  const system = Fields.of(raw, '', 'si').choice('units', ['si', 'us'] as const) ?? 'si';
-  const f = Fields.of(raw, '', system);
-  f.get('units');
+  const f = Fields.document(raw);
+  const system = f.system;
   const choice = parseMaterialChoice(f.require('material', 'a material id or { like: <id>, ... }'), system, catalog, 'material');
   const d = f.requiredQuantity('wire_diameter', 'length', { positive: true });
   const which = f.exactlyOne(['mean_diameter', 'outer_diameter', 'inner_diameter']);

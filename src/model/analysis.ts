@@ -3,8 +3,8 @@
 import { endConditionConstant, criticalDeflection, stableFreeLengthLimit, type Seating } from './buckling.js';
 import { fractionalOverrun, minimumGapSum, solidOuterDiameter } from './clash.js';
 import {
-  INFINITE_LIFE_CYCLES, STATIC_SERVICE_CYCLES, alternatingStrength, cycleStresses, fatigueSafetyFactor,
-  finiteLifePoint, repeatedStressFraction, zimmerliPoint, type EndurancePoint, type FatigueCriterion, type FiniteLifeTable,
+  INFINITE_LIFE_CYCLES, STATIC_SERVICE_CYCLES, alternatingStrength, cycleStresses, endurancePoint, fatigueSafetyFactor,
+  type EndurancePoint, type FatigueCriterion, type FiniteLifeTable,
 } from './fatigue.js';
 import { helixAngle, inactiveCoils, pitch, solidLength, springMass, wireLength, wireVolume, type EndType } from './geometry.js';
 import { springRate } from './rate.js';
@@ -123,15 +123,7 @@ export function analyzeSpring(g: SpringGeometry, m: MaterialFigures, s: ServiceC
   if (s.cycles !== undefined && s.cycles >= STATIC_SERVICE_CYCLES && points.length >= 1) {
     const infinite = s.cycles >= INFINITE_LIFE_CYCLES;
     const cyc = cycleStresses(shearStress(minForce, D, d, K), shearStress(maxForce, D, d, K));
-    let endurance: EndurancePoint;
-    let enduranceSource: FatigueResult['enduranceSource'];
-    if (infinite && m.zimmerli) {
-      endurance = zimmerliPoint(s.peened);
-      enduranceSource = 'zimmerli';
-    } else {
-      endurance = finiteLifePoint(m.tensileStrength, repeatedStressFraction(m.finiteLife, Math.min(s.cycles, INFINITE_LIFE_CYCLES), s.peened));
-      enduranceSource = 'finite-life-table';
-    }
+    const { point: endurance, source: enduranceSource } = endurancePoint(s.cycles, s.peened, m.zimmerli, m.finiteLife, m.tensileStrength);
     const slope = cyc.mean > 0 ? cyc.alternating / cyc.mean : Infinity;
     fatigue = {
       life: infinite ? 'infinite' : 'finite',

@@ -86,3 +86,13 @@ export function fatigueSafetyFactorFrom(alternating: number, mean: number, point
   const slope = mean > 0 ? alternating / mean : Infinity;
   return alternatingStrengthFrom(slope, point, ultimateShear, sse, criterion) / alternating;
 }
+
+/**
+ * The endurance point for a service life: Zimmerli's for infinite life in steels, otherwise the
+ * repeated-stress strength of the finite-life table at min(cycles, 1e7).
+ */
+export function endurancePoint(cycles: number, peened: boolean, zimmerli: boolean, table: FiniteLifeTable, tensileStrength: number): { point: EndurancePoint; source: 'zimmerli' | 'finite-life-table' } {
+  if (cycles >= INFINITE_LIFE_CYCLES && zimmerli) return { point: zimmerliPoint(peened), source: 'zimmerli' };
+  const fraction = repeatedStressFraction(table, Math.min(cycles, INFINITE_LIFE_CYCLES), peened);
+  return { point: finiteLifePoint(tensileStrength, fraction), source: 'finite-life-table' };
+}

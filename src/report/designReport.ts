@@ -143,25 +143,31 @@ function failing(c: Candidate): Record<string, number> {
 
 const num = (v: number, kind: Kind, system: UnitSystem, digits = 4) => sig(inUnit(v, kind, system), digits);
 
-export function candidateTable(cands: Candidate[], system: UnitSystem): string {
+/** The ranked-candidate columns, shared by the terminal table and the HTML report. */
+export function candidateGrid(cands: Candidate[], system: UnitSystem): { header: string[]; rows: string[][] } {
   const u = (k: Kind) => unitSymbol(k, system);
-  const rows: string[][] = [[
+  const header = [
     '#', 'material', `d ${u('length')}`, `D ${u('length')}`, `OD ${u('length')}`, `ID ${u('length')}`, 'Na', 'Nt', 'ends',
     `L0 ${u('length')}`, `Ls ${u('length')}`, `k ${u('rate')}`, `forces ${u('force')}`, `tau max ${u('stress')}`, 'SF static', 'SF fatigue', `mass ${u('mass')}`,
-  ]];
-  cands.forEach((c, i) => {
+  ];
+  const rows = cands.map((c, i) => {
     const a = c.analysis;
     const g = a.geometry;
     const tauMax = Math.max(...a.points.map((p) => p.stress));
-    rows.push([
+    return [
       String(i + 1), c.item.choice.material.id, num(g.wireDiameter, 'length', system), num(g.meanDiameter, 'length', system),
       num(g.outerDiameter, 'length', system), num(g.innerDiameter, 'length', system), sig(g.activeCoils, 4), sig(g.totalCoils, 4), g.ends,
       num(g.freeLength, 'length', system), num(g.solidLength, 'length', system), num(a.rate, 'rate', system),
       a.points.map((p) => num(p.force, 'force', system, 3)).join(' / '), num(tauMax, 'stress', system),
       sig(a.staticSafetyFactor, 3), a.fatigue ? sig(a.fatigue.safetyFactor, 3) : '-', num(g.mass, 'mass', system, 3),
-    ]);
+    ];
   });
-  return table(rows);
+  return { header, rows };
+}
+
+export function candidateTable(cands: Candidate[], system: UnitSystem): string {
+  const { header, rows } = candidateGrid(cands, system);
+  return table([header, ...rows]);
 }
 
 export function countsText(run: DesignRun, system: UnitSystem, showTiming = false): string {

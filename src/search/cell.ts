@@ -136,6 +136,13 @@ function infeasibleCell(ws: CellWorkspace): false {
   return false;
 }
 
+/** A problem with no solved variable: the cell is the single point x. */
+export function evaluateFixed(p: Problem, x: Float64Array, ws: CellWorkspace): boolean {
+  ws.missViolation = Infinity;
+  if (evaluateAt(p, x, ws) === 0) return true;
+  return infeasibleCell(ws);
+}
+
 export const enum CellMode { First = 0, All = 1 }
 
 /**

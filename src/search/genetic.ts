@@ -7,7 +7,7 @@
 // seeded generator (seedrandom): the same seed gives the same result.
 import seedrandom from 'seedrandom';
 import { TopK } from './archive.js';
-import { CellMode, makeWorkspace, solveCell } from './cell.js';
+import { CellMode, evaluateFixed, makeWorkspace, solveCell } from './cell.js';
 import { NearestMisses } from './misses.js';
 import { TREND, solvedIndex, valueAt, valueCount, type Problem } from './problem.js';
 import type { SearchResult } from './result.js';
@@ -110,11 +110,13 @@ export function geneticSearch(p: Problem, opts: GeneticOptions): SearchResult {
         misses.offer(cw.missX, cw.missG, cw.missF, cw.missViolation);
         x.set(cw.missX);
       }
+    } else if (evaluateFixed(p, x, cw)) {
+      counts.feasible++;
+      f = cw.f[0];
+      top.offer(x, cw.f);
     } else {
-      p.evaluate(x, cw.g, cw.f);
-      cw.evaluations++;
-      for (let j = 0; j < cw.g.length; j++) if (cw.g[j] > 1e-9) violation += cw.g[j];
-      if (violation === 0) { f = cw.f[0]; top.offer(x, cw.f); counts.feasible++; } else misses.offer(x, cw.g, cw.f, violation);
+      violation = cw.missViolation;
+      misses.offer(cw.missX, cw.missG, cw.missF, cw.missViolation);
     }
     if (violation === 0 && f < bestFeasible && top.size > 0) bestFeasible = top.f(0)[0];
     const ind = { genes, f, violation, x: Float64Array.from(x) };

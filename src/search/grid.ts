@@ -4,7 +4,7 @@
 // k-th best (valid when objective 0 grows with the solved variable). Optional refinement passes
 // zoom the scanned continuous variables around the incumbent.
 import { PointBuffer, TopK } from './archive.js';
-import { CellMode, makeWorkspace, solveCell } from './cell.js';
+import { CellMode, evaluateFixed, makeWorkspace, solveCell } from './cell.js';
 import { NearestMisses } from './misses.js';
 import { TREND, solvedIndex, valueAt, valueCount, type Problem, type Variable } from './problem.js';
 import type { SearchResult } from './result.js';
@@ -62,7 +62,7 @@ function gridPass(p: Problem, vars: readonly Variable[], s: number, opts: GridOp
   for (let done = 0; done < total; done++) {
     counts.cells++;
     cellBest = Infinity;
-    const r = s >= 0 ? solveCell(p, s, x, ws, mode, visit, prune) : evaluatePoint(p, x, ws);
+    const r = s >= 0 ? solveCell(p, s, x, ws, mode, visit, prune) : evaluateFixed(p, x, ws);
     if (r === 'pruned') {
       counts.pruned++;
       if (branchPrune) {
@@ -90,23 +90,6 @@ function gridPass(p: Problem, vars: readonly Variable[], s: number, opts: GridOp
     }
   }
   opts.onProgress?.(total, total);
-}
-
-/** A problem with no solved variable: each grid point is one evaluation. */
-function evaluatePoint(p: Problem, x: Float64Array, ws: ReturnType<typeof makeWorkspace>): boolean {
-  p.evaluate(x, ws.g, ws.f);
-  ws.evaluations++;
-  let total = 0;
-  let jw = 0;
-  for (let j = 0; j < ws.g.length; j++) {
-    if (ws.g[j] > 1e-9) total += ws.g[j];
-    if (ws.g[j] > ws.g[jw]) jw = j;
-  }
-  if (total === 0) return true;
-  ws.cutBy[jw]++;
-  ws.missViolation = total;
-  ws.missX.set(x); ws.missG.set(ws.g); ws.missF.set(ws.f);
-  return false;
 }
 
 export function gridSearch(p: Problem, opts: GridOptions): SearchResult {
@@ -160,7 +143,7 @@ function patternSearch(p: Problem, s: number, halvings: number, top: TopK, ws: R
       if (pt[i] < v.min || pt[i] > v.max) return Infinity;
     }
     x.set(pt);
-    if (s >= 0 ? solveCell(p, s, x, ws, CellMode.First, null, null) !== true : !evaluatePoint(p, x, ws)) return Infinity;
+    if (s >= 0 ? solveCell(p, s, x, ws, CellMode.First, null, null) !== true : !evaluateFixed(p, x, ws)) return Infinity;
     top.offer(x, ws.f);
     pt.set(x);
     return ws.f[0];

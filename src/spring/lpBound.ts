@@ -6,10 +6,10 @@
 // terms), and each strength law is taken per segment. Every simplification loosens the constraints, so the LP optimum is a valid lower bound
 // on every discrete spring the grid could find: the gap between the grid's best and this bound says
 // how much any finer wire or coil choice could still gain.
-import { tensileStrength } from '../catalogs/properties.js';
+import { strengthPiece, tensileStrength } from '../catalogs/properties.js';
 import type { Requirements } from '../input/requirements.js';
 import { inactiveCoils } from '../model/geometry.js';
-import { bergstrasserFactor, wahlFactor } from '../model/stressFactor.js';
+import { stressFactor } from '../model/stressFactor.js';
 import { minimiseLinear, type LinearRow } from '../search/lp.js';
 import { shortestLength } from './checks.js';
 import type { SpringProblem, StockItem } from './problem.js';
@@ -28,12 +28,8 @@ export interface LpBound { value: number | null; status: 'bound' | 'infeasible' 
 function groups(stock: StockItem[]): StockItem[][] {
   const out = new Map<string, StockItem[]>();
   for (const s of stock) {
-    const law = s.choice.material.strength;
-    let seg = 0;
-    if (s.choice.tensileStrength !== undefined) seg = -1;
-    else if (law.law === 'power') law.segments.forEach((g, i) => { if (s.wireDiameter >= g.minDiameter) seg = i; });
-    else seg = law.diameters.findIndex((dd, i) => i === law.diameters.length - 1 || s.wireDiameter < law.diameters[i + 1]);
-    const key = `${s.choice.material.id}#${seg}`;
+    const piece = s.choice.tensileStrength !== undefined ? -1 : strengthPiece(s.choice.material, s.wireDiameter);
+    const key = `${s.choice.material.id}#${piece}`;
     if (!out.has(key)) out.set(key, []);
     out.get(key)!.push(s);
   }
@@ -48,7 +44,7 @@ export function lpLowerBound(problem: SpringProblem): LpBound {
   const Qs = Math.min(...req.ends.map((e) => inactiveCoils(e) + (e === 'plain-ground' || e === 'squared-ground' ? 0 : 1)));
   const coilPoints = logPoints(req.activeCoils[0], req.activeCoils[1]);
   const indexPoints = logPoints(req.index[0], req.index[1]);
-  const stressFactorOf = (c: number) => (req.correction === 'wahl' ? wahlFactor(c) : bergstrasserFactor(c));
+  const stressFactorOf = (c: number) => stressFactor(c, req.correction);
   let best = Infinity;
   let models = 0;
   for (const group of groups(problem.stock)) {
@@ -92,8 +88,9 @@ export function lpLowerBound(problem: SpringProblem): LpBound {
     const lever = Math.log((8 * Flow * n) / Math.PI);
     const s0 = group[0];
     const law = s0.choice.material.strength;
+    // The group shares one strength piece (groups()), so its power-law segment is the one at dLo.
     const seg = req.allowableStress === undefined && law.law === 'power' && s0.choice.tensileStrength === undefined
-      ? law.segments.find((g) => dLo >= g.minDiameter - 1e-12 && dLo <= g.maxDiameter + 1e-12) : undefined;
+      ? law.segments[strengthPiece(s0.choice.material, dLo)] : undefined;
     const fraction = s0.figures.allowableStress / s0.figures.tensileStrength;
     // Allowable as A' d^-m: exact for a power-law segment; otherwise bounded above by its largest value.
     const allowCoefficient = req.allowableStress ?? (seg ? fraction * seg.coefficient : fraction * Math.max(...group.map((s) => s.choice.tensileStrength ?? tensileStrength(s.choice.material, s.wireDiameter))));

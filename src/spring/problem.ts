@@ -8,11 +8,11 @@ import { materialFigures, type MaterialChoice } from '../input/material.js';
 import type { MaterialFigures, ServiceConditions, SpringGeometry } from '../model/analysis.js';
 import { bucklingConstant1, bucklingConstant2, criticalDeflectionFrom, endConditionConstant } from '../model/buckling.js';
 import { minimumGapSum, solidOuterDiameter } from '../model/clash.js';
-import { INFINITE_LIFE_CYCLES, fatigueSafetyFactorFrom, finiteLifePoint, fullyReversedEndurance, repeatedStressFraction, zimmerliPoint, type EndurancePoint } from '../model/fatigue.js';
+import { INFINITE_LIFE_CYCLES, endurancePoint, fatigueSafetyFactorFrom, fullyReversedEndurance, type EndurancePoint } from '../model/fatigue.js';
 import { inactiveCoils, massOfVolume, pitch, solidLength, wireVolume, type EndType } from '../model/geometry.js';
 import { springRate } from '../model/rate.js';
 import { shearStress } from '../model/stress.js';
-import { bergstrasserFactor, wahlFactor } from '../model/stressFactor.js';
+import { stressFactor } from '../model/stressFactor.js';
 import { ultimateShearStrength } from '../model/strength.js';
 import { activeCoilMass, surgeFrequency } from '../model/surge.js';
 import { TREND, type Problem } from '../search/problem.js';
@@ -64,7 +64,6 @@ export function buildSpringProblem(req: Requirements): SpringProblem {
   const sC2 = new Float64Array(n);
   const sSse = new Float64Array(n);
   const sPoint: EndurancePoint[] = [];
-  const fatigueOn = req.cycles !== undefined && req.operatingLength !== undefined;
   stock.forEach((s, i) => {
     sd[i] = s.wireDiameter;
     sG[i] = s.figures.shearModulus;
@@ -74,10 +73,7 @@ export function buildSpringProblem(req: Requirements): SpringProblem {
     sSsu[i] = ultimateShearStrength(s.figures.tensileStrength);
     sTmax[i] = s.figures.maxTemperature;
     sCost[i] = s.choice.material.relativeCost.value;
-    const cycles = req.cycles ?? INFINITE_LIFE_CYCLES;
-    const point = fatigueOn && cycles >= INFINITE_LIFE_CYCLES && s.figures.zimmerli
-      ? zimmerliPoint(req.peened)
-      : finiteLifePoint(s.figures.tensileStrength, repeatedStressFraction(s.figures.finiteLife, Math.min(cycles, INFINITE_LIFE_CYCLES), req.peened));
+    const { point } = endurancePoint(req.cycles ?? INFINITE_LIFE_CYCLES, req.peened, s.figures.zimmerli, s.figures.finiteLife, s.figures.tensileStrength);
     sPoint.push(point);
     sSse[i] = fullyReversedEndurance(point, sSsu[i], req.criterion);
     sC1[i] = bucklingConstant1(sE[i], sG[i]);
@@ -94,7 +90,7 @@ export function buildSpringProblem(req: Requirements): SpringProblem {
   const travel = L1 - Lmin;
   const F2req = req.operatingForce ?? 0;
   const tol = req.loadTolerance;
-  const wahl = req.correction === 'wahl';
+  const correction = req.correction;
   const staticFactor = staticLimit(req, 1).factor;
   const alpha = endConditionConstant(req.seating);
   const oneEndFree = req.seating === 'fixed-free';
@@ -174,7 +170,7 @@ export function buildSpringProblem(req: Requirements): SpringProblem {
       const Na = x[2];
       const d = sd[i];
       const kMin = springRate(sG[i], d, hi, Na, directShear);
-      const Kmin = wahl ? wahlFactor(hi / d) : bergstrasserFactor(hi / d);
+      const Kmin = stressFactor(hi / d, correction);
       const limit = sLimit[i];
       out[9] = (shearStress(F1 + kMin * travel, lo, d, Kmin) * staticFactor - limit) / limit;
       if (activeMask[10] === 1) {
@@ -193,7 +189,7 @@ export function buildSpringProblem(req: Requirements): SpringProblem {
       const d = sd[i];
       const endType = ends[e];
       const C = D / d;
-      const K = wahl ? wahlFactor(C) : bergstrasserFactor(C);
+      const K = stressFactor(C, correction);
       const k = springRate(sG[i], d, D, Na, directShear);
       const L0 = L1 + F1 / k;
       const Nt = Na + endQ[e];

@@ -12,7 +12,7 @@ import type { UnitSystem } from '../../units/systems.js';
 import { writeOutputFile } from '../writeFile.js';
 import { CONVENTIONS, figure, htmlTable, page } from './page.js';
 import { cloudPlot, fatiguePlot, forceLengthPlot, sideView, sweepPlot } from './plots.js';
-import { relaxSuggestions } from '../designReport.js';
+import { candidateGrid, relaxSuggestions } from '../designReport.js';
 import { esc } from './svg.js';
 
 export interface SweepSummary { name: string; rows: { value: number; best: Candidate | null }[] }
@@ -40,20 +40,6 @@ function requirementRows(req: Requirements, system: UnitSystem): string[][] {
   ];
 }
 
-function candidateRows(cands: Candidate[], system: UnitSystem): { header: string[]; rows: string[][] } {
-  const u = (k: Parameters<typeof unitSymbol>[0]) => unitSymbol(k, system);
-  const n = (v: number, k: Parameters<typeof unitSymbol>[0]) => sig(inUnit(v, k, system), 4);
-  return {
-    header: ['#', 'material', `d (${u('length')})`, `D (${u('length')})`, `OD (${u('length')})`, `ID (${u('length')})`, 'Na', 'Nt', 'ends', `L0 (${u('length')})`, `Ls (${u('length')})`, `k (${u('rate')})`, `forces (${u('force')})`, 'SF static', 'SF fatigue', `mass (${u('mass')})`],
-    rows: cands.map((c, i) => {
-      const a = c.analysis;
-      const g = a.geometry;
-      return [String(i + 1), c.item.choice.material.id, n(g.wireDiameter, 'length'), n(g.meanDiameter, 'length'), n(g.outerDiameter, 'length'), n(g.innerDiameter, 'length'),
-        sig(g.activeCoils, 4), sig(g.totalCoils, 4), g.ends, n(g.freeLength, 'length'), n(g.solidLength, 'length'), n(a.rate, 'rate'),
-        a.points.map((p) => n(p.force, 'force')).join(' / '), sig(a.staticSafetyFactor, 3), a.fatigue ? sig(a.fatigue.safetyFactor, 3) : '-', sig(inUnit(g.mass, 'mass', system), 3)];
-    }),
-  };
-}
 
 /** The sections that show one spring: its figures, force-length, fatigue and drawing. */
 export function springSections(a: SpringAnalysis, system: UnitSystem, service: ServiceConditions, heading: string): string[] {
@@ -119,7 +105,7 @@ export function designHtml(run: DesignRun, system: UnitSystem, frontier?: Fronti
       material: best.item.choice.material.id, wire: String(best.geometry.wireDiameter), 'mean-diameter': String(best.geometry.meanDiameter), 'active-coils': String(best.geometry.activeCoils), ends: best.geometry.ends,
     }), `${cloud.length} feasible springs (each combination of material, wire, ends and coils at its smallest feasible mean diameter); the line joins the ${fr.front.length} non-dominated ones; the ring marks the chosen spring, first in the table below.`));
     sections.push('<h2>Ranked candidates</h2>');
-    const t = candidateRows(run.candidates, system);
+    const t = candidateGrid(run.candidates, system);
     sections.push(htmlTable(t.header, t.rows, { bestFirst: true }));
     sections.push(...springSections(best.analysis, system, run.problem.service(), 'The chosen spring'));
   }
