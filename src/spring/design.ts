@@ -20,6 +20,8 @@ export interface DesignOptions {
   /** Budget of the genetic search, in evaluations. */
   maxEvaluations?: number;
   onProgress?: (done: number, total: number) => void;
+  /** The problem, when the caller has built it already. */
+  problem?: SpringProblem;
 }
 
 export interface Candidate {
@@ -64,7 +66,7 @@ export function assertVerified(c: Candidate): void {
 export const AUTO_GRID_CELL_LIMIT = 2_000_000;
 
 export function runDesign(req: Requirements, opts: DesignOptions = {}): DesignRun {
-  const problem = buildSpringProblem(req);
+  const problem = opts.problem ?? buildSpringProblem(req);
   const cells = cellCount(problem);
   // The best spring per wire size needs every wire looked at: that is the grid's job.
   const strategy = !req.bestPerWire && (opts.strategy === 'genetic' || (opts.strategy !== 'grid' && cells > AUTO_GRID_CELL_LIMIT)) ? 'genetic' : 'grid';

@@ -4,7 +4,7 @@ import type { Requirements } from '../input/requirements.js';
 import { paretoFront2 } from '../search/pareto.js';
 import { geneticFront } from '../search/geneticFront.js';
 import { AUTO_GRID_CELL_LIMIT, assertVerified, candidateAt, cellCount, runDesign, type Candidate, type DesignRun, type StrategyChoice } from './design.js';
-import { OBJ, buildSpringProblem } from './problem.js';
+import { OBJ, buildSpringProblem, type SpringProblem } from './problem.js';
 
 export const FRONTIER_KEYS = {
   mass: { objective: OBJ.mass, sign: 1, kind: 'mass' as const, label: 'mass' },
@@ -20,15 +20,15 @@ export type FrontierKey = keyof typeof FRONTIER_KEYS;
 
 export interface Frontier { run: DesignRun; x: FrontierKey; y: FrontierKey; strategy: 'grid' | 'genetic'; cloud: { x: number; y: number }[]; front: Candidate[] }
 
-export function computeFrontier(req: Requirements, x: FrontierKey, y: FrontierKey, onProgress?: (d: number, t: number) => void, strategy: StrategyChoice = 'auto'): Frontier {
+export function computeFrontier(req: Requirements, x: FrontierKey, y: FrontierKey, onProgress?: (d: number, t: number) => void, strategy: StrategyChoice = 'auto', built?: SpringProblem): Frontier {
   // Mass, volume, diameter, free length and cost all grow with the mean diameter within a cell, so the
   // cell's first feasible diameter dominates the rest; a safety factor does not, so then every step counts
   // and only the grid samples it.
   const everyFeasiblePoint = FRONTIER_KEYS[x].sign < 0 || FRONTIER_KEYS[y].sign < 0;
-  const problem = buildSpringProblem(req);
+  const problem = built ?? buildSpringProblem(req);
   const genetic = !everyFeasiblePoint && (strategy === 'genetic' || (strategy === 'auto' && cellCount(problem) > AUTO_GRID_CELL_LIMIT));
-  if (genetic) return geneticFrontier(req, x, y);
-  const run = runDesign(req, { strategy: 'grid', collectAll: true, everyFeasiblePoint, onProgress });
+  if (genetic) return geneticFrontier(req, problem, x, y);
+  const run = runDesign(req, { strategy: 'grid', collectAll: true, everyFeasiblePoint, onProgress, problem });
   const cloudBuf = run.result.cloud!;
   const xs = new Float64Array(cloudBuf.size);
   const ys = new Float64Array(cloudBuf.size);
@@ -44,8 +44,8 @@ export function computeFrontier(req: Requirements, x: FrontierKey, y: FrontierKe
 }
 
 /** The front from the two-objective genetic search, for spaces too large to enumerate. */
-function geneticFrontier(req: Requirements, x: FrontierKey, y: FrontierKey): Frontier {
-  const run = runDesign(req, { strategy: 'genetic', maxEvaluations: 500_000 });
+function geneticFrontier(req: Requirements, problem: SpringProblem, x: FrontierKey, y: FrontierKey): Frontier {
+  const run = runDesign(req, { strategy: 'genetic', maxEvaluations: 500_000, problem });
   const ox = FRONTIER_KEYS[x].objective;
   const oy = FRONTIER_KEYS[y].objective;
   const r = geneticFront(run.problem, { seed: req.seed, objectives: [ox, oy], maxEvaluations: 1_000_000 });

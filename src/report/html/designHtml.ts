@@ -93,7 +93,7 @@ export function designHtml(run: DesignRun, system: UnitSystem, frontier?: Fronti
     sections.push('<h2>No feasible spring</h2>');
     sections.push(`<ul>${relaxSuggestions(run, system).map((s) => `<li>${esc(s.message)}</li>`).join('') || '<li>no single limit, relaxed alone, admits a spring</li>'}</ul>`);
   } else {
-    const fr = frontier ?? computeFrontier(req, 'mass', 'outer_diameter');
+    const fr = frontier ?? computeFrontier(req, 'mass', 'outer_diameter', undefined, 'auto', run.problem);
     const kx = FRONTIER_KEYS[fr.x];
     const ky = FRONTIER_KEYS[fr.y];
     const label = (k: typeof kx, key: string) => (k.kind ? `${k.label} (${unitSymbol(k.kind, system)})` : key === 'wire_volume' ? 'wire volume (mm^3)' : k.label);
