@@ -10,8 +10,7 @@ import { TopK } from './archive.js';
 import { CellMode, evaluateFixed, makeWorkspace, solveCell } from './cell.js';
 import { NearestMisses } from './misses.js';
 import { TREND, solvedIndex, valueAt, valueCount, type Problem } from './problem.js';
-import type { SearchResult } from './result.js';
-import { packResult } from './grid.js';
+import { packResult, type SearchResult } from './result.js';
 
 export interface GeneticOptions {
   seed: number | string;

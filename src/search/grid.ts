@@ -7,7 +7,7 @@ import { PointBuffer, TopK } from './archive.js';
 import { CellMode, evaluateFixed, makeWorkspace, solveCell } from './cell.js';
 import { NearestMisses } from './misses.js';
 import { TREND, solvedIndex, valueAt, valueCount, type Problem, type Variable } from './problem.js';
-import type { SearchResult } from './result.js';
+import { packResult, type SearchResult } from './result.js';
 
 export interface GridOptions {
   /** How many best points to keep. */
@@ -109,18 +109,6 @@ export function gridSearch(p: Problem, opts: GridOptions): SearchResult {
   return packResult('grid', p, top, cloud, ws, counts, misses);
 }
 
-export function packResult(strategy: SearchResult['strategy'], p: Problem, top: TopK, cloud: PointBuffer | null,
-  ws: ReturnType<typeof makeWorkspace>, counts: { cells: number; feasible: number; pruned: number }, misses: NearestMisses): SearchResult {
-  const cutBy: Record<string, number> = {};
-  const sole: Record<string, number> = {};
-  p.constraintNames.forEach((name, j) => { cutBy[name] = ws.cutBy[j]; sole[name] = ws.soleViolation[j]; });
-  const best = [];
-  for (let i = 0; i < top.size; i++) best.push({ x: Float64Array.from(top.x(i)), f: Float64Array.from(top.f(i)) });
-  return {
-    strategy, best, cloud, evaluations: ws.evaluations, cells: counts.cells, feasibleCells: counts.feasible,
-    prunedCells: counts.pruned, cutBy, soleViolation: sole, nearestMisses: misses.items,
-  };
-}
 
 /**
  * Hooke and Jeeves (1961) pattern search over the scanned continuous variables, starting from the grid's

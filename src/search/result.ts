@@ -1,6 +1,9 @@
 // What a search strategy returns: the best points, the optional cloud of feasible points, and the
 // counts that explain the outcome (what each check cut, what to relax, the nearest misses).
-import type { PointBuffer } from './archive.js';
+import type { PointBuffer, TopK } from './archive.js';
+import type { CellWorkspace } from './cell.js';
+import type { NearestMisses } from './misses.js';
+import type { Problem } from './problem.js';
 
 export interface Point { x: Float64Array; f: Float64Array }
 export interface Miss { x: Float64Array; g: Float64Array; f: Float64Array; violation: number }
@@ -18,4 +21,18 @@ export interface SearchResult {
   /** Per constraint name: the least violation seen where it alone failed (Infinity: never alone). */
   soleViolation: Record<string, number>;
   nearestMisses: Miss[];
+}
+
+/** Gather a strategy's stores into its result, with counts keyed by constraint name. */
+export function packResult(strategy: SearchResult['strategy'], p: Problem, top: TopK, cloud: PointBuffer | null,
+  ws: CellWorkspace, counts: { cells: number; feasible: number; pruned: number }, misses: NearestMisses): SearchResult {
+  const cutBy: Record<string, number> = {};
+  const sole: Record<string, number> = {};
+  p.constraintNames.forEach((name, j) => { cutBy[name] = ws.cutBy[j]; sole[name] = ws.soleViolation[j]; });
+  const best = [];
+  for (let i = 0; i < top.size; i++) best.push({ x: Float64Array.from(top.x(i)), f: Float64Array.from(top.f(i)) });
+  return {
+    strategy, best, cloud, evaluations: ws.evaluations, cells: counts.cells, feasibleCells: counts.feasible,
+    prunedCells: counts.pruned, cutBy, soleViolation: sole, nearestMisses: misses.items,
+  };
 }
