@@ -10,6 +10,7 @@ import { analyzeCommand } from './analyze.js';
 import { materialsCommand } from './materials.js';
 import { CliExit, EXIT, type Io } from './io.js';
 import { registerSearchCommands } from './searchCommands.js';
+import { registerCheckCommand } from './check.js';
 
 export function packageVersion(): string {
   let dir = dirname(fileURLToPath(import.meta.url));
@@ -51,6 +52,7 @@ export function buildProgram(io: Io, setCode: (c: number) => void): Command {
     .action((opts) => setCode(materialsCommand(opts, io)));
 
   registerSearchCommands(program, io, setCode);
+  registerCheckCommand(program, io, setCode);
   return program;
 }
 

@@ -19,7 +19,7 @@ import { EXIT, type Io } from './io.js';
 import { unitsOption } from './options.js';
 import { writeDesignReport } from '../report/html/designHtml.js';
 
-interface CommonOptions {
+export interface CommonOptions {
   json?: boolean; units?: UnitSystem; set?: string[]; strategy?: StrategyChoice; seed?: string; top?: string; rank?: string;
   maxOd?: string; minId?: string; maxFreeLength?: string; maxSolidLength?: string; report?: string; force?: boolean; perWire?: boolean; timing?: boolean;
 }
@@ -28,23 +28,29 @@ function collect(value: string, previous: string[] = []): string[] {
   return [...previous, value];
 }
 
+/** --set and the envelope shorthands; `check` and `stock` share them. */
+export function addOverrideOptions(cmd: Command): Command {
+  cmd.option('--set <path=value>', 'override a requirement, e.g. envelope.max_outer_diameter=18 (repeatable)', collect);
+  for (const [flags, , path] of ENVELOPE_SHORTHANDS) cmd.option(flags, `shorthand for --set ${path}=<value>`);
+  return cmd;
+}
+
 function addCommon(cmd: Command): Command {
   cmd
     .option('--json', 'machine-readable output on stdout (always SI units)')
-    .addOption(unitsOption())
-    .option('--set <path=value>', 'override a requirement, e.g. envelope.max_outer_diameter=18 (repeatable)', collect)
+    .addOption(unitsOption());
+  addOverrideOptions(cmd)
     .addOption(new Option('--strategy <name>', 'search strategy').choices(['auto', 'grid', 'genetic']).default('auto'))
     .option('--seed <n>', 'random seed for the genetic strategy (overrides the file)')
     .option('--top <n>', 'how many candidates to list (overrides the file)')
     .addOption(new Option('--rank <key>', 'ranking objective (overrides the file)').choices([...RANK_KEYS]))
     .option('--per-wire', 'list the best spring of each material and wire size (overrides the file\'s best_per_wire)')
     .option('--timing', 'also report the search time (which makes the output differ from run to run)');
-  for (const [flags, , path] of ENVELOPE_SHORTHANDS) cmd.option(flags, `shorthand for --set ${path}=<value>`);
   return cmd;
 }
 
 /** The raw requirements document with every command-line override applied. */
-function rawWithOverrides(file: string, opts: CommonOptions): unknown {
+export function rawWithOverrides(file: string, opts: CommonOptions): unknown {
   let doc = readInputFile(file);
   for (const [, key, path] of ENVELOPE_SHORTHANDS) {
     const v = (opts as Record<string, unknown>)[key];

@@ -23,6 +23,8 @@ export interface Requirements {
   workingForce: number;
   workingLength: number;
   loadTolerance: number;
+  /** Band on the working force of a given spring (`check`, `stock`); unset: the load tolerance, or 2%. */
+  workingTolerance?: number;
   operatingLength?: number;
   operatingForce?: number;
   maxOuterDiameter?: number;
@@ -170,6 +172,7 @@ export function readRequirements(raw: unknown, catalog: Catalog): Requirements {
     seating: (f.choice('seating', SEATINGS) ?? DEFAULTS.seating) as Seating,
     workingForce, workingLength,
     loadTolerance: f.fraction('load_tolerance') ?? DEFAULTS.loadTolerance,
+    workingTolerance: f.fraction('working_tolerance'),
     operatingLength, operatingForce,
     maxOuterDiameter, minInnerDiameter, maxFreeLength, maxSolidLength,
     cycles: parseCycles(f.get('cycles'), 'cycles'),
@@ -195,6 +198,8 @@ export function readRequirements(raw: unknown, catalog: Catalog): Requirements {
     diameterResolution: f.quantity('diameter_resolution', 'length', { positive: true }) ?? DEFAULTS.diameterResolution,
   };
   if (req.loadTolerance >= 1) throw new InputError('load_tolerance', 'a fraction below 1 (such as 0.1 or "10%")', f.get('load_tolerance'));
+  if (req.workingTolerance !== undefined && req.workingTolerance >= 1) throw new InputError('working_tolerance', 'a fraction below 1 (such as 0.02 or "2%")', f.get('working_tolerance'));
+  f.get('material_map'); // the stock table's material words; read and checked by src/stock/materialMap.ts
   f.rejectUnknown();
   return req;
 }

@@ -1,0 +1,132 @@
+// Every requirement check on one given spring, each with its value, its limit and its margin. The
+// pass/fail of the design checks comes from src/spring/checks.ts (checkAnalysis on the full analysis of
+// src/model/analysis.ts), the same functions that re-verify every spring `design` reports; a given
+// spring adds the band on its working force, and that its material and end type are ones the
+// requirement allows.
+import type { Requirements } from '../input/requirements.js';
+import { analyzeSpring, type SpringAnalysis } from '../model/analysis.js';
+import { CHECK, CHECKS, CHECK_LABELS, activeChecks, checkAnalysis, staticLimit, type CheckName } from '../spring/checks.js';
+import type { EndType } from '../model/geometry.js';
+import type { Kind } from '../units/kinds.js';
+import type { WorkingBand } from './band.js';
+import { givenService, type GivenSpring } from './given.js';
+
+/** A check passes when its normalised value is at most this: the tolerance of design's re-verification. */
+export const PASS_TOLERANCE = 1e-6;
+
+export const GIVEN_CHECK_LABELS = {
+  working_force_min: 'working force below its band',
+  working_force_max: 'working force above its band',
+  material: 'material not one the requirement allows',
+  ends: 'end type not one the requirement names',
+} as const;
+export type GivenCheckName = keyof typeof GIVEN_CHECK_LABELS;
+export type AnyCheckName = CheckName | GivenCheckName;
+
+/** How a value is written: a quantity kind, a plain number, a percentage, or words. */
+export type ValueKind = Kind | 'number' | 'percent' | 'text';
+
+export interface CheckLine {
+  name: AnyCheckName;
+  label: string;
+  /** The spring's figure and the requirement's limit, SI (text for the categorical checks). */
+  value: number | string | null;
+  limit: number | string | null;
+  relation: '<=' | '>=' | '<' | 'in';
+  kind: ValueKind;
+  /** Normalised check value, g <= 0 passes (as src/spring/checks.ts defines it); NaN: not computable. */
+  g: number;
+  /** -g: how far inside its limit the spring is, as a fraction of the limit; null for categorical checks. */
+  margin: number | null;
+  pass: boolean;
+  note?: string;
+}
+
+export interface Verdict {
+  spring: GivenSpring;
+  analysis: SpringAnalysis;
+  lines: CheckLine[];
+  pass: boolean;
+  failing: CheckLine[];
+  /** Sum of the failing checks' normalised values (a categorical failure counts 1): how far from passing. */
+  violation: number;
+  /** The check with the smallest margin. */
+  limiting: CheckLine | null;
+}
+
+/** What is fixed per requirement, computed once for many springs. */
+export interface Judge {
+  req: Requirements;
+  band: WorkingBand;
+  active: boolean[];
+  allowedMaterials: Set<string>;
+  /** The end types the requirement names explicitly; null when it leaves them to the default. */
+  allowedEnds: EndType[] | null;
+}
+
+export function makeJudge(req: Requirements, band: WorkingBand, endsStated: boolean): Judge {
+  return { req, band, active: activeChecks(req), allowedMaterials: new Set(req.materials.map((m) => m.material.id)), allowedEnds: endsStated ? req.ends : null };
+}
+
+type Figure = Pick<CheckLine, 'value' | 'limit' | 'relation' | 'kind'> & { note?: string };
+
+/** The figure and limit behind each design check, for people; the verdict itself is checkAnalysis's. */
+function figureOf(name: CheckName, a: SpringAnalysis, req: Requirements): Figure {
+  const g = a.geometry;
+  switch (name) {
+    case 'index_min': return { value: g.springIndex, limit: req.index[0], relation: '>=', kind: 'number' };
+    case 'index_max': return { value: g.springIndex, limit: req.index[1], relation: '<=', kind: 'number' };
+    case 'outer_diameter': return { value: g.outerDiameter, limit: req.maxOuterDiameter ?? null, relation: '<=', kind: 'length' };
+    case 'inner_diameter': return { value: g.innerDiameter, limit: req.minInnerDiameter ?? null, relation: '>=', kind: 'length' };
+    case 'free_length': return { value: g.freeLength, limit: req.maxFreeLength ?? null, relation: '<=', kind: 'length' };
+    case 'solid_length': return { value: g.solidLength, limit: req.maxSolidLength ?? null, relation: '<=', kind: 'length' };
+    case 'clash': return { value: a.clash.overrun, limit: req.clashAllowance, relation: '>=', kind: 'percent', note: 'force overrun to solid beyond the largest working force' };
+    case 'coil_gaps': return { value: a.clash.gapSum, limit: a.clash.minGapSum, relation: '>=', kind: 'length', note: 'sum of coil gaps at the shortest length (EN 13906-1)' };
+    case 'outer_diameter_at_solid': return { value: a.solid.outerDiameter, limit: req.maxOuterDiameter ?? null, relation: '<=', kind: 'length' };
+    case 'static_stress': {
+      const { limit, factor } = staticLimit(req, a.material.allowableStress);
+      const tau = a.points.reduce((m, p) => Math.max(m, p.stress), -Infinity);
+      return { value: tau, limit: limit / factor, relation: '<=', kind: 'stress', note: factor !== 1 ? `allowable / static safety factor ${factor}` : 'the requirement\'s allowable_stress' };
+    }
+    case 'solid_stress': return { value: a.solid.stress, limit: staticLimit(req, a.material.allowableStress).limit, relation: '<=', kind: 'stress' };
+    case 'fatigue': return { value: a.fatigue ? a.fatigue.safetyFactor : null, limit: req.safety.fatigue, relation: '>=', kind: 'number', note: 'fatigue safety factor' };
+    case 'buckling': return a.buckling.absolutelyStable
+      ? { value: a.buckling.maxDeflection, limit: null, relation: '<', kind: 'length', note: 'absolutely stable' }
+      : { value: a.buckling.maxDeflection, limit: a.buckling.criticalDeflection, relation: '<', kind: 'length', note: 'largest deflection against the critical deflection' };
+    case 'surge': return { value: a.surge.relevant, limit: req.forcingFrequency ? req.safety.surge * req.forcingFrequency : null, relation: '>=', kind: 'frequency' };
+    case 'operating_force_min': return { value: a.points[a.points.length - 1].force, limit: req.operatingForce! * (1 - req.loadTolerance), relation: '>=', kind: 'force' };
+    case 'operating_force_max': return { value: a.points[a.points.length - 1].force, limit: req.operatingForce! * (1 + req.loadTolerance), relation: '<=', kind: 'force' };
+    case 'temperature': return { value: req.temperature ?? null, limit: a.material.maxTemperature, relation: '<=', kind: 'temperature' };
+  }
+}
+
+const passes = (g: number) => g <= PASS_TOLERANCE;
+
+export function judge(spring: GivenSpring, j: Judge): Verdict {
+  const req = j.req;
+  const analysis = analyzeSpring(spring.geometry, spring.figures, givenService(req, spring));
+  const g = checkAnalysis(analysis, req);
+  const lines: CheckLine[] = [];
+  const F1 = analysis.points[0].force;
+  const force = j.band.force;
+  const numeric = (name: AnyCheckName, label: string, gv: number, fig: Figure): CheckLine =>
+    ({ name, label, ...fig, g: gv, margin: Number.isNaN(gv) ? null : -gv, pass: passes(gv) });
+  lines.push(numeric('working_force_min', GIVEN_CHECK_LABELS.working_force_min, (j.band.low - F1) / force, { value: F1, limit: j.band.low, relation: '>=', kind: 'force' }));
+  lines.push(numeric('working_force_max', GIVEN_CHECK_LABELS.working_force_max, (F1 - j.band.high) / force, { value: F1, limit: j.band.high, relation: '<=', kind: 'force' }));
+  CHECKS.forEach((name, i) => {
+    if (!j.active[i]) return;
+    lines.push(numeric(name, CHECK_LABELS[name], g[CHECK[name]], figureOf(name, analysis, req)));
+  });
+  const id = spring.choice.material.id;
+  const materialOk = j.allowedMaterials.has(id);
+  lines.push({ name: 'material', label: GIVEN_CHECK_LABELS.material, value: id, limit: [...j.allowedMaterials].join(', '), relation: 'in', kind: 'text', g: materialOk ? -1 : 1, margin: null, pass: materialOk });
+  if (j.allowedEnds) {
+    const endsOk = j.allowedEnds.includes(spring.geometry.ends);
+    lines.push({ name: 'ends', label: GIVEN_CHECK_LABELS.ends, value: spring.geometry.ends, limit: j.allowedEnds.join(', '), relation: 'in', kind: 'text', g: endsOk ? -1 : 1, margin: null, pass: endsOk });
+  }
+  const failing = lines.filter((l) => !l.pass);
+  const violation = failing.reduce((s, l) => s + (l.margin === null ? 1 : l.g), 0);
+  let limiting: CheckLine | null = null;
+  for (const l of lines) if (l.margin !== null && (limiting === null || l.margin < limiting.margin!)) limiting = l;
+  return { spring, analysis, lines, pass: failing.length === 0, failing, violation, limiting };
+}

@@ -1,0 +1,111 @@
+// A verdict for people (text) and machines (JSON, SI): every check with the spring's figure, the limit
+// and the margin, which band the working force was held to, and what fails by how much.
+import { rulesOfThumb } from '../model/analysis.js';
+import type { Requirements } from '../input/requirements.js';
+import { cautionText } from '../report/cautions.js';
+import { SI_UNITS } from '../report/json.js';
+import { table } from '../report/table.js';
+import { formatQuantity, quantityWriter, sig } from '../units/format.js';
+import type { UnitSystem } from '../units/systems.js';
+import { bandText, type WorkingBand } from './band.js';
+import { givenService } from './given.js';
+import type { CheckLine, ValueKind, Verdict } from './judge.js';
+
+/** The spring itself and its main figures, SI. */
+export function givenSpringRecord(v: Verdict): Record<string, unknown> {
+  const a = v.analysis;
+  const g = a.geometry;
+  const m = v.spring.choice.material;
+  return {
+    material: m.id, material_name: m.name, ends: g.ends, wire_diameter: g.wireDiameter, mean_diameter: g.meanDiameter,
+    outer_diameter: g.outerDiameter, inner_diameter: g.innerDiameter, spring_index: g.springIndex, active_coils: g.activeCoils,
+    total_coils: g.totalCoils, free_length: g.freeLength, solid_length: g.solidLength, rate: a.rate, mass: g.mass,
+    peened: v.spring.peened, set_removed: v.spring.setRemoved,
+    points: a.points.map((p) => ({ length: p.length, force: p.force, stress: p.stress })),
+    solid_force: a.solid.force, solid_stress: a.solid.stress, allowable_stress: a.material.allowableStress,
+    static_safety_factor: a.staticSafetyFactor, fatigue_safety_factor: a.fatigue ? a.fatigue.safetyFactor : null,
+    natural_frequency: a.surge.relevant, critical_deflection: a.buckling.absolutelyStable ? null : a.buckling.criticalDeflection,
+  };
+}
+
+export function checkLineRecord(l: CheckLine): Record<string, unknown> {
+  return { name: l.name, label: l.label, value: l.value, relation: l.relation, limit: l.limit, margin: l.margin, pass: l.pass, ...(l.note ? { note: l.note } : {}) };
+}
+
+export function bandRecord(b: WorkingBand): Record<string, unknown> {
+  return { force: b.force, length: b.length, tolerance: b.tolerance, source: b.source, low: b.low, high: b.high };
+}
+
+/** The failing checks and by how much (a fraction of the limit; null for a categorical check). */
+export function failingRecord(v: Verdict): { name: string; by: number | null }[] {
+  return v.failing.map((l) => ({ name: l.name, by: l.margin === null ? null : -l.margin }));
+}
+
+export function checkJson(v: Verdict, band: WorkingBand, notes: string[]): Record<string, unknown> {
+  return {
+    units: SI_UNITS,
+    pass: v.pass,
+    failing: failingRecord(v),
+    limiting_check: v.limiting ? { name: v.limiting.name, margin: v.limiting.margin } : null,
+    working_band: bandRecord(band),
+    spring: givenSpringRecord(v),
+    checks: v.lines.map(checkLineRecord),
+    notes,
+    warnings: v.analysis.warnings.map((w) => w.message),
+  };
+}
+
+export function writeValue(x: number | string | null, kind: ValueKind, system: UnitSystem): string {
+  if (x === null) return '-';
+  if (typeof x === 'string') return x;
+  if (kind === 'text' || kind === 'number') return sig(x, 4);
+  if (kind === 'percent') return `${sig(x * 100, 3)}%`;
+  return formatQuantity(x, kind, system);
+}
+
+export function writeMargin(m: number | null): string {
+  if (m === null) return '';
+  return `${m >= 0 ? '+' : ''}${sig(m * 100, 3)}%`;
+}
+
+/** "outer_diameter by 2.5% (16.4 mm, limit 16 mm)" */
+export function failureText(l: CheckLine, system: UnitSystem): string {
+  const by = l.margin === null ? `(${writeValue(l.value, l.kind, system)}, not ${l.limit})` : `by ${sig(-l.margin * 100, 3)}% (${writeValue(l.value, l.kind, system)} against ${l.relation} ${writeValue(l.limit, l.kind, system)})`;
+  return `${l.name} ${by}`;
+}
+
+export function checkTable(v: Verdict, system: UnitSystem): string {
+  const rows = [['check', 'spring', '', 'limit', 'margin', 'verdict', '']];
+  for (const l of v.lines) {
+    rows.push([l.name, writeValue(l.value, l.kind, system), l.relation, l.limit === null && l.name === 'buckling' ? 'stable' : writeValue(l.limit, l.kind, system),
+      writeMargin(l.margin), l.pass ? 'pass' : 'FAIL', l.pass ? (l.note ?? '') : l.label]);
+  }
+  return table(rows);
+}
+
+export function verdictSummary(v: Verdict, system: UnitSystem): string {
+  if (v.pass) return `Result: all ${v.lines.length} checks pass${v.limiting ? `; the smallest margin is ${v.limiting.name} at ${writeMargin(v.limiting.margin)}` : ''}.`;
+  return `Result: FAILS ${v.failing.length} of ${v.lines.length} checks: ${v.failing.map((l) => failureText(l, system)).join('; ')}.`;
+}
+
+export function checkText(v: Verdict, req: Requirements, band: WorkingBand, notes: string[], system: UnitSystem): string {
+  const g = v.analysis.geometry;
+  const L = (x: number) => formatQuantity(x, 'length', system);
+  const m = v.spring.choice.material;
+  const out: string[] = [];
+  out.push(`Check of a given spring: ${m.id} (${m.name}), wire ${L(g.wireDiameter)}, OD ${L(g.outerDiameter)}, ${sig(g.activeCoils, 4)} active of ${sig(g.totalCoils, 4)} coils, ${g.ends} ends, free length ${L(g.freeLength)}; rate ${formatQuantity(v.analysis.rate, 'rate', system)}`);
+  out.push(`Working force band: ${bandText(band, system)}`);
+  out.push('');
+  out.push(checkTable(v, system));
+  out.push('');
+  out.push(verdictSummary(v, system));
+  const warnings = rulesOfThumb(v.analysis, givenService(req, v.spring), quantityWriter(system)).map((w) => w.message);
+  if (notes.length || warnings.length) {
+    out.push('');
+    out.push('Notes:');
+    for (const n of [...notes, ...warnings]) out.push(`  ! ${n}`);
+  }
+  out.push('');
+  out.push(cautionText());
+  return out.join('\n') + '\n';
+}
