@@ -5,7 +5,7 @@ import { describe, expect, it } from 'vitest';
 import { cli } from './helpers.js';
 
 const readme = readFileSync('README.md', 'utf8');
-const pkg = JSON.parse(readFileSync('package.json', 'utf8')) as { scripts: Record<string, string> };
+const pkg = JSON.parse(readFileSync('package.json', 'utf8')) as { scripts: Record<string, string>; bin: Record<string, string> };
 
 describe('README', () => {
   it('opens with the job, then the demo and test command lines', () => {
@@ -18,7 +18,11 @@ describe('README', () => {
   });
 
   it('the demo script\'s commands all run and succeed', async () => {
-    const steps = pkg.scripts.demo.split('&&').map((c) => c.trim().replace(/^node dist\/src\/cli\/main\.js\s+/, '').split(/\s+/));
+    // Each step runs the installed command (package.json bin); here it runs in-process from source.
+    const bin = `node ${pkg.bin.coilfront} `;
+    const commands = pkg.scripts.demo.split('&&').map((c) => c.trim());
+    for (const c of commands) expect(c.startsWith(bin), c).toBe(true);
+    const steps = commands.map((c) => c.slice(bin.length).trim().split(/\s+/));
     expect(steps.length).toBeGreaterThanOrEqual(2);
     for (const args of steps) {
       const r = await cli(...args);

@@ -258,8 +258,34 @@ export function parseSeries(doc: unknown, file: string): WireSeries[] {
 
 let cached: Catalog | undefined;
 
-export function loadCatalog(directory = catalogDirectory()): Catalog {
-  if (cached && directory === catalogDirectory()) return cached;
+/** The file the build writes beside the built module: the catalog already read from the YAML and
+ * validated by this module (scripts/build.mjs), so a run pays neither the YAML parser nor the
+ * validation. Running from source there is no such file, and the YAML is read as below. */
+export const PREBUILT_CATALOG = 'catalog.json';
+
+function readPrebuilt(): Catalog | undefined {
+  let text: string;
+  try {
+    text = readFileSync(fileURLToPath(new URL(PREBUILT_CATALOG, import.meta.url)), 'utf8');
+  } catch {
+    return undefined;
+  }
+  return JSON.parse(text) as Catalog;
+}
+
+/** The catalog: the pre-validated build output when there is one, else the YAML of `directory`
+ * (default the package's catalogs/ folder), read and validated. */
+export function loadCatalog(directory?: string): Catalog {
+  if (directory === undefined || directory === catalogDirectory()) {
+    cached ??= (directory === undefined ? readPrebuilt() : undefined) ?? loadCatalogFromYaml(catalogDirectory());
+    return cached;
+  }
+  return loadCatalogFromYaml(directory);
+}
+
+/** Read and validate the YAML catalogs of `directory`: the source of truth, and the one validator
+ * (the build runs it to write the pre-validated JSON). */
+export function loadCatalogFromYaml(directory: string): Catalog {
   const mFile = join(directory, 'materials.yaml');
   const sFile = join(directory, 'wire-series.yaml');
   const catalog: Catalog = {
@@ -271,7 +297,6 @@ export function loadCatalog(directory = catalogDirectory()): Catalog {
       throw new CatalogError(`catalogs/materials.yaml: record ${m.id}: wire_series: expected one of ${catalog.series.map((s) => s.id).join(' | ')}, got "${m.wireSeries}"`);
     }
   }
-  cached = catalog;
   return catalog;
 }
 

@@ -5,18 +5,19 @@ import { readSpringCase } from '../input/springFile.js';
 import { analyzeSpring } from '../model/analysis.js';
 import { analysisJson, analysisText } from '../report/analysisReport.js';
 import { toJson } from '../report/json.js';
-import { writeSpringReport } from '../report/html/springHtml.js';
 import type { UnitSystem } from '../units/systems.js';
 import type { Io } from './io.js';
 import { EXIT } from './io.js';
 
 export interface AnalyzeOptions { json?: boolean; units?: UnitSystem; report?: string; force?: boolean }
 
-export function analyzeCommand(file: string, opts: AnalyzeOptions, io: Io): number {
+export async function analyzeCommand(file: string, opts: AnalyzeOptions, io: Io): Promise<number> {
   const catalog = loadCatalog();
   const c = readSpringCase(readInputFile(file), catalog);
   const a = analyzeSpring(c.geometry, c.figures, c.service);
   if (opts.report) {
+    // The HTML report loads only when asked for (start-up time: issue 10).
+    const { writeSpringReport } = await import('../report/html/springHtml.js');
     writeSpringReport(opts.report, c, a, opts.units ?? c.system, !!opts.force);
     io.stderr(`coilfront: report written to ${opts.report}\n`);
   }

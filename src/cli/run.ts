@@ -42,7 +42,7 @@ export function buildProgram(io: Io, setCode: (c: number) => void): Command {
     .addOption(unitsOption())
     .option('--report <file.html>', 'also write a self-contained HTML report')
     .option('--force', 'overwrite an existing report file')
-    .action((file: string, opts) => setCode(analyzeCommand(file, opts, io)));
+    .action(async (file: string, opts) => setCode(await analyzeCommand(file, opts, io)));
 
   program
     .command('materials')

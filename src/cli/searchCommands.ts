@@ -6,18 +6,19 @@ import { readInputFile } from '../input/document.js';
 import { ENVELOPE_SHORTHANDS, parseAssignment, sweepValues, withValue } from '../input/overrides.js';
 import { RANK_KEYS, readRequirements } from '../input/requirements.js';
 import { candidateRecord, countsRecord, designJson, designText, relaxSuggestions } from '../report/designReport.js';
-import { toCsv } from '../report/csv.js';
 import { toJson, SI_UNITS } from '../report/json.js';
 import { writeOutputFile } from '../report/writeFile.js';
 import { cautionText } from '../report/cautions.js';
 import { runDesign, type Candidate, type DesignRun, type StrategyChoice } from '../spring/design.js';
 import { FRONTIER_KEYS, computeFrontier, type FrontierKey } from '../spring/frontier.js';
+// The HTML report and CSV writers load only when a command writes them (start-up time: issue 10).
+const htmlReport = () => import('../report/html/designHtml.js');
+const csv = () => import('../report/csv.js');
 import { inUnit, sig, unitSymbol } from '../units/format.js';
 import { InputError } from '../units/parse.js';
 import type { UnitSystem } from '../units/systems.js';
 import { EXIT, type Io } from './io.js';
 import { unitsOption } from './options.js';
-import { writeDesignReport } from '../report/html/designHtml.js';
 
 export interface CommonOptions {
   json?: boolean; units?: UnitSystem; set?: string[]; strategy?: StrategyChoice; seed?: string; top?: string; rank?: string;
@@ -79,12 +80,12 @@ function progress(io: Io, label: string): ((done: number, total: number) => void
   };
 }
 
-function designCommand(file: string, opts: CommonOptions, io: Io): number {
+async function designCommand(file: string, opts: CommonOptions, io: Io): Promise<number> {
   const req = readRequirements(rawWithOverrides(file, opts), loadCatalog());
   const run = runDesign(req, { strategy: opts.strategy, onProgress: progress(io, 'searching') });
   const system = opts.units ?? req.system;
   if (opts.report) {
-    writeDesignReport(opts.report, run, system, !!opts.force);
+    (await htmlReport()).writeDesignReport(opts.report, run, system, !!opts.force);
     io.stderr(`coilfront: report written to ${opts.report}\n`);
   }
   if (opts.json) io.stdout(toJson(designJson(run, !!opts.timing)) + '\n');
@@ -121,7 +122,7 @@ export function springRow(c: Candidate, system: UnitSystem): (string | number | 
 
 interface FrontierOptions extends CommonOptions { x: FrontierKey; y: FrontierKey; output?: string }
 
-function frontierCommand(file: string, opts: FrontierOptions, io: Io): number {
+async function frontierCommand(file: string, opts: FrontierOptions, io: Io): Promise<number> {
   if (opts.x === opts.y) throw new InputError('--y', 'an objective other than --x');
   const req = readRequirements(rawWithOverrides(file, opts), loadCatalog());
   const system = opts.units ?? req.system;
@@ -131,14 +132,14 @@ function frontierCommand(file: string, opts: FrontierOptions, io: Io): number {
     io.stdout(toJson({ units: SI_UNITS, x: opts.x, y: opts.y, feasible: fr.cloud.length, ...countsRecord(fr.run), frontier_strategy: fr.strategy,
       frontier: fr.front.map((c) => ({ [opts.x]: keyValue(c, opts.x), [opts.y]: keyValue(c, opts.y), ...candidateRecord(c) })) }) + '\n');
   } else {
-    const csv = toCsv(['rank', ...springColumns(system)], fr.front.map((c, i) => [i + 1, ...springRow(c, system)]));
+    const csvText = (await csv()).toCsv(['rank', ...springColumns(system)], fr.front.map((c, i) => [i + 1, ...springRow(c, system)]));
     if (opts.output) {
-      writeOutputFile(opts.output, csv, !!opts.force, '--output');
+      writeOutputFile(opts.output, csvText, !!opts.force, '--output');
       io.stderr(`coilfront: ${fr.front.length} springs on the ${opts.x} / ${opts.y} frontier (of ${fr.cloud.length} feasible) written to ${opts.output}\n`);
-    } else io.stdout(csv);
+    } else io.stdout(csvText);
   }
   if (opts.report) {
-    writeDesignReport(opts.report, fr.run, system, !!opts.force, fr);
+    (await htmlReport()).writeDesignReport(opts.report, fr.run, system, !!opts.force, fr);
     io.stderr(`coilfront: report written to ${opts.report}\n`);
   }
   if (!opts.json) io.stderr(cautionText() + '\n');
@@ -175,7 +176,7 @@ export function runSweep(file: string, opts: CommonOptions, vary: string, io: Io
   return { path, rows, system };
 }
 
-function sweepCommand(file: string, opts: SweepOptions, io: Io): number {
+async function sweepCommand(file: string, opts: SweepOptions, io: Io): Promise<number> {
   const { path, rows, system: fileSystem } = runSweep(file, opts, opts.vary, io);
   const system = opts.units ?? fileSystem;
   const name = path.join('.');
@@ -183,15 +184,15 @@ function sweepCommand(file: string, opts: SweepOptions, io: Io): number {
     io.stdout(toJson({ units: SI_UNITS, vary: name, note: `${name} values are as given on the command line, in the file's unit system`,
       rows: rows.map((r) => ({ value: r.value, feasible: r.run.result.feasibleCells, best: r.best ? candidateRecord(r.best) : null, limiting_check: r.limiting })) }) + '\n');
   } else {
-    const csv = toCsv([`${name} (${fileSystem === 'us' ? 'in/lbf/psi' : 'mm/N/MPa'})`, 'feasible_combinations', ...springColumns(system), 'limiting_check'],
+    const csvText = (await csv()).toCsv([`${name} (${fileSystem === 'us' ? 'in/lbf/psi' : 'mm/N/MPa'})`, 'feasible_combinations', ...springColumns(system), 'limiting_check'],
       rows.map((r) => [r.value, r.run.result.feasibleCells, ...(r.best ? springRow(r.best, system) : springColumns(system).map((_, i) => (i === 0 ? 'none' : null))), r.limiting]));
     if (opts.output) {
-      writeOutputFile(opts.output, csv, !!opts.force, '--output');
+      writeOutputFile(opts.output, csvText, !!opts.force, '--output');
       io.stderr(`coilfront: ${rows.length} runs of ${name} written to ${opts.output}\n`);
-    } else io.stdout(csv);
+    } else io.stdout(csvText);
   }
   if (opts.report) {
-    writeDesignReport(opts.report, rows.find((r) => r.best)?.run ?? rows[0].run, system, !!opts.force, undefined, { name, rows });
+    (await htmlReport()).writeDesignReport(opts.report, rows.find((r) => r.best)?.run ?? rows[0].run, system, !!opts.force, undefined, { name, rows });
     io.stderr(`coilfront: report written to ${opts.report}\n`);
   }
   if (!opts.json) io.stderr(cautionText() + '\n');
@@ -204,7 +205,7 @@ export function registerSearchCommands(program: Command, io: Io, setCode: (c: nu
     .argument('<requirements-file>', 'YAML or JSON requirements file (see README)'))
     .option('--report <file.html>', 'also write a self-contained HTML design report')
     .option('--force', 'overwrite an existing report file')
-    .action((file: string, opts: CommonOptions) => setCode(designCommand(file, opts, io)));
+    .action(async (file: string, opts: CommonOptions) => setCode(await designCommand(file, opts, io)));
 
   const keys = Object.keys(FRONTIER_KEYS);
   addCommon(program.command('frontier')
@@ -215,7 +216,7 @@ export function registerSearchCommands(program: Command, io: Io, setCode: (c: nu
     .option('-o, --output <file.csv>', 'write the CSV here instead of stdout')
     .option('--report <file.html>', 'also write a self-contained HTML report with the frontier plot')
     .option('--force', 'overwrite existing output files')
-    .action((file: string, opts: FrontierOptions) => setCode(frontierCommand(file, opts, io)));
+    .action(async (file: string, opts: FrontierOptions) => setCode(await frontierCommand(file, opts, io)));
 
   addCommon(program.command('sweep')
     .description('re-run the design for each value of one requirement: what a tighter envelope costs')
@@ -224,5 +225,5 @@ export function registerSearchCommands(program: Command, io: Io, setCode: (c: nu
     .option('-o, --output <file.csv>', 'write the CSV here instead of stdout')
     .option('--report <file.html>', 'also write a self-contained HTML report with the sweep plot')
     .option('--force', 'overwrite existing output files')
-    .action((file: string, opts: SweepOptions) => setCode(sweepCommand(file, opts, io)));
+    .action(async (file: string, opts: SweepOptions) => setCode(await sweepCommand(file, opts, io)));
 }

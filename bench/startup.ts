@@ -1,0 +1,77 @@
+// Whole-command start-up (issue 10): `coilfront design` on the demo, from process start to exit, against
+// a bare `node -e 0`, as interleaved runs (one of each per round, the order rotating) so that the
+// machine's drift hits every command alike; medians, and the median of the per-round ratios.
+// `npm run bench` runs it after bench/run.ts and it writes its own section of bench/results.md.
+// Figures only: nothing here is a test assertion.
+import { spawnSync } from 'node:child_process';
+import { mkdtempSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
+import { parse as parseYaml } from 'yaml';
+
+const DEMO = 'examples/washer-trigger.yaml';
+const ROUNDS = Number(process.env.STARTUP_ROUNDS ?? 21);
+const RESULTS = 'bench/results.md';
+const HEADING = '## Whole-command start-up';
+
+const pkg = JSON.parse(readFileSync('package.json', 'utf8')) as { bin: Record<string, string> };
+const bin = pkg.bin.coilfront;
+const scratch = mkdtempSync(join(tmpdir(), 'coilfront-startup-'));
+// The same requirements as JSON: what the run costs without a YAML parser.
+const demoJson = join(scratch, 'washer-trigger.json');
+writeFileSync(demoJson, JSON.stringify(parseYaml(readFileSync(DEMO, 'utf8'))));
+
+interface Subject { key: string; label: string; args: string[] }
+const subjects: Subject[] = [
+  { key: 'node', label: '`node -e 0` (the yardstick)', args: ['-e', '0'] },
+  { key: 'design', label: `\`coilfront design ${DEMO}\` (the built command, \`${bin}\`)`, args: [bin, 'design', DEMO] },
+  { key: 'json', label: 'the same requirements as a JSON file (no YAML to parse)', args: [bin, 'design', demoJson] },
+  { key: 'modules', label: 'the same command from the unbundled modules (`dist/src/cli/main.js`), for comparison', args: ['dist/src/cli/main.js', 'design', DEMO] },
+];
+
+function once(s: Subject): number {
+  const t = performance.now();
+  const r = spawnSync(process.execPath, s.args, { stdio: 'ignore' });
+  const ms = performance.now() - t;
+  if (r.status !== 0) throw new Error(`${s.args.join(' ')} exited ${r.status}`);
+  return ms;
+}
+
+const times = new Map<string, number[]>(subjects.map((s) => [s.key, []]));
+for (const s of subjects) once(s); // warm-up: file cache, not counted
+for (let round = 0; round < ROUNDS; round++) {
+  for (let i = 0; i < subjects.length; i++) {
+    const s = subjects[(round + i) % subjects.length];
+    times.get(s.key)!.push(once(s));
+  }
+}
+rmSync(scratch, { recursive: true, force: true });
+
+const median = (xs: number[]) => { const s = [...xs].sort((a, b) => a - b); return s.length % 2 ? s[(s.length - 1) / 2] : (s[s.length / 2 - 1] + s[s.length / 2]) / 2; };
+const ratio = (key: string) => median(times.get(key)!.map((t, i) => t / times.get('node')![i]));
+const ms = (key: string) => median(times.get(key)!).toFixed(0);
+
+const lines = [
+  HEADING,
+  `${ROUNDS} rounds, each running every command below once in rotating order after one warm-up each; wall time from spawn to exit, median; the ratio is the median of the per-round ratios to \`node -e 0\`.`,
+  '',
+  '| command | median wall | ratio to `node -e 0` |',
+  '|---|---|---|',
+  ...subjects.map((s) => `| ${s.label} | ${ms(s.key)} ms | ${s.key === 'node' ? '1' : ratio(s.key).toFixed(2)} |`),
+  '',
+  `Target: \`design\` on the demo at most 2x \`node -e 0\` (moonshot 1.5x): **${ratio('design').toFixed(2)}x** in this run.`,
+];
+const text = lines.join('\n') + '\n';
+process.stderr.write(text);
+
+// Replace this section of bench/results.md (bench/run.ts writes the rest), or add it at the end.
+let results = '';
+try { results = readFileSync(RESULTS, 'utf8'); } catch { /* a first run */ }
+const start = results.indexOf(HEADING);
+if (start >= 0) {
+  const next = results.indexOf('\n## ', start + HEADING.length);
+  results = results.slice(0, start) + text + (next >= 0 ? results.slice(next + 1) : '');
+} else {
+  results = (results ? results.replace(/\n*$/, '\n\n') : '') + text;
+}
+writeFileSync(RESULTS, results);
