@@ -67,6 +67,10 @@ function triple(f: Fields, key: string): readonly [number, number, number] {
     if (!(n > 0 && n < 1)) throw new InputError(`${f.name(key)}[${i}]`, 'a fraction between 0 and 1', v);
     return n;
   });
+  // The life curve must be non-increasing in cycles (src/model/fatigue.ts relies on it).
+  for (let i = 1; i < 3; i++) {
+    if (out[i] > out[i - 1]) throw new InputError(`${f.name(key)}[${i}]`, `a fraction at most the one for fewer cycles (${out[i - 1]}): a longer life is never easier`, out[i]);
+  }
   return [out[0], out[1], out[2]];
 }
 
@@ -172,7 +176,18 @@ export function parseMaterials(doc: unknown, file: string): Material[] {
       if (!family) throw new InputError('family', `one of ${FAMILIES.join(' | ')} (the field is missing)`);
       const strengthFields = Fields.of(f.require('strength', 'a strength law'), 'strength', 'si');
       const strength = readStrength(strengthFields);
+      const lawIsMinimum = strengthFields.bool('minimum') ?? false;
       strengthFields.rejectUnknown();
+      let minimumStrength: Material['minimumStrength'];
+      if (f.get('minimum_strength') !== undefined) {
+        if (lawIsMinimum) throw new InputError('minimum_strength', 'no separate table when strength.minimum is true');
+        const minFields = Fields.of(f.require('minimum_strength', 'a tabulated minimum strength law'), 'minimum_strength', 'si');
+        const min = readStrength(minFields);
+        minFields.rejectUnknown();
+        minimumStrength = { law: min.law, minDiameter: min.min, maxDiameter: min.max };
+      } else if (lawIsMinimum) {
+        minimumStrength = { law: strength.law, minDiameter: strength.min, maxDiameter: strength.max };
+      }
       const moduliFields = Fields.of(f.require('moduli', 'moduli bands'), 'moduli', 'si');
       const moduli = readModuli(moduliFields);
       moduliFields.rejectUnknown();
@@ -193,6 +208,7 @@ export function parseMaterials(doc: unknown, file: string): Material[] {
         strength: strength.law,
         minDiameter: strength.min,
         maxDiameter: strength.max,
+        minimumStrength,
         moduli,
         density: sourced(f, 'density', (g) => g.requiredQuantity('value', 'density', { positive: true })),
         allowable,

@@ -21,6 +21,8 @@ export interface Material {
   strength: StrengthLaw;
   minDiameter: number;
   maxDiameter: number;
+  /** The tabulated minimum tensile strength of the wire's standard, where one exists (strength_basis: minimum). */
+  minimumStrength?: { law: StrengthLaw; minDiameter: number; maxDiameter: number };
   moduli: { bands: ModulusBand[]; source: string };
   density: Sourced<number>;
   allowable: { static: number; staticSetRemoved: number; source: string };

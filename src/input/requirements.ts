@@ -10,6 +10,7 @@ import { InputError, parseNumber, parseQuantity } from '../units/parse.js';
 import type { UnitSystem } from '../units/systems.js';
 import { Fields, isRecord } from './fields.js';
 import { parseMaterialChoice, type MaterialChoice } from './material.js';
+import { SURGE_ENDS, type SurgeEnds } from '../model/surge.js';
 import { parseCycles } from './springFile.js';
 
 export const RANK_KEYS = ['mass', 'wire_volume', 'outer_diameter', 'free_length', 'safety_factor'] as const;
@@ -20,6 +21,8 @@ export interface Requirements {
   materials: MaterialChoice[];
   ends: EndType[];
   seating: Seating;
+  /** Surge boundary: both ends on plates (default) or one end free; not the buckling seating. */
+  surgeEnds: SurgeEnds;
   workingForce: number;
   workingLength: number;
   loadTolerance: number;
@@ -170,6 +173,7 @@ export function readRequirements(raw: unknown, catalog: Catalog): Requirements {
   const req: Requirements = {
     system, materials, ends,
     seating: (f.choice('seating', SEATINGS) ?? DEFAULTS.seating) as Seating,
+    surgeEnds: (f.choice('surge_ends', SURGE_ENDS) ?? 'plates') as SurgeEnds,
     workingForce, workingLength,
     loadTolerance: f.fraction('load_tolerance') ?? DEFAULTS.loadTolerance,
     workingTolerance: f.fraction('working_tolerance'),

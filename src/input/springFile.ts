@@ -11,6 +11,7 @@ import { InputError, parseNumber, parseQuantity } from '../units/parse.js';
 import type { UnitSystem } from '../units/systems.js';
 import { Fields } from './fields.js';
 import { materialFigures, parseMaterialChoice, strengthRangeNote, type MaterialChoice } from './material.js';
+import { SURGE_ENDS, type SurgeEnds } from '../model/surge.js';
 
 export interface SpringCase {
   system: UnitSystem;
@@ -81,6 +82,7 @@ export function readSpringCase(raw: unknown, catalog: Catalog): SpringCase {
     correction,
     directShear,
     seating,
+    surgeEnds: (f.choice('surge_ends', SURGE_ENDS) ?? 'plates') as SurgeEnds,
     temperature: f.quantity('temperature', 'temperature'),
     forcingFrequency: f.quantity('forcing_frequency', 'frequency', { nonNegative: true }),
     clashAllowance: f.fraction('clash_allowance') ?? 0.15,

@@ -4,14 +4,14 @@ import { endConditionConstant, criticalDeflection, stableFreeLengthLimit, type S
 import { fractionalOverrun, minimumGapSum, solidOuterDiameter } from './clash.js';
 import {
   INFINITE_LIFE_CYCLES, STATIC_SERVICE_CYCLES, alternatingStrength, cycleStresses, endurancePoint, fatigueSafetyFactor,
-  type EndurancePoint, type FatigueCriterion, type FiniteLifeTable,
+  type EndurancePoint, type EnduranceSource, type FatigueCriterion, type FiniteLifeTable,
 } from './fatigue.js';
 import { helixAngle, inactiveCoils, pitch, solidLength, springMass, wireLength, wireVolume, type EndType } from './geometry.js';
 import { springRate } from './rate.js';
 import { shearStress } from './stress.js';
 import { stressFactor, type StressCorrection } from './stressFactor.js';
 import { ultimateShearStrength } from './strength.js';
-import { activeCoilMass, surgeFrequency } from './surge.js';
+import { activeCoilMass, surgeFrequency, type SurgeEnds } from './surge.js';
 
 export interface SpringGeometry {
   wireDiameter: number;
@@ -29,7 +29,7 @@ export interface MaterialFigures {
   shearModulus: number;
   elasticModulus: number;
   density: number;
-  /** Zimmerli's data apply (steels); otherwise the 1e7 row of the finite-life table stands for infinite life. */
+  /** Zimmerli's data apply (spring steels); otherwise the 1e7 row of the finite-life table is the endurance. */
   zimmerli: boolean;
   finiteLife: FiniteLifeTable;
   maxTemperature: number;
@@ -45,6 +45,8 @@ export interface ServiceConditions {
   correction: StressCorrection;
   directShear: boolean;
   seating: Seating;
+  /** Surge boundary (default 'plates'); independent of the buckling seating. */
+  surgeEnds?: SurgeEnds;
   temperature?: number;
   forcingFrequency?: number;
   /** Required fractional overrun to solid (robust linearity), 0.15 by default. */
@@ -65,8 +67,10 @@ export interface FatigueResult {
   alternatingStress: number;
   meanStress: number;
   criterion: FatigueCriterion;
+  /** The life curve at this life: repeated-stress strength S_sr and the point (S_sr/2, S_sr/2). */
+  repeatedStrength: number;
   endurance: EndurancePoint;
-  enduranceSource: 'zimmerli' | 'finite-life-table';
+  enduranceSource: EnduranceSource;
   ultimateShear: number;
   alternatingStrength: number;
   /** NaN when the cycle has no alternating stress. */
@@ -89,7 +93,8 @@ export interface SpringAnalysis {
   staticSafetyFactor: number;
   fatigue: FatigueResult | null;
   buckling: { endConstant: number; absolutelyStable: boolean; stableFreeLengthLimit: number; criticalDeflection: number; maxDeflection: number; buckles: boolean };
-  surge: { bothEndsOnPlates: number; oneEndFree: number; relevant: number };
+  /** Both surge frequencies, the boundary asked and its value (`relevant`, the one the surge check uses). */
+  surge: { bothEndsOnPlates: number; oneEndFree: number; ends: SurgeEnds; relevant: number };
   clash: { shortestLength: number; overrun: number; required: number; gapSum: number; minGapSum: number; ok: boolean };
   warnings: Warning[];
 }
@@ -123,7 +128,7 @@ export function analyzeSpring(g: SpringGeometry, m: MaterialFigures, s: ServiceC
   if (s.cycles !== undefined && s.cycles >= STATIC_SERVICE_CYCLES && points.length >= 1) {
     const infinite = s.cycles >= INFINITE_LIFE_CYCLES;
     const cyc = cycleStresses(shearStress(minForce, D, d, K), shearStress(maxForce, D, d, K));
-    const { point: endurance, source: enduranceSource } = endurancePoint(s.cycles, s.peened, m.zimmerli, m.finiteLife, m.tensileStrength);
+    const { point: endurance, source: enduranceSource, repeatedStrength } = endurancePoint(s.cycles, s.peened, m.zimmerli, m.finiteLife, m.tensileStrength, s.criterion);
     const slope = cyc.mean > 0 ? cyc.alternating / cyc.mean : Infinity;
     fatigue = {
       life: infinite ? 'infinite' : 'finite',
@@ -132,7 +137,7 @@ export function analyzeSpring(g: SpringGeometry, m: MaterialFigures, s: ServiceC
       alternatingStress: cyc.alternating,
       meanStress: cyc.mean,
       criterion: s.criterion,
-      endurance, enduranceSource, ultimateShear,
+      repeatedStrength, endurance, enduranceSource, ultimateShear,
       alternatingStrength: alternatingStrength(slope, endurance, ultimateShear, s.criterion),
       safetyFactor: fatigueSafetyFactor(cyc.alternating, cyc.mean, endurance, ultimateShear, s.criterion),
     };
@@ -147,7 +152,8 @@ export function analyzeSpring(g: SpringGeometry, m: MaterialFigures, s: ServiceC
   const activeMass = activeCoilMass(d, D, g.activeCoils, m.density);
   const fPlates = surgeFrequency(k, activeMass, false);
   const fFree = surgeFrequency(k, activeMass, true);
-  const fRelevant = s.seating === 'fixed-free' ? fFree : fPlates;
+  const surgeEnds = s.surgeEnds ?? 'plates';
+  const fRelevant = surgeEnds === 'one-free' ? fFree : fPlates;
 
   const overrun = maxForce > 0 ? fractionalOverrun(solidForce, maxForce) : Infinity;
   const gapSum = shortest - Ls;
@@ -169,7 +175,7 @@ export function analyzeSpring(g: SpringGeometry, m: MaterialFigures, s: ServiceC
     staticSafetyFactor,
     fatigue,
     buckling: { endConstant: alpha, absolutelyStable, stableFreeLengthLimit: stableFreeLengthLimit(D, m.elasticModulus, m.shearModulus, alpha), criticalDeflection: ycr, maxDeflection, buckles },
-    surge: { bothEndsOnPlates: fPlates, oneEndFree: fFree, relevant: fRelevant },
+    surge: { bothEndsOnPlates: fPlates, oneEndFree: fFree, ends: surgeEnds, relevant: fRelevant },
     clash: { shortestLength: shortest, overrun: Number.isFinite(overrun) ? overrun : NaN, required: s.clashAllowance, gapSum, minGapSum: minGap, ok: clashOk },
     warnings: [],
   };
@@ -196,7 +202,7 @@ export function rulesOfThumb(a: SpringAnalysis, s: ServiceConditions, q: Quantit
   if (Number.isFinite(a.staticSafetyFactor) && a.staticSafetyFactor < 1) w.push({ code: 'overstress', message: `stress at the shortest evaluated length is ${f(1 / a.staticSafetyFactor)} times the static allowable: the spring will take a set` });
   if (!a.solid.solidSafe) w.push({ code: 'not-solid-safe', message: `stress at solid (${q.stress(a.solid.stress)}) exceeds the allowable (${q.stress(a.material.allowableStress)}): the spring takes a set if closed solid` });
   if (a.fatigue && Number.isFinite(a.fatigue.safetyFactor) && a.fatigue.safetyFactor < 1) w.push({ code: 'fatigue', message: `fatigue safety factor ${f(a.fatigue.safetyFactor)} is below 1: expect failure before ${a.fatigue.life === 'infinite' ? 'infinite life' : `${a.fatigue.cycles.toExponential(0)} cycles`}` });
-  if (a.fatigue && !a.material.zimmerli && a.fatigue.life === 'infinite') w.push({ code: 'endurance-data', message: 'Zimmerli\'s endurance data cover steels only: infinite life is judged from the 1e7-cycle row of the finite-life table' });
+  if (a.fatigue && !a.material.zimmerli && a.fatigue.life === 'infinite') w.push({ code: 'endurance-data', message: 'Zimmerli\'s endurance data are for spring steels: for this material the endurance is the 1e7-cycle row of the finite-life table' });
   if (a.buckling.buckles) w.push({ code: 'buckling', message: `deflection ${q.length(a.buckling.maxDeflection)} reaches the critical buckling deflection ${q.length(a.buckling.criticalDeflection)}: guide it on a rod or in a bore, or change seating or proportions` });
   if (s.forcingFrequency && s.forcingFrequency > 0 && a.surge.relevant < s.surgeMargin * s.forcingFrequency) w.push({ code: 'surge', message: `surge frequency ${f(a.surge.relevant)} Hz is less than ${s.surgeMargin} times the forcing frequency ${f(s.forcingFrequency)} Hz (common practice)` });
   if (a.points.length && !a.clash.ok) w.push({ code: 'clash', message: `only ${f(a.clash.overrun * 100)}% force overrun to solid at the shortest length; at least ${f(s.clashAllowance * 100)}% is asked${s.gapRule ? ` and a coil-gap sum of ${q.length(a.clash.minGapSum)} (EN 13906-1)` : ''}` });

@@ -3,6 +3,15 @@
 //   both ends on plates:  f = (1/2) sqrt(k / m_a);  one end free: f = (1/4) sqrt(k / m_a)
 // with m_a the mass of the active coils, rho pi^2 d^2 D Na / 4.
 
+/** How the spring's ends meet the surge wave: both on plates (the default), or one end free. A setting of
+ * its own: the buckling seating says how the ends are held sideways, not whether one end floats axially. */
+export const SURGE_ENDS = ['plates', 'one-free'] as const;
+export type SurgeEnds = (typeof SURGE_ENDS)[number];
+
+export function surgeEndsLabel(ends: SurgeEnds): string {
+  return ends === 'one-free' ? 'one end free' : 'both ends on plates';
+}
+
 export function activeCoilMass(wireDiameter: number, meanDiameter: number, activeCoils: number, density: number): number {
   return ((Math.PI * Math.PI * wireDiameter * wireDiameter * meanDiameter * activeCoils) / 4) * 1e-9 * density;
 }

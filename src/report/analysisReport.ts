@@ -1,5 +1,7 @@
 // The analysis of one spring for people (text) and for machines (JSON, SI).
 import { rulesOfThumb, type SpringAnalysis } from '../model/analysis.js';
+import { enduranceSourceLabel } from '../model/fatigue.js';
+import { surgeEndsLabel } from '../model/surge.js';
 import type { SpringCase } from '../input/springFile.js';
 import { formatQuantity as q, quantityWriter, sig } from '../units/format.js';
 import type { UnitSystem } from '../units/systems.js';
@@ -29,14 +31,16 @@ export function analysisJson(c: SpringCase, a: SpringAnalysis, notes: string[]):
       life: a.fatigue.life, cycles: Number.isFinite(a.fatigue.cycles) ? a.fatigue.cycles : 'infinite', criterion: a.fatigue.criterion,
       min_force: a.fatigue.minForce, max_force: a.fatigue.maxForce,
       alternating_stress: a.fatigue.alternatingStress, mean_stress: a.fatigue.meanStress,
-      endurance_source: a.fatigue.enduranceSource, endurance_alternating: a.fatigue.endurance.alternating, endurance_mean: a.fatigue.endurance.mean,
+      endurance_source: a.fatigue.enduranceSource, repeated_stress_strength: a.fatigue.repeatedStrength, endurance_alternating: a.fatigue.endurance.alternating, endurance_mean: a.fatigue.endurance.mean,
       ultimate_shear_strength: a.fatigue.ultimateShear, alternating_strength: a.fatigue.alternatingStrength, safety_factor: a.fatigue.safetyFactor,
     },
     buckling: { seating: c.service.seating, end_constant: a.buckling.endConstant, absolutely_stable: a.buckling.absolutelyStable,
       stable_free_length_limit: a.buckling.stableFreeLengthLimit, critical_deflection: a.buckling.absolutelyStable ? null : a.buckling.criticalDeflection,
       max_deflection: a.buckling.maxDeflection, buckles: a.buckling.buckles },
+    // The surge frequency of the boundary asked (surge_ends), then both, by name; the buckling seating plays no part.
     natural_frequency: a.surge.relevant,
-    surge: { both_ends_on_plates: a.surge.bothEndsOnPlates, one_end_free: a.surge.oneEndFree },
+    surge_ends: a.surge.ends,
+    surge: { ends: a.surge.ends, both_ends_on_plates: a.surge.bothEndsOnPlates, one_end_free: a.surge.oneEndFree },
     clash: { shortest_length: a.clash.shortestLength, overrun: a.clash.overrun, required_overrun: a.clash.required, coil_gap_sum: a.clash.gapSum, min_coil_gap_sum_en13906: a.clash.minGapSum, ok: a.clash.ok },
     warnings: a.warnings,
     notes,
@@ -60,7 +64,7 @@ export function analysisText(c: SpringCase, a: SpringAnalysis, system: UnitSyste
     ['free length L0', L(g.freeLength), 'solid length Ls', L(g.solidLength)],
     ['pitch', L(g.pitch), 'pitch angle', `${sig(g.helixAngleDeg, 3)} deg`],
     ['wire length', L(g.wireLength), 'mass', q(g.mass, 'mass', system)],
-    ['rate k', q(a.rate, 'rate', system), 'natural frequency', `${sig(a.surge.relevant)} Hz (${c.service.seating === 'fixed-free' ? 'one end free' : 'both ends on plates'})`],
+    ['rate k', q(a.rate, 'rate', system), 'natural frequency', `${sig(a.surge.relevant)} Hz (${surgeEndsLabel(a.surge.ends)}, surge_ends: ${a.surge.ends})`],
   ]));
   out.push('');
   out.push('Material at this diameter');
@@ -80,8 +84,9 @@ export function analysisText(c: SpringCase, a: SpringAnalysis, system: UnitSyste
   out.push('');
   if (a.fatigue) {
     const fa = a.fatigue;
-    out.push(`Fatigue (${fa.life === 'infinite' ? 'infinite life' : `${sig(fa.cycles, 3)} cycles`}, ${fa.criterion}, ${fa.enduranceSource === 'zimmerli' ? `Zimmerli ${c.service.peened ? 'shot-peened' : 'unpeened'}` : 'finite-life table'})`);
+    out.push(`Fatigue (${fa.life === 'infinite' ? 'infinite life' : `${sig(fa.cycles, 3)} cycles`}, ${fa.criterion}, ${enduranceSourceLabel(fa.enduranceSource, c.service.peened)})`);
     out.push(table([
+      ['repeated-stress strength S_sr', S(fa.repeatedStrength), 'S_sr / Sut', sig(fa.repeatedStrength / a.material.tensileStrength, 3)],
       ['alternating stress', S(fa.alternatingStress), 'mean stress', S(fa.meanStress)],
       ['endurance point Ssa', S(fa.endurance.alternating), 'at Ssm', S(fa.endurance.mean)],
       ['ultimate shear Ssu', S(fa.ultimateShear), 'alternating strength', S(fa.alternatingStrength)],
@@ -94,7 +99,7 @@ export function analysisText(c: SpringCase, a: SpringAnalysis, system: UnitSyste
   const b = a.buckling;
   out.push(`Buckling (${c.service.seating}, alpha ${b.endConstant}): ${b.absolutelyStable ? `absolutely stable (free length below ${L(b.stableFreeLengthLimit)})` : `critical deflection ${L(b.criticalDeflection)}, largest deflection ${L(b.maxDeflection)}: ${b.buckles ? 'BUCKLES unless guided' : 'stable'}`}`);
   out.push(`Clash: force overrun to solid ${sig(a.clash.overrun * 100, 3)}% (asked ${sig(a.clash.required * 100, 3)}%), coil-gap sum ${L(a.clash.gapSum)} (EN 13906-1 static minimum ${L(a.clash.minGapSum)})`);
-  out.push(`Surge: ${sig(a.surge.bothEndsOnPlates)} Hz with both ends on plates, ${sig(a.surge.oneEndFree)} Hz with one end free`);
+  out.push(`Surge: ${sig(a.surge.bothEndsOnPlates)} Hz with both ends on plates, ${sig(a.surge.oneEndFree)} Hz with one end free; the surge check uses ${surgeEndsLabel(a.surge.ends)} (surge_ends: ${a.surge.ends})`);
   out.push('');
   const all = [...notes, ...rulesOfThumb(a, c.service, quantityWriter(system)).map((w) => w.message)];
   out.push(all.length ? 'Warnings' : 'Warnings: none');

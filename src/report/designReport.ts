@@ -43,6 +43,7 @@ export function candidateRecord(c: Candidate): Record<string, unknown> {
     static_safety_factor: a.staticSafetyFactor,
     fatigue_safety_factor: a.fatigue ? a.fatigue.safetyFactor : null,
     natural_frequency: a.surge.relevant,
+    surge_ends: a.surge.ends,
     absolutely_stable: a.buckling.absolutelyStable,
     critical_deflection: a.buckling.absolutelyStable ? null : a.buckling.criticalDeflection,
     checks,
@@ -52,7 +53,7 @@ export function candidateRecord(c: Candidate): Record<string, unknown> {
 
 export function requirementsRecord(req: Requirements): Record<string, unknown> {
   return {
-    materials: req.materials.map((m) => m.material.id), ends: req.ends, seating: req.seating,
+    materials: req.materials.map((m) => m.material.id), ends: req.ends, seating: req.seating, surge_ends: req.surgeEnds,
     working_force: req.workingForce, working_length: req.workingLength, operating_length: req.operatingLength ?? null,
     operating_force: req.operatingForce ?? null, load_tolerance: req.loadTolerance,
     max_outer_diameter: req.maxOuterDiameter ?? null, min_inner_diameter: req.minInnerDiameter ?? null,

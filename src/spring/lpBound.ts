@@ -127,7 +127,7 @@ export function lpLowerBound(problem: SpringProblem): LpBound {
     }
     // Surge: f = c d / (D^2 Na) >= margin * forcing.
     if (req.forcingFrequency) {
-      const c = (req.seating === 'fixed-free' ? 0.25 : 0.5) * Math.sqrt((4000 * Gmax) / (8 * Math.PI * Math.PI * rhoMin * 1e-9));
+      const c = (req.surgeEnds === 'one-free' ? 0.25 : 0.5) * Math.sqrt((4000 * Gmax) / (8 * Math.PI * Math.PI * rhoMin * 1e-9));
       rows.push({ coefficients: { u: 1, v: -2, w: -1 }, min: Math.log((req.safety.surge * req.forcingFrequency) / c) });
     }
     models++;

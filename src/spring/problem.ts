@@ -37,7 +37,7 @@ export function springServiceConditions(req: Requirements): ServiceConditions {
   return {
     lengths: req.operatingLength !== undefined ? [req.workingLength, req.operatingLength] : [req.workingLength],
     cycles: req.cycles, peened: req.peened, criterion: req.criterion, correction: req.correction,
-    directShear: req.directShear, seating: req.seating, temperature: req.temperature,
+    directShear: req.directShear, seating: req.seating, surgeEnds: req.surgeEnds, temperature: req.temperature,
     forcingFrequency: req.forcingFrequency, clashAllowance: req.clashAllowance, gapRule: req.gapRule, surgeMargin: req.safety.surge,
   };
 }
@@ -73,7 +73,7 @@ export function buildSpringProblem(req: Requirements): SpringProblem {
     sSsu[i] = ultimateShearStrength(s.figures.tensileStrength);
     sTmax[i] = s.figures.maxTemperature;
     sCost[i] = s.choice.material.relativeCost.value;
-    const { point } = endurancePoint(req.cycles ?? INFINITE_LIFE_CYCLES, req.peened, s.figures.zimmerli, s.figures.finiteLife, s.figures.tensileStrength);
+    const { point } = endurancePoint(req.cycles ?? INFINITE_LIFE_CYCLES, req.peened, s.figures.zimmerli, s.figures.finiteLife, s.figures.tensileStrength, req.criterion);
     sPoint.push(point);
     sSse[i] = fullyReversedEndurance(point, sSsu[i], req.criterion);
     sC1[i] = bucklingConstant1(sE[i], sG[i]);
@@ -93,7 +93,7 @@ export function buildSpringProblem(req: Requirements): SpringProblem {
   const correction = req.correction;
   const staticFactor = staticLimit(req, 1).factor;
   const alpha = endConditionConstant(req.seating);
-  const oneEndFree = req.seating === 'fixed-free';
+  const oneEndFree = req.surgeEnds === 'one-free';
   const surgeNeed = req.forcingFrequency ? req.safety.surge * req.forcingFrequency : 0;
   const Cmin = req.index[0];
   const Cmax = req.index[1];

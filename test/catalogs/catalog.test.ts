@@ -75,7 +75,88 @@ describe('material catalog', () => {
   });
 });
 
+describe('catalog values checked against public copies of the tables', () => {
+  it('Table 10-4 diameter ranges: hard-drawn and oil-tempered 0.028/0.020 to 0.500 in (12.7 mm), chrome-vanadium to 0.437 in (11.1 mm), chrome-silicon 1.6 to 9.5 mm (source: Shigley 9th ed., Table 10-4)', () => {
+    expect(material('hard-drawn').maxDiameter).toBe(12.7);
+    expect(material('oil-tempered').maxDiameter).toBe(12.7);
+    expect(material('oil-tempered').minDiameter).toBe(0.5);
+    expect(material('chrome-vanadium').maxDiameter).toBe(11.1);
+    expect(material('chrome-silicon').minDiameter).toBe(1.6);
+    expect(material('chrome-silicon').maxDiameter).toBe(9.5);
+  });
+
+  it('oil-tempered wire is not for use above 180 degC (source: Shigley 9th ed., table of high-carbon and alloy spring steels)', () => {
+    expect(material('oil-tempered').maxTemperature.value).toBe(180);
+    expect(material('oil-tempered').maxTemperature.source).toMatch(/Shigley/);
+  });
+
+  it('moduli of chrome-silicon 29.5/11.2, 302 28.0/10.0, 17-7 PH 29.5/11.0, phosphor bronze 15.0/6.0, beryllium copper 17.0/6.5 Mpsi (source: Shigley 9th ed., Table 10-5)', () => {
+    const mpsi = KPSI * 1000;
+    const cases: [string, number, number][] = [['chrome-silicon', 29.5, 11.2], ['stainless-302', 28.0, 10.0], ['stainless-17-7ph', 29.5, 11.0], ['phosphor-bronze', 15.0, 6.0], ['beryllium-copper', 17.0, 6.5]];
+    for (const [id, e, g] of cases) {
+      expect(moduliAt(material(id), 2).elasticModulus / mpsi, id).toBeCloseTo(e, 6);
+      expect(moduliAt(material(id), 2).shearModulus / mpsi, id).toBeCloseTo(g, 6);
+      expect(material(id).moduli.source, id).toMatch(/Table 10-5/);
+    }
+  });
+
+  it('densities 0.284 / 0.286 / 0.282 / 0.320 / 0.298 lb/in^3 (source: spring-materials tables of spring makers\' handbooks)', () => {
+    const lbIn3 = 27679.9047; // kg/m^3 per lb/in^3
+    const cases: [string, number][] = [['music-wire', 0.284], ['stainless-302', 0.286], ['stainless-17-7ph', 0.282], ['phosphor-bronze', 0.32], ['beryllium-copper', 0.298]];
+    for (const [id, v] of cases) expect(material(id).density.value / lbIn3, id).toBeCloseTo(v, 6);
+  });
+
+  it('finite-life fractions 36/33/30, peened 42/39/36, and 42/40/38, peened 49/47/46, credited to the Associated Spring handbook table, not Shigley Table 10-8 (source: Associated Spring design handbook as reprinted in earlier machine-design texts, from memory)', () => {
+    expect(material('music-wire').fatigue.table).toEqual({ unpeened: [0.36, 0.33, 0.30], peened: [0.42, 0.39, 0.36] });
+    expect(material('chrome-vanadium').fatigue.table).toEqual({ unpeened: [0.42, 0.40, 0.38], peened: [0.49, 0.47, 0.46] });
+    for (const m of catalog.materials) {
+      expect(m.fatigue.source, m.id).toMatch(/Associated Spring/);
+      expect(m.fatigue.source, m.id).toMatch(/from memory/);
+      expect(m.fatigue.source.replace(/not Shigley[^)]*/, ''), m.id).not.toMatch(/10-8/);
+    }
+  });
+
+  it('Zimmerli\'s data (spring steels) are not applied to austenitic stainless or copper alloys (source: Zimmerli 1957, tests on spring steels)', () => {
+    for (const id of ['stainless-302', 'phosphor-bronze', 'beryllium-copper']) expect(material(id).fatigue.zimmerli, id).toBe(false);
+    for (const id of ['music-wire', 'hard-drawn', 'oil-tempered', 'chrome-vanadium', 'chrome-silicon', 'en10270-1-dm']) expect(material(id).fatigue.zimmerli, id).toBe(true);
+  });
+
+  it('ASTM A228 tabulated minimums: 0.004 in 439, 0.036 in 321, 0.063 in 293, 0.100 in 271, 0.250 in 230 kpsi (source: ASTM A228 tensile requirements, as printed in music-wire distributors\' data sheets)', () => {
+    const min = material('music-wire').minimumStrength!;
+    expect(min.law.law).toBe('table');
+    const at = (dIn: number) => { const l = min.law as { diameters: number[]; strengths: number[] }; return l.strengths[l.diameters.findIndex((d) => Math.abs(d - dIn * IN) < 1e-9)] / KPSI; };
+    expect(at(0.004)).toBeCloseTo(439, 6);
+    expect(at(0.036)).toBeCloseTo(321, 6);
+    expect(at(0.063)).toBeCloseTo(293, 6);
+    expect(at(0.100)).toBeCloseTo(271, 6);
+    expect(at(0.250)).toBeCloseTo(230, 6);
+    // Every A228 size of the inch series has its own tabulated minimum.
+    const sizes = findSeries(catalog, 'music-wire-inch')!.diameters;
+    expect((min.law as { diameters: number[] }).diameters).toEqual(sizes);
+  });
+
+  it('the music-wire power law runs 2% above the A228 minimum at 1.6 mm, 3.4% at 2.5 mm (0.100 in) and 6.6% at 6.35 mm (sources: Shigley Table 10-4; ASTM A228 as in distributors\' tables)', () => {
+    const mw = material('music-wire');
+    expect(tensileStrength(mw, 0.063 * IN) / (293 * KPSI) - 1).toBeCloseTo(0.022, 2);
+    expect(tensileStrength(mw, 0.100 * IN) / (271 * KPSI) - 1).toBeCloseTo(0.034, 2);
+    expect(tensileStrength(mw, 0.250 * IN) / (230 * KPSI) - 1).toBeCloseTo(0.066, 2);
+  });
+});
+
 describe('wire-size series', () => {
+  it('steel wire gauge no. 21 is 0.0317 in (source: US Steel Wire Gauge, Washburn and Moen, as reprinted in spring handbooks)', () => {
+    const g = findSeries(catalog, 'steel-wire-gauge')!;
+    expect(g.diameters[g.labels!.indexOf('21')] / IN).toBeCloseTo(0.0317, 6);
+  });
+
+  it('the metric series is the preferred wire diameters table, 0.10 to 16 mm, 44 sizes (source: Saxena and Sahay, Computer Aided Engineering Design, Table 1.1(b))', () => {
+    const m = findSeries(catalog, 'metric')!;
+    expect(m.source).toMatch(/Saxena and Sahay/);
+    expect(m.diameters.length).toBe(44);
+    expect(m.diameters[0]).toBe(0.1);
+    expect(m.diameters[m.diameters.length - 1]).toBe(16);
+  });
+
   it('steel wire gauge: no. 10 is 0.1350 in, no. 7/0 0.4900 in, no. 30 0.0140 in (source: US Steel Wire Gauge, Washburn and Moen)', () => {
     const g = findSeries(catalog, 'steel-wire-gauge')!;
     const at = (label: string) => g.diameters[g.labels!.indexOf(label)] / IN;
@@ -113,6 +194,11 @@ describe('catalog loader rejects malformed records, naming file, record and fiel
     const d = doc();
     d.materials[0].densty = 7800;
     expect(() => parseMaterials(d, 'materials.yaml')).toThrow(/record music-wire: densty: no such field/);
+  });
+  it('a finite-life table that rises with cycles (a longer life would be easier)', () => {
+    const d = doc();
+    d.fatigue_classes[0].peened = [0.42, 0.43, 0.36];
+    expect(() => parseMaterials(d, 'materials.yaml')).toThrow(/fatigue_classes\[0\]: fatigue_classes\[0\]\.peened\[1\]: expected a fraction at most the one for fewer cycles/);
   });
   it('a wire series out of order', () => {
     expect(() => parseSeries({ series: [{ id: 'x', unit: 'mm', source: 's', diameters: [1, 0.5] }] }, 'wire-series.yaml')).toThrow(/wire-series\.yaml: record x: diameters\[1\]: expected diameters in ascending order/);

@@ -13,6 +13,7 @@ import { writeOutputFile } from '../writeFile.js';
 import { CONVENTIONS, figure, htmlTable, page } from './page.js';
 import { cloudPlot, fatiguePlot, forceLengthPlot, sideView, sweepPlot } from './plots.js';
 import { candidateGrid, relaxSuggestions } from '../designReport.js';
+import { surgeEndsLabel } from '../../model/surge.js';
 import { esc } from './svg.js';
 
 export interface SweepSummary { name: string; rows: { value: number; best: Candidate | null }[] }
@@ -56,7 +57,7 @@ export function springSections(a: SpringAnalysis, system: UnitSystem, service: S
     ['static safety factor', sig(a.staticSafetyFactor, 3)],
     ['fatigue safety factor', a.fatigue ? sig(a.fatigue.safetyFactor, 3) : 'static service'],
     ['buckling', a.buckling.absolutelyStable ? 'absolutely stable' : `critical deflection ${L(a.buckling.criticalDeflection)}${a.buckling.buckles ? ' (buckles: guide it)' : ''}`],
-    ['surge frequency', `${sig(a.surge.relevant, 4)} Hz`],
+    ['surge frequency', `${sig(a.surge.relevant, 4)} Hz (${surgeEndsLabel(a.surge.ends)})`],
     ['mass', formatQuantity(g.mass, 'mass', system)],
   ];
   const out = [`<h2>${esc(heading)}</h2>`, htmlTable(['figure', 'value'], kv, { cls: 'kv' })];

@@ -82,7 +82,7 @@ export function fatiguePlot(a: SpringAnalysis, system: UnitSystem): string {
   out.push(`<circle id="fatigue-point" class="point" cx="${r2(ax.x(S(fa.meanStress)))}" cy="${r2(ax.y(S(fa.alternatingStress)))}" r="5"/>`);
   const sf = Number.isFinite(fa.safetyFactor) ? fa.safetyFactor.toFixed(2) : 'n/a';
   out.push(`<text class="note" x="${r2(ax.x(S(fa.meanStress)) + 8)}" y="${r2(ax.y(S(fa.alternatingStress)) - 8)}">operating point, safety factor ${sf}</text>`);
-  out.push(`<text class="note" x="${r2(ax.x(S(fa.endurance.mean)) + 8)}" y="${r2(ax.y(S(fa.endurance.alternating)) + 14)}">${fa.enduranceSource === 'zimmerli' ? 'Zimmerli' : 'finite-life'} endurance point</text>`);
+  out.push(`<text class="note" x="${r2(ax.x(S(fa.endurance.mean)) + 8)}" y="${r2(ax.y(S(fa.endurance.alternating)) + 14)}">${fa.enduranceSource === 'finite-life-table' ? 'finite-life' : fa.enduranceSource === 'zimmerli' ? 'Zimmerli' : 'interpolated'} endurance point</text>`);
   out.push('</svg>');
   return out.join('');
 }
