@@ -1,8 +1,12 @@
 // One cell of the search: the discrete (and scanned) variables fixed, the solved variable free.
 // The feasible interval of the solved variable is bracketed by bisection on the constraints that are
-// monotone in it, then scanned at its resolution for the rest. This is the shared inner routine of
-// the grid and of the genetic search's repair, so both judge candidates alike.
-import { FEASIBILITY_TOLERANCE as EPS, TREND, type Problem } from './problem.js';
+// monotone in it; the rest (checks of unknown trend) are searched on the variable's resolution grid
+// by interval bisection from the left: a sub-interval whose bracket lower bound is above zero is
+// ruled out whole, and only the sub-intervals where feasibility can begin are split further, so the
+// work grows with the logarithm of the resolution instead of linearly. This is the shared inner
+// routine of the grid and of the genetic search's repair, so both judge candidates alike.
+// A check passes when g <= 0 exactly: no tolerance, so a reported point never shows a positive check.
+import { TREND, type Problem } from './problem.js';
 
 export interface CellWorkspace {
   g: Float64Array;
@@ -31,6 +35,12 @@ export interface CellWorkspace {
   lower: Float64Array;
   /** Cells proved infeasible by the bracket bounds, without a scan. */
   boundedOut: number;
+  /** Calls of the problem's bracket bounds (each about the cost of one evaluation). */
+  boundCalls: number;
+  /** Rule out sub-intervals of the scan by the bracket bounds. Off, every scan point of a cell that
+   * survives its whole-bracket bound is evaluated: slower, but the least-violation point of each
+   * infeasible cell is then the one of a full scan (the diagnostics of a search that found nothing). */
+  narrowing: boolean;
   /** The worst increasing and decreasing constraint of the last evaluation. */
   worstInc: number;
   worstDec: number;
@@ -50,7 +60,7 @@ export function makeWorkspace(p: Problem, relativeTolerance = 1e-10): CellWorksp
     evaluations: 0, cutBy: new Float64Array(m), soleViolation: new Float64Array(m).fill(Infinity),
     missX: new Float64Array(p.variables.length), missG: new Float64Array(m), missF: new Float64Array(p.objectiveNames.length), missViolation: Infinity,
     incMask, decMask, relativeTolerance, maxScanPoints: Infinity, scanCoarsening: 1, worstInc: -Infinity, worstDec: -Infinity,
-    lower: new Float64Array(m), boundedOut: 0,
+    lower: new Float64Array(m), boundedOut: 0, boundCalls: 0, narrowing: true,
   };
 }
 
@@ -67,7 +77,7 @@ function evaluateAt(p: Problem, x: Float64Array, ws: CellWorkspace): number {
   let wDec = -Infinity;
   for (let j = 0; j < g.length; j++) {
     const v = g[j];
-    if (v > EPS) { total += v; count++; sole = j; }
+    if (v > 0) { total += v; count++; sole = j; }
     if (inc[j] === 1) { if (v > wInc) wInc = v; } else if (ws.decMask[j] === 1 && v > wDec) wDec = v;
   }
   ws.worstInc = wInc;
@@ -99,7 +109,7 @@ function boundary(p: Problem, s: number, x: Float64Array, ws: CellWorkspace, a: 
     const m = 0.5 * (a + b);
     x[s] = m;
     evaluateAt(p, x, ws);
-    const bad = (mask === ws.incMask ? ws.worstInc : ws.worstDec) > EPS;
+    const bad = (mask === ws.incMask ? ws.worstInc : ws.worstDec) > 0;
     if (bad === badBelow) a = m; else b = m;
   }
   // The other (failing) end is left in ws.bounds for a later refinement.
@@ -119,17 +129,89 @@ function refineLow(p: Problem, s: number, x: Float64Array, ws: CellWorkspace, ba
 }
 
 /** True when the problem's bracket bounds prove [lo, hi] infeasible for a check of unknown trend. */
-function boundedOut(p: Problem, x: Float64Array, lo: number, hi: number, ws: CellWorkspace): boolean {
+function excluded(p: Problem, x: Float64Array, lo: number, hi: number, ws: CellWorkspace): boolean {
   ws.lower.fill(-Infinity);
   p.bracketBounds!(x, lo, hi, ws.lower);
+  ws.boundCalls++;
   for (let j = 0; j < ws.lower.length; j++) {
-    if (ws.lower[j] > EPS && ws.incMask[j] === 0 && ws.decMask[j] === 0) {
-      ws.boundedOut++;
-      return true;
-    }
+    if (ws.lower[j] > 0 && ws.incMask[j] === 0 && ws.decMask[j] === 0) return true;
   }
   return false;
 }
+
+/** The same for a whole cell, counted. */
+function boundedOut(p: Problem, x: Float64Array, lo: number, hi: number, ws: CellWorkspace): boolean {
+  if (!excluded(p, x, lo, hi, ws)) return false;
+  ws.boundedOut++;
+  return true;
+}
+
+/** Intervals of at most this many scan points are evaluated point by point (a bound costs about one
+ * evaluation, so splitting further saves nothing). */
+const LEAF_POINTS = 3;
+
+/**
+ * The scan grid of a bracket: points lo + k step for k = 0 .. last - 1, and hi itself as point `last`
+ * (the first multiple of the step at or past hi is clipped to it). Interval bisection over point
+ * indices visits the feasible points in increasing order, exactly those a linear scan would find,
+ * skipping every sub-interval the bracket bounds rule out.
+ */
+class ScanGrid {
+  lo = 0;
+  hi = 0;
+  step = 1;
+  last = 0;
+  set(lo: number, hi: number, step: number): void {
+    this.lo = lo;
+    this.hi = hi;
+    this.step = step;
+    let k = Math.max(0, Math.ceil((hi - lo) / step));
+    while (k > 0 && lo + (k - 1) * step >= hi) k--;
+    while (lo + k * step < hi) k++;
+    this.last = k;
+  }
+  at(k: number): number {
+    return k >= this.last ? this.hi : this.lo + k * this.step;
+  }
+}
+
+/** Index of the first feasible scan point in [ka, kb], or -1. `checked`: the caller has already
+ * tried the bounds on this interval. */
+function firstFeasible(p: Problem, s: number, x: Float64Array, ws: CellWorkspace, grid: ScanGrid, ka: number, kb: number, checked: boolean): number {
+  if (kb - ka + 1 > LEAF_POINTS && p.bracketBounds && ws.narrowing) {
+    if (!checked && excluded(p, x, grid.at(ka), grid.at(kb), ws)) return -1;
+    const mid = (ka + kb) >>> 1;
+    const r = firstFeasible(p, s, x, ws, grid, ka, mid, false);
+    return r >= 0 ? r : firstFeasible(p, s, x, ws, grid, mid + 1, kb, false);
+  }
+  for (let k = ka; k <= kb; k++) {
+    x[s] = grid.at(k);
+    if (evaluateAt(p, x, ws) === 0) return k;
+  }
+  return -1;
+}
+
+/** Visit every feasible scan point in [ka, kb] in increasing order; true when any was found. */
+function everyFeasible(p: Problem, s: number, x: Float64Array, ws: CellWorkspace, grid: ScanGrid, ka: number, kb: number, checked: boolean,
+  visit: ((x: Float64Array, f: Float64Array, g: Float64Array) => void) | null): boolean {
+  if (kb - ka + 1 > LEAF_POINTS && p.bracketBounds && ws.narrowing) {
+    if (!checked && excluded(p, x, grid.at(ka), grid.at(kb), ws)) return false;
+    const mid = (ka + kb) >>> 1;
+    const left = everyFeasible(p, s, x, ws, grid, ka, mid, false, visit);
+    return everyFeasible(p, s, x, ws, grid, mid + 1, kb, false, visit) || left;
+  }
+  let found = false;
+  for (let k = ka; k <= kb; k++) {
+    x[s] = grid.at(k);
+    if (evaluateAt(p, x, ws) === 0) {
+      found = true;
+      if (visit !== null) visit(x, ws.f, ws.g);
+    }
+  }
+  return found;
+}
+
+const scanGrid = new ScanGrid();
 
 function infeasibleCell(ws: CellWorkspace): false {
   attributeCut(ws, ws.missG);
@@ -183,57 +265,51 @@ export function solveCell(
   x[s] = lo;
   let total = evaluateAt(p, x, ws);
   if (prune !== null && p.objectiveTrend && p.objectiveTrend[0] === TREND.increasing && prune(ws.f)) return 'pruned';
-  if (ws.worstInc > EPS) return infeasibleCell(ws);
+  if (ws.worstInc > 0) return infeasibleCell(ws);
   if (total === 0 && mode === CellMode.First && p.objectiveTrend && p.objectiveTrend[0] === TREND.increasing) return true;
   // The same bound over the whole interval often settles a hopeless cell before any bisection.
-  if (p.bracketBounds && boundedOut(p, x, lo, hi, ws)) return infeasibleCell(ws);
+  if (p.bracketBounds && ws.narrowing && boundedOut(p, x, lo, hi, ws)) return infeasibleCell(ws);
   // Decreasing constraints tighten downwards: find the smallest value that meets them.
-  if (ws.worstDec > EPS) {
+  if (ws.worstDec > 0) {
     x[s] = hi;
     evaluateAt(p, x, ws);
-    if (ws.worstDec > EPS) return infeasibleCell(ws);
+    if (ws.worstDec > 0) return infeasibleCell(ws);
     lo = boundary(p, s, x, ws, lo, hi, ws.decMask, true, coarse);
     loBad = ws.bounds[0];
   }
   // And the largest value that still meets the increasing ones.
   x[s] = hi;
   evaluateAt(p, x, ws);
-  if (ws.worstInc > EPS) {
+  if (ws.worstInc > 0) {
     x[s] = lo;
     evaluateAt(p, x, ws);
     const w = ws.worstInc;
     // A hair's breadth of violation: the feasible interval may be narrower than the coarse bracket, so
     // settle lo exactly and look again. Normalised checks move by a few units per unit of relative
     // change of the solved variable; a violation 100 times what the coarse step could undo is real.
-    if (w > EPS && w < (300 * coarse) / Math.max(Math.abs(lo), 1e-12) && loBad === loBad) {
+    if (w > 0 && w < (300 * coarse) / Math.max(Math.abs(lo), 1e-12) && loBad === loBad) {
       lo = boundary(p, s, x, ws, loBad, lo, ws.decMask, true, tol);
       loBad = NaN;
       x[s] = lo;
       evaluateAt(p, x, ws);
     }
-    if (ws.worstInc > EPS) return infeasibleCell(ws);
+    if (ws.worstInc > 0) return infeasibleCell(ws);
     hi = boundary(p, s, x, ws, lo, hi, ws.incMask, false, coarse);
   }
   // A bound may prove the whole bracket infeasible for a check of unknown trend: then no scan.
-  if (p.bracketBounds && boundedOut(p, x, lo, hi, ws)) return infeasibleCell(ws);
-  // Scan the bracket at the variable's resolution for the constraints of unknown trend.
+  if (p.bracketBounds && ws.narrowing && boundedOut(p, x, lo, hi, ws)) return infeasibleCell(ws);
+  // Search the bracket's scan grid for the checks of unknown trend (the monotone ones hold on all of it).
   const resolution = v.resolution * ws.scanCoarsening;
   const step = mode === CellMode.All ? Math.max(resolution, (hi - lo) / ws.maxScanPoints) : resolution;
-  let found = false;
-  for (let t = lo; ; t += step) {
-    const at = t > hi ? hi : t;
-    x[s] = at;
-    total = evaluateAt(p, x, ws);
-    if (total === 0) {
-      found = true;
-      if (mode === CellMode.First) {
-        if (at === lo && loBad === loBad) refineLow(p, s, x, ws, loBad, lo, tol);
-        return true;
-      }
-      if (visit !== null) visit(x, ws.f, ws.g);
-    }
-    if (at >= hi) break;
+  const grid = scanGrid;
+  grid.set(lo, hi, step);
+  if (mode === CellMode.First) {
+    const k = firstFeasible(p, s, x, ws, grid, 0, grid.last, true);
+    if (k < 0) return infeasibleCell(ws);
+    // x, ws.f and ws.g hold the point found.
+    if (k === 0 && loBad === loBad) refineLow(p, s, x, ws, loBad, lo, tol);
+    return true;
   }
-  if (!found) return infeasibleCell(ws);
+  if (!everyFeasible(p, s, x, ws, grid, 0, grid.last, true, visit)) return infeasibleCell(ws);
   return true;
 }

@@ -38,8 +38,8 @@ export interface Problem {
   solvedBounds?(x: Float64Array, out: Float64Array): void;
 }
 
-/** A constraint counts as met within this normalised tolerance (floating-point noise at active limits). */
-export const FEASIBILITY_TOLERANCE = 1e-9;
+/** A constraint is met when g <= 0, exactly: the engine allows no tolerance, so that no point it
+ * reports shows a positive check when the same check is computed again. */
 
 export function valueCount(v: Variable): number {
   if (v.kind === 'list') return v.values.length;

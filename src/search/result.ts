@@ -13,6 +13,8 @@ export interface SearchResult {
   best: Point[];
   cloud: PointBuffer | null;
   evaluations: number;
+  /** Calls of the problem's interval bounds (each costs about one evaluation). */
+  boundCalls?: number;
   cells: number;
   feasibleCells: number;
   prunedCells: number;
@@ -32,7 +34,7 @@ export function packResult(strategy: SearchResult['strategy'], p: Problem, top: 
   const best = [];
   for (let i = 0; i < top.size; i++) best.push({ x: Float64Array.from(top.x(i)), f: Float64Array.from(top.f(i)) });
   return {
-    strategy, best, cloud, evaluations: ws.evaluations, cells: counts.cells, feasibleCells: counts.feasible,
+    strategy, best, cloud, evaluations: ws.evaluations, boundCalls: ws.boundCalls, cells: counts.cells, feasibleCells: counts.feasible,
     prunedCells: counts.pruned, cutBy, soleViolation: sole, nearestMisses: misses.items,
   };
 }

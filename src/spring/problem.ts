@@ -179,6 +179,25 @@ export function buildSpringProblem(req: Requirements): SpringProblem {
         const room = L1 - solidLength(d, Na + endQ[e], ends[e]);
         if (room >= 0) out[10] = (shearStress(F1 + kMin * room, lo, d, Kmin) - limit) / limit;
       }
+      if (activeMask[11] === 1 && travel > 0) {
+        // Every criterion's safety factor falls as the alternating or the mean stress rises (the load
+        // point moves outwards from the origin), so the least stresses over the bracket give the
+        // largest safety factor it can reach.
+        const tauMin = shearStress(F1, lo, d, Kmin);
+        const tauMax = shearStress(F1 + kMin * travel, lo, d, Kmin);
+        const alt = 0.5 * shearStress(kMin * travel, lo, d, Kmin);
+        const nf = fatigueSafetyFactorFrom(alt, 0.5 * (tauMax + tauMin), sPoint[i], sSsu[i], sSse[i], criterion);
+        if (nf === nf) out[11] = (nfTarget - nf) * invNfTarget;
+      }
+      if (activeMask[12] === 1) {
+        // The free length grows with D; the critical share of it, C1 (1 - sqrt(1 - C2 / lambda^2)),
+        // grows as the slenderness lambda = alpha L0 / D falls, and L0 / (L0 - Lmin) falls as L0
+        // grows: take the least slenderness and the shortest free length of the bracket.
+        const L0lo = L1 + F1 / springRate(sG[i], d, lo, Na, directShear);
+        const lambda = (alpha * L0lo) / hi;
+        const q = sC2[i] / (lambda * lambda);
+        if (q < 1) out[12] = 1 - (sC1[i] * (1 - Math.sqrt(1 - q)) * L0lo) / (L0lo - Lmin);
+      }
     },
 
     evaluate(x, g, f) {

@@ -30,11 +30,69 @@ function toy(lo: number, hi: number): Problem {
   };
 }
 
+/** Minimise x over x in [0, 10] at `resolution`, feasible where a band check of unknown trend holds:
+ * |x - centre| >= half (with bracket bounds on it, exact over any interval), and x >= lo. */
+function banded(centre: number, half: number, lo: number, resolution: number, withBounds = true): Problem {
+  const p: Problem = {
+    name: 'band',
+    variables: [
+      { kind: 'range', name: 'c', min: 1, max: 2, step: 1 },
+      { kind: 'continuous', name: 'x', min: 0, max: 10, resolution, solve: true },
+    ],
+    constraintNames: ['low', 'band'],
+    objectiveNames: ['f'],
+    constraintTrend: Int8Array.from([TREND.decreasing, TREND.unknown]),
+    objectiveTrend: Int8Array.from([TREND.increasing]),
+    evaluate(x, g, f) {
+      g[0] = (lo - x[1]) / 10;
+      g[1] = (half - Math.abs(x[1] - centre)) / half;
+      f[0] = x[0] * (x[1] + 1);
+    },
+  };
+  if (withBounds) {
+    // The distance to the centre over [a, b] is largest at one of its ends: the check is least there.
+    p.bracketBounds = (_x, a, b, out) => {
+      out[1] = (half - Math.max(Math.abs(a - centre), Math.abs(b - centre))) / half;
+    };
+  }
+  return p;
+}
+
 describe('grid and cell solver', () => {
   it('brackets to the exact boundary of the monotone checks', () => {
     const r = gridSearch(toy(2.345678, 9), { top: 1 });
     expect(r.best[0].x[0]).toBe(1);
-    expect(r.best[0].x[1]).toBeCloseTo(2.345678, 7); // within the feasibility tolerance (1e-9 of the normalised check)
+    expect(r.best[0].x[1]).toBeCloseTo(2.345678, 7);
+  });
+  it('a reported point never shows a positive check: feasibility is g <= 0 exactly, with no tolerance', () => {
+    // With a tolerance of 1e-9 on the normalised check, the bracket stopped 1e-8 below the limit here.
+    const p = toy(2.345678, 9);
+    const r = gridSearch(p, { top: 3 });
+    const g = new Float64Array(3);
+    for (const b of r.best) {
+      p.evaluate(b.x, g, new Float64Array(1));
+      for (const v of g) expect(v).toBeLessThanOrEqual(0);
+    }
+  });
+  it('interval bounds rule out parts of the scan and change nothing but the work (property)', () => {
+    fc.assert(fc.property(fc.double({ min: 0.5, max: 9.5, noNaN: true }), fc.double({ min: 0.01, max: 4, noNaN: true }), fc.double({ min: 0, max: 5, noNaN: true }),
+      fc.constantFrom(0.01, 0.003, 0.001), (centre, half, lo, res) => {
+        const withBounds = gridSearch(banded(centre, half, lo, res), { top: 2 });
+        const plain = gridSearch(banded(centre, half, lo, res, false), { top: 2 });
+        const off = gridSearch(banded(centre, half, lo, res), { top: 2, narrowing: false });
+        expect(withBounds.best.map((b) => Array.from(b.x))).toEqual(plain.best.map((b) => Array.from(b.x)));
+        expect(off.best.map((b) => Array.from(b.x))).toEqual(plain.best.map((b) => Array.from(b.x)));
+        // Only points a plain scan would reach are evaluated.
+        expect(withBounds.evaluations).toBeLessThanOrEqual(plain.evaluations);
+      }), { numRuns: 200, seed: 7 });
+  });
+  it('with interval bounds, the work grows with the logarithm of the resolution, not linearly', () => {
+    const work = (res: number) => { const r = gridSearch(banded(5, 2, 3.5, res), { top: 1 }); return r.evaluations + (r.boundCalls ?? 0); };
+    const coarse = work(0.01);
+    expect(work(0.0001) / coarse).toBeLessThan(2);
+    // Without bounds the scan walks the band at the resolution: 100 times finer, about 100 times the work.
+    const plain = (res: number) => gridSearch(banded(5, 2, 3.5, res, false), { top: 1 }).evaluations;
+    expect(plain(0.0001) / plain(0.01)).toBeGreaterThan(50);
   });
   it('scans past a band of unknown trend to the first feasible step', () => {
     const r = gridSearch(toy(3.5, 9), { top: 1 });

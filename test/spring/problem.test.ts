@@ -3,9 +3,12 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { loadCatalog } from '../../src/catalogs/load.js';
+import { readInputFile } from '../../src/input/document.js';
 import { readRequirements } from '../../src/input/requirements.js';
+import { gridSearch } from '../../src/search/grid.js';
 import { TREND, valueAt, valueCount } from '../../src/search/problem.js';
 import { CHECKS } from '../../src/spring/checks.js';
+import { runDesign } from '../../src/spring/design.js';
 import { buildSpringProblem } from '../../src/spring/problem.js';
 
 const catalog = loadCatalog();
@@ -17,11 +20,14 @@ const problemArb = fc.record({
   rise: fc.option(fc.double({ min: 1.2, max: 2.5, noNaN: true })),
   tolerance: fc.constantFrom(0.02, 0.1),
   material: fc.constantFrom('music-wire', 'stainless-302', 'phosphor-bronze'),
+  seating: fc.constantFrom('fixed-fixed', 'fixed-pivoted', 'pivoted-pivoted', 'fixed-free'),
+  criterion: fc.constantFrom('gerber', 'goodman', 'sines'),
+  peened: fc.boolean(),
   ends: fc.constantFrom('squared-ground', 'plain'),
   solidSafe: fc.boolean(),
   cycles: fc.constantFrom(undefined, 1e6),
 }).map((r) => ({
-  units: 'si', material: r.material, ends: r.ends, load: { force: r.force, length: r.length }, operating_length: r.length * (1 - r.stroke),
+  units: 'si', material: r.material, ends: r.ends, seating: r.seating, fatigue_criterion: r.criterion, peened: r.peened, load: { force: r.force, length: r.length }, operating_length: r.length * (1 - r.stroke),
   ...(r.rise !== null ? { operating_force: r.force * r.rise, load_tolerance: r.tolerance } : {}),
   envelope: { max_outer_diameter: 30, min_inner_diameter: 3, max_free_length: r.length * 3 }, solid_safe: r.solidSafe, forcing_frequency: 20,
   ...(r.cycles ? { cycles: r.cycles } : {}),
@@ -74,6 +80,27 @@ describe('spring problem', () => {
         p.evaluate(x, g, f);
         CHECKS.forEach((_, j) => { if (g[j] !== -1) expect(lower[j]).toBeLessThanOrEqual(g[j] + 1e-12); });
       }
-    }), { numRuns: 80, seed: 4 });
+    }), { numRuns: 200, seed: 4 });
+  });
+});
+
+describe('spring problem in the search', () => {
+  it('the interval bounds change nothing but the work: the same springs with and without them (property)', () => {
+    fc.assert(fc.property(problemArb, (doc) => {
+      const p = build({ ...doc, coil_step: 0.5 });
+      const on = gridSearch(p, { top: 5 });
+      const off = gridSearch(p, { top: 5, narrowing: false });
+      expect(on.best.map((b) => Array.from(b.x))).toEqual(off.best.map((b) => Array.from(b.x)));
+      // (A search that finds nothing pays a second, full pass for its diagnostics.)
+      if (on.best.length) expect(on.evaluations).toBeLessThanOrEqual(off.evaluations);
+    }), { numRuns: 25, seed: 11 });
+  });
+
+  it('a reported spring never shows a positive check (the demo: its best springs sit exactly at the top of the load band)', () => {
+    // With a feasibility tolerance of 1e-9, the lightest spring was reported with operating_force_max at +9.5e-10.
+    const req = readRequirements(readInputFile('examples/washer-trigger.yaml'), catalog);
+    const run = runDesign(req, { strategy: 'grid' });
+    expect(run.candidates.length).toBeGreaterThan(0);
+    for (const c of run.candidates) for (const v of c.checks) expect(v).toBeLessThanOrEqual(0);
   });
 });
