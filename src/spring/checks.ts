@@ -62,6 +62,13 @@ export function shortestLength(req: Requirements): number {
   return req.operatingLength ?? req.workingLength;
 }
 
+/** Half-width of the operating-force band, relative. A zero load tolerance asks for one exact force,
+ * which a computed spring can only meet to rounding: it is read as one part in 1e9 either side, far
+ * inside any maker's tolerance, so that the search and this re-verification both see springs meet it. */
+export function forceBand(req: Requirements): number {
+  return Math.max(req.loadTolerance, 1e-9);
+}
+
 /** Required static allowable and the factor applied to the stress. */
 export function staticLimit(req: Requirements, allowable: number): { limit: number; factor: number } {
   return req.allowableStress !== undefined ? { limit: req.allowableStress, factor: 1 } : { limit: allowable, factor: req.safety.static };
@@ -94,8 +101,9 @@ export function checkAnalysis(a: SpringAnalysis, req: Requirements): Float64Arra
   if (req.forcingFrequency) set('surge', (req.safety.surge * req.forcingFrequency - a.surge.relevant) / (req.safety.surge * req.forcingFrequency));
   if (req.operatingForce !== undefined) {
     const F2 = a.points[a.points.length - 1].force;
-    set('operating_force_min', (req.operatingForce * (1 - req.loadTolerance) - F2) / req.operatingForce);
-    set('operating_force_max', (F2 - req.operatingForce * (1 + req.loadTolerance)) / req.operatingForce);
+    const band = forceBand(req);
+    set('operating_force_min', (req.operatingForce * (1 - band) - F2) / req.operatingForce);
+    set('operating_force_max', (F2 - req.operatingForce * (1 + band)) / req.operatingForce);
   }
   if (req.temperature !== undefined) set('temperature', (req.temperature - a.material.maxTemperature) / Math.max(Math.abs(a.material.maxTemperature), 1));
   return g;

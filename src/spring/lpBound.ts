@@ -11,7 +11,7 @@ import type { Requirements } from '../input/requirements.js';
 import { inactiveCoils } from '../model/geometry.js';
 import { stressFactor } from '../model/stressFactor.js';
 import { minimiseLinear, type LinearRow } from '../search/lp.js';
-import { shortestLength } from './checks.js';
+import { forceBand, shortestLength } from './checks.js';
 import type { SpringProblem, StockItem } from './problem.js';
 
 type V = 'u' | 'v' | 'w' | 't';
@@ -83,7 +83,7 @@ export function lpLowerBound(problem: SpringProblem): LpBound {
     }
     // Static stress at the largest force: K(C) 8 F D / (pi d^3) * n <= allowable(d). ln K is convex in
     // ln C for both stress factors over the index range, so each tangent is a lower bound on it.
-    const Flow = req.operatingForce !== undefined ? req.operatingForce * (1 - req.loadTolerance) : req.workingForce;
+    const Flow = req.operatingForce !== undefined ? req.operatingForce * (1 - forceBand(req)) : req.workingForce;
     const n = req.allowableStress !== undefined ? 1 : req.safety.static;
     const lever = Math.log((8 * Flow * n) / Math.PI);
     const s0 = group[0];
@@ -108,8 +108,8 @@ export function lpLowerBound(problem: SpringProblem): LpBound {
     let kLo = 0;
     if (req.operatingForce !== undefined && req.operatingLength !== undefined) {
       const travel = req.workingLength - req.operatingLength;
-      kLo = (req.operatingForce * (1 - req.loadTolerance) - req.workingForce) / travel;
-      const kHi = (req.operatingForce * (1 + req.loadTolerance) - req.workingForce) / travel;
+      kLo = (req.operatingForce * (1 - forceBand(req)) - req.workingForce) / travel;
+      const kHi = (req.operatingForce * (1 + forceBand(req)) - req.workingForce) / travel;
       rows.push({ coefficients: { u: 4, v: -3, w: -1 }, max: Math.log((8 * kHi * shear) / Gmin) });
     }
     if (req.maxFreeLength !== undefined) kLo = Math.max(kLo, req.workingForce / (req.maxFreeLength - req.workingLength));

@@ -16,7 +16,7 @@ import { stressFactor } from '../model/stressFactor.js';
 import { ultimateShearStrength } from '../model/strength.js';
 import { activeCoilMass, surgeFrequency } from '../model/surge.js';
 import { TREND, type Problem } from '../search/problem.js';
-import { CHECKS, activeChecks, shortestLength, staticLimit } from './checks.js';
+import { CHECKS, activeChecks, forceBand, shortestLength, staticLimit } from './checks.js';
 
 export const OBJECTIVES = ['rank', 'mass', 'wire_volume', 'outer_diameter', 'free_length', 'neg_safety_factor', 'neg_static_safety', 'neg_fatigue_safety', 'relative_cost'] as const;
 export const OBJ = Object.fromEntries(OBJECTIVES.map((o, i) => [o, i])) as Record<(typeof OBJECTIVES)[number], number>;
@@ -89,7 +89,7 @@ export function buildSpringProblem(req: Requirements): SpringProblem {
   const Lmin = shortestLength(req);
   const travel = L1 - Lmin;
   const F2req = req.operatingForce ?? 0;
-  const tol = req.loadTolerance;
+  const tol = forceBand(req);
   const correction = req.correction;
   const staticFactor = staticLimit(req, 1).factor;
   const alpha = endConditionConstant(req.seating);
