@@ -208,7 +208,8 @@ export function parseMaterials(doc: unknown, file: string): Material[] {
         strength: strength.law,
         minDiameter: strength.min,
         maxDiameter: strength.max,
-        minimumStrength,
+        // Only where one exists: the pre-built JSON catalog must equal this record exactly.
+        ...(minimumStrength ? { minimumStrength } : {}),
         moduli,
         density: sourced(f, 'density', (g) => g.requiredQuantity('value', 'density', { positive: true })),
         allowable,

@@ -3,7 +3,7 @@
 // Inputs and outputs SI (mm, N, MPa, kg, Hz, degC). No I/O.
 import {
   INFINITE_LIFE_CYCLES, STATIC_SERVICE_CYCLES, endurancePoint, finiteLifePoint, fullyReversedEndurance, repeatedStressFraction, zimmerliPoint,
-  type EndurancePoint, type FatigueCriterion, type FiniteLifeTable,
+  type EndurancePoint, type EnduranceSource, type FatigueCriterion, type FiniteLifeTable,
 } from '../../model/fatigue.js';
 import { springRate } from '../../model/rate.js';
 import { shearStress } from '../../model/stress.js';
@@ -62,7 +62,7 @@ export interface ExtensionPoint {
 
 export interface SiteFatigue extends CycleOnLine {
   endurance: EndurancePoint;
-  enduranceSource: 'zimmerli' | 'finite-life-table';
+  enduranceSource: EnduranceSource;
   /** Ssu for torsion, Sut for bending. */
   ultimate: number;
   alternatingStrength: number;
@@ -116,7 +116,7 @@ function governingOf(v: Record<ExtensionSite, number>, low: boolean): ExtensionS
   return best;
 }
 
-interface SiteData { sse: number; sinesAlternating: number; point: EndurancePoint; source: 'zimmerli' | 'finite-life-table'; ultimate: number }
+interface SiteData { sse: number; sinesAlternating: number; point: EndurancePoint; source: EnduranceSource; ultimate: number }
 
 /** Endurance at a loop: the loop's repeated-stress fraction for a finite life; for infinite life the
  * lower of Zimmerli's unpeened data (converted to bending at A) and the 1e7 row, so that a longer
@@ -184,7 +184,7 @@ export function analyzeExtension(g: ExtensionGeometry, m: ExtensionMaterial, s: 
   if (s.cycles !== undefined && s.cycles >= STATIC_SERVICE_CYCLES && points.length >= 1) {
     const cycles = s.cycles;
     const bodyCycle = cycleOnLine(tauI, per.body * minForce, per.body * maxForce);
-    const { point, source } = endurancePoint(cycles, s.peened, f.zimmerli, f.finiteLife, sut);
+    const { point, source } = endurancePoint(cycles, s.peened, f.zimmerli, f.finiteLife, sut, s.criterion);
     const body = siteFatigue(bodyCycle, { sse: fullyReversedEndurance(point, ssu, s.criterion), sinesAlternating: point.alternating, point, source, ultimate: ssu }, s.criterion);
     const aCycle = cycleOnLine(per.loopBending * Fi, per.loopBending * minForce, per.loopBending * maxForce);
     const bCycle = cycleOnLine(per.loopTorsion * Fi, per.loopTorsion * minForce, per.loopTorsion * maxForce);
