@@ -1,0 +1,81 @@
+// No outside values here (helpers only). Random springs and requirement sets for the yield tests:
+// scenarios of our own, built around a spring so that its checks sit near their limits.
+import fc from 'fast-check';
+import { findMaterial, loadCatalog } from '../../src/catalogs/load.js';
+import { materialFigures } from '../../src/input/material.js';
+import { readRequirements, type Requirements } from '../../src/input/requirements.js';
+import type { EndType } from '../../src/model/geometry.js';
+import { inactiveCoils, pitch, solidLength } from '../../src/model/geometry.js';
+import { solidOuterDiameter } from '../../src/model/clash.js';
+import { springRate } from '../../src/model/rate.js';
+import type { DesignedSpring } from '../../src/tolerance/springYield.js';
+
+export const catalog = loadCatalog();
+
+export function requirements(raw: Record<string, unknown>): Requirements {
+  return readRequirements({ units: 'si', envelope: {}, ...raw }, catalog);
+}
+
+export function designed(materialId: string, d: number, D: number, Na: number, ends: EndType, req: Requirements): DesignedSpring {
+  const material = findMaterial(catalog, materialId)!;
+  const figures = materialFigures({ material }, d, req.setRemoved);
+  const k = springRate(figures.shearModulus, d, D, Na, req.directShear);
+  return { material, figures, geometry: { wireDiameter: d, meanDiameter: D, activeCoils: Na, ends, freeLength: req.workingLength + req.workingForce / k } };
+}
+
+/** A spring and a requirement set whose limits lie within a few percent of the spring's own values
+ * (some just inside, some just outside): yields spread over the whole range from 0 to 1. */
+export const specArb = fc.record({
+  material: fc.constantFrom('music-wire', 'hard-drawn', 'stainless-302', 'chrome-silicon', 'en10270-1-dm', 'phosphor-bronze'),
+  d: fc.double({ min: 0.5, max: 5, noNaN: true }),
+  index: fc.double({ min: 5, max: 11, noNaN: true }),
+  na: fc.double({ min: 4, max: 14, noNaN: true }),
+  ends: fc.constantFrom<EndType>('squared-ground', 'squared', 'plain'),
+  travelShare: fc.double({ min: 0.2, max: 0.6, noNaN: true }),
+  preloadShare: fc.double({ min: 0.1, max: 0.5, noNaN: true }),
+  odSlack: fc.double({ min: -0.01, max: 0.04, noNaN: true }),
+  forceSlack: fc.double({ min: -0.03, max: 0.06, noNaN: true }),
+  freeSlack: fc.double({ min: -0.01, max: 0.05, noNaN: true }),
+  cycles: fc.constantFrom(undefined, 1e6),
+  grade: fc.constantFrom(1 as const, 2 as const, 3 as const),
+});
+
+export type Spec = typeof specArb extends fc.Arbitrary<infer T> ? T : never;
+
+/** A spec drawn uniformly from the same ranges (fast-check leans to the ends of each range, which is
+ * right for finding edge cases but not for measuring an average agreement). */
+export function uniformSpec(u: () => number): Spec {
+  const pick = <T>(list: readonly T[]): T => list[Math.floor(u() * list.length)];
+  const between = (a: number, b: number) => a + (b - a) * u();
+  return {
+    material: pick(['music-wire', 'hard-drawn', 'stainless-302', 'chrome-silicon', 'en10270-1-dm', 'phosphor-bronze'] as const),
+    d: between(0.5, 5), index: between(5, 11), na: between(4, 14),
+    ends: pick(['squared-ground', 'squared', 'plain'] as const),
+    travelShare: between(0.2, 0.6), preloadShare: between(0.1, 0.5),
+    odSlack: between(-0.01, 0.04), forceSlack: between(-0.03, 0.06), freeSlack: between(-0.01, 0.05),
+    cycles: pick([undefined, 1e6]), grade: pick([1, 2, 3] as const),
+  };
+}
+
+export function buildSpec(s: Spec): { req: Requirements; spring: DesignedSpring } {
+  const material = findMaterial(catalog, s.material)!;
+  const d = Math.min(Math.max(s.d, material.minDiameter), material.maxDiameter);
+  const D = s.index * d;
+  const figures = materialFigures({ material }, d, false);
+  const k = springRate(figures.shearModulus, d, D, s.na, false);
+  const Ls = solidLength(d, s.na + inactiveCoils(s.ends), s.ends);
+  // Room to solid sized so that the static stress at the shortest length is about 60-80% of the allowable.
+  const yStatic = (0.7 * figures.allowableStress * Math.PI * d ** 3) / (8 * 1.2 * D * 1.15) / k;
+  const L0 = Ls + yStatic * 1.3;
+  const L2 = L0 - yStatic * (1 - 0.3 * s.preloadShare);
+  const L1 = L2 + (L0 - L2) * s.travelShare;
+  const F1 = k * (L0 - L1);
+  const F2 = k * (L0 - L2);
+  const req = requirements({
+    material: s.material, ends: s.ends, load: { force: F1, length: L1 },
+    operating_length: L2, operating_force: F2 * (1 + s.forceSlack), load_tolerance: 0.05,
+    envelope: { max_outer_diameter: solidOuterDiameter(D, d, pitch(L0, s.na, d, s.ends)) * (1 + s.odSlack), max_free_length: L0 * (1 + s.freeSlack) },
+    index: [3, 16], guided: true, ...(s.cycles ? { cycles: s.cycles } : {}),
+  });
+  return { req, spring: designed(s.material, d, D, s.na, s.ends, req) };
+}
