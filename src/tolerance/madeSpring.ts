@@ -52,7 +52,7 @@ export interface MadeSpringContext {
 
 export function madeSpringContext(req: Requirements, figures: MaterialFigures, ends: EndType): MadeSpringContext {
   const ultimateShear = ultimateShearStrength(figures.tensileStrength);
-  const { point } = endurancePoint(req.cycles ?? INFINITE_LIFE_CYCLES, req.peened, figures.zimmerli, figures.finiteLife, figures.tensileStrength);
+  const { point } = endurancePoint(req.cycles ?? INFINITE_LIFE_CYCLES, req.peened, figures.zimmerli, figures.finiteLife, figures.tensileStrength, req.criterion);
   const { limit, factor } = staticLimit(req, figures.allowableStress);
   return {
     active: Uint8Array.from(activeChecks(req).map((a) => (a ? 1 : 0))),
