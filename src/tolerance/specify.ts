@@ -1,0 +1,31 @@
+// One reported spring made ready for a specification: rounded to drawing precision and re-checked,
+// its tolerances, its yield by estimate and by Monte Carlo, gathered as the specification sheet's input.
+import type { Material } from '../catalogs/types.js';
+import type { Requirements } from '../input/requirements.js';
+import type { MaterialFigures, SpringGeometry } from '../model/analysis.js';
+import type { SpecSheetInput } from '../report/html/specSheet.js';
+import type { ToleranceCatalog } from './catalog.js';
+import type { ToleranceRequest } from './model.js';
+import type { MonteCarloOptions } from './monteCarlo.js';
+import { drawnSpring, type DrawnSpring } from './precision.js';
+import { springYield, type SpringYield } from './springYield.js';
+
+export interface SpecifiedSpring {
+  drawn: DrawnSpring;
+  yield: SpringYield;
+  sheet: SpecSheetInput;
+}
+
+/** The spring at `geometry` (a reported candidate) as drawn, toleranced and with its yield. */
+export function specifySpring(catalog: ToleranceCatalog, request: ToleranceRequest, spring: { geometry: SpringGeometry; figures: MaterialFigures; material: Material }, req: Requirements, opts: MonteCarloOptions = {}): SpecifiedSpring {
+  const drawn = drawnSpring(spring.geometry, spring.figures, req);
+  const y = springYield(catalog, request, { geometry: drawn.geometry, figures: spring.figures, material: spring.material }, req, opts);
+  return {
+    drawn,
+    yield: y,
+    sheet: {
+      analysis: drawn.analysis, requirements: req, material: spring.material, tolerances: y.tolerances,
+      yield: { estimate: y.estimate, monteCarlo: y.monteCarlo, seed: Number(opts.seed ?? req.seed) },
+    },
+  };
+}
