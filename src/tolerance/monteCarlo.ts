@@ -5,7 +5,7 @@ import seedrandom from 'seedrandom';
 import { CHECKS, type CheckName } from '../spring/checks.js';
 import type { CheckEvaluator } from './estimate.js';
 
-export const DEFAULT_SAMPLES = 10_000;
+export const DEFAULT_SAMPLES = 5_000;
 
 export interface MonteCarloOptions {
   samples?: number;
