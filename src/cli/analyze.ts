@@ -7,11 +7,12 @@ import { analysisJson, analysisText } from '../report/analysisReport.js';
 import { toJson } from '../report/json.js';
 import type { UnitSystem } from '../units/systems.js';
 import type { Io } from './io.js';
-import { EXIT } from './io.js';
+import { checkOutputPaths, EXIT } from './io.js';
 
 export interface AnalyzeOptions { json?: boolean; units?: UnitSystem; report?: string; force?: boolean }
 
 export async function analyzeCommand(file: string, opts: AnalyzeOptions, io: Io): Promise<number> {
+  checkOutputPaths([{ option: '--report', path: opts.report }], !!opts.force, [file]);
   const catalog = loadCatalog();
   const c = readSpringCase(readInputFile(file), catalog);
   const a = analyzeSpring(c.geometry, c.figures, c.service);

@@ -30,9 +30,9 @@ export function buildProgram(io: Io, setCode: (c: number) => void): Command {
   program
     .description('Design and check helical compression springs: analyse one spring, or search standard wire sizes and coil counts for the lightest springs that meet your requirements.')
     .version(packageVersion(), '-V, --version')
-    .configureOutput({ writeOut: io.stdout, writeErr: io.stderr })
-    .exitOverride()
-    .showHelpAfterError('(run coilfront --help for usage)');
+    // A usage mistake is one line, like every other bad input, with the pointer to --help on it.
+    .configureOutput({ writeOut: io.stdout, writeErr: io.stderr, outputError: (text, write) => write(`coilfront: ${text.trim().replace(/\n+/g, ' ')} (run coilfront --help for usage)\n`) })
+    .exitOverride();
 
   program
     .command('analyze')

@@ -3,8 +3,9 @@ import type { Command } from 'commander';
 import { Option } from 'commander';
 import { loadCatalog } from '../catalogs/load.js';
 import { readInputFile } from '../input/document.js';
-import { ENVELOPE_SHORTHANDS, parseAssignment, sweepValues, withValue } from '../input/overrides.js';
-import { RANK_KEYS, readRequirements } from '../input/requirements.js';
+import { blameOverride, ENVELOPE_SHORTHANDS, parseAssignment, parsePath, sweepValues, withValue } from '../input/overrides.js';
+import { RANK_KEYS, readRequirements, type Requirements } from '../input/requirements.js';
+import { STATIC_SERVICE_CYCLES } from '../model/fatigue.js';
 import { candidateRecord, countsRecord, designJson, designText, relaxSuggestions } from '../report/designReport.js';
 import { toJson, SI_UNITS } from '../report/json.js';
 import { writeOutputFile } from '../report/writeFile.js';
@@ -17,7 +18,7 @@ const csv = () => import('../report/csv.js');
 import { inUnit, sig, unitSymbol } from '../units/format.js';
 import { InputError } from '../units/parse.js';
 import type { UnitSystem } from '../units/systems.js';
-import { EXIT, type Io } from './io.js';
+import { checkOutputPaths, EXIT, type Io } from './io.js';
 import { unitsOption } from './options.js';
 
 export interface CommonOptions {
@@ -50,22 +51,49 @@ function addCommon(cmd: Command): Command {
   return cmd;
 }
 
+interface Override { path: string[]; option: string }
+
 /** The raw requirements document with every command-line override applied. */
 export function rawWithOverrides(file: string, opts: CommonOptions): unknown {
+  return tracedOverrides(file, opts).doc;
+}
+
+/** The same, and where each override came from (to blame a bad one on its option). */
+function tracedOverrides(file: string, opts: CommonOptions): { doc: unknown; overrides: Override[] } {
   let doc = readInputFile(file);
-  for (const [, key, path] of ENVELOPE_SHORTHANDS) {
-    const v = (opts as Record<string, unknown>)[key];
-    if (typeof v === 'string') doc = withValue(doc, path.split('.'), parseAssignment(`${path}=${v}`).value);
-  }
-  for (const s of opts.set ?? []) {
-    const { path, value } = parseAssignment(s);
+  const overrides: Override[] = [];
+  const apply = (option: string, text: string) => {
+    const { path, value } = parseAssignment(text, option);
     doc = withValue(doc, path, value);
+    overrides.push({ path, option });
+  };
+  for (const [flags, key, path] of ENVELOPE_SHORTHANDS) {
+    const v = (opts as Record<string, unknown>)[key];
+    if (typeof v === 'string') apply(flags.split(' ')[0], `${path}=${v}`);
   }
-  if (opts.seed !== undefined) doc = withValue(doc, ['seed'], opts.seed);
-  if (opts.top !== undefined) doc = withValue(doc, ['top'], opts.top);
-  if (opts.rank !== undefined) doc = withValue(doc, ['rank'], opts.rank);
-  if (opts.perWire) doc = withValue(doc, ['best_per_wire'], true);
-  return doc;
+  for (const s of opts.set ?? []) apply('--set', s);
+  if (opts.seed !== undefined) apply('--seed', `seed=${JSON.stringify(opts.seed)}`);
+  if (opts.top !== undefined) apply('--top', `top=${JSON.stringify(opts.top)}`);
+  if (opts.rank !== undefined) apply('--rank', `rank=${opts.rank}`);
+  if (opts.perWire) apply('--per-wire', 'best_per_wire=true');
+  return { doc, overrides };
+}
+
+/** The requirements of a command: the file with its overrides, validated; a bad override is blamed on its option. */
+function requirementsOf(file: string, opts: CommonOptions): Requirements {
+  const { doc, overrides } = tracedOverrides(file, opts);
+  try {
+    return readRequirements(doc, loadCatalog());
+  } catch (e) {
+    throw blameOverride(e, overrides);
+  }
+}
+
+/** What design prints on stderr about how it read the requirements (as `analyze` notes them). */
+function requirementNotes(req: Requirements, io: Io): void {
+  if (req.cycles !== undefined && req.cycles < STATIC_SERVICE_CYCLES) {
+    io.stderr(`coilfront: note: cycles ${req.cycles} is below ${STATIC_SERVICE_CYCLES.toExponential(0).replace('+', '')}: judged as static service (no fatigue check)\n`);
+  }
 }
 
 function progress(io: Io, label: string): ((done: number, total: number) => void) | undefined {
@@ -81,7 +109,9 @@ function progress(io: Io, label: string): ((done: number, total: number) => void
 }
 
 async function designCommand(file: string, opts: CommonOptions, io: Io): Promise<number> {
-  const req = readRequirements(rawWithOverrides(file, opts), loadCatalog());
+  checkOutputPaths([{ option: '--report', path: opts.report }], !!opts.force, [file]);
+  const req = requirementsOf(file, opts);
+  requirementNotes(req, io);
   const run = runDesign(req, { strategy: opts.strategy, onProgress: progress(io, 'searching') });
   const system = opts.units ?? req.system;
   if (opts.report) {
@@ -124,7 +154,13 @@ interface FrontierOptions extends CommonOptions { x: FrontierKey; y: FrontierKey
 
 async function frontierCommand(file: string, opts: FrontierOptions, io: Io): Promise<number> {
   if (opts.x === opts.y) throw new InputError('--y', 'an objective other than --x');
-  const req = readRequirements(rawWithOverrides(file, opts), loadCatalog());
+  // The frontier is every non-dominated spring: a count, a ranking or one-per-wire would cut it silently.
+  for (const [option, given] of [['--top', opts.top !== undefined], ['--rank', opts.rank !== undefined], ['--per-wire', !!opts.perWire]] as const) {
+    if (given) throw new InputError(option, `an option of design or sweep (frontier lists every spring on the ${opts.x} / ${opts.y} frontier; choose the axes with --x and --y)`);
+  }
+  checkOutputPaths([{ option: '--output', path: opts.output }, { option: '--report', path: opts.report }], !!opts.force, [file]);
+  const req = requirementsOf(file, opts);
+  requirementNotes(req, io);
   const system = opts.units ?? req.system;
   const fr = computeFrontier(req, opts.x, opts.y, progress(io, 'mapping'), opts.strategy);
   const keyValue = (c: Candidate, k: FrontierKey) => FRONTIER_KEYS[k].sign * c.objectives[FRONTIER_KEYS[k].objective];
@@ -153,14 +189,24 @@ export interface SweepRow { value: number; run: DesignRun; best: Candidate | nul
 export function runSweep(file: string, opts: CommonOptions, vary: string, io: Io | null): { path: string[]; rows: SweepRow[]; system: UnitSystem } {
   const eq = vary.indexOf('=');
   if (eq <= 0) throw new InputError('--vary', 'path=from:to:step, such as envelope.max_outer_diameter=14:24:0.5', vary);
-  const path = parseAssignment(`${vary.slice(0, eq)}=0`, '--vary').path;
+  const path = parsePath(vary.slice(0, eq), '--vary');
   const values = sweepValues(vary.slice(eq + 1));
-  const base = rawWithOverrides(file, opts);
+  const { doc: base, overrides } = tracedOverrides(file, opts);
   const catalog = loadCatalog();
+  // Every value is read before any search runs: a bad one is refused at once, and blamed on --vary.
+  const reqs = values.map((value) => {
+    try {
+      return readRequirements(withValue(base, path, value), catalog);
+    } catch (e) {
+      const byVary = blameOverride(e, [{ path, option: '--vary' }]);
+      if (byVary !== e && e instanceof InputError) throw new InputError(`--vary ${e.field}=${value}`, e.expected);
+      throw blameOverride(e, overrides);
+    }
+  });
   const rows: SweepRow[] = [];
   let system: UnitSystem = 'si';
-  values.forEach((value, i) => {
-    const req = readRequirements(withValue(base, path, value), catalog);
+  reqs.forEach((req, i) => {
+    const value = values[i];
     system = req.system;
     const run = runDesign(req, { strategy: opts.strategy });
     let limiting: string | null = null;
@@ -177,6 +223,7 @@ export function runSweep(file: string, opts: CommonOptions, vary: string, io: Io
 }
 
 async function sweepCommand(file: string, opts: SweepOptions, io: Io): Promise<number> {
+  checkOutputPaths([{ option: '--output', path: opts.output }, { option: '--report', path: opts.report }], !!opts.force, [file]);
   const { path, rows, system: fileSystem } = runSweep(file, opts, opts.vary, io);
   const system = opts.units ?? fileSystem;
   const name = path.join('.');

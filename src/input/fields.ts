@@ -17,6 +17,7 @@ export class Fields {
 
   static of(raw: unknown, path: string, system: UnitSystem): Fields {
     if (!isRecord(raw)) throw new InputError(path || 'file', 'a mapping of fields (key: value)', raw);
+    if (Object.getPrototypeOf(raw) !== Object.prototype && Object.getPrototypeOf(raw) !== null) throw new InputError(path || 'file', 'a plain mapping of fields', raw);
     return new Fields(raw, path, system);
   }
 
@@ -32,13 +33,20 @@ export class Fields {
     return this.path ? `${this.path}.${key}` : key;
   }
 
+  /** The field is given. Only the mapping's own keys count (never "constructor" or "__proto__" from
+   * Object.prototype), and an empty value (`key:` with nothing after it) is refused rather than read as
+   * "not given": a blank bore limit must not silently remove the limit. Leave the line out instead. */
   has(key: string): boolean {
     this.seen.add(key);
-    return this.raw[key] !== undefined && this.raw[key] !== null;
+    if (!Object.hasOwn(this.raw, key) || this.raw[key] === undefined) return false;
+    if (this.raw[key] === null) throw new InputError(this.name(key), 'a value (the field is empty; leave the line out to use the default)');
+    return true;
   }
 
   get(key: string): unknown {
     this.seen.add(key);
+    if (!Object.hasOwn(this.raw, key)) return undefined;
+    if (this.raw[key] === null) throw new InputError(this.name(key), 'a value (the field is empty; leave the line out to use the default)');
     return this.raw[key];
   }
 
@@ -64,9 +72,11 @@ export class Fields {
     return parseNumber(this.raw[key], this.name(key), rule);
   }
 
-  fraction(key: string): number | undefined {
+  fraction(key: string, max?: number): number | undefined {
     if (!this.has(key)) return undefined;
-    return parseFraction(this.raw[key], this.name(key));
+    const v = parseFraction(this.raw[key], this.name(key));
+    if (max !== undefined && v > max) throw new InputError(this.name(key), `a fraction of at most ${max} (${max * 100}%)`, this.raw[key]);
+    return v;
   }
 
   string(key: string): string | undefined {

@@ -2,6 +2,8 @@
 // where it must fit. Every field but load, material and envelope has a default, documented in the README.
 import { FAMILIES, type Catalog } from '../catalogs/types.js';
 import { findSeries } from '../catalogs/load.js';
+import { inStrengthRange } from '../catalogs/properties.js';
+import { formatQuantity } from '../units/format.js';
 import { SEATINGS, type Seating } from '../model/buckling.js';
 import { FATIGUE_CRITERIA, type FatigueCriterion } from '../model/fatigue.js';
 import { END_TYPES, type EndType } from '../model/geometry.js';
@@ -11,6 +13,8 @@ import type { UnitSystem } from '../units/systems.js';
 import { Fields, isRecord } from './fields.js';
 import { parseMaterialChoice, type MaterialChoice } from './material.js';
 import { SURGE_ENDS, type SurgeEnds } from '../model/surge.js';
+import { checkMaterialChoice } from './materialChecks.js';
+import { LIMITS } from './limits.js';
 import { parseCycles } from './springFile.js';
 
 export const RANK_KEYS = ['mass', 'wire_volume', 'outer_diameter', 'free_length', 'safety_factor'] as const;
@@ -79,7 +83,42 @@ export const DEFAULTS = {
   diameterResolution: 0.01,
 };
 
-function pair(f: Fields, key: string, fallback: [number, number], rule: { positive?: boolean; integer?: boolean }): [number, number] {
+
+/** Every listed wire size must be one some chosen material is made in (its sourced strength range), and
+ * a series must hold at least one: otherwise the search would quietly try nothing. */
+function checkWireSizes(materials: MaterialChoice[], wireSizes: (m: MaterialChoice) => number[], wsRaw: unknown, system: UnitSystem): void {
+  const fits = (m: MaterialChoice, d: number) => m.tensileStrength !== undefined || inStrengthRange(m.material, d);
+  const ranges = () => materials.map((m) => `${m.material.id} ${formatQuantity(m.material.minDiameter, 'length', system, 3)} to ${formatQuantity(m.material.maxDiameter, 'length', system, 3)}`)
+    .filter((v, i, a) => a.indexOf(v) === i).slice(0, 6).join('; ');
+  if (Array.isArray(wsRaw)) {
+    const list = wireSizes(materials[0]);
+    const raws = [...wsRaw];
+    for (const d of list) {
+      if (!materials.some((m) => fits(m, d))) {
+        const i = raws.findIndex((v) => { try { return parseQuantity(v, 'length', system, 'x') === d; } catch { return false; } });
+        throw new InputError(`wire_sizes[${Math.max(0, i)}]`, `a diameter the chosen material is made in (${ranges()})`, raws[i]);
+      }
+    }
+    return;
+  }
+  if (!materials.some((m) => wireSizes(m).some((d) => fits(m, d)))) {
+    throw new InputError('wire_sizes', `a series with sizes the chosen material is made in (${ranges()})`, wsRaw ?? 'each material\'s own series');
+  }
+}
+
+/** Refuse a search too large to finish, naming the settings that size it. */
+function checkWork(req: Requirements): void {
+  const coilCounts = Math.floor((req.activeCoils[1] - req.activeCoils[0]) / req.coilStep + 1e-9) + 1;
+  let sizes = 0;
+  for (const m of req.materials) sizes += req.wireSizes(m).filter((d) => m.tensileStrength !== undefined || inStrengthRange(m.material, d)).length;
+  const combinations = sizes * req.ends.length * coilCounts;
+  if (combinations > LIMITS.combinations) {
+    throw new InputError('coil_step', `a search of at most ${LIMITS.combinations.toLocaleString('en-US')} combinations; this one has ${combinations.toLocaleString('en-US')} `
+      + `(${sizes} material wire sizes x ${req.ends.length} end types x ${coilCounts} coil counts): use a larger coil_step, a narrower active_coils, or fewer materials, end types or wire_sizes`, req.coilStep);
+  }
+}
+
+function pair(f: Fields, key: string, fallback: [number, number], rule: { positive?: boolean; integer?: boolean; min?: number; max?: number }): [number, number] {
   const list = f.list(key);
   if (!list) return fallback;
   if (list.length !== 2) throw new InputError(f.name(key), 'a list of two numbers [low, high]', f.get(key));
@@ -106,9 +145,11 @@ export function readRequirements(raw: unknown, catalog: Catalog): Requirements {
     g.rejectUnknown();
     materials = catalog.materials.filter((m) => fam === 'any' || m.family === fam).map((material) => ({ material }));
   } else materials = [parseMaterialChoice(rawMaterial, system, catalog, 'material')];
+  materials.forEach((m, i) => checkMaterialChoice(m, Array.isArray(rawMaterial) ? `material[${i}]` : 'material', system));
 
   const endsRaw = f.get('ends');
-  const ends: EndType[] = endsRaw === undefined || endsRaw === null ? [DEFAULTS.ends]
+  if (Array.isArray(endsRaw) && endsRaw.length === 0) throw new InputError('ends', `one end type or a non-empty list of them (${END_TYPES.join(' | ')})`, endsRaw);
+  const ends: EndType[] = endsRaw === undefined ? [DEFAULTS.ends]
     : (Array.isArray(endsRaw) ? endsRaw : [endsRaw]).map((e, i) => {
       if (typeof e !== 'string' || !(END_TYPES as readonly string[]).includes(e)) throw new InputError(Array.isArray(endsRaw) ? `ends[${i}]` : 'ends', `one of ${END_TYPES.join(' | ')}`, e);
       return END_TYPES[(END_TYPES as readonly string[]).indexOf(e)];
@@ -140,7 +181,7 @@ export function readRequirements(raw: unknown, catalog: Catalog): Requirements {
   const wsRaw = f.get('wire_sizes');
   let wireSizes: (m: MaterialChoice) => number[];
   let wireSizesLabel: string;
-  if (wsRaw === undefined || wsRaw === null) {
+  if (wsRaw === undefined) {
     wireSizes = (m) => findSeries(catalog, m.material.wireSeries)!.diameters;
     wireSizesLabel = 'each material\'s own series';
   } else if (typeof wsRaw === 'string') {
@@ -155,19 +196,20 @@ export function readRequirements(raw: unknown, catalog: Catalog): Requirements {
     wireSizesLabel = 'the listed diameters';
   } else throw new InputError('wire_sizes', 'a wire series id or a list of diameters', wsRaw);
 
-  const activeCoils = pair(f, 'active_coils', DEFAULTS.activeCoils, { positive: true });
-  const coilStep = f.number('coil_step', { positive: true }) ?? DEFAULTS.coilStep;
-  if ((activeCoils[1] - activeCoils[0]) / coilStep > 100000) throw new InputError('coil_step', 'a step that gives at most 100000 coil counts in active_coils');
-  const index = pair(f, 'index', DEFAULTS.index, { positive: true });
+  checkWireSizes(materials, wireSizes, wsRaw, system);
+
+  const activeCoils = pair(f, 'active_coils', DEFAULTS.activeCoils, { min: LIMITS.activeCoils[0], max: LIMITS.activeCoils[1] });
+  const coilStep = f.number('coil_step', { min: LIMITS.coilStep[0], max: LIMITS.coilStep[1] }) ?? DEFAULTS.coilStep;
+  const index = pair(f, 'index', DEFAULTS.index, { positive: true, max: LIMITS.indexMax });
   if (index[0] <= 1) throw new InputError('index[0]', 'a spring index above 1', index[0]);
 
   const safetyRaw = f.get('safety');
   const safety = { ...DEFAULTS.safety };
   if (safetyRaw !== undefined && safetyRaw !== null) {
     const sf = Fields.of(safetyRaw, 'safety', system);
-    safety.static = sf.number('static', { positive: true }) ?? safety.static;
-    safety.fatigue = sf.number('fatigue', { positive: true }) ?? safety.fatigue;
-    safety.surge = sf.number('surge', { positive: true }) ?? safety.surge;
+    safety.static = sf.number('static', { positive: true, max: LIMITS.safetyMax }) ?? safety.static;
+    safety.fatigue = sf.number('fatigue', { positive: true, max: LIMITS.safetyMax }) ?? safety.fatigue;
+    safety.surge = sf.number('surge', { positive: true, max: LIMITS.surgeMarginMax }) ?? safety.surge;
     sf.rejectUnknown();
   }
   const req: Requirements = {
@@ -191,16 +233,20 @@ export function readRequirements(raw: unknown, catalog: Catalog): Requirements {
     activeCoils, coilStep, index,
     allowableStress: f.quantity('allowable_stress', 'stress', { positive: true }),
     safety,
-    clashAllowance: f.fraction('clash_allowance') ?? DEFAULTS.clashAllowance,
+    clashAllowance: f.fraction('clash_allowance', LIMITS.clashAllowanceMax) ?? DEFAULTS.clashAllowance,
     gapRule: f.bool('coil_gap_rule') ?? false,
     solidSafe: f.bool('solid_safe') ?? false,
     guided: f.bool('guided') ?? false,
     bestPerWire: f.bool('best_per_wire') ?? false,
     rank: (f.choice('rank', RANK_KEYS) ?? DEFAULTS.rank) as RankKey,
     top: f.number('top', { integer: true, positive: true, max: 1000 }) ?? DEFAULTS.top,
-    seed: f.number('seed', { integer: true }) ?? DEFAULTS.seed,
+    seed: f.number('seed', { integer: true, min: -Number.MAX_SAFE_INTEGER, max: Number.MAX_SAFE_INTEGER }) ?? DEFAULTS.seed,
     diameterResolution: f.quantity('diameter_resolution', 'length', { positive: true }) ?? DEFAULTS.diameterResolution,
   };
+  if (req.diameterResolution < LIMITS.diameterResolution[0] || req.diameterResolution > LIMITS.diameterResolution[1]) {
+    throw new InputError('diameter_resolution', `a length from ${formatQuantity(LIMITS.diameterResolution[0], 'length', system)} to ${formatQuantity(LIMITS.diameterResolution[1], 'length', system)} (finer than a wire maker can hold is no more exact, only slower)`, f.get('diameter_resolution'));
+  }
+  checkWork(req);
   if (req.loadTolerance >= 1) throw new InputError('load_tolerance', 'a fraction below 1 (such as 0.1 or "10%")', f.get('load_tolerance'));
   if (req.workingTolerance !== undefined && req.workingTolerance >= 1) throw new InputError('working_tolerance', 'a fraction below 1 (such as 0.02 or "2%")', f.get('working_tolerance'));
   f.get('material_map'); // the stock table's material words; read and checked by src/stock/materialMap.ts

@@ -12,6 +12,8 @@ import type { UnitSystem } from '../units/systems.js';
 import { Fields } from './fields.js';
 import { materialFigures, parseMaterialChoice, strengthRangeNote, type MaterialChoice } from './material.js';
 import { SURGE_ENDS, type SurgeEnds } from '../model/surge.js';
+import { checkMaterialChoice } from './materialChecks.js';
+import { LIMITS } from './limits.js';
 
 export interface SpringCase {
   system: UnitSystem;
@@ -26,7 +28,10 @@ export interface SpringCase {
 export function parseCycles(raw: unknown, field: string): number | undefined {
   if (raw === undefined || raw === null) return undefined;
   if (raw === 'infinite' || raw === 'inf') return Infinity;
-  return parseNumber(raw, field, { positive: true });
+  const n = parseNumber(raw, field, { positive: true });
+  // Beyond 1e15 a count is a slip of the exponent; a life without end is written "infinite".
+  if (n > 1e15) throw new InputError(field, 'a cycle count of at most 1e15, or "infinite"', raw);
+  return n;
 }
 
 export function readSpringCase(raw: unknown, catalog: Catalog): SpringCase {
@@ -51,12 +56,16 @@ export function readSpringCase(raw: unknown, catalog: Catalog): SpringCase {
   const correction = (f.choice('stress_factor', ['bergstrasser', 'wahl'] as const) ?? 'bergstrasser') as StressCorrection;
   const directShear = f.bool('direct_shear_rate') ?? false;
   const setRemoved = f.bool('set_removed') ?? false;
+  checkMaterialChoice(choice, 'material', system, [d]);
   const figures = materialFigures(choice, d, setRemoved);
   const k = springRate(figures.shearModulus, d, D, Na, directShear);
 
   const lengthsRaw = f.has('lengths') ? 'lengths' : undefined;
   const forcesRaw = f.has('forces') ? 'forces' : undefined;
   if (lengthsRaw && forcesRaw) throw new InputError('lengths, forces', 'only one of lengths | forces (both given)');
+  for (const key of [lengthsRaw, forcesRaw]) {
+    if (key && (f.list(key) ?? []).length === 0) throw new InputError(key, 'a non-empty list (leave the field out to analyse the spring at no working point)', f.get(key));
+  }
   let lengths: number[] = [];
   if (lengthsRaw) {
     lengths = (f.list('lengths') ?? []).map((v, i) => {
@@ -85,9 +94,9 @@ export function readSpringCase(raw: unknown, catalog: Catalog): SpringCase {
     surgeEnds: (f.choice('surge_ends', SURGE_ENDS) ?? 'plates') as SurgeEnds,
     temperature: f.quantity('temperature', 'temperature'),
     forcingFrequency: f.quantity('forcing_frequency', 'frequency', { nonNegative: true }),
-    clashAllowance: f.fraction('clash_allowance') ?? 0.15,
+    clashAllowance: f.fraction('clash_allowance', LIMITS.clashAllowanceMax) ?? 0.15,
     gapRule: f.bool('coil_gap_rule') ?? false,
-    surgeMargin: f.number('surge_margin', { positive: true }) ?? 15,
+    surgeMargin: f.number('surge_margin', { positive: true, max: LIMITS.surgeMarginMax }) ?? 15,
   };
   f.rejectUnknown();
   const notes: string[] = [];

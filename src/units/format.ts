@@ -5,11 +5,14 @@ import { displayUnit, type UnitSystem } from './systems.js';
 
 export function sig(v: number, digits = 4): string {
   if (!Number.isFinite(v)) return '-';
-  if (v === 0) return '0';
-  const a = Math.abs(v);
-  if (a >= 1e6 || a < 1e-4) return v.toExponential(digits - 1);
-  const decimals = Math.max(0, digits - 1 - Math.floor(Math.log10(a)));
-  return v.toFixed(Math.min(decimals, 8));
+  // Round to the significant figures first, then choose the decimals from the rounded value: 19.96
+  // at 3 figures is 20.0, so it prints like 20.5 (not "19.96" -> "20.00", one figure too many).
+  const r = Number(v.toPrecision(digits));
+  if (r === 0) return '0';
+  const a = Math.abs(r);
+  if (a >= 1e6 || a < 1e-4) return r.toExponential(digits - 1);
+  const decimals = Math.max(0, digits - 1 - Math.floor(Math.log10(a) + 1e-12));
+  return r.toFixed(Math.min(decimals, 8));
 }
 
 export function formatQuantity(core: number, kind: Kind, system: UnitSystem, digits = 4): string {

@@ -39,7 +39,9 @@ const reqArb = fc.record({
   solidSafe: fc.boolean(),
 });
 
-function requirementsDoc(r: fc.infer<typeof reqArb>): Record<string, unknown> {
+type ReqCase = typeof reqArb extends fc.Arbitrary<infer T> ? T : never;
+
+function requirementsDoc(r: ReqCase): Record<string, unknown> {
   const doc: Record<string, unknown> = {
     units: 'si', material: r.material, ends: r.ends, seating: r.seating,
     load: { force: r.force, length: r.length }, operating_length: r.length * (1 - r.stroke),

@@ -59,7 +59,7 @@ describe('analyze rejects bad input with exit code 2 and one message', () => {
     await expectInputError(springText({}) + 'wire_diameter: 2\n', /expected each field given once/);
   });
   it('malformed JSON', async () => {
-    await expectInputError('{"units": "si", "material": }', /expected well-formed YAML or JSON/, 'json');
+    await expectInputError('{"units": "si", "material": }', /expected well-formed JSON/, 'json');
   });
   it('a missing file', async () => {
     const r = await cli('analyze', '/nonexistent/spring.yaml');

@@ -30,7 +30,9 @@ const reqArb = fc.record({
   guided: fc.boolean(),
 });
 
-function requirementsDoc(r: fc.infer<typeof reqArb>): Record<string, unknown> {
+type ReqCase = typeof reqArb extends fc.Arbitrary<infer T> ? T : never;
+
+function requirementsDoc(r: ReqCase): Record<string, unknown> {
   const doc: Record<string, unknown> = {
     units: 'si', material: r.material, ends: r.ends, seating: r.seating,
     load: { force: r.force, length: r.length },

@@ -1,0 +1,23 @@
+// The bounds on settings that every input reader shares.
+/**
+ * Bounds on the search settings. Below them a setting is finer than any spring maker works to (a coil
+ * count to 0.01 turn, a diameter to 1 um) and only multiplies the work; the work bound refuses a search
+ * that would run for minutes, naming the setting to change instead of hanging.
+ */
+export const LIMITS = {
+  /** Active coils: a spring needs at least one active turn; beyond 1000 it is a wire, not a spring. */
+  activeCoils: [1, 1000] as [number, number],
+  /** Coil-count step: from a hundredth of a turn (finer than a coiling machine holds) to 10 turns. */
+  coilStep: [0.01, 10] as [number, number],
+  /** Largest spring index worth searching (common practice: 4 to 12, rarely beyond 25). */
+  indexMax: 100,
+  /** Mean-diameter scan step: 1 um to 10 mm. */
+  diameterResolution: [1e-3, 10] as [number, number],
+  /** A safety factor beyond 100 admits no spring; a surge margin beyond 1000 neither (common practice asks 15 to 20). */
+  safetyMax: 100,
+  surgeMarginMax: 1000,
+  /** Solid force margin over the largest working force: up to 100%. */
+  clashAllowanceMax: 1,
+  /** Material x wire size x end type x coil count combinations one search may visit. */
+  combinations: 1_000_000,
+};
