@@ -112,7 +112,7 @@ export function parseQuantity(raw: unknown, kind: Kind, system: UnitSystem, fiel
 /** A bare number (counts, ratios); strings like "1e6" are accepted. */
 export function parseNumber(raw: unknown, field: string, rule: QuantityRule & { integer?: boolean; min?: number; max?: number } = {}): number {
   const n = typeof raw === 'number' ? raw : typeof raw === 'string' ? decimal(raw) : NaN;
-  if (!Number.isFinite(n)) throw new InputError(field, 'a decimal number', raw);
+  if (!Number.isFinite(n)) throw new InputError(field, 'a number (in decimal)', raw);
   if (rule.integer && !Number.isInteger(n)) throw new InputError(field, 'a whole number', raw);
   if (rule.positive && !(n > 0)) throw new InputError(field, 'a positive number', raw);
   if (rule.nonNegative && !(n >= 0)) throw new InputError(field, 'a non-negative number', raw);
