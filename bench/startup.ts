@@ -22,11 +22,13 @@ const demoJson = join(scratch, 'washer-trigger.json');
 writeFileSync(demoJson, JSON.stringify(parseYaml(readFileSync(DEMO, 'utf8'))));
 
 interface Subject { key: string; label: string; args: string[] }
+const bundle = bin.replace(/coilfront\.cjs$/, 'coilfront-bundle.cjs');
 const subjects: Subject[] = [
   { key: 'node', label: '`node -e 0` (the yardstick)', args: ['-e', '0'] },
-  { key: 'design', label: `\`coilfront design ${DEMO}\` (the built command, \`${bin}\`)`, args: [bin, 'design', DEMO] },
+  { key: 'design', label: `\`coilfront design ${DEMO}\` (the built command, \`${bin}\`: bundle + code cache)`, args: [bin, 'design', DEMO] },
   { key: 'json', label: 'the same requirements as a JSON file (no YAML to parse)', args: [bin, 'design', demoJson] },
-  { key: 'modules', label: 'the same command from the unbundled modules (`dist/src/cli/main.js`), for comparison', args: ['dist/src/cli/main.js', 'design', DEMO] },
+  { key: 'nocache', label: `the bundle alone, without the code cache (\`${bundle}\`)`, args: [bundle, 'design', DEMO] },
+  { key: 'modules', label: 'the unbundled modules (`dist/src/cli/main.js`, tsc output; it reads the catalog JSON too)', args: ['dist/src/cli/main.js', 'design', DEMO] },
 ];
 
 function once(s: Subject): number {

@@ -1,9 +1,11 @@
 // The build after `tsc`: the catalogs read from their YAML and validated once, here, by the one
 // validator (src/catalogs/load.ts, compiled), and written as JSON beside each built copy of that
 // module; then the CLI bundled into dist/cli/ so that a run loads one file instead of a hundred
-// modules. The YAML stays the source of truth: edit it and build again.
+// modules, with a V8 code cache so that it is not compiled again at each start. The YAML stays the
+// source of truth: edit it and build again.
 // Usage: node scripts/build.mjs (after tsc; `npm run build` does both).
-import { mkdirSync, readdirSync, rmSync, writeFileSync } from 'node:fs';
+import { spawnSync } from 'node:child_process';
+import { chmodSync, copyFileSync, mkdirSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
 import { dirname, join } from 'node:path';
 import { fileURLToPath } from 'node:url';
 import { isDeepStrictEqual } from 'node:util';
@@ -21,27 +23,36 @@ if (!isDeepStrictEqual(JSON.parse(json), catalog)) {
   throw new Error('build: the validated catalog does not survive JSON unchanged (a value JSON cannot hold?)');
 }
 
-// The bundle: the entry and its lazily loaded chunks (reports, CSV) side by side with the catalog.
+// The bundle: one CommonJS file, run by the launcher (scripts/launcher.cjs) with a V8 code cache.
+// The HTML report and the CSV writer, imported with import() in src/cli/, stay in the file but are
+// evaluated only when a command asks for them.
 rmSync(cliDir, { recursive: true, force: true });
 mkdirSync(cliDir, { recursive: true });
+const bundle = join(cliDir, 'coilfront-bundle.cjs');
 await build({
-  entryPoints: { coilfront: join(root, 'src', 'cli', 'main.ts') },
-  outdir: cliDir,
+  entryPoints: [join(root, 'src', 'cli', 'main.ts')],
+  outfile: bundle,
   bundle: true,
-  splitting: true,
-  format: 'esm',
+  format: 'cjs',
   platform: 'node',
   target: 'node20',
-  chunkNames: 'chunk-[hash]',
+  // The modules find files beside themselves through import.meta.url (the catalog JSON, package.json).
+  define: { 'import.meta.url': '__coilfrontModuleUrl' },
+  banner: { js: "var __coilfrontModuleUrl = require('node:url').pathToFileURL(__filename).href;" },
   // Not minified: minifying measured no faster to start, and a readable bundle keeps stack traces
   // (COILFRONT_DEBUG=1) and licence comments as they are.
-  // CommonJS dependencies (commander, the LP solver, seedrandom) call require() for Node's
-  // built-ins; an ES module has none of its own, so the bundle makes one.
-  banner: { js: "import { createRequire as __coilfrontRequire } from 'node:module'; const require = __coilfrontRequire(import.meta.url);" },
   logLevel: 'warning',
 });
+// The launcher wraps the bundle in a function: a #! line inside it would not parse.
+writeFileSync(bundle, readFileSync(bundle, 'utf8').replace(/^#![^\n]*\n/, ''));
+const launcher = join(cliDir, 'coilfront.cjs');
+copyFileSync(join(root, 'scripts', 'launcher.cjs'), launcher);
+chmodSync(launcher, 0o755);
 
 for (const dir of [cliDir, join(root, 'dist', 'src', 'catalogs')]) writeFileSync(join(dir, PREBUILT_CATALOG), json);
-const files = readdirSync(cliDir).filter((f) => f.endsWith('.js'));
-console.log(`build: catalog ${(json.length / 1024).toFixed(1)} KB (${catalog.materials.length} materials, ${catalog.series.length} wire series); CLI bundle dist/cli/coilfront.js + ${files.length - 1} chunk(s)`);
 
+// The code cache: what V8 compiled during one run of the demo, for the next starts to reuse.
+const record = spawnSync(process.execPath, [launcher, 'design', join(root, 'examples', 'washer-trigger.yaml')], { env: { ...process.env, COILFRONT_RECORD_CODE_CACHE: '1' }, stdio: ['ignore', 'ignore', 'inherit'] });
+if (record.status !== 0) throw new Error(`build: the bundled CLI failed on the demo (exit ${record.status})`);
+const cacheKb = (readFileSync(`${bundle}.cache`).length / 1024).toFixed(0);
+console.log(`build: catalog ${(json.length / 1024).toFixed(1)} KB (${catalog.materials.length} materials, ${catalog.series.length} wire series); CLI dist/cli/coilfront.cjs running coilfront-bundle.cjs (${(readFileSync(bundle).length / 1024).toFixed(0)} KB) with a ${cacheKb} KB code cache`);

@@ -1,6 +1,7 @@
-// The installed command is the bundle the build writes (package.json bin): it must say exactly what
-// the source says, load its lazy parts (HTML report, CSV) when asked, and find its pre-validated
-// catalog. A property of our own build, no outside values. Needs `npm run build` (npm ci runs it).
+// The installed command is the launcher and bundle the build writes (package.json bin): it must say
+// exactly what the source says, load its lazy parts (HTML report, CSV) when asked, find its
+// pre-validated catalog, and start from its code cache. A property of our own build, no outside
+// values. Needs `npm run build` (npm ci runs it).
 import { execFileSync, spawnSync } from 'node:child_process';
 import { existsSync, readFileSync, rmSync } from 'node:fs';
 import { describe, expect, it } from 'vitest';
@@ -34,6 +35,15 @@ describe('the built command', () => {
     expect(r.stdout.split('\n')[0]).toMatch(/^rank,material,ends,wire_diameter_mm,/);
     expect(readFileSync(report, 'utf8')).toMatch(/^<!doctype html>/i);
     rmSync(report);
+  });
+
+  it('starts from the code cache the build recorded, and runs the same without it', () => {
+    const withCache = spawnSync(process.execPath, [bin, '--version'], { encoding: 'utf8', env: { ...process.env, COILFRONT_DEBUG: '1' } });
+    expect(withCache.stderr).toBe('coilfront: code cache used\n');
+    const bundle = bin.replace(/coilfront\.cjs$/, 'coilfront-bundle.cjs');
+    const plain = spawnSync(process.execPath, [bundle, 'design', 'examples/washer-trigger.yaml'], { encoding: 'utf8' });
+    expect(plain.status).toBe(0);
+    expect(plain.stdout).toBe(built('design', 'examples/washer-trigger.yaml').stdout);
   });
 
   it('answers --version with the package version and bad input with exit 2, no stack trace', () => {
