@@ -15,6 +15,7 @@ import { runDesign } from '../src/spring/design.js';
 import { buildSpringProblem } from '../src/spring/problem.js';
 import { SANDGREN_BEST_KNOWN, sandgrenProblem } from './problems/sandgren.js';
 import { TENSION_COMPRESSION_BEST_KNOWN, tensionCompressionProblem } from './problems/tensionCompression.js';
+import { stockBenchLines } from './stock.js';
 
 const DEMO = 'examples/washer-trigger.yaml';
 const catalog = loadCatalog();
@@ -161,4 +162,5 @@ say(`| Mixed-discrete coil compression spring, min wire volume (Sandgren 1990; L
 say(`| Tension/compression spring, min weight (Belegundu 1982; Arora 1989; CEC2020 RC17) | 0.0126652328 | ${tc.value.best[0].f[0].toFixed(10)} (relative difference ${(tc.value.best[0].f[0] / TENSION_COMPRESSION_BEST_KNOWN - 1).toExponential(1)}) | ${tc.value.evaluations.toLocaleString()} evaluations, ${fmt(tc.ms)} ms | ${tcHits}/50 within 0.5% at 200,000 evaluations; best ${tcBestGa.toFixed(10)} |`);
 say();
 say(`Sandgren best known reached: ${Math.abs(sgT.value.best[0].f[0] - SANDGREN_BEST_KNOWN) < 1e-6 ? 'yes, to the published 7 digits' : 'NO'}.`);
+stockBenchLines().forEach((l) => say(l));
 writeFileSync('bench/results.md', lines.join('\n') + '\n');

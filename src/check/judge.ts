@@ -4,7 +4,8 @@
 // spring adds the band on its working force, and that its material and end type are ones the
 // requirement allows.
 import type { Requirements } from '../input/requirements.js';
-import { analyzeSpring, type SpringAnalysis } from '../model/analysis.js';
+import { analyzeSpring, type ServiceConditions, type SpringAnalysis } from '../model/analysis.js';
+import { springServiceConditions } from '../spring/problem.js';
 import { CHECK, CHECKS, CHECK_LABELS, activeChecks, checkAnalysis, staticLimit, type CheckName } from '../spring/checks.js';
 import type { EndType } from '../model/geometry.js';
 import type { Kind } from '../units/kinds.js';
@@ -45,18 +46,23 @@ export interface CheckLine {
 export interface Verdict {
   spring: GivenSpring;
   analysis: SpringAnalysis;
-  lines: CheckLine[];
   pass: boolean;
-  failing: CheckLine[];
+  /** The names of the failing checks, in report order. */
+  failingNames: AnyCheckName[];
   /** Sum of the failing checks' normalised values (a categorical failure counts 1): how far from passing. */
   violation: number;
+  /** Every check with its figure, limit and margin (built when first read: a table of many rows needs only the verdicts). */
+  readonly lines: CheckLine[];
+  readonly failing: CheckLine[];
   /** The check with the smallest margin. */
-  limiting: CheckLine | null;
+  readonly limiting: CheckLine | null;
 }
 
 /** What is fixed per requirement, computed once for many springs. */
 export interface Judge {
   req: Requirements;
+  /** The requirement's service conditions, built once. */
+  service: ServiceConditions;
   band: WorkingBand;
   active: boolean[];
   allowedMaterials: Set<string>;
@@ -65,7 +71,7 @@ export interface Judge {
 }
 
 export function makeJudge(req: Requirements, band: WorkingBand, endsStated: boolean): Judge {
-  return { req, band, active: activeChecks(req), allowedMaterials: new Set(req.materials.map((m) => m.material.id)), allowedEnds: endsStated ? req.ends : null };
+  return { req, band, service: springServiceConditions(req), active: activeChecks(req), allowedMaterials: new Set(req.materials.map((m) => m.material.id)), allowedEnds: endsStated ? req.ends : null };
 }
 
 type Figure = Pick<CheckLine, 'value' | 'limit' | 'relation' | 'kind'> & { note?: string };
@@ -102,31 +108,59 @@ function figureOf(name: CheckName, a: SpringAnalysis, req: Requirements): Figure
 
 const passes = (g: number) => g <= PASS_TOLERANCE;
 
-export function judge(spring: GivenSpring, j: Judge): Verdict {
-  const req = j.req;
-  const analysis = analyzeSpring(spring.geometry, spring.figures, givenService(req, spring));
-  const g = checkAnalysis(analysis, req);
-  const lines: CheckLine[] = [];
-  const F1 = analysis.points[0].force;
-  const force = j.band.force;
-  const numeric = (name: AnyCheckName, label: string, gv: number, fig: Figure): CheckLine =>
-    ({ name, label, ...fig, g: gv, margin: Number.isNaN(gv) ? null : -gv, pass: passes(gv) });
-  lines.push(numeric('working_force_min', GIVEN_CHECK_LABELS.working_force_min, (j.band.low - F1) / force, { value: F1, limit: j.band.low, relation: '>=', kind: 'force' }));
-  lines.push(numeric('working_force_max', GIVEN_CHECK_LABELS.working_force_max, (F1 - j.band.high) / force, { value: F1, limit: j.band.high, relation: '<=', kind: 'force' }));
-  CHECKS.forEach((name, i) => {
-    if (!j.active[i]) return;
-    lines.push(numeric(name, CHECK_LABELS[name], g[CHECK[name]], figureOf(name, analysis, req)));
-  });
-  const id = spring.choice.material.id;
-  const materialOk = j.allowedMaterials.has(id);
-  lines.push({ name: 'material', label: GIVEN_CHECK_LABELS.material, value: id, limit: [...j.allowedMaterials].join(', '), relation: 'in', kind: 'text', g: materialOk ? -1 : 1, margin: null, pass: materialOk });
-  if (j.allowedEnds) {
-    const endsOk = j.allowedEnds.includes(spring.geometry.ends);
-    lines.push({ name: 'ends', label: GIVEN_CHECK_LABELS.ends, value: spring.geometry.ends, limit: j.allowedEnds.join(', '), relation: 'in', kind: 'text', g: endsOk ? -1 : 1, margin: null, pass: endsOk });
+class JudgedSpring implements Verdict {
+  pass = true;
+  failingNames: AnyCheckName[] = [];
+  violation = 0;
+  private built: { lines: CheckLine[]; failing: CheckLine[]; limiting: CheckLine | null } | null = null;
+
+  constructor(readonly spring: GivenSpring, readonly analysis: SpringAnalysis, private readonly j: Judge,
+    /** checkAnalysis's values, then the working band's low and high sides. */
+    private readonly g: Float64Array, private readonly materialOk: boolean, private readonly endsOk: boolean | null) {
+    const fail = (name: AnyCheckName, by: number) => { this.pass = false; this.failingNames.push(name); this.violation += by; };
+    const n = CHECKS.length;
+    if (!passes(g[n])) fail('working_force_min', Number.isNaN(g[n]) ? 1 : g[n]);
+    if (!passes(g[n + 1])) fail('working_force_max', Number.isNaN(g[n + 1]) ? 1 : g[n + 1]);
+    for (let i = 0; i < n; i++) if (j.active[i] && !passes(g[i])) fail(CHECKS[i], Number.isNaN(g[i]) ? 1 : g[i]);
+    if (!materialOk) fail('material', 1);
+    if (endsOk === false) fail('ends', 1);
   }
-  const failing = lines.filter((l) => !l.pass);
-  const violation = failing.reduce((s, l) => s + (l.margin === null ? 1 : l.g), 0);
-  let limiting: CheckLine | null = null;
-  for (const l of lines) if (l.margin !== null && (limiting === null || l.margin < limiting.margin!)) limiting = l;
-  return { spring, analysis, lines, pass: failing.length === 0, failing, violation, limiting };
+
+  private build() {
+    if (this.built) return this.built;
+    const { j, g, analysis } = this;
+    const req = j.req;
+    const n = CHECKS.length;
+    const F1 = analysis.points[0].force;
+    const lines: CheckLine[] = [];
+    const numeric = (name: AnyCheckName, label: string, gv: number, fig: Figure): CheckLine =>
+      ({ name, label, value: fig.value, limit: fig.limit, relation: fig.relation, kind: fig.kind, ...(fig.note ? { note: fig.note } : {}), g: gv, margin: Number.isNaN(gv) ? null : -gv, pass: passes(gv) });
+    lines.push(numeric('working_force_min', GIVEN_CHECK_LABELS.working_force_min, g[n], { value: F1, limit: j.band.low, relation: '>=', kind: 'force' }));
+    lines.push(numeric('working_force_max', GIVEN_CHECK_LABELS.working_force_max, g[n + 1], { value: F1, limit: j.band.high, relation: '<=', kind: 'force' }));
+    CHECKS.forEach((name, i) => { if (j.active[i]) lines.push(numeric(name, CHECK_LABELS[name], g[CHECK[name]], figureOf(name, analysis, req))); });
+    const id = this.spring.choice.material.id;
+    lines.push({ name: 'material', label: GIVEN_CHECK_LABELS.material, value: id, limit: [...j.allowedMaterials].join(', '), relation: 'in', kind: 'text', g: this.materialOk ? -1 : 1, margin: null, pass: this.materialOk });
+    if (this.endsOk !== null) {
+      lines.push({ name: 'ends', label: GIVEN_CHECK_LABELS.ends, value: this.spring.geometry.ends, limit: j.allowedEnds!.join(', '), relation: 'in', kind: 'text', g: this.endsOk ? -1 : 1, margin: null, pass: this.endsOk });
+    }
+    let limiting: CheckLine | null = null;
+    for (const l of lines) if (l.margin !== null && (limiting === null || l.margin < limiting.margin!)) limiting = l;
+    this.built = { lines, failing: lines.filter((l) => !l.pass), limiting };
+    return this.built;
+  }
+
+  get lines(): CheckLine[] { return this.build().lines; }
+  get failing(): CheckLine[] { return this.build().failing; }
+  get limiting(): CheckLine | null { return this.build().limiting; }
+}
+
+export function judge(spring: GivenSpring, j: Judge): Verdict {
+  const analysis = analyzeSpring(spring.geometry, spring.figures, spring.peened === j.service.peened ? j.service : givenService(j.req, spring));
+  const design = checkAnalysis(analysis, j.req);
+  const g = new Float64Array(CHECKS.length + 2);
+  g.set(design);
+  const F1 = analysis.points[0].force;
+  g[CHECKS.length] = (j.band.low - F1) / j.band.force;
+  g[CHECKS.length + 1] = (F1 - j.band.high) / j.band.force;
+  return new JudgedSpring(spring, analysis, j, g, j.allowedMaterials.has(spring.choice.material.id), j.allowedEnds ? j.allowedEnds.includes(spring.geometry.ends) : null);
 }

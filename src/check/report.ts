@@ -55,12 +55,12 @@ export function checkJson(v: Verdict, band: WorkingBand, notes: string[]): Recor
   };
 }
 
-export function writeValue(x: number | string | null, kind: ValueKind, system: UnitSystem): string {
+export function writeValue(x: number | string | null, kind: ValueKind, system: UnitSystem, digits = 4): string {
   if (x === null) return '-';
   if (typeof x === 'string') return x;
-  if (kind === 'text' || kind === 'number') return sig(x, 4);
-  if (kind === 'percent') return `${sig(x * 100, 3)}%`;
-  return formatQuantity(x, kind, system);
+  if (kind === 'text' || kind === 'number') return sig(x, digits);
+  if (kind === 'percent') return `${sig(x * 100, digits - 1)}%`;
+  return formatQuantity(x, kind, system, digits);
 }
 
 export function writeMargin(m: number | null): string {
@@ -70,7 +70,8 @@ export function writeMargin(m: number | null): string {
 
 /** "outer_diameter by 2.5% (16.4 mm, limit 16 mm)" */
 export function failureText(l: CheckLine, system: UnitSystem): string {
-  const by = l.margin === null ? `(${writeValue(l.value, l.kind, system)}, not ${l.limit})` : `by ${sig(-l.margin * 100, 3)}% (${writeValue(l.value, l.kind, system)} against ${l.relation} ${writeValue(l.limit, l.kind, system)})`;
+  // Five figures: a near miss by a fraction of a percent must not read "10.35 N against <= 10.35 N".
+  const by = l.margin === null ? `(${writeValue(l.value, l.kind, system)}, not ${l.limit})` : `by ${sig(-l.margin * 100, 3)}% (${writeValue(l.value, l.kind, system, 5)} against ${l.relation} ${writeValue(l.limit, l.kind, system, 5)})`;
   return `${l.name} ${by}`;
 }
 

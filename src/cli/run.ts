@@ -11,6 +11,7 @@ import { materialsCommand } from './materials.js';
 import { CliExit, EXIT, type Io } from './io.js';
 import { registerSearchCommands } from './searchCommands.js';
 import { registerCheckCommand } from './check.js';
+import { registerStockCommand } from './stock.js';
 
 export function packageVersion(): string {
   let dir = dirname(fileURLToPath(import.meta.url));
@@ -53,6 +54,7 @@ export function buildProgram(io: Io, setCode: (c: number) => void): Command {
 
   registerSearchCommands(program, io, setCode);
   registerCheckCommand(program, io, setCode);
+  registerStockCommand(program, io, setCode);
   return program;
 }
 

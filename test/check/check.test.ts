@@ -90,7 +90,7 @@ describe('coilfront check', () => {
     expect(r.code).toBe(1);
     expect(r.stdout).toMatch(/operating_force_max\s+33\.62 N\s+<=\s+33\.60 N\s+-0\.04\d+%\s+FAIL/);
     expect(r.stdout).toMatch(/outer_diameter\s+15\.74 mm\s+<=\s+16\.00 mm\s+\+1\.6\d%\s+pass/);
-    expect(r.stdout).toMatch(/Result: FAILS 1 of 17 checks: operating_force_max by 0\.04\d+%/);
+    expect(r.stdout).toMatch(/Result: FAILS 1 of 17 checks: operating_force_max by 0\.04\d+% \(33\.615 N against <= 33\.600 N\)/);
     expect(r.stdout).toMatch(/Cautions:/);
     expect(r.stderr).toBe('coilfront: the spring fails operating_force_max\n');
   });

@@ -75,7 +75,8 @@ function conventionsSection(): string {
   return `<h2>Conventions</h2>${htmlTable(['item', 'method and source'], CONVENTIONS.map(([a, b]) => [a, b]), { cls: 'kv' })}`;
 }
 
-export function designHtml(run: DesignRun, system: UnitSystem, frontier?: Frontier, sweep?: SweepSummary): string {
+/** `extra`: sections of another command placed before the conventions (the stock section of `stock --compare`). */
+export function designHtml(run: DesignRun, system: UnitSystem, frontier?: Frontier, sweep?: SweepSummary, extra: string[] = []): string {
   const req = run.req;
   const sections: string[] = [];
   sections.push('<h2>Requirements</h2>');
@@ -115,6 +116,7 @@ export function designHtml(run: DesignRun, system: UnitSystem, frontier?: Fronti
     sections.push('<h2>Envelope sweep</h2>');
     sections.push(figure(sweepPlot(pts, `${sweep.name} (as given)`, `best mass (${unitSymbol('mass', system)})`), 'The lightest feasible spring for each value; "none" where nothing fits.'));
   }
+  sections.push(...extra);
   sections.push(conventionsSection());
   const subtitle = `${formatQuantity(req.workingForce, 'force', system)} at ${formatQuantity(req.workingLength, 'length', system)}${req.operatingLength !== undefined ? `, stroke to ${formatQuantity(req.operatingLength, 'length', system)}` : ''}. Written by coilfront.`;
   return page('coilfront design report', subtitle, sections);

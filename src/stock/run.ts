@@ -1,0 +1,171 @@
+// `stock`: every row of a stock table through the same checks as `check` (the full analysis of
+// src/model/analysis.ts, the verdicts of src/spring/checks.ts, the working-force band), the passing
+// rows ranked like `design`, the rows that fail closest, and optionally the best custom spring beside them.
+import type { Catalog } from '../catalogs/types.js';
+import { endsStated } from '../check/index.js';
+import { workingBand, type WorkingBand } from '../check/band.js';
+import type { GivenSpring } from '../check/given.js';
+import { findMaterial } from '../catalogs/load.js';
+import { materialFigures, strengthRangeNote, type MaterialChoice } from '../input/material.js';
+import type { MaterialFigures } from '../model/analysis.js';
+import { inactiveCoils, solidLength } from '../model/geometry.js';
+import { judge, makeJudge, type Judge, type Verdict } from '../check/judge.js';
+import { readRequirements, type RankKey, type Requirements } from '../input/requirements.js';
+import { shortestLength } from '../spring/checks.js';
+import { runDesign, type Candidate, type DesignRun, type StrategyChoice } from '../spring/design.js';
+import { InputError } from '../units/parse.js';
+import type { UnitSystem } from '../units/systems.js';
+import { readMaterialMap } from './materialMap.js';
+import { RowError, readStockTable, type BadRow, type StockRow, type StockTable } from './table.js';
+
+export const STOCK_RANK_KEYS = ['mass', 'wire_volume', 'outer_diameter', 'free_length', 'safety_factor', 'price'] as const;
+export type StockRankKey = RankKey | 'price';
+
+/** A table's rate is a nominal with its own tolerance: beyond this fraction from coilfront's rate, say so. */
+export const DEFAULT_RATE_DEVIATION = 0.1;
+/** A table's solid length this much above coilfront's makes the clash check optimistic: say so. */
+export const SOLID_LENGTH_DEVIATION = 0.02;
+
+export interface StockOptions {
+  /** Unit system of the table's plain numbers (SI by default). */
+  units?: UnitSystem;
+  rank?: StockRankKey;
+  /** Passing rows to list (default: the requirement's `top`). */
+  top?: number;
+  /** Near misses to list. */
+  misses?: number;
+  rateDeviation?: number;
+  compare?: boolean;
+  strategy?: StrategyChoice;
+  /** Name of the table in messages. */
+  label?: string;
+}
+
+export interface RowResult {
+  row: StockRow;
+  verdict: Verdict;
+  /** The row's own notes: figures outside a sourced range, the table's figures beside coilfront's. */
+  notes: string[];
+  /** (table rate - coilfront's rate) / coilfront's rate, when the table gives a rate. */
+  rateDeviation: number | null;
+  /** The maker's stated limits (max deflection, max load) the requirement goes beyond. */
+  beyondMakerLimits: string[];
+}
+
+export interface Comparison { run: DesignRun; custom: Candidate | null; verdict: Verdict | null }
+
+export interface StockRun {
+  req: Requirements;
+  band: WorkingBand;
+  table: StockTable;
+  /** Bad rows of the table and rows the analysis refused (free length at or below solid...). */
+  bad: BadRow[];
+  rank: StockRankKey;
+  rateDeviationLimit: number;
+  results: RowResult[];
+  passing: RowResult[];
+  misses: RowResult[];
+  top: number;
+  failedBy: Record<string, number>;
+  compare: Comparison | null;
+}
+
+export function rankValue(r: RowResult, key: StockRankKey): number {
+  const a = r.verdict.analysis;
+  switch (key) {
+    case 'mass': return a.geometry.mass;
+    case 'wire_volume': return a.geometry.wireVolume;
+    case 'outer_diameter': return a.geometry.outerDiameter;
+    case 'free_length': return a.geometry.freeLength;
+    case 'safety_factor': return -Math.min(a.staticSafetyFactor, a.fatigue && Number.isFinite(a.fatigue.safetyFactor) ? a.fatigue.safetyFactor : Infinity);
+    case 'price': return r.row.price ?? Infinity;
+  }
+}
+
+/** Material figures per material and wire diameter: a stock range repeats a few wire sizes many times. */
+type FiguresCache = Map<string, { choice: MaterialChoice; figures: MaterialFigures; note: string | undefined }>;
+
+/** The spring of a row, as readSpringCase would read the row's spring file (the property test holds the
+ * two together); built directly because a table may hold many thousands of rows. */
+function rowSpring(row: StockRow, catalog: Catalog, cache: FiguresCache): { spring: GivenSpring; notes: string[] } {
+  const d = row.wireDiameter;
+  const key = `${row.material}@${d}`;
+  let entry = cache.get(key);
+  if (!entry) {
+    const choice: MaterialChoice = { material: findMaterial(catalog, row.material)! };
+    entry = { choice, figures: materialFigures(choice, d, false), note: strengthRangeNote(choice, d) };
+    cache.set(key, entry);
+  }
+  const { field, value } = row.diameter;
+  const D = field === 'mean_diameter' ? value : field === 'outer_diameter' ? value - d : value + d;
+  if (!(D > d)) throw new RowError(row.columnOf[field], `a diameter that leaves a mean diameter above the wire diameter, got ${value}`);
+  const Q = inactiveCoils(row.ends);
+  const Na = row.coils.field === 'active_coils' ? row.coils.value : row.coils.value - Q;
+  if (!(Na > 0)) throw new RowError(row.columnOf[row.coils.field], `more total coils than the ${Q} inactive coils of ${row.ends} ends, got ${row.coils.value}`);
+  const Ls = solidLength(d, Na + Q, row.ends);
+  if (row.freeLength <= Ls) throw new RowError(row.columnOf.free_length, `a free length above the solid length ${Number(Ls.toPrecision(4))} mm (the coils overlap at free length), got ${Number(row.freeLength.toPrecision(6))} mm`);
+  const spring: GivenSpring = { choice: entry.choice, figures: entry.figures, geometry: { wireDiameter: d, meanDiameter: D, activeCoils: Na, ends: row.ends, freeLength: row.freeLength }, peened: false, setRemoved: false };
+  return { spring, notes: entry.note ? [entry.note] : [] };
+}
+
+function rowResult(row: StockRow, catalog: Catalog, j: Judge, rateLimit: number, cache: FiguresCache): RowResult {
+  const { spring, notes } = rowSpring(row, catalog, cache);
+  const verdict = judge(spring, j);
+  const a = verdict.analysis;
+  let rateDeviation: number | null = null;
+  if (row.tableRate !== undefined) {
+    rateDeviation = (row.tableRate - a.rate) / a.rate;
+    if (Math.abs(rateDeviation) > rateLimit) notes.push(`the table's rate differs from coilfront's by ${(rateDeviation * 100).toFixed(1)}% (more than ${(rateLimit * 100).toFixed(0)}%)`);
+  }
+  if (row.tableSolidLength !== undefined && row.tableSolidLength > a.geometry.solidLength * (1 + SOLID_LENGTH_DEVIATION)) {
+    notes.push(`the table's solid length is ${((row.tableSolidLength / a.geometry.solidLength - 1) * 100).toFixed(1)}% above coilfront's: the clash check used coilfront's`);
+  }
+  const beyond: string[] = [];
+  const deflection = a.geometry.freeLength - shortestLength(j.req);
+  if (row.maxDeflection !== undefined && deflection > row.maxDeflection) beyond.push('max_deflection');
+  const maxForce = a.points.reduce((m, p) => Math.max(m, p.force), 0);
+  if (row.maxLoad !== undefined && maxForce > row.maxLoad) beyond.push('max_load');
+  return { row, verdict, notes, rateDeviation, beyondMakerLimits: beyond };
+}
+
+export function givenCustom(c: Candidate, req: Requirements): GivenSpring {
+  return { choice: c.item.choice, geometry: c.geometry, figures: c.item.figures, peened: req.peened, setRemoved: req.setRemoved };
+}
+
+export function runStock(rawRequirements: unknown, input: string | Record<string, unknown>[], catalog: Catalog, o: StockOptions = {}): StockRun {
+  const req = readRequirements(rawRequirements, catalog);
+  const label = o.label ?? 'stock table';
+  const table = readStockTable(input, { system: o.units ?? 'si', materialMap: readMaterialMap(rawRequirements, catalog), catalog, label });
+  const band = workingBand(req);
+  const j = makeJudge(req, band, endsStated(rawRequirements));
+  const rateLimit = o.rateDeviation ?? DEFAULT_RATE_DEVIATION;
+  const bad = [...table.bad];
+  const results: RowResult[] = [];
+  const cache: FiguresCache = new Map();
+  for (const row of table.rows) {
+    try {
+      results.push(rowResult(row, catalog, j, rateLimit, cache));
+    } catch (e) {
+      if (!(e instanceof RowError)) throw e;
+      bad.push({ line: row.line, partNumber: row.partNumber, field: e.field, message: `expected ${e.message}` });
+    }
+  }
+  bad.sort((a, b) => a.line - b.line);
+  if (results.length === 0) {
+    const first = bad.slice(0, 3).map((b) => `line ${b.line}, ${b.field}: ${b.message}`).join('; ');
+    throw new InputError(label, `at least one usable row; all ${bad.length} data rows are bad (${first}${bad.length > 3 ? '; ...' : ''})`);
+  }
+  const rank = o.rank ?? req.rank;
+  const order = (a: RowResult, b: RowResult) => rankValue(a, rank) - rankValue(b, rank) || a.row.line - b.row.line;
+  const passing = results.filter((r) => r.verdict.pass).sort(order);
+  const misses = results.filter((r) => !r.verdict.pass).sort((a, b) => a.verdict.violation - b.verdict.violation || a.row.line - b.row.line).slice(0, o.misses ?? 5);
+  const failedBy: Record<string, number> = {};
+  for (const r of results) for (const name of r.verdict.failingNames) failedBy[name] = (failedBy[name] ?? 0) + 1;
+  let compare: Comparison | null = null;
+  if (o.compare) {
+    const run = runDesign(req, { strategy: o.strategy });
+    const custom = run.candidates[0] ?? null;
+    compare = { run, custom, verdict: custom ? judge(givenCustom(custom, req), j) : null };
+  }
+  return { req, band, table, bad, rank, rateDeviationLimit: rateLimit, results, passing, misses, top: o.top ?? req.top, failedBy, compare };
+}
