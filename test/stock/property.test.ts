@@ -33,11 +33,13 @@ const rowArb = fc.record({
   diameterField: fc.constantFrom('outer_diameter', 'mean_diameter', 'inner_diameter'),
   coilField: fc.constantFrom('total_coils', 'active_coils'),
 });
+type RowCase = typeof rowArb extends fc.Arbitrary<infer T> ? T : never;
+
 const NOMINAL_G: Record<string, number> = { 'Music wire': 81700, 'music-wire': 81700, '302 SS': 69000, 'Phos bronze': 41400, 'chrome-silicon': 77200 };
 const inactiveOf = (ends: string) => (ends === 'open' ? 0 : ends === 'plain-ground' ? 1 : 2);
 
 /** Active coils (to a quarter) for the row's target rate, its total coils, and its free length. */
-function shape(r: fc.infer<typeof rowArb>): { coils: number; L0: number } {
+function shape(r: RowCase): { coils: number; L0: number } {
   const D = r.d * r.index;
   const Na = Math.max(1, Math.round(((NOMINAL_G[r.material] * r.d ** 4) / (8 * D ** 3 * r.rate)) * 4) / 4);
   const k = (NOMINAL_G[r.material] * r.d ** 4) / (8 * D ** 3 * Na);
@@ -46,7 +48,9 @@ function shape(r: fc.infer<typeof rowArb>): { coils: number; L0: number } {
 
 const tableArb = fc.record({ rows: fc.array(rowArb, { minLength: 5, maxLength: 40 }), inches: fc.boolean() });
 
-function tableText(t: fc.infer<typeof tableArb>): string {
+type TableCase = typeof tableArb extends fc.Arbitrary<infer T> ? T : never;
+
+function tableText(t: TableCase): string {
   const u = t.inches ? 'in' : 'mm';
   const L = (mm: number) => (t.inches ? mm / IN : mm).toPrecision(10);
   const header = `part_number,material,wire_diameter_${u},outer_diameter_${u},mean_diameter_${u},inner_diameter_${u},free_length_${u},total_coils,active_coils,ends`;
