@@ -44,6 +44,16 @@ export interface CellWorkspace {
   /** The worst increasing and decreasing constraint of the last evaluation. */
   worstInc: number;
   worstDec: number;
+  /** Left by the boundary searches: see there. */
+  badValue: number;
+  badObjective: number;
+  lastAtGood: boolean;
+  lastTotal: number;
+  /** After a cell is pruned: pruneF[0] holds the bound on its objective that lost, and
+   * prunedAtLowest says whether it was taken at the solved variable's lowest value (the bound
+   * `boundGrowsAlong` speaks of) or higher up, after bracketing. */
+  pruneF: Float64Array;
+  prunedAtLowest: boolean;
 }
 
 export function makeWorkspace(p: Problem, relativeTolerance = 1e-10): CellWorkspace {
@@ -61,6 +71,7 @@ export function makeWorkspace(p: Problem, relativeTolerance = 1e-10): CellWorksp
     missX: new Float64Array(p.variables.length), missG: new Float64Array(m), missF: new Float64Array(p.objectiveNames.length), missViolation: Infinity,
     incMask, decMask, relativeTolerance, maxScanPoints: Infinity, scanCoarsening: 1, worstInc: -Infinity, worstDec: -Infinity,
     lower: new Float64Array(m), boundedOut: 0, boundCalls: 0, narrowing: true,
+    badValue: NaN, badObjective: NaN, lastAtGood: false, lastTotal: NaN, pruneF: new Float64Array(p.objectiveNames.length), prunedAtLowest: false,
   };
 }
 
@@ -102,28 +113,89 @@ function attributeCut(ws: CellWorkspace, g: Float64Array): void {
 /**
  * Bisect [a, b] for the boundary of the masked constraints, keeping the feasible end: with
  * `badBelow` they fail at a and hold at b (return the smallest value that holds), otherwise they
- * hold at a and fail at b (return the largest).
+ * hold at a and fail at b (return the largest). The failing end is left in ws.bounds[0], and the
+ * worst masked value and objective 0 seen there in ws.badValue and ws.badObjective (NaN when that
+ * end is where it started).
  */
 function boundary(p: Problem, s: number, x: Float64Array, ws: CellWorkspace, a: number, b: number, mask: Uint8Array, badBelow: boolean, tol: number): number {
+  let badValue = NaN;
+  let badObjective = NaN;
   while (b - a > tol) {
     const m = 0.5 * (a + b);
     x[s] = m;
     evaluateAt(p, x, ws);
-    const bad = (mask === ws.incMask ? ws.worstInc : ws.worstDec) > 0;
+    const w = mask === ws.incMask ? ws.worstInc : ws.worstDec;
+    const bad = w > 0;
     if (bad === badBelow) a = m; else b = m;
+    if (bad) { badValue = w; badObjective = ws.f[0]; }
   }
-  // The other (failing) end is left in ws.bounds for a later refinement.
   ws.bounds[0] = badBelow ? a : b;
+  ws.badValue = badValue;
+  ws.badObjective = badObjective;
   return badBelow ? b : a;
 }
 
-/** The feasible point at `good` came from a coarse bracket: move it down to the decreasing
- * constraints' boundary at full precision, if every check still holds there. Leaves x, ws.f and ws.g
- * at the point kept. */
-function refineLow(p: Problem, s: number, x: Float64Array, ws: CellWorkspace, bad: number, good: number, tol: number): void {
-  const fine = boundary(p, s, x, ws, bad, good, ws.decMask, true, tol);
-  x[s] = fine;
-  if (fine < good && evaluateAt(p, x, ws) === 0) return;
+/**
+ * The boundary of the decreasing constraints in [a, b] to `tol`, where they fail at a (worst value
+ * fa > 0) and hold at b (fb <= 0): regula falsi with the Illinois modification (Dowell and Jarratt,
+ * BIT 11 (1971) 168-174), which keeps a bracket like bisection but converges superlinearly on a
+ * smooth check: about 6 evaluations instead of 20 to go from a scan step to 1e-10. A step that fails
+ * to halve the bracket twice running is replaced by a bisection, so it is never slower than
+ * bisection by more than a third. Returns the end that holds; ws.lastAtGood says whether the last
+ * evaluation was there.
+ */
+function decBoundary(p: Problem, s: number, x: Float64Array, ws: CellWorkspace, a: number, fa: number, b: number, fb: number, tol: number): number {
+  let side = 0;
+  let slow = 0;
+  ws.lastAtGood = false;
+  const margin = 0.25 * tol;
+  while (b - a > tol) {
+    const width = b - a;
+    let m = slow >= 2 || !(fa > 0) || !(fb <= 0) ? 0.5 * (a + b) : b - (fb * (b - a)) / (fb - fa);
+    if (!(m >= a + margin)) m = a + margin;
+    else if (!(m <= b - margin)) m = b - margin;
+    x[s] = m;
+    ws.lastTotal = evaluateAt(p, x, ws);
+    const v = ws.worstDec;
+    if (v > 0) {
+      a = m; fa = v;
+      if (side === -1) fb *= 0.5;
+      side = -1;
+      ws.lastAtGood = false;
+    } else {
+      b = m; fb = v;
+      if (side === 1) fa *= 0.5;
+      side = 1;
+      ws.lastAtGood = true;
+    }
+    slow = b - a > 0.5 * width ? slow + 1 : 0;
+  }
+  // The answer is made canonical: the first point of the lattice q Z (q, the power of two at or below
+  // tol) where the checks hold, whatever bracket the search started from, so that a finer scan
+  // resolution (another starting bracket) can never give a worse boundary point.
+  const q = 2 ** Math.floor(Math.log2(tol));
+  for (let c = Math.floor(a / q) * q + q; ; c += q) {
+    if (c === b) return b;
+    x[s] = c;
+    ws.lastTotal = evaluateAt(p, x, ws);
+    // Past b the decreasing checks hold (they only loosen upwards).
+    if (ws.worstDec <= 0 || c > b) {
+      ws.lastAtGood = true;
+      return c;
+    }
+  }
+}
+
+/** The feasible point at `good` came from a coarse bracket (and x, ws are at it): move it down to the
+ * decreasing constraints' boundary at full precision, if every check still holds there. Leaves x,
+ * ws.f and ws.g at the point kept. */
+function refineLow(p: Problem, s: number, x: Float64Array, ws: CellWorkspace, bad: number, badValue: number, good: number, tol: number): void {
+  const fine = decBoundary(p, s, x, ws, bad, badValue, good, ws.worstDec, tol);
+  if (fine !== good) {
+    if (ws.lastAtGood && ws.lastTotal === 0) return;
+    x[s] = fine;
+    if (evaluateAt(p, x, ws) === 0) return;
+  }
   x[s] = good;
   evaluateAt(p, x, ws);
 }
@@ -260,11 +332,23 @@ export function solveCell(
   // then refined to full precision (most cells fail elsewhere, and this halves their cost).
   const coarse = Math.max(tol, (v.resolution * ws.scanCoarsening) / 4);
   let loBad = NaN;
+  // Only the first feasible point is wanted, and the objective grows with the solved variable.
+  const first = mode === CellMode.First && p.objectiveTrend !== undefined && p.objectiveTrend[0] === TREND.increasing;
+  // lo has been evaluated and fails a check of unknown trend: the scan may start past it.
+  let loTried = false;
 
   // Increasing constraints only get worse upwards: if violated at lo, the cell is lost.
   x[s] = lo;
   let total = evaluateAt(p, x, ws);
-  if (prune !== null && p.objectiveTrend && p.objectiveTrend[0] === TREND.increasing && prune(ws.f)) return 'pruned';
+  const increasing = p.objectiveTrend !== undefined && p.objectiveTrend[0] === TREND.increasing;
+  if (prune !== null && increasing && prune(ws.f)) {
+    ws.pruneF[0] = ws.f[0];
+    ws.prunedAtLowest = true;
+    return 'pruned';
+  }
+  const loDec = ws.worstDec;
+  const loObjective = ws.f[0];
+  let loBadValue = NaN;
   if (ws.worstInc > 0) return infeasibleCell(ws);
   if (total === 0 && mode === CellMode.First && p.objectiveTrend && p.objectiveTrend[0] === TREND.increasing) return true;
   // The same bound over the whole interval often settles a hopeless cell before any bisection.
@@ -276,6 +360,24 @@ export function solveCell(
     if (ws.worstDec > 0) return infeasibleCell(ws);
     lo = boundary(p, s, x, ws, lo, hi, ws.decMask, true, coarse);
     loBad = ws.bounds[0];
+    loBadValue = ws.badValue === ws.badValue ? ws.badValue : loDec;
+    // Every feasible point lies above loBad, so the objective there bounds the cell from below.
+    if (prune !== null && increasing) {
+      ws.pruneF[0] = ws.badObjective === ws.badObjective ? ws.badObjective : loObjective;
+      if (prune(ws.pruneF)) {
+        ws.prunedAtLowest = false;
+        return 'pruned';
+      }
+    }
+    // The first point of the scan may already meet everything: then the upper end does not matter.
+    if (first) {
+      x[s] = lo;
+      if (evaluateAt(p, x, ws) === 0) {
+        refineLow(p, s, x, ws, loBad, loBadValue, lo, tol);
+        return true;
+      }
+      loTried = true;
+    }
   }
   // And the largest value that still meets the increasing ones.
   x[s] = hi;
@@ -288,8 +390,9 @@ export function solveCell(
     // settle lo exactly and look again. Normalised checks move by a few units per unit of relative
     // change of the solved variable; a violation 100 times what the coarse step could undo is real.
     if (w > 0 && w < (300 * coarse) / Math.max(Math.abs(lo), 1e-12) && loBad === loBad) {
-      lo = boundary(p, s, x, ws, loBad, lo, ws.decMask, true, tol);
+      lo = decBoundary(p, s, x, ws, loBad, loBadValue, lo, ws.worstDec, tol);
       loBad = NaN;
+      loTried = false;
       x[s] = lo;
       evaluateAt(p, x, ws);
     }
@@ -304,10 +407,11 @@ export function solveCell(
   const grid = scanGrid;
   grid.set(lo, hi, step);
   if (mode === CellMode.First) {
-    const k = firstFeasible(p, s, x, ws, grid, 0, grid.last, true);
+    const start = loTried ? 1 : 0;
+    const k = start > grid.last ? -1 : firstFeasible(p, s, x, ws, grid, start, grid.last, start === 0);
     if (k < 0) return infeasibleCell(ws);
     // x, ws.f and ws.g hold the point found.
-    if (k === 0 && loBad === loBad) refineLow(p, s, x, ws, loBad, lo, tol);
+    if (k === 0 && loBad === loBad) refineLow(p, s, x, ws, loBad, loBadValue, lo, tol);
     return true;
   }
   if (!everyFeasible(p, s, x, ws, grid, 0, grid.last, true, visit)) return infeasibleCell(ws);

@@ -70,7 +70,8 @@ export function geneticSearch(p: Problem, opts: GeneticOptions): SearchResult {
   };
 
   let bestFeasible = Infinity;
-  const prune = (f: Float64Array) => f[0] >= bestFeasible;
+  // A cell is abandoned when its bound loses to the k-th best kept, so the reported list stays whole.
+  const prune = (f: Float64Array) => f[0] >= bestFeasible && f[0] >= top.threshold();
 
   const key = (genes: Float64Array): number => {
     let k = 0;
@@ -100,7 +101,7 @@ export function geneticSearch(p: Problem, opts: GeneticOptions): SearchResult {
       if (r === 'pruned') {
         // The objective at the cell's lower bound already loses to the best found: its value stands in.
         counts.pruned++;
-        f = cw.f[0];
+        f = cw.pruneF[0];
       } else if (r === true) {
         counts.feasible++;
         if (increasing) { f = cw.f[0]; top.offer(x, cw.f); } else { f = cellBest.f; x.set(cellBest.x); }

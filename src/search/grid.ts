@@ -34,7 +34,7 @@ export interface GridOptions {
 }
 
 function gridPass(p: Problem, vars: readonly Variable[], s: number, opts: GridOptions, top: TopK, cloud: PointBuffer | null,
-  misses: NearestMisses, ws: ReturnType<typeof makeWorkspace>, counts: { cells: number; feasible: number; pruned: number }, groups: TopK[] | null = null): void {
+  misses: NearestMisses, ws: ReturnType<typeof makeWorkspace>, counts: GridCounts, groups: TopK[] | null = null): void {
   const n = vars.length;
   const sizes = new Int32Array(n);
   const idx = new Int32Array(n);
@@ -62,13 +62,32 @@ function gridPass(p: Problem, vars: readonly Variable[], s: number, opts: GridOp
   // The odometer's fastest variable; a pruned cell ends its branch when the bound grows along it.
   const innermost = s === n - 1 ? n - 2 : n - 1;
   const branchPrune = p.boundGrowsAlong !== undefined && p.boundGrowsAlong === innermost && innermost >= 0;
+  // Whole branches (a wire size and everything under it, say) may be ruled out by the problem's hint.
+  const branchHint = p.branchInfeasible !== undefined && ws.narrowing;
+  let changed = 0;
   for (let done = 0; done < total; done++) {
+    let skip = false;
+    if (branchHint) {
+      for (let depth = Math.max(1, changed + 1); depth <= innermost; depth++) {
+        const j = p.branchInfeasible!(x, depth);
+        if (j < 0) continue;
+        let size = 1;
+        for (let i = depth; i < n; i++) { size *= sizes[i]; idx[i] = sizes[i] - 1; }
+        ws.cutBy[j] += size;
+        counts.cells += size;
+        counts.branchCut += size;
+        done += size - 1;
+        skip = true;
+        break;
+      }
+    }
+    if (!skip) {
     counts.cells++;
     cellBest = Infinity;
     const r = s >= 0 ? solveCell(p, s, x, ws, mode, visit, prune) : evaluateFixed(p, x, ws);
     if (r === 'pruned') {
       counts.pruned++;
-      if (branchPrune) {
+      if (branchPrune && ws.prunedAtLowest) {
         const rest = sizes[innermost] - 1 - idx[innermost];
         counts.cells += rest;
         counts.pruned += rest;
@@ -84,9 +103,11 @@ function gridPass(p: Problem, vars: readonly Variable[], s: number, opts: GridOp
       misses.offer(ws.missX, ws.missG, ws.missF, ws.missViolation);
     }
     if (opts.onProgress && done % progressEvery === 0) opts.onProgress(done, total);
+    }
     // Odometer step over the non-solved variables, last variable fastest.
     for (let i = n - 1; i >= 0; i--) {
       if (i === s) continue;
+      changed = i;
       if (++idx[i] < sizes[i]) { x[i] = valueAt(vars[i], idx[i]); break; }
       idx[i] = 0;
       x[i] = valueAt(vars[i], 0);
@@ -94,6 +115,8 @@ function gridPass(p: Problem, vars: readonly Variable[], s: number, opts: GridOp
   }
   opts.onProgress?.(total, total);
 }
+
+export interface GridCounts { cells: number; feasible: number; pruned: number; branchCut: number }
 
 export function gridSearch(p: Problem, opts: GridOptions): SearchResult {
   const s = solvedIndex(p);
@@ -104,7 +127,7 @@ export function gridSearch(p: Problem, opts: GridOptions): SearchResult {
   const top = new TopK(Math.max(1, opts.top), nx, p.objectiveNames.length);
   const cloud = opts.collectAll ? new PointBuffer(nx, p.objectiveNames.length) : null;
   const misses = new NearestMisses(5);
-  const counts = { cells: 0, feasible: 0, pruned: 0 };
+  const counts: GridCounts = { cells: 0, feasible: 0, pruned: 0, branchCut: 0 };
   const g = opts.bestPerValueOf;
   const groups = g !== undefined ? Array.from({ length: valueCount(p.variables[g]) }, () => new TopK(1, nx, p.objectiveNames.length)) : null;
   gridPass(p, p.variables, s, opts, top, cloud, misses, ws, counts, groups);
@@ -116,7 +139,7 @@ export function gridSearch(p: Problem, opts: GridOptions): SearchResult {
     ws.cutBy.fill(0);
     ws.soleViolation.fill(Infinity);
     ws.narrowing = false;
-    counts.cells = 0; counts.feasible = 0; counts.pruned = 0;
+    counts.cells = 0; counts.feasible = 0; counts.pruned = 0; counts.branchCut = 0;
     result = new NearestMisses(5);
     gridPass(p, p.variables, s, opts, top, cloud, result, ws, counts, groups);
   }

@@ -34,6 +34,12 @@ export interface Problem {
    * solved variable (x holds the other values): written into out; -Infinity where there is none. A
    * bound above zero proves the bracket infeasible without scanning it. */
   bracketBounds?(x: Float64Array, lo: number, hi: number, out: Float64Array): void;
+  /** Optionally, a pruning hint for a whole branch of the grid: the variables before `depth` are fixed
+   * at their values in x, every later one ranges over all its values (the solved one over its whole
+   * interval). Return the index of a constraint when no point of the branch can meet every
+   * constraint (each point fails that one, or another that this bound leaves aside), else -1. It
+   * lets the grid drop a whole wire size, say, before enumerating its coil counts. */
+  branchInfeasible?(x: Float64Array, depth: number): number;
   /** Optionally narrow the solved variable's interval for the other values in x: write [lo, hi] into out. */
   solvedBounds?(x: Float64Array, out: Float64Array): void;
 }

@@ -16,7 +16,7 @@ import { stressFactor } from '../model/stressFactor.js';
 import { ultimateShearStrength } from '../model/strength.js';
 import { activeCoilMass, surgeFrequency } from '../model/surge.js';
 import { TREND, type Problem } from '../search/problem.js';
-import { CHECKS, activeChecks, forceBand, shortestLength, staticLimit } from './checks.js';
+import { CHECK, CHECKS, activeChecks, forceBand, shortestLength, staticLimit } from './checks.js';
 
 export const OBJECTIVES = ['rank', 'mass', 'wire_volume', 'outer_diameter', 'free_length', 'neg_safety_factor', 'neg_static_safety', 'neg_fatigue_safety', 'relative_cost'] as const;
 export const OBJ = Object.fromEntries(OBJECTIVES.map((o, i) => [o, i])) as Record<(typeof OBJECTIVES)[number], number>;
@@ -134,6 +134,8 @@ export function buildSpringProblem(req: Requirements): SpringProblem {
     buckling: unk,
     surge: inc, operating_force_min: inc, operating_force_max: dec, temperature: inc,
   };
+  const NaFewest = req.activeCoils[0];
+  const NaMost = req.activeCoils[1];
   const dMin = sd.length ? Math.min(...sd) : 1;
   const dMax = sd.length ? Math.max(...sd) : 1;
 
@@ -159,6 +161,48 @@ export function buildSpringProblem(req: Requirements): SpringProblem {
       const d = sd[x[0]];
       out[0] = Math.max(out[0], Cmin * d);
       out[1] = Math.min(out[1], Cmax * d);
+    },
+
+    // A whole wire size (depth 1), or a wire size with one end type (depth 2), before any coil count
+    // is tried. Only the mean diameters that the index, bore and rod allow need be considered (every
+    // other point fails one of those); over them and every coil count, the rate lies between its
+    // values at (Dhi, most coils) and (Dlo, fewest coils), and each check below is bounded from those.
+    branchInfeasible(x, depth) {
+      const i = x[0];
+      const d = sd[i];
+      if (activeMask[16] === 1 && temperature > sTmax[i]) return CHECK.temperature;
+      let Dlo = Cmin * d;
+      let Dhi = Cmax * d;
+      if (activeMask[2] === 1) Dhi = Math.min(Dhi, ODmax - d);
+      if (activeMask[3] === 1) Dlo = Math.max(Dlo, IDmin + d);
+      if (Dlo > Dhi * (1 + 1e-12)) return ODmax - d < Cmin * d || activeMask[3] === 0 ? CHECK.outer_diameter : IDmin + d > Cmax * d ? CHECK.inner_diameter : CHECK.outer_diameter;
+      const kMax = springRate(sG[i], d, Dlo, NaFewest, directShear);
+      const kMin = springRate(sG[i], d, Dhi, NaMost, directShear);
+      let LsMin = Infinity;
+      for (let e = depth >= 2 ? x[1] : 0; e < (depth >= 2 ? x[1] + 1 : ends.length); e++) LsMin = Math.min(LsMin, solidLength(d, NaFewest + endQ[e], ends[e]));
+      const L0min = L1 + F1 / kMax;
+      if (activeMask[4] === 1 && L0min > L0max) return CHECK.free_length;
+      if (activeMask[5] === 1 && LsMin > Lsmax) return CHECK.solid_length;
+      if (LsMin + xi * (L0min - Lmin) > Lmin) return CHECK.clash;
+      const F2lo = F1 + kMin * travel;
+      const F2hi = F1 + kMax * travel;
+      if (activeMask[14] === 1) {
+        if (F2hi < F2req * (1 - tol)) return CHECK.operating_force_min;
+        if (F2lo > F2req * (1 + tol)) return CHECK.operating_force_max;
+      }
+      // A feasible point carries at least the lower end of the operating band.
+      const F2least = activeMask[14] === 1 ? Math.max(F2lo, F2req * (1 - tol)) : F2lo;
+      const Kmin = stressFactor(Dhi / d, correction);
+      const limit = sLimit[i];
+      if (shearStress(F2least, Dlo, d, Kmin) * staticFactor > limit) return CHECK.static_stress;
+      if (activeMask[11] === 1 && F2least > F1) {
+        const tauMin = shearStress(F1, Dlo, d, Kmin);
+        const tauMax = shearStress(F2least, Dlo, d, Kmin);
+        const nf = fatigueSafetyFactorFrom(0.5 * shearStress(F2least - F1, Dlo, d, Kmin), 0.5 * (tauMax + tauMin), sPoint[i], sSsu[i], sSse[i], criterion);
+        if (nf < nfTarget) return CHECK.fatigue;
+      }
+      if (surgeNeed > 0 && surgeFrequency(kMax, activeCoilMass(d, Dlo, NaFewest, sRho[i]), oneEndFree) < surgeNeed) return CHECK.surge;
+      return -1;
     },
 
     // Over a bracket [lo, hi] of mean diameters the rate is at least k(hi), so every force is at least

@@ -85,6 +85,35 @@ describe('spring problem', () => {
 });
 
 describe('spring problem in the search', () => {
+  it('a wire size the branch hint rules out has no feasible point anywhere under it (property)', () => {
+    let ruledOut = 0;
+    fc.assert(fc.property(problemArb, fc.nat(), fc.constantFrom(1, 2), fc.nat(), (doc, a, depth, e0) => {
+      const p = build({ ...doc, ends: ['plain', 'squared-ground'] });
+      const x = new Float64Array(4);
+      x[0] = valueAt(p.variables[0], a % valueCount(p.variables[0]));
+      x[1] = e0 % p.ends.length;
+      const j = p.branchInfeasible!(x, depth);
+      if (j < 0) return;
+      ruledOut++;
+      const d = p.stock[x[0]].wireDiameter;
+      const g = new Float64Array(CHECKS.length);
+      const f = new Float64Array(p.objectiveNames.length);
+      const [cMin, cMax] = p.req.index;
+      for (let e = 0; e < p.ends.length; e++) {
+        if (depth >= 2 && e !== x[1]) continue;
+        for (let n = 0; n < valueCount(p.variables[2]); n += 3) {
+          for (let t = 0; t <= 40; t++) {
+            const y = Float64Array.of(x[0], e, valueAt(p.variables[2], n), d * (cMin + ((cMax - cMin) * t) / 40));
+            p.evaluate(y, g, f);
+            expect(Math.max(...g)).toBeGreaterThan(0);
+          }
+        }
+      }
+    }), { numRuns: 150, seed: 9 });
+    expect(ruledOut).toBeGreaterThan(10);
+  });
+
+
   it('the interval bounds change nothing but the work: the same springs with and without them (property)', () => {
     fc.assert(fc.property(problemArb, (doc) => {
       const p = build({ ...doc, coil_step: 0.5 });
