@@ -7,10 +7,20 @@ import { PSI_MPA } from '../../units/kinds.js';
 
 export interface InitialTensionBand { low: number; middle: number; high: number }
 
+/** The middle of the preferred range of tau_i (MPa) at spring index C. */
+export function initialTensionMiddle(springIndex: number): number {
+  return (33500 / Math.exp(0.105 * springIndex)) * PSI_MPA;
+}
+
+/** Half the width of the preferred range (MPa); it narrows as the index grows. */
+export function initialTensionHalfWidth(springIndex: number): number {
+  return Math.max(0, 1000 * (4 - (springIndex - 3) / 6.5)) * PSI_MPA;
+}
+
 /** The preferred range of tau_i (MPa) at spring index C. */
 export function initialTensionBand(springIndex: number): InitialTensionBand {
-  const middle = (33500 / Math.exp(0.105 * springIndex)) * PSI_MPA;
-  const half = Math.max(0, 1000 * (4 - (springIndex - 3) / 6.5)) * PSI_MPA;
+  const middle = initialTensionMiddle(springIndex);
+  const half = initialTensionHalfWidth(springIndex);
   return { low: middle - half, middle, high: middle + half };
 }
 

@@ -1,0 +1,180 @@
+// The requirements file of an extension spring (`kind: extension`): the pull it must give at its
+// working length, the stroke, where it must fit and how long it must live. Lengths are inside the loops.
+// The working force is met exactly through the initial tension: for a given wire, coil count and
+// diameter the free length and rate are fixed, so Fi = F1 - k (L1 - L0), and Fi must lie in its range.
+import { findSeries } from '../../catalogs/load.js';
+import { FAMILIES, type Catalog } from '../../catalogs/types.js';
+import { FATIGUE_CRITERIA, type FatigueCriterion } from '../../model/fatigue.js';
+import type { StressCorrection } from '../../model/stressFactor.js';
+import { Fields, isRecord } from '../../input/fields.js';
+import { parseMaterialChoice, type MaterialChoice } from '../../input/material.js';
+import { DEFAULTS } from '../../input/requirements.js';
+import { parseCycles } from '../../input/springFile.js';
+import { formatQuantity } from '../../units/format.js';
+import { InputError, parseNumber, parseQuantity } from '../../units/parse.js';
+import type { UnitSystem } from '../../units/systems.js';
+import { loadExtensionCatalog, loopRule, type ExtensionCatalog, type LoopRule } from './catalog.js';
+import { INITIAL_TENSION_RANGES, type InitialTensionRange } from './initialTension.js';
+import { readKind } from './springFile.js';
+
+export const EXTENSION_RANK_KEYS = ['mass', 'wire_volume', 'outer_diameter', 'free_length', 'safety_factor'] as const;
+export type ExtensionRankKey = (typeof EXTENSION_RANK_KEYS)[number];
+
+export interface ExtensionRequirements {
+  kind: 'extension';
+  system: UnitSystem;
+  materials: MaterialChoice[];
+  /** Per material: the wire diameters to try (mm). */
+  wireSizes: (m: MaterialChoice) => number[];
+  wireSizesLabel: string;
+  loop: LoopRule;
+  /** Explicit inside height of each loop (mm); otherwise the loop rule's. */
+  loopLength?: number;
+  /** C2 = 2 r2 / d of the bend into the loop. */
+  bendIndex: number;
+  workingForce: number;
+  workingLength: number;
+  operatingLength?: number;
+  operatingForce?: number;
+  loadTolerance: number;
+  maxOuterDiameter?: number;
+  maxFreeLength?: number;
+  /** The longest the spring is ever stretched (assembly, over-travel): reached without a set. */
+  maxExtendedLength?: number;
+  bodyCoils: [number, number];
+  coilStep: number;
+  index: [number, number];
+  initialTensionRange: InitialTensionRange;
+  cycles?: number;
+  peened: boolean;
+  criterion: FatigueCriterion;
+  correction: StressCorrection;
+  temperature?: number;
+  forcingFrequency?: number;
+  safety: { static: number; fatigue: number; surge: number };
+  rank: ExtensionRankKey;
+  top: number;
+  seed: number;
+  /** Mean-diameter scan step (mm) for the checks that are not monotone in it. */
+  diameterResolution: number;
+}
+
+export const EXTENSION_DEFAULTS = {
+  bodyCoils: [3, 40] as [number, number],
+  coilStep: 0.25,
+  initialTensionRange: 'preferred' as InitialTensionRange,
+};
+
+function pair(f: Fields, key: string, fallback: [number, number]): [number, number] {
+  const list = f.list(key);
+  if (!list) return fallback;
+  if (list.length !== 2) throw new InputError(f.name(key), 'a list of two numbers [low, high]', f.get(key));
+  const a = parseNumber(list[0], `${f.name(key)}[0]`, { positive: true });
+  const b = parseNumber(list[1], `${f.name(key)}[1]`, { positive: true });
+  if (!(b >= a)) throw new InputError(f.name(key), '[low, high] with high at or above low', f.get(key));
+  return [a, b];
+}
+
+function readMaterials(f: Fields, catalog: Catalog): MaterialChoice[] {
+  const raw = f.require('material', `a material id, a list of ids, { family: ${FAMILIES.join(' | ')} }, "any", or { like: <id>, ... }`);
+  if (raw === 'any') return catalog.materials.map((material) => ({ material }));
+  if (Array.isArray(raw)) {
+    if (raw.length === 0) throw new InputError('material', 'a non-empty list of material ids');
+    return raw.map((id, i) => parseMaterialChoice(id, f.system, catalog, `material[${i}]`));
+  }
+  if (isRecord(raw) && 'family' in raw) {
+    const g = Fields.of(raw, 'material', f.system);
+    const fam = g.choice('family', [...FAMILIES, 'any'] as const);
+    g.rejectUnknown();
+    return catalog.materials.filter((m) => fam === 'any' || m.family === fam).map((material) => ({ material }));
+  }
+  return [parseMaterialChoice(raw, f.system, catalog, 'material')];
+}
+
+function readWireSizes(f: Fields, catalog: Catalog): { wireSizes: (m: MaterialChoice) => number[]; label: string } {
+  const raw = f.get('wire_sizes');
+  if (raw === undefined || raw === null) return { wireSizes: (m) => findSeries(catalog, m.material.wireSeries)!.diameters, label: 'each material\'s own series' };
+  if (typeof raw === 'string') {
+    const series = findSeries(catalog, raw);
+    if (!series) throw new InputError('wire_sizes', `a wire series (${catalog.series.map((s) => s.id).join(' | ')}) or a list of diameters`, raw);
+    return { wireSizes: () => series.diameters, label: series.id };
+  }
+  if (Array.isArray(raw)) {
+    if (raw.length === 0) throw new InputError('wire_sizes', 'a non-empty list of diameters');
+    const list = raw.map((v, i) => parseQuantity(v, 'length', f.system, `wire_sizes[${i}]`, { positive: true })).sort((a, b) => a - b);
+    return { wireSizes: () => list, label: 'the listed diameters' };
+  }
+  throw new InputError('wire_sizes', 'a wire series id or a list of diameters', raw);
+}
+
+export function readExtensionRequirements(raw: unknown, catalog: Catalog, ext: ExtensionCatalog = loadExtensionCatalog(catalog.materials)): ExtensionRequirements {
+  const f = Fields.document(raw);
+  readKind(f, 'extension');
+  const system = f.system;
+  const materials = readMaterials(f, catalog);
+  const { wireSizes, label } = readWireSizes(f, catalog);
+
+  const loopId = f.string('loop') ?? 'full';
+  const loop = loopRule(ext, loopId);
+  if (!loop) throw new InputError('loop', `one of ${ext.loopTypes.map((t) => t.id).join(' | ')}`, f.get('loop'));
+  const loopLength = f.quantity('loop_length', 'length', { positive: true });
+  if (loop.needsLength && loopLength === undefined) throw new InputError('loop_length', `the height of each ${loop.id} loop from the end of the body to the inside of the loop (the field is missing)`);
+  const bendIndex = f.number('bend_index', { min: 1.5, max: 50 }) ?? ext.bendIndex.value;
+
+  const load = Fields.of(f.require('load', 'the pull at the working length: { force, length }'), 'load', system);
+  const workingForce = load.requiredQuantity('force', 'force', { positive: true });
+  const workingLength = load.requiredQuantity('length', 'length', { positive: true });
+  load.rejectUnknown();
+  const operatingLength = f.quantity('operating_length', 'length', { positive: true });
+  const operatingForce = f.quantity('operating_force', 'force', { positive: true });
+  if (operatingLength !== undefined && operatingLength <= workingLength) throw new InputError('operating_length', 'a length longer than the working length (the end of the pull)', f.get('operating_length'));
+  if (operatingForce !== undefined && operatingLength === undefined) throw new InputError('operating_length', 'a value: operating_force needs the length it acts at (the field is missing)');
+  if (operatingForce !== undefined && operatingForce <= workingForce) throw new InputError('operating_force', 'a force above the working force (the spring is stretched further)', f.get('operating_force'));
+
+  const envRaw = f.get('envelope');
+  const env = envRaw === undefined || envRaw === null ? Fields.of({}, 'envelope', system) : Fields.of(envRaw, 'envelope', system);
+  const maxOuterDiameter = env.quantity('max_outer_diameter', 'length', { positive: true });
+  const maxFreeLength = env.quantity('max_free_length', 'length', { positive: true });
+  const maxExtendedLength = env.quantity('max_extended_length', 'length', { positive: true });
+  env.rejectUnknown();
+  const longest = operatingLength ?? workingLength;
+  if (maxExtendedLength !== undefined && maxExtendedLength < longest) throw new InputError('envelope.max_extended_length', `a length at or beyond the longest working length ${formatQuantity(longest, 'length', system)}`, env.get('max_extended_length'));
+
+  const bodyCoils = pair(f, 'body_coils', EXTENSION_DEFAULTS.bodyCoils);
+  const coilStep = f.number('coil_step', { positive: true }) ?? EXTENSION_DEFAULTS.coilStep;
+  if ((bodyCoils[1] - bodyCoils[0]) / coilStep > 100000) throw new InputError('coil_step', 'a step that gives at most 100000 coil counts in body_coils');
+  const index = pair(f, 'index', DEFAULTS.index);
+  if (index[0] <= 1.75) throw new InputError('index[0]', 'a spring index above 1.75 (the loop formulas need C1 = C above it)', index[0]);
+
+  const safety = { ...DEFAULTS.safety };
+  const safetyRaw = f.get('safety');
+  if (safetyRaw !== undefined && safetyRaw !== null) {
+    const sf = Fields.of(safetyRaw, 'safety', system);
+    safety.static = sf.number('static', { positive: true }) ?? safety.static;
+    safety.fatigue = sf.number('fatigue', { positive: true }) ?? safety.fatigue;
+    safety.surge = sf.number('surge', { positive: true }) ?? safety.surge;
+    sf.rejectUnknown();
+  }
+  const req: ExtensionRequirements = {
+    kind: 'extension', system, materials, wireSizes, wireSizesLabel: label, loop, loopLength, bendIndex,
+    workingForce, workingLength, operatingLength, operatingForce,
+    loadTolerance: f.fraction('load_tolerance') ?? DEFAULTS.loadTolerance,
+    maxOuterDiameter, maxFreeLength, maxExtendedLength, bodyCoils, coilStep, index,
+    initialTensionRange: (f.choice('initial_tension_range', INITIAL_TENSION_RANGES) ?? EXTENSION_DEFAULTS.initialTensionRange) as InitialTensionRange,
+    cycles: parseCycles(f.get('cycles'), 'cycles'),
+    peened: f.bool('peened') ?? false,
+    criterion: (f.choice('fatigue_criterion', FATIGUE_CRITERIA) ?? 'gerber') as FatigueCriterion,
+    correction: (f.choice('stress_factor', ['bergstrasser', 'wahl'] as const) ?? 'bergstrasser') as StressCorrection,
+    temperature: f.quantity('temperature', 'temperature'),
+    forcingFrequency: f.quantity('forcing_frequency', 'frequency', { nonNegative: true }),
+    safety,
+    rank: (f.choice('rank', EXTENSION_RANK_KEYS) ?? DEFAULTS.rank) as ExtensionRankKey,
+    top: f.number('top', { integer: true, positive: true, max: 1000 }) ?? DEFAULTS.top,
+    seed: f.number('seed', { integer: true }) ?? DEFAULTS.seed,
+    diameterResolution: f.quantity('diameter_resolution', 'length', { positive: true }) ?? DEFAULTS.diameterResolution,
+  };
+  if (req.loadTolerance >= 1) throw new InputError('load_tolerance', 'a fraction below 1 (such as 0.1 or "10%")', f.get('load_tolerance'));
+  if (req.diameterResolution < 1e-4) throw new InputError('diameter_resolution', 'a scan step of at least 0.0001 mm', f.get('diameter_resolution'));
+  f.rejectUnknown();
+  return req;
+}
