@@ -2,8 +2,8 @@
 // composed from the shared wire mechanics (src/model) and this folder's loop and load-line formulas.
 // Inputs and outputs SI (mm, N, MPa, kg, Hz, degC). No I/O.
 import {
-  INFINITE_LIFE_CYCLES, STATIC_SERVICE_CYCLES, endurancePoint, finiteLifePoint, fullyReversedEndurance, repeatedStressFraction, zimmerliPoint,
-  type EndurancePoint, type EnduranceSource, type FatigueCriterion, type FiniteLifeTable,
+  INFINITE_LIFE_CYCLES, STATIC_SERVICE_CYCLES, endurancePoint, fullyReversedEndurance,
+  type EndurancePoint, type EnduranceSource, type FatigueCriterion,
 } from '../../model/fatigue.js';
 import { springRate } from '../../model/rate.js';
 import { shearStress } from '../../model/stress.js';
@@ -11,7 +11,7 @@ import { stressFactor, type StressCorrection } from '../../model/stressFactor.js
 import { ultimateShearStrength } from '../../model/strength.js';
 import { activeCoilMass, surgeFrequency } from '../../model/surge.js';
 import type { Warning } from '../../model/analysis.js';
-import { TORSION_TO_TENSION, cycleOnLine, offsetAlternatingStrength, yieldAlongLoadLine, type CycleOnLine } from './fatigue.js';
+import { cycleOnLine, loopLifeCurve, offsetAlternatingStrength, yieldAlongLoadLine, type CycleOnLine } from './fatigue.js';
 import { bodyLength, extensionActiveCoils, extensionMass, extensionWireLength, freeLengthInsideLoops, loopWireLength, wireVolumeOfLength } from './geometry.js';
 import { initialTensionBand, initialTensionPosition, type InitialTensionBand, type InitialTensionPosition } from './initialTension.js';
 import type { LoopRule } from './catalog.js';
@@ -118,21 +118,9 @@ function governingOf(v: Record<ExtensionSite, number>, low: boolean): ExtensionS
 
 interface SiteData { sse: number; sinesAlternating: number; point: EndurancePoint; source: EnduranceSource; ultimate: number }
 
-/** Endurance at a loop: the loop's repeated-stress fraction for a finite life; for infinite life the
- * lower of Zimmerli's unpeened data (converted to bending at A) and the 1e7 row, so that a longer
- * life is never easier. */
-function loopSite(table: FiniteLifeTable, cycles: number, bending: boolean, zimmerli: boolean, sut: number, ssu: number, criterion: FatigueCriterion, cycle: CycleOnLine): SiteData {
-  const ultimate = bending ? sut : ssu;
-  const finite = finiteLifePoint(sut, repeatedStressFraction(table, Math.min(cycles, INFINITE_LIFE_CYCLES), false));
-  const finiteData: SiteData = { sse: fullyReversedEndurance(finite, ultimate, criterion), sinesAlternating: finite.alternating, point: finite, source: 'finite-life-table', ultimate };
-  if (!(cycles >= INFINITE_LIFE_CYCLES && zimmerli)) return finiteData;
-  const z = zimmerliPoint(false);
-  const zSse = fullyReversedEndurance(z, ssu, criterion);
-  const zData: SiteData = bending
-    ? { sse: zSse / TORSION_TO_TENSION, sinesAlternating: z.alternating / TORSION_TO_TENSION, point: { alternating: z.alternating / TORSION_TO_TENSION, mean: z.mean / TORSION_TO_TENSION }, source: 'zimmerli', ultimate }
-    : { sse: zSse, sinesAlternating: z.alternating, point: z, source: 'zimmerli', ultimate };
-  const s = (x: SiteData) => offsetAlternatingStrength(cycle.slope, cycle.initialStress, x.sse, x.sinesAlternating, ultimate, criterion);
-  return s(zData) <= s(finiteData) ? zData : finiteData;
+/** The endurance data of a site: its point on the life curve and the criterion's line through it. */
+function siteData(point: EndurancePoint, source: EnduranceSource, ultimate: number, criterion: FatigueCriterion): SiteData {
+  return { sse: fullyReversedEndurance(point, ultimate, criterion), sinesAlternating: point.alternating, point, source, ultimate };
 }
 
 function siteFatigue(cycle: CycleOnLine, site: SiteData, criterion: FatigueCriterion): SiteFatigue {
@@ -185,11 +173,13 @@ export function analyzeExtension(g: ExtensionGeometry, m: ExtensionMaterial, s: 
     const cycles = s.cycles;
     const bodyCycle = cycleOnLine(tauI, per.body * minForce, per.body * maxForce);
     const { point, source } = endurancePoint(cycles, s.peened, f.zimmerli, f.finiteLife, sut, s.criterion);
-    const body = siteFatigue(bodyCycle, { sse: fullyReversedEndurance(point, ssu, s.criterion), sinesAlternating: point.alternating, point, source, ultimate: ssu }, s.criterion);
+    const body = siteFatigue(bodyCycle, siteData(point, source, ssu, s.criterion), s.criterion);
     const aCycle = cycleOnLine(per.loopBending * Fi, per.loopBending * minForce, per.loopBending * maxForce);
     const bCycle = cycleOnLine(per.loopTorsion * Fi, per.loopTorsion * minForce, per.loopTorsion * maxForce);
-    const loopBending = siteFatigue(aCycle, loopSite(m.loopFatigue.loopBending, cycles, true, f.zimmerli, sut, ssu, s.criterion, aCycle), s.criterion);
-    const loopTorsion = siteFatigue(bCycle, loopSite(m.loopFatigue.loopTorsion, cycles, false, f.zimmerli, sut, ssu, s.criterion, bCycle), s.criterion);
+    const a = loopLifeCurve(cycles, f.zimmerli, m.loopFatigue.loopBending, sut, true, s.criterion);
+    const b = loopLifeCurve(cycles, f.zimmerli, m.loopFatigue.loopTorsion, sut, false, s.criterion);
+    const loopBending = siteFatigue(aCycle, siteData(a.point, a.source, sut, s.criterion), s.criterion);
+    const loopTorsion = siteFatigue(bCycle, siteData(b.point, b.source, ssu, s.criterion), s.criterion);
     const nf = { body: body.safetyFactor, loopBending: loopBending.safetyFactor, loopTorsion: loopTorsion.safetyFactor };
     fatigue = {
       life: cycles >= INFINITE_LIFE_CYCLES ? 'infinite' : 'finite', cycles, minForce, maxForce, criterion: s.criterion,

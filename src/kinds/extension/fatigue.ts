@@ -9,7 +9,8 @@
 // With s_i = 0 these are the shared model's load-line formulas (src/model/fatigue.ts).
 // The same applies at the loops: torsion at B against Ssu, bending at A against Sut with the
 // endurance converted from torsion by distortion energy, Se = Sse / 0.577 (Shigley Example 10-8).
-import type { FatigueCriterion } from '../../model/fatigue.js';
+import { lifeCurve, type FatigueCriterion, type FiniteLifeTable, type LifeCurvePoint } from '../../model/fatigue.js';
+import { ultimateShearStrength } from '../../model/strength.js';
 
 /** Von Mises: a torsional strength is 0.577 of the tensile one (Shigley Example 10-8 uses 0.577). */
 export const TORSION_TO_TENSION = 0.577;
@@ -64,4 +65,21 @@ export function offsetFatigueSafety(cycle: CycleOnLine, sse: number, sinesAltern
 export function yieldAlongLoadLine(cycle: CycleOnLine, yieldStrength: number): number {
   const rise = cycle.maxStress - cycle.initialStress;
   return rise > 0 ? (yieldStrength - cycle.initialStress) / rise : NaN;
+}
+
+/**
+ * The life curve of a loop, built like the body's (src/model/fatigue.ts, lifeCurve): the loop's
+ * repeated-stress fractions (unpeened: peening does not reach into the bends) down to a knee at 1e7
+ * cycles that is the lower of the table's 1e7 value and Zimmerli's unpeened data. At B (torsion) that is
+ * the body's curve with the loop's table. At A (bending) the torsional strengths are carried to tension by
+ * distortion energy, S = S_s / 0.577 (Shigley Example 10-8): the curve is computed on the torsional scale
+ * (Sut taken as 0.577 Sut, so the table's bending fractions become torsional strengths) and scaled back;
+ * its ultimate is then Sut.
+ */
+export function loopLifeCurve(cycles: number, zimmerli: boolean, table: FiniteLifeTable, tensileStrength: number, bending: boolean, criterion: FatigueCriterion): LifeCurvePoint {
+  const ssu = ultimateShearStrength(tensileStrength);
+  if (!bending) return lifeCurve(cycles, false, zimmerli, table, tensileStrength, ssu, criterion);
+  const c = lifeCurve(cycles, false, zimmerli, table, TORSION_TO_TENSION * tensileStrength, ssu, criterion);
+  const s = c.repeatedStrength / TORSION_TO_TENSION;
+  return { repeatedStrength: s, point: { alternating: s / 2, mean: s / 2 }, source: c.source };
 }

@@ -5,7 +5,7 @@
 // typed arrays; evaluate() allocates nothing.
 import { inStrengthRange } from '../../catalogs/properties.js';
 import type { Catalog } from '../../catalogs/types.js';
-import { INFINITE_LIFE_CYCLES, endurancePoint, finiteLifePoint, fullyReversedEndurance, repeatedStressFraction, zimmerliPoint } from '../../model/fatigue.js';
+import { INFINITE_LIFE_CYCLES, endurancePoint, fullyReversedEndurance } from '../../model/fatigue.js';
 import { springRate } from '../../model/rate.js';
 import { shearStress } from '../../model/stress.js';
 import { stressFactor } from '../../model/stressFactor.js';
@@ -16,7 +16,7 @@ import { TREND, type Problem } from '../../search/problem.js';
 import type { ExtensionGeometry, ExtensionService } from './analysis.js';
 import { loadExtensionCatalog, type ExtensionCatalog } from './catalog.js';
 import { EXTENSION_CHECKS, XC, activeExtensionChecks, extensionFatigueApplies, extensionService } from './checks.js';
-import { TORSION_TO_TENSION, offsetAlternatingStrength } from './fatigue.js';
+import { loopLifeCurve, offsetAlternatingStrength } from './fatigue.js';
 import { extensionMass, loopHeight, loopWireLength, wireVolumeOfLength } from './geometry.js';
 import { initialTensionHalfWidth, initialTensionMiddle } from './initialTension.js';
 import { loopBendingFactor, loopBendingStress, loopTorsionFactor } from './loops.js';
@@ -51,9 +51,9 @@ export function buildExtensionProblem(req: ExtensionRequirements, catalog: Catal
   const sd = arr(); const sG = arr(); const sGE = arr(); const sRho = arr(); const sCost = arr(); const sTmax = arr();
   const sAllowBody = arr(); const sAllowA = arr(); const sAllowB = arr(); const sSut = arr(); const sSsu = arr();
   const sBodySse = arr(); const sBodySines = arr();
-  // Loops: the finite-life (or 1e7-row) data, and Zimmerli's where infinite life may use them (NaN: not).
-  const sASse = arr(); const sASines = arr(); const sAzSse = arr(); const sAzSines = arr();
-  const sBSse = arr(); const sBSines = arr(); const sBzSse = arr(); const sBzSines = arr();
+  // Loops: their points on their own life curves (bending at A against Sut, torsion at B against Ssu).
+  const sASse = arr(); const sASines = arr();
+  const sBSse = arr(); const sBSines = arr();
   const cycles = req.cycles ?? INFINITE_LIFE_CYCLES;
   const criterion = req.criterion;
   stock.forEach((s, i) => {
@@ -69,23 +69,15 @@ export function buildExtensionProblem(req: ExtensionRequirements, catalog: Catal
     sAllowB[i] = s.material.allowables.loopTorsion;
     sSut[i] = f.tensileStrength;
     sSsu[i] = ultimateShearStrength(f.tensileStrength);
-    const body = endurancePoint(cycles, req.peened, f.zimmerli, f.finiteLife, f.tensileStrength).point;
+    const body = endurancePoint(cycles, req.peened, f.zimmerli, f.finiteLife, f.tensileStrength, criterion).point;
     sBodySse[i] = fullyReversedEndurance(body, sSsu[i], criterion);
     sBodySines[i] = body.alternating;
-    const capped = Math.min(cycles, INFINITE_LIFE_CYCLES);
-    const a = finiteLifePoint(sSut[i], repeatedStressFraction(s.material.loopFatigue.loopBending, capped, false));
-    const b = finiteLifePoint(sSut[i], repeatedStressFraction(s.material.loopFatigue.loopTorsion, capped, false));
+    const a = loopLifeCurve(cycles, f.zimmerli, s.material.loopFatigue.loopBending, sSut[i], true, criterion).point;
+    const b = loopLifeCurve(cycles, f.zimmerli, s.material.loopFatigue.loopTorsion, sSut[i], false, criterion).point;
     sASse[i] = fullyReversedEndurance(a, sSut[i], criterion);
     sASines[i] = a.alternating;
     sBSse[i] = fullyReversedEndurance(b, sSsu[i], criterion);
     sBSines[i] = b.alternating;
-    const z = zimmerliPoint(false);
-    const useZ = cycles >= INFINITE_LIFE_CYCLES && f.zimmerli;
-    const zSse = fullyReversedEndurance(z, sSsu[i], criterion);
-    sAzSse[i] = useZ ? zSse / TORSION_TO_TENSION : NaN;
-    sAzSines[i] = useZ ? z.alternating / TORSION_TO_TENSION : NaN;
-    sBzSse[i] = useZ ? zSse : NaN;
-    sBzSines[i] = useZ ? z.alternating : NaN;
   });
 
   const active = activeExtensionChecks(req);
@@ -122,12 +114,6 @@ export function buildExtensionProblem(req: ExtensionRequirements, catalog: Catal
     const si = c * Fi;
     const rise = 0.5 * c * (Fmax + Fmin) - si;
     return offsetAlternatingStrength(rise > 0 ? alt / rise : Infinity, si, sse, sines, ult, criterion) / alt;
-  };
-  const nfLoop = (c: number, Fi: number, Fmin: number, Fmax: number, sse: number, sines: number, zSse: number, zSines: number, ult: number): number => {
-    const finite = nfAt(c, Fi, Fmin, Fmax, sse, sines, ult);
-    if (zSse !== zSse) return finite;
-    const z = nfAt(c, Fi, Fmin, Fmax, zSse, zSines, ult);
-    return z < finite ? z : finite;
   };
 
   const inc = TREND.increasing;
@@ -227,8 +213,8 @@ export function buildExtensionProblem(req: ExtensionRequirements, catalog: Catal
       let nMin = nBody < nA ? (nBody < nB ? nBody : nB) : (nA < nB ? nA : nB);
       if (fatigueOn) {
         const fb = nfAt(cBody, Fi, F1, F2, sBodySse[i], sBodySines[i], sSsu[i]);
-        const fa = nfLoop(cA, Fi, F1, F2, sASse[i], sASines[i], sAzSse[i], sAzSines[i], sSut[i]);
-        const ft = nfLoop(cB, Fi, F1, F2, sBSse[i], sBSines[i], sBzSse[i], sBzSines[i], sSsu[i]);
+        const fa = nfAt(cA, Fi, F1, F2, sASse[i], sASines[i], sSut[i]);
+        const ft = nfAt(cB, Fi, F1, F2, sBSse[i], sBSines[i], sSsu[i]);
         g[10] = fb === fb ? (nfTarget - fb) / nfTarget : -1;
         g[11] = fa === fa ? (nfTarget - fa) / nfTarget : -1;
         g[12] = ft === ft ? (nfTarget - ft) / nfTarget : -1;
