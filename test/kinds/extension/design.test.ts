@@ -9,7 +9,7 @@ import { EXTENSION_CHECKS } from '../../../src/kinds/extension/checks.js';
 import { assertExtensionVerified, designExtension, extensionCandidateAt } from '../../../src/kinds/extension/design.js';
 import { XO, buildExtensionProblem } from '../../../src/kinds/extension/problem.js';
 import { readExtensionRequirements } from '../../../src/kinds/extension/requirements.js';
-import { FEASIBILITY_TOLERANCE, TREND, valueAt, valueCount } from '../../../src/search/problem.js';
+import { TREND, valueAt, valueCount } from '../../../src/search/problem.js';
 import { InputError } from '../../../src/units/parse.js';
 import { relClose } from '../../helpers.js';
 
@@ -88,7 +88,7 @@ describe('extension design', () => {
           p.evaluate(x, g, f);
           let worst = -Infinity;
           for (let j = 0; j < g.length; j++) if (g[j] > worst) worst = g[j];
-          if (worst <= FEASIBILITY_TOLERANCE && f[XO.mass] < best) { best = f[XO.mass]; bestX = Float64Array.from(x); }
+          if (worst <= 0 && f[XO.mass] < best) { best = f[XO.mass]; bestX = Float64Array.from(x); }
         }
       }
     }
