@@ -37,16 +37,19 @@ export function addOverrideOptions(cmd: Command): Command {
   return cmd;
 }
 
-function addCommon(cmd: Command): Command {
+/** The options every search command takes. `ranked: false` (frontier, which lists the whole front) keeps
+ * --top, --rank and --per-wire out of its help; given anyway, they are refused by name. */
+function addCommon(cmd: Command, ranked = true): Command {
   cmd
     .option('--json', 'machine-readable output on stdout (always SI units)')
     .addOption(unitsOption());
+  const hide = (o: Option) => (ranked ? o : o.hideHelp());
   addOverrideOptions(cmd)
     .addOption(new Option('--strategy <name>', 'search strategy').choices(['auto', 'grid', 'genetic']).default('auto'))
     .option('--seed <n>', 'random seed for the genetic strategy (overrides the file)')
-    .option('--top <n>', 'how many candidates to list (overrides the file)')
-    .addOption(new Option('--rank <key>', 'ranking objective (overrides the file)').choices([...RANK_KEYS]))
-    .option('--per-wire', 'list the best spring of each material and wire size (overrides the file\'s best_per_wire)')
+    .addOption(hide(new Option('--top <n>', 'how many candidates to list (overrides the file)')))
+    .addOption(hide(new Option('--rank <key>', 'ranking objective (overrides the file)').choices([...RANK_KEYS])))
+    .addOption(hide(new Option('--per-wire', 'list the best spring of each material and wire size (overrides the file\'s best_per_wire)')))
     .option('--timing', 'also report the search time (which makes the output differ from run to run)');
   return cmd;
 }
@@ -257,7 +260,7 @@ export function registerSearchCommands(program: Command, io: Io, setCode: (c: nu
   const keys = Object.keys(FRONTIER_KEYS);
   addCommon(program.command('frontier')
     .description('the Pareto set of all feasible springs on two objectives, as CSV')
-    .argument('<requirements-file>', 'YAML or JSON requirements file'))
+    .argument('<requirements-file>', 'YAML or JSON requirements file'), false)
     .addOption(new Option('--x <key>', 'objective on the x axis').choices(keys).default('mass'))
     .addOption(new Option('--y <key>', 'objective on the y axis').choices(keys).default('outer_diameter'))
     .option('-o, --output <file.csv>', 'write the CSV here instead of stdout')

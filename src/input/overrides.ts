@@ -35,7 +35,8 @@ export function parseAssignment(text: string, option = '--set'): { path: string[
   let value: unknown;
   try {
     value = parse(rawValue, { logLevel: 'silent', maxAliasCount: 10 });
-  } catch {
+  } catch (e) {
+    if (/alias/i.test((e as Error).message)) throw new InputError(option, 'a value whose YAML aliases expand to a reasonable size (an alias bomb?)', text);
     value = rawValue;
   }
   // YAML's null spellings (~, null) would quietly drop the setting; removal is written `none`.

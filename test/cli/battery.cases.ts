@@ -135,6 +135,9 @@ function wholeFiles(command: 'analyze' | 'design', good: string): BadCase[] {
     C('a __proto__ key (YAML)', { text: good + '__proto__:\n  cycles: 100000\n' }, '__proto__'),
     C('a __proto__ key (JSON)', { text: JSON.stringify(command === 'design' ? GOOD_REQUIREMENTS : GOOD_SPRING).replace(/^\{/, '{"__proto__": {"cycles": 1e5}, '), ext: 'json' }, '__proto__'),
     C('a constructor key', { text: good + 'constructor:\n  prototype:\n    cycles: 1\n' }, 'constructor'),
+    C('a nested __proto__ key (YAML)', { text: good.replace(/^material: stainless-302$/m, 'material:\n  like: stainless-302\n  __proto__:\n    density: 1') }, 'material.__proto__'),
+    C('a nested __proto__ key (JSON)', { text: JSON.stringify(command === 'design' ? GOOD_REQUIREMENTS : GOOD_SPRING).replace('"material":"stainless-302"', '"material":{"like":"stainless-302","__proto__":{"density":1}}'), ext: 'json' }, 'material.__proto__'),
+    C('deep JSON object nesting', { text: `{"units": "si", "x": ${'{"a": '.repeat(100)}1${'}'.repeat(100)}}`, ext: 'json' }, 'levels of nesting'),
     C('a misspelt field', { text: good + 'matrial: music-wire\n' }, 'matrial'),
     C('a 1 MB string in a field', { text: good.replace(/^units: si$/m, `units: ${'z'.repeat(900 * 1024)}`) }, 'units'),
   ];
@@ -219,6 +222,8 @@ const springFields: BadCase[] = [
   S('clash allowance huge', { clash_allowance: '5000%' }, 'clash_allowance'),
   S('surge margin zero', { surge_margin: 0 }, 'surge_margin'),
   S('surge margin huge', { surge_margin: 1e9 }, 'surge_margin'),
+  S('surge ends unknown', { surge_ends: 'springs' }, 'surge_ends'),
+  S('surge ends as a boolean', { surge_ends: true }, 'surge_ends'),
   S('units unknown', { units: 'imperial' }, 'units'),
   S('units as a number', { units: 1 }, 'units'),
 ];
@@ -327,6 +332,9 @@ const requirementFields: BadCase[] = [
   R('seed fractional', { seed: 1.5 }, 'seed'),
   R('seed huge', { seed: 1e30 }, 'seed'),
   R('seed as text', { seed: 'lucky' }, 'seed'),
+  R('surge ends unknown', { surge_ends: 'clamped' }, 'surge_ends'),
+  R('working tolerance 100%', { working_tolerance: '100%' }, 'working_tolerance'),
+  R('working tolerance negative', { working_tolerance: -0.02 }, 'working_tolerance'),
   R('units unknown', { units: 'metric' }, 'units'),
   R('a misspelt field', { operating_lenght: 25 }, 'operating_lenght'),
 ];
@@ -350,6 +358,8 @@ const options: BadCase[] = [
   O('--set a temperature below absolute zero', 'design', ['--set', 'temperature=-300'], '--set temperature'),
   O('--set diameter_resolution=1e-9', 'design', ['--set', 'diameter_resolution=1e-9'], '--set diameter_resolution'),
   O('--set removing a required field', 'design', ['--set', 'load=none'], '--set load'),
+  O('--set an object with a __proto__ key', 'design', ['--set', 'material={like: stainless-302, __proto__: {density: 1}}'], '--set material.__proto__'),
+  O('--set a YAML alias bomb', 'design', ['--set', 'material={a: &a [x,x,x,x,x,x,x,x,x,x], b: &b [*a,*a,*a,*a,*a,*a,*a,*a,*a,*a], c: [*b,*b,*b,*b,*b,*b,*b,*b,*b,*b]}'], 'alias bomb'),
   O('--max-od negative', 'design', ['--max-od', '-3'], '--max-od'),
   O('--max-od as a force', 'design', ['--max-od', '15 N'], '--max-od'),
   O('--min-id empty', 'design', ['--min-id', ''], '--min-id'),
