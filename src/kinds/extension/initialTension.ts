@@ -39,8 +39,3 @@ export function initialTensionPosition(stress: number, band: InitialTensionBand)
  */
 export type InitialTensionRange = 'preferred' | 'makeable';
 export const INITIAL_TENSION_RANGES: readonly InitialTensionRange[] = ['preferred', 'makeable'];
-
-export function admissibleInitialTension(springIndex: number, range: InitialTensionRange): { low: number; high: number } {
-  const band = initialTensionBand(springIndex);
-  return { low: range === 'preferred' ? band.low : 0, high: band.high };
-}

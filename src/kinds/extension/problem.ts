@@ -134,6 +134,7 @@ export function buildExtensionProblem(req: ExtensionRequirements, catalog: Catal
   // Mass grows with D when a loop's wire (wire_coils pi D) grows faster than its reach shrinks.
   const massInc = rule.wireCoils * Math.PI >= rule.innerHeight;
   const objectiveInc = req.rank === 'safety_factor' ? false : req.rank === 'mass' || req.rank === 'wire_volume' ? massInc : true;
+  const bodyCoilsMost = req.bodyCoils[0] + Math.floor((req.bodyCoils[1] - req.bodyCoils[0]) / req.coilStep + 1e-9) * req.coilStep;
   const dMin = n ? Math.min(...sd) : 1;
   const dMax = n ? Math.max(...sd) : 1;
 
@@ -175,6 +176,37 @@ export function buildExtensionProblem(req: ExtensionRequirements, catalog: Catal
         const Fx = F1 + kMin * (Lx - L1);
         out[XC.extended_stress] = Math.max(shearStress(Fx, lo, d, K) / sAllowBody[i], loopBendingStress(Fx, lo, d, KA) / sAllowA[i], shearStress(Fx, lo, d, KB) / sAllowB[i]) - 1;
       }
+    },
+
+    // A whole wire size (depth 1) or one coil count of it (depth 2) ruled out at once: over the branch the
+    // diameter runs from Cmin d to the smaller of Cmax d and the bore, the rate from its softest (widest
+    // coil, most coils) to its stiffest, and every bound below holds for every point of that range.
+    branchInfeasible(x, depth) {
+      const i = x[0];
+      const d = sd[i];
+      if (on[XC.temperature] === 1 && temperature > sTmax[i]) return XC.temperature;
+      const Dlo = Cmin * d;
+      const Dhi = Math.min(Cmax * d, ODmax - d);
+      if (Dlo > Dhi) return XC.outer_diameter;
+      const NbFewest = depth >= 2 ? x[1] : req.bodyCoils[0];
+      const NbMost = depth >= 2 ? x[1] : bodyCoilsMost;
+      // The free length grows with the coil count and (through the loops) with the diameter.
+      const L0least = (NbFewest + 1) * d + 2 * loopHeight(rule, d, Dlo, explicitLoop);
+      if (on[XC.free_length] === 1 && L0least > L0max) return XC.free_length;
+      if (L0least > L1) return XC.working_extension;
+      const kMax = springRate(sG[i], d, Dlo, NbFewest + sGE[i]);
+      const kMin = springRate(sG[i], d, Dhi, NbMost + sGE[i]);
+      if (on[XC.operating_force_min] === 1) {
+        if (F1 + kMax * travel < F2req * (1 - tol)) return XC.operating_force_min;
+        if (F1 + kMin * travel > F2req * (1 + tol)) return XC.operating_force_max;
+      }
+      // A point that meets the operating band carries at least its lower end; the lever is at least Dlo and
+      // the curvature factors at least their values at Dhi.
+      const Fleast = on[XC.operating_force_min] === 1 ? Math.max(F1 + kMin * travel, F2req * (1 - tol)) : F1 + kMin * travel;
+      if (shearStress(Fleast, Dlo, d, stressFactor(Dhi / d, correction)) * sf > sAllowBody[i]) return XC.body_stress;
+      if (loopBendingStress(Fleast, Dlo, d, loopBendingFactor(Dhi / d)) * sf > sAllowA[i]) return XC.loop_bending_stress;
+      if (shearStress(Fleast, Dlo, d, KB) * sf > sAllowB[i]) return XC.loop_torsion_stress;
+      return -1;
     },
 
     evaluate(x, g, f) {

@@ -146,6 +146,40 @@ describe('extension problem: its promises to the engine', () => {
     }), { numRuns: 80, seed: 2 });
   });
 
+  it('a branch it rules out holds no feasible spring, and ruling branches out changes no result', () => {
+    let cut = 0;
+    fc.assert(fc.property(reqArb, fc.integer({ min: 0, max: 1_000_000 }), (doc, seed) => {
+      const req = requirements({ ...doc, top: 1 });
+      const p = buildExtensionProblem(req, catalog);
+      const g = new Float64Array(EXTENSION_CHECKS.length);
+      const f = new Float64Array(p.objectiveNames.length);
+      const x = new Float64Array(3);
+      let r = seed;
+      const rand = () => { r = (r * 1103515245 + 12345) % 2147483648; return r / 2147483648; };
+      for (let i = 0; i < p.stock.length; i++) {
+        x[0] = i;
+        for (const depth of [1, 2]) {
+          x[1] = valueAt(p.variables[1], Math.floor(rand() * valueCount(p.variables[1])));
+          if (p.branchInfeasible!(x, depth) < 0) continue;
+          cut++;
+          const d = p.stock[i].wireDiameter;
+          const Nb = x[1];
+          for (let t = 0; t < 60; t++) {
+            if (depth === 1) x[1] = valueAt(p.variables[1], Math.floor(rand() * valueCount(p.variables[1])));
+            x[2] = d * (req.index[0] + rand() * (req.index[1] - req.index[0]));
+            p.evaluate(x, g, f);
+            expect(Math.max(...g)).toBeGreaterThan(0);
+          }
+          x[1] = Nb;
+        }
+      }
+      const without = designExtension(req, catalog, { problem: { ...p, branchInfeasible: undefined } }).candidates[0];
+      const withCuts = designExtension(req, catalog, { problem: p }).candidates[0];
+      expect(withCuts?.objectives[XO.mass]).toBe(without?.objectives[XO.mass]);
+    }), { numRuns: 12, seed: 9 });
+    expect(cut).toBeGreaterThan(20);
+  });
+
   it('bracket bounds never exceed the checks anywhere in the bracket', () => {
     fc.assert(fc.property(reqArb, fc.nat(), fc.nat(), fc.double({ min: 4, max: 11, noNaN: true }), fc.double({ min: 0.01, max: 1, noNaN: true }), (doc, a, b, c0, w) => {
       const p = buildExtensionProblem(requirements(doc), catalog);
