@@ -60,7 +60,8 @@ export function requirementsRecord(req: Requirements): Record<string, unknown> {
     max_free_length: req.maxFreeLength ?? null, max_solid_length: req.maxSolidLength ?? null,
     cycles: req.cycles === undefined ? null : Number.isFinite(req.cycles) ? req.cycles : 'infinite',
     wire_sizes: req.wireSizesLabel, active_coils: req.activeCoils, coil_step: req.coilStep, index: req.index,
-    safety: req.safety, clash_allowance: req.clashAllowance, rank: req.rank,
+    safety: req.safety, allowable_stress: req.allowableStress ?? null, peened: req.peened, guided: req.guided,
+    clash_allowance: req.clashAllowance, rank: req.rank,
   };
 }
 

@@ -2,7 +2,7 @@
 // evaluates them in its hot loop (problem.ts); `checkAnalysis` evaluates the same checks on a full
 // single-spring analysis, so every spring the search reports can be re-verified independently.
 import type { Requirements } from '../input/requirements.js';
-import type { SpringAnalysis } from '../model/analysis.js';
+import type { MaterialFigures, SpringAnalysis } from '../model/analysis.js';
 import { STATIC_SERVICE_CYCLES } from '../model/fatigue.js';
 
 export const CHECKS = [
@@ -67,6 +67,13 @@ export function shortestLength(req: Requirements): number {
  * inside any maker's tolerance, so that the search and this re-verification both see springs meet it. */
 export function forceBand(req: Requirements): number {
   return Math.max(req.loadTolerance, 1e-9);
+}
+
+/** The material figures a spring is judged by under these requirements: a requirement-level
+ * `allowable_stress` replaces the material's own, so the search, the safety-factor column, the notes
+ * and the JSON all use the one allowable the search used. */
+export function figuresUnder(req: Requirements, figures: MaterialFigures): MaterialFigures {
+  return req.allowableStress === undefined ? figures : { ...figures, allowableStress: req.allowableStress };
 }
 
 /** Required static allowable and the factor applied to the stress. */

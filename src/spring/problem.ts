@@ -16,7 +16,7 @@ import { stressFactor } from '../model/stressFactor.js';
 import { ultimateShearStrength } from '../model/strength.js';
 import { activeCoilMass, surgeFrequency } from '../model/surge.js';
 import { TREND, type Problem } from '../search/problem.js';
-import { CHECK, CHECKS, activeChecks, forceBand, shortestLength, staticLimit } from './checks.js';
+import { CHECK, CHECKS, activeChecks, figuresUnder, forceBand, shortestLength, staticLimit } from './checks.js';
 
 export const OBJECTIVES = ['rank', 'mass', 'wire_volume', 'outer_diameter', 'free_length', 'neg_safety_factor', 'neg_static_safety', 'neg_fatigue_safety', 'relative_cost'] as const;
 export const OBJ = Object.fromEntries(OBJECTIVES.map((o, i) => [o, i])) as Record<(typeof OBJECTIVES)[number], number>;
@@ -48,7 +48,7 @@ export function buildSpringProblem(req: Requirements): SpringProblem {
     for (const d of req.wireSizes(choice)) {
       if (choice.tensileStrength === undefined && !inStrengthRange(choice.material, d)) continue;
       if (req.maxOuterDiameter !== undefined && d * (req.index[0] + 1) > req.maxOuterDiameter) continue;
-      stock.push({ choice, wireDiameter: d, figures: materialFigures(choice, d, req.setRemoved) });
+      stock.push({ choice, wireDiameter: d, figures: figuresUnder(req, materialFigures(choice, d, req.setRemoved)) });
     }
   }
   const n = stock.length;

@@ -26,8 +26,10 @@ export function springDocument(c: Candidate, req: Requirements): Record<string, 
     surge_margin: req.safety.surge,
   };
   const ch = c.item.choice;
-  if (ch.shearModulus !== undefined || ch.elasticModulus !== undefined || ch.density !== undefined || ch.tensileStrength !== undefined || ch.allowableStress !== undefined) {
-    doc.material = Object.fromEntries(Object.entries({ like: ch.material.id, shear_modulus: ch.shearModulus, elastic_modulus: ch.elasticModulus, density: ch.density, tensile_strength: ch.tensileStrength, allowable_stress: ch.allowableStress }).filter(([, v]) => v !== undefined));
+  // A requirement-level allowable_stress is the one the search judged by (figuresUnder).
+  const allowable = req.allowableStress ?? ch.allowableStress;
+  if (ch.shearModulus !== undefined || ch.elasticModulus !== undefined || ch.density !== undefined || ch.tensileStrength !== undefined || allowable !== undefined) {
+    doc.material = Object.fromEntries(Object.entries({ like: ch.material.id, shear_modulus: ch.shearModulus, elastic_modulus: ch.elasticModulus, density: ch.density, tensile_strength: ch.tensileStrength, allowable_stress: allowable }).filter(([, v]) => v !== undefined));
   }
   if (req.cycles !== undefined) doc.cycles = Number.isFinite(req.cycles) ? req.cycles : 'infinite';
   if (req.temperature !== undefined) doc.temperature = req.temperature;
