@@ -6,7 +6,7 @@ import { readInputFile } from '../input/document.js';
 import { blameOverride, ENVELOPE_SHORTHANDS, parseAssignment, parsePath, sweepValues, withValue } from '../input/overrides.js';
 import { RANK_KEYS, readRequirements, type Requirements } from '../input/requirements.js';
 import { STATIC_SERVICE_CYCLES } from '../model/fatigue.js';
-import { candidateRecord, countsRecord, designJson, designText, relaxSuggestions } from '../report/designReport.js';
+import { candidateRecord, countsRecord, designJson, designText, limitingText } from '../report/designReport.js';
 import { toJson, SI_UNITS } from '../report/json.js';
 import { writeOutputFile } from '../report/writeFile.js';
 import { cautionText } from '../report/cautions.js';
@@ -84,9 +84,14 @@ function tracedOverrides(file: string, opts: CommonOptions): { doc: unknown; ove
 
 /** The requirements of a command: the file with its overrides, validated; a bad override is blamed on its option. */
 function requirementsOf(file: string, opts: CommonOptions): Requirements {
+  return requirementsAndDocument(file, opts).req;
+}
+
+/** The requirements and the document they were read from (the relax advice changes it by path). */
+function requirementsAndDocument(file: string, opts: CommonOptions): { req: Requirements; doc: unknown } {
   const { doc, overrides } = tracedOverrides(file, opts);
   try {
-    return readRequirements(doc, loadCatalog());
+    return { req: readRequirements(doc, loadCatalog()), doc };
   } catch (e) {
     throw blameOverride(e, overrides);
   }
@@ -113,9 +118,9 @@ function progress(io: Io, label: string): ((done: number, total: number) => void
 
 async function designCommand(file: string, opts: CommonOptions, io: Io): Promise<number> {
   checkOutputPaths([{ option: '--report', path: opts.report }], !!opts.force, [file]);
-  const req = requirementsOf(file, opts);
+  const { req, doc } = requirementsAndDocument(file, opts);
   requirementNotes(req, io);
-  const run = runDesign(req, { strategy: opts.strategy, onProgress: progress(io, 'searching') });
+  const run = runDesign(req, { strategy: opts.strategy, onProgress: progress(io, 'searching'), document: doc });
   const system = opts.units ?? req.system;
   if (opts.report) {
     (await htmlReport()).writeDesignReport(opts.report, run, system, !!opts.force);
@@ -214,9 +219,7 @@ export function runSweep(file: string, opts: CommonOptions, vary: string, io: Io
     const run = runDesign(req, { strategy: opts.strategy });
     let limiting: string | null = null;
     if (!run.candidates.length) {
-      const s = relaxSuggestions(run, opts.units ?? req.system)[0];
-      const worst = Object.entries(run.result.cutBy).sort((a, b) => b[1] - a[1])[0];
-      limiting = s ? `${s.check}: ${s.message}` : worst ? `${worst[0]} cut most combinations` : 'no wire stock fits';
+      limiting = limitingText(run);
     }
     rows.push({ value, run, best: run.candidates[0] ?? null, limiting });
     if (io?.interactive) io.stderr(`\rsweep ${i + 1}/${values.length}`);

@@ -3,6 +3,7 @@
 import type { Requirements } from '../input/requirements.js';
 import { CHECK_LABELS, CHECKS, type CheckName } from '../spring/checks.js';
 import { candidateAt, reportedChecks, type Candidate, type DesignRun } from '../spring/design.js';
+import { limitingCheck, outward, relaxAdvice, type RelaxAdvice, type RelaxChange } from '../spring/relax.js';
 import { formatQuantity, inUnit, quantityWriter, sig, unitSymbol } from '../units/format.js';
 import { rulesOfThumb } from '../model/analysis.js';
 import type { Kind } from '../units/kinds.js';
@@ -94,47 +95,100 @@ export function designJson(run: DesignRun, showTiming = false): Record<string, u
   };
 }
 
-/** A suggestion per check that was, somewhere, the only failing check. */
-export function relaxSuggestions(run: DesignRun, system: UnitSystem): { check: CheckName; message: string; amount: number }[] {
-  const req = run.req;
-  const L = (v: number) => formatQuantity(v, 'length', system);
-  const out: { check: CheckName; message: string; amount: number }[] = [];
-  for (const name of reportedChecks(req) as CheckName[]) {
-    const g = run.result.soleViolation[name];
-    if (!Number.isFinite(g)) continue;
-    const pct = `${sig(g * 100, 3)}%`;
-    let message: string;
-    switch (name) {
-      case 'outer_diameter': message = `raise envelope.max_outer_diameter from ${L(req.maxOuterDiameter!)} to ${L(req.maxOuterDiameter! * (1 + g))}`; break;
-      case 'outer_diameter_at_solid': message = `raise envelope.max_outer_diameter from ${L(req.maxOuterDiameter!)} to ${L(req.maxOuterDiameter! * (1 + g))} (the coils grow when closed)`; break;
-      case 'inner_diameter': message = `lower envelope.min_inner_diameter from ${L(req.minInnerDiameter!)} to ${L(req.minInnerDiameter! * (1 - g))}`; break;
-      case 'free_length': message = `raise envelope.max_free_length from ${L(req.maxFreeLength!)} to ${L(req.maxFreeLength! * (1 + g))}`; break;
-      case 'solid_length': message = `raise envelope.max_solid_length from ${L(req.maxSolidLength!)} to ${L(req.maxSolidLength! * (1 + g))}`; break;
-      case 'index_min': message = `lower index[0] from ${req.index[0]} to ${sig(req.index[0] * (1 - g), 3)}`; break;
-      case 'index_max': message = `raise index[1] from ${req.index[1]} to ${sig(req.index[1] * (1 + g), 3)}`; break;
-      case 'static_stress': message = req.allowableStress !== undefined
-        ? `raise allowable_stress by ${pct} or choose a stronger material`
-        : `lower safety.static from ${req.safety.static} to ${sig(req.safety.static / (1 + g), 3)} or choose a stronger material`; break;
-      case 'fatigue': message = `lower safety.fatigue from ${req.safety.fatigue} to ${sig(req.safety.fatigue * (1 - g), 3)}, shot-peen (peened: true), or choose a material with better fatigue strength`; break;
-      case 'clash': message = `give the spring ${L(g * (req.operatingLength ?? req.workingLength))} more room at the shortest length (a longer operating length or a smaller clash_allowance)`; break;
-      case 'operating_force_min':
-      case 'operating_force_max': message = `widen load_tolerance to at least ${sig((req.loadTolerance + g) * 100, 3)}%`; break;
-      case 'temperature': message = 'choose a material rated for the service temperature'; break;
-      default: message = `relax the ${name.replace(/_/g, ' ')} limit by ${pct}`;
-    }
-    out.push({ check: name, message, amount: g });
+// The advice is worked out once per run (it re-runs the design a few dozen times) and shared by the
+// text, the JSON and the HTML report of that run.
+const adviceCache = new WeakMap<DesignRun, RelaxAdvice>();
+
+export function adviceFor(run: DesignRun): RelaxAdvice {
+  let a = adviceCache.get(run);
+  if (!a) {
+    a = relaxAdvice(run);
+    adviceCache.set(run, a);
   }
-  return out.sort((a, b) => a.amount - b.amount);
+  return a;
+}
+
+const UNIT_KIND: Record<string, Kind> = {
+  'envelope.max_outer_diameter': 'length', 'envelope.min_inner_diameter': 'length', 'envelope.max_free_length': 'length',
+  'envelope.max_solid_length': 'length', operating_length: 'length', operating_force: 'force',
+};
+
+const pct = (r: number) => `${sig(r * 100, 3)}%`;
+
+/** One change in words, in the user's units, with the exact `--set` that applies it. */
+export function describeChange(c: RelaxChange, system: UnitSystem): string {
+  const kind = UNIT_KIND[c.path];
+  const arg = /[\s{}[\]]/.test(c.set) ? `"${c.set}"` : c.set;
+  const tail = ` [--set ${arg}]`;
+  if (typeof c.to === 'number' && typeof c.from === 'number') {
+    const up = c.to > c.from;
+    const fraction = c.path === 'load_tolerance' || c.path === 'clash_allowance';
+    const show = (v: number) => (kind ? formatQuantity(v, kind, system) : fraction ? pct(v) : c.path === 'cycles' ? String(Number(v.toPrecision(4))) : sig(v, 4));
+    // The new value is shown rounded in the relaxing direction, so the figure read off the screen
+    // admits a spring too (the --set value is exact).
+    const showTo = (v: number) => (kind ? `${sig(outward(inUnit(v, kind, system), up ? 1 : -1, 4), 4)} ${unitSymbol(kind, system)}` : fraction ? `${sig(outward(v * 100, up ? 1 : -1, 4), 4)}%` : c.path === 'cycles' ? String(v) : sig(v, 6));
+    const notes = [...(fraction ? [] : [`${up ? '+' : '-'}${pct(c.relative ?? 0)}`]), ...(c.path === 'operating_length' ? ['a shorter stroke'] : c.path === 'cycles' ? ['a shorter service life'] : [])];
+    return `${up ? 'raise' : 'lower'} ${c.path} from ${show(c.from)} to ${showTo(c.to)}${notes.length ? ` (${notes.join(', ')})` : ''}${tail}`;
+  }
+  if (c.path === 'cycles' && typeof c.to === 'number') return `lower cycles from infinite life to ${c.to} (a finite service life)${tail}`;
+  if ((c.path === 'index' || c.path === 'active_coils') && Array.isArray(c.to) && Array.isArray(c.from)) {
+    const i = c.to[0] !== c.from[0] ? 0 : 1;
+    const [a, b] = [Number(c.from[i]), Number(c.to[i])];
+    return `${b > a ? 'raise' : 'lower'} ${c.path}[${i}] from ${sig(a, 4)} to ${sig(b, 4)} (${b > a ? '+' : '-'}${pct(c.relative ?? 0)})${tail}`;
+  }
+  switch (c.path) {
+    case 'guided': return `guide the spring on a rod or in a bore so it cannot buckle (guided: true)${tail}`;
+    case 'seating': return `seat the ends ${String(c.to)} instead of ${String(c.from)} (more stable against buckling)${tail}`;
+    case 'ends': return `allow other end types too (ends: ${(c.to as string[]).join(', ')})${tail}`;
+    case 'peened': return `shot-peen the spring (peened: true)${tail}`;
+    case 'material': return typeof c.to === 'string' ? `use ${c.to} instead${tail}` : `use a material of the ${(c.to as { family: string }).family} family${tail}`;
+    case 'solid_safe': return `accept a spring that takes a set when closed solid (solid_safe: false)${tail}`;
+    case 'coil_gap_rule': return `drop the EN 13906-1 coil-gap rule (coil_gap_rule: false)${tail}`;
+    default: return `set ${c.path} to ${JSON.stringify(c.to)}${tail}`;
+  }
+}
+
+/** The advice as lines of text: what works alone, else the best pair and the last resort. */
+export function relaxLines(run: DesignRun, system: UnitSystem): string[] {
+  const a = adviceFor(run);
+  const out: string[] = [];
+  const alone = a.single.filter((c) => c.group !== 'margin');
+  const margins = a.single.filter((c) => c.group === 'margin');
+  if (alone.length) {
+    out.push('What to relax (each change alone admits a spring; each was tried by running the design again), smallest change first:');
+    for (const c of alone) out.push(`  - ${describeChange(c, system)}`);
+    return out;
+  }
+  out.push('No single change of a limit or setting admits a spring.');
+  if (a.pair) {
+    out.push('These two changes together admit one (tried):');
+    for (const c of a.pair) out.push(`  - ${describeChange(c, system)}`);
+  } else out.push(`No pair of changes tried (${a.runs} runs) admits one either: reconsider the loads, the stroke or the space.`);
+  if (margins.length) {
+    out.push('As a last resort, a smaller margin (never a safety factor below 1; confirm with tests):');
+    for (const c of margins) out.push(`  - ${describeChange(c, system)}`);
+  }
+  return out;
 }
 
 function infeasibleRecord(run: DesignRun): Record<string, unknown> {
+  const a = adviceFor(run);
+  const entry = (c: RelaxChange) => ({ path: c.path, from: c.from, to: c.to, set: c.set, relative_change: c.relative, group: c.group, eases: c.eases, suggestion: describeChange(c, 'si') });
   return {
     nearest_misses: run.result.nearestMisses.map((m) => {
       const c = candidateAt(run.problem, m.x, m.f);
       return { ...candidateRecord(c), violation: m.violation, failing_checks: failing(c) };
     }),
-    relax: relaxSuggestions(run, 'si').map((s) => ({ check: s.check, by: s.amount, suggestion: s.message })),
+    relax: a.single.map(entry),
+    relax_pair: a.pair ? a.pair.map(entry) : null,
+    relax_runs: a.runs,
   };
+}
+
+/** The check that limits an infeasible run, in a few words (for sweeps: no extra runs). */
+export function limitingText(run: DesignRun): string {
+  const c = limitingCheck(run);
+  return c ? `${c}: ${CHECK_LABELS[c]}` : 'no wire stock fits';
 }
 
 function failing(c: Candidate): Record<string, number> {
@@ -233,14 +287,8 @@ export function infeasibleText(run: DesignRun, system: UnitSystem): string {
       out.push(`  #${i + 1} fails: ${f}`);
     });
   }
-  const sugg = relaxSuggestions(run, system);
   out.push('');
-  if (sugg.length) {
-    out.push('What to relax (each alone admits at least one spring that was evaluated):');
-    for (const s of sugg) out.push(`  - ${s.message}`);
-  } else {
-    out.push('No single limit, relaxed alone, admits a spring: several checks fail together. Consider another material, a wider coil range, or a larger envelope.');
-  }
+  out.push(...relaxLines(run, system));
   return out.join('\n');
 }
 

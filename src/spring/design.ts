@@ -22,6 +22,11 @@ export interface DesignOptions {
   onProgress?: (done: number, total: number) => void;
   /** The problem, when the caller has built it already. */
   problem?: SpringProblem;
+  /** The requirements document req was read from (overrides applied): the advice of an infeasible
+   * run changes it by path, as `--set` does. */
+  document?: unknown;
+  /** Skip the LP bound (a feasibility probe needs no bound). */
+  skipBound?: boolean;
 }
 
 export interface Candidate {
@@ -42,6 +47,7 @@ export interface DesignRun {
   gap: number | null;
   cells: number;
   searchMs: number;
+  document?: unknown;
 }
 
 /** Grid cells of the problem: stock x end types x coil counts. */
@@ -79,10 +85,19 @@ export function runDesign(req: Requirements, opts: DesignOptions = {}): DesignRu
   const searchMs = performance.now() - t0;
   const candidates = result.best.map((b) => candidateAt(problem, b.x, b.f));
   candidates.forEach(assertVerified);
-  const lp = lpLowerBound(problem);
+  const lp: LpBound = opts.skipBound ? { value: null, status: 'not-applicable', models: 0 } : lpLowerBound(problem);
   const bestValue = candidates.length ? (req.rank === 'mass' ? candidates[0].objectives[OBJ.mass] : candidates[0].objectives[OBJ.wire_volume]) : NaN;
   const gap = lp.value !== null && Number.isFinite(bestValue) ? (bestValue - lp.value) / bestValue : null;
-  return { req, problem, result, candidates, lp, gap, cells, searchMs };
+  return { req, problem, result, candidates, lp, gap, cells, searchMs, document: opts.document };
+}
+
+/** Budget of a genetic feasibility probe, in evaluations (the grid needs none). */
+export const PROBE_EVALUATIONS = 100_000;
+
+/** Whether any spring meets these requirements: one design run kept to the essentials (top 1, no
+ * bound). The grid's answer does not depend on top. */
+export function admitsSpring(req: Requirements): boolean {
+  return runDesign({ ...req, top: 1 }, { skipBound: true, maxEvaluations: PROBE_EVALUATIONS }).candidates.length > 0;
 }
 
 function emptyResult(): SearchResult {

@@ -9,7 +9,7 @@ import { readSpringCase } from '../../src/input/springFile.js';
 import { analyzeSpring } from '../../src/model/analysis.js';
 import { runDesign } from '../../src/spring/design.js';
 import { springDocument } from '../../src/spring/springDoc.js';
-import { cli, inputFile } from '../helpers.js';
+import { cli } from '../helpers.js';
 
 const KPSI = 6.894757293168;
 const allowable = 90 * KPSI;
@@ -77,16 +77,8 @@ describe('a requirement-level allowable_stress', () => {
   it('the search and the printed factor agree at the edge: the best spring sits at the allowable', () => {
     // With a lighter spring always more stressed, the lightest feasible spring runs close to its limit.
     const catalog = loadCatalog();
-    const req = readRequirements({ ...(readInputFile(inputFile(`units: si
-material: stainless-302
-load: { force: 20, length: 35 }
-operating_length: 25
-operating_force: 32
-load_tolerance: 5%
-envelope: { max_outer_diameter: 16, min_inner_diameter: 6.5, max_free_length: 60 }
-allowable_stress: 90 kpsi
-top: 1
-`)) as Record<string, unknown>) }, catalog);
+    const doc = { ...(readInputFile(demo) as Record<string, unknown>), allowable_stress: '90 kpsi', top: 1 };
+    const req = readRequirements(doc, catalog);
     const best = runDesign(req).candidates[0];
     expect(best.analysis.staticSafetyFactor).toBeGreaterThanOrEqual(1 - 1e-9);
     expect(best.analysis.staticSafetyFactor).toBeLessThan(1.1);

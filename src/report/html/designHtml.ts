@@ -12,7 +12,7 @@ import type { UnitSystem } from '../../units/systems.js';
 import { writeOutputFile } from '../writeFile.js';
 import { CONVENTIONS, figure, htmlTable, page } from './page.js';
 import { cloudPlot, fatiguePlot, forceLengthPlot, sideView, sweepPlot } from './plots.js';
-import { candidateGrid, relaxSuggestions } from '../designReport.js';
+import { candidateGrid, relaxLines } from '../designReport.js';
 import { surgeEndsLabel } from '../../model/surge.js';
 import { esc } from './svg.js';
 
@@ -93,7 +93,8 @@ export function designHtml(run: DesignRun, system: UnitSystem, frontier?: Fronti
   const best = run.candidates[0];
   if (!best) {
     sections.push('<h2>No feasible spring</h2>');
-    sections.push(`<ul>${relaxSuggestions(run, system).map((s) => `<li>${esc(s.message)}</li>`).join('') || '<li>no single limit, relaxed alone, admits a spring</li>'}</ul>`);
+    const lines = relaxLines(run, system);
+    sections.push(lines.map((l) => (l.startsWith('  - ') ? `<ul><li>${esc(l.slice(4))}</li></ul>` : `<p>${esc(l)}</p>`)).join('\n'));
   } else {
     const fr = frontier ?? computeFrontier(req, 'mass', 'outer_diameter', undefined, 'auto', run.problem);
     const kx = FRONTIER_KEYS[fr.x];
