@@ -72,7 +72,7 @@ export function stockJson(run: StockRun): Record<string, unknown> {
     near_misses: run.misses.map(rowRecord),
     failed_by: run.failedBy,
     rate_deviation_limit: run.rateDeviationLimit,
-    rate_notes: rateNotes(run).map((r) => ({ line: r.row.line, part_number: r.row.partNumber, table_rate: r.row.tableRate, rate: r.verdict.analysis.rate, deviation: r.rateDeviation })),
+    rate_notes: rateNotes(run).map((r) => ({ line: r.row.line, part_number: r.row.partNumber, table_rate: r.row.tableRate, rate: r.rate, deviation: r.rateDeviation })),
     bad_rows: run.bad.map((b) => ({ line: b.line, part_number: b.partNumber, field: b.field, message: b.message })),
     compare: compareRecord(run),
     notes: [STOCK_NOTE],
@@ -172,7 +172,7 @@ export function stockText(run: StockRun, system: UnitSystem, tableLabel: string)
     out.push(`The table's rate differs from coilfront's k = G d^4 / (8 D^3 Na) by more than ${sig(run.rateDeviationLimit * 100, 3)}% on ${rates.length} row${rates.length === 1 ? '' : 's'} (a catalogue rate is a nominal with its own tolerance; the checks use coilfront's):`);
     const u = unitSymbol('rate', system);
     out.push(table([['line', 'part', `table k ${u}`, `coilfront k ${u}`, 'difference'],
-      ...rates.slice(0, 20).map((r) => [String(r.row.line), r.row.partNumber, num(r.row.tableRate!, 'rate', system), num(r.verdict.analysis.rate, 'rate', system), `${r.rateDeviation! >= 0 ? '+' : ''}${sig(r.rateDeviation! * 100, 3)}%`])]));
+      ...rates.slice(0, 20).map((r) => [String(r.row.line), r.row.partNumber, num(r.row.tableRate!, 'rate', system), num(r.rate, 'rate', system), `${r.rateDeviation! >= 0 ? '+' : ''}${sig(r.rateDeviation! * 100, 3)}%`])]));
     if (rates.length > 20) out.push(`  ... and ${rates.length - 20} more (all in --json and the CSV)`);
   }
   if (run.compare) {
@@ -202,7 +202,7 @@ export function stockCsv(run: StockRun, system: UnitSystem): string {
     `inner_diameter_${s('length')}`, 'active_coils', 'total_coils', `free_length_${s('length')}`, `solid_length_${s('length')}`, `rate_${s('rate')}`, `table_rate_${s('rate')}`,
     `working_force_${s('force')}`, `operating_force_${s('force')}`, `max_stress_${s('stress')}`, 'static_safety_factor', 'fatigue_safety_factor', `mass_${s('mass')}`, 'price',
     'limiting_check', 'smallest_margin', 'failing_checks'];
-  const failing = run.results.filter((r) => !r.verdict.pass).sort((a, b) => a.verdict.violation - b.verdict.violation || a.row.line - b.row.line);
+  const failing = run.results.filter((r) => !r.pass).sort((a, b) => a.violation - b.violation || a.row.line - b.row.line);
   const L = (v: number) => Number(sig(inUnit(v, 'length', system), 6));
   const rows = [...run.passing, ...failing].map((r, i) => {
     const a = r.verdict.analysis;

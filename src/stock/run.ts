@@ -41,15 +41,45 @@ export interface StockOptions {
   label?: string;
 }
 
-export interface RowResult {
-  row: StockRow;
-  verdict: Verdict;
-  /** The row's own notes: figures outside a sourced range, the table's figures beside coilfront's. */
-  notes: string[];
+/** One checked row. A table may hold many thousands: each keeps the few numbers that rank and count it,
+ * and its full verdict is judged again when first read (for the rows shown, or every row of the CSV). */
+export class RowResult {
+  readonly pass: boolean;
+  readonly failingNames: readonly string[];
+  readonly violation: number;
+  /** The row's value of the ranking objective (lower is better). */
+  readonly rankValue: number;
+  /** coilfront's rate, N/mm. */
+  readonly rate: number;
   /** (table rate - coilfront's rate) / coilfront's rate, when the table gives a rate. */
-  rateDeviation: number | null;
-  /** The maker's stated limits (max deflection, max load) the requirement goes beyond. */
-  beyondMakerLimits: string[];
+  readonly rateDeviation: number | null;
+  /** The maker's stated limits (max deflection, max load) the requirement's stroke goes beyond. */
+  readonly beyondMakerLimits: string[];
+  private judged: Verdict | null = null;
+
+  constructor(readonly row: StockRow, private readonly spring: GivenSpring, private readonly j: Judge, v: Verdict, rank: StockRankKey,
+    /** The row's own notes: figures outside a sourced range, the table's figures beside coilfront's. */
+    readonly notes: string[], rateLimit: number) {
+    const a = v.analysis;
+    this.pass = v.pass;
+    this.failingNames = v.failingNames;
+    this.violation = v.violation;
+    this.rankValue = rankValue(v, row, rank);
+    this.rate = a.rate;
+    this.rateDeviation = row.tableRate !== undefined ? (row.tableRate - a.rate) / a.rate : null;
+    if (this.rateDeviation !== null && Math.abs(this.rateDeviation) > rateLimit) notes.push(`the table's rate differs from coilfront's by ${(this.rateDeviation * 100).toFixed(1)}% (more than ${(rateLimit * 100).toFixed(0)}%)`);
+    if (row.tableSolidLength !== undefined && row.tableSolidLength > a.geometry.solidLength * (1 + SOLID_LENGTH_DEVIATION)) {
+      notes.push(`the table's solid length is ${((row.tableSolidLength / a.geometry.solidLength - 1) * 100).toFixed(1)}% above coilfront's: the clash check used coilfront's`);
+    }
+    this.beyondMakerLimits = [];
+    if (row.maxDeflection !== undefined && a.geometry.freeLength - shortestLength(j.req) > row.maxDeflection) this.beyondMakerLimits.push('max_deflection');
+    if (row.maxLoad !== undefined && a.points.reduce((m, p) => Math.max(m, p.force), 0) > row.maxLoad) this.beyondMakerLimits.push('max_load');
+  }
+
+  get verdict(): Verdict {
+    this.judged ??= judge(this.spring, this.j);
+    return this.judged;
+  }
 }
 
 export interface Comparison { run: DesignRun; custom: Candidate | null; verdict: Verdict | null }
@@ -70,15 +100,15 @@ export interface StockRun {
   compare: Comparison | null;
 }
 
-export function rankValue(r: RowResult, key: StockRankKey): number {
-  const a = r.verdict.analysis;
+export function rankValue(v: Verdict, row: StockRow, key: StockRankKey): number {
+  const a = v.analysis;
   switch (key) {
     case 'mass': return a.geometry.mass;
     case 'wire_volume': return a.geometry.wireVolume;
     case 'outer_diameter': return a.geometry.outerDiameter;
     case 'free_length': return a.geometry.freeLength;
     case 'safety_factor': return -Math.min(a.staticSafetyFactor, a.fatigue && Number.isFinite(a.fatigue.safetyFactor) ? a.fatigue.safetyFactor : Infinity);
-    case 'price': return r.row.price ?? Infinity;
+    case 'price': return row.price ?? Infinity;
   }
 }
 
@@ -108,24 +138,9 @@ function rowSpring(row: StockRow, catalog: Catalog, cache: FiguresCache): { spri
   return { spring, notes: entry.note ? [entry.note] : [] };
 }
 
-function rowResult(row: StockRow, catalog: Catalog, j: Judge, rateLimit: number, cache: FiguresCache): RowResult {
+function rowResult(row: StockRow, catalog: Catalog, j: Judge, rank: StockRankKey, rateLimit: number, cache: FiguresCache): RowResult {
   const { spring, notes } = rowSpring(row, catalog, cache);
-  const verdict = judge(spring, j);
-  const a = verdict.analysis;
-  let rateDeviation: number | null = null;
-  if (row.tableRate !== undefined) {
-    rateDeviation = (row.tableRate - a.rate) / a.rate;
-    if (Math.abs(rateDeviation) > rateLimit) notes.push(`the table's rate differs from coilfront's by ${(rateDeviation * 100).toFixed(1)}% (more than ${(rateLimit * 100).toFixed(0)}%)`);
-  }
-  if (row.tableSolidLength !== undefined && row.tableSolidLength > a.geometry.solidLength * (1 + SOLID_LENGTH_DEVIATION)) {
-    notes.push(`the table's solid length is ${((row.tableSolidLength / a.geometry.solidLength - 1) * 100).toFixed(1)}% above coilfront's: the clash check used coilfront's`);
-  }
-  const beyond: string[] = [];
-  const deflection = a.geometry.freeLength - shortestLength(j.req);
-  if (row.maxDeflection !== undefined && deflection > row.maxDeflection) beyond.push('max_deflection');
-  const maxForce = a.points.reduce((m, p) => Math.max(m, p.force), 0);
-  if (row.maxLoad !== undefined && maxForce > row.maxLoad) beyond.push('max_load');
-  return { row, verdict, notes, rateDeviation, beyondMakerLimits: beyond };
+  return new RowResult(row, spring, j, judge(spring, j), rank, notes, rateLimit);
 }
 
 export function givenCustom(c: Candidate, req: Requirements): GivenSpring {
@@ -142,9 +157,10 @@ export function runStock(rawRequirements: unknown, input: string | Record<string
   const bad = [...table.bad];
   const results: RowResult[] = [];
   const cache: FiguresCache = new Map();
+  const rank = o.rank ?? req.rank;
   for (const row of table.rows) {
     try {
-      results.push(rowResult(row, catalog, j, rateLimit, cache));
+      results.push(rowResult(row, catalog, j, rank, rateLimit, cache));
     } catch (e) {
       if (!(e instanceof RowError)) throw e;
       bad.push({ line: row.line, partNumber: row.partNumber, field: e.field, message: `expected ${e.message}` });
@@ -155,12 +171,10 @@ export function runStock(rawRequirements: unknown, input: string | Record<string
     const first = bad.slice(0, 3).map((b) => `line ${b.line}, ${b.field}: ${b.message}`).join('; ');
     throw new InputError(label, `at least one usable row; all ${bad.length} data rows are bad (${first}${bad.length > 3 ? '; ...' : ''})`);
   }
-  const rank = o.rank ?? req.rank;
-  const order = (a: RowResult, b: RowResult) => rankValue(a, rank) - rankValue(b, rank) || a.row.line - b.row.line;
-  const passing = results.filter((r) => r.verdict.pass).sort(order);
-  const misses = results.filter((r) => !r.verdict.pass).sort((a, b) => a.verdict.violation - b.verdict.violation || a.row.line - b.row.line).slice(0, o.misses ?? 5);
+  const passing = results.filter((r) => r.pass).sort((a, b) => a.rankValue - b.rankValue || a.row.line - b.row.line);
+  const misses = results.filter((r) => !r.pass).sort((a, b) => a.violation - b.violation || a.row.line - b.row.line).slice(0, o.misses ?? 5);
   const failedBy: Record<string, number> = {};
-  for (const r of results) for (const name of r.verdict.failingNames) failedBy[name] = (failedBy[name] ?? 0) + 1;
+  for (const r of results) for (const name of r.failingNames) failedBy[name] = (failedBy[name] ?? 0) + 1;
   let compare: Comparison | null = null;
   if (o.compare) {
     const run = runDesign(req, { strategy: o.strategy });

@@ -45,9 +45,10 @@ export interface StockTable {
 
 export interface TableOptions { system: UnitSystem; materialMap: MaterialMap; catalog: Catalog; label: string }
 
-/** A row's mistake: the column (as the table names it) and what was expected. */
-export class RowError extends Error {
-  constructor(readonly field: string, message: string) { super(message); }
+/** A row's mistake: the column (as the table names it) and what was expected. Not an Error: a table
+ * may hold thousands of bad rows, and a stack trace per row is wasted work. */
+export class RowError {
+  constructor(readonly field: string, readonly message: string) {}
 }
 
 // End types as stock tables write them: the trade's words for the four kinds (closed = squared).
