@@ -5,7 +5,9 @@ import { readFileSync } from 'node:fs';
 import { parse } from 'yaml';
 import { describe, expect, it } from 'vitest';
 import { loadCatalog } from '../../../src/catalogs/load.js';
-import { EXTENSION_CHECKS } from '../../../src/kinds/extension/checks.js';
+import { analyzeExtension } from '../../../src/kinds/extension/analysis.js';
+import { EXTENSION_CHECKS, checkExtension } from '../../../src/kinds/extension/checks.js';
+import { readExtensionSpring } from '../../../src/kinds/extension/springFile.js';
 import { assertExtensionVerified, designExtension, extensionCandidateAt } from '../../../src/kinds/extension/design.js';
 import { XO, buildExtensionProblem } from '../../../src/kinds/extension/problem.js';
 import { readExtensionRequirements } from '../../../src/kinds/extension/requirements.js';
@@ -48,6 +50,15 @@ describe('extension design', () => {
         expect(relClose(c.analysis.geometry.freeLength, c.objectives[XO.free_length], 1e-9)).toBe(true);
         // The working force is met exactly through the initial tension.
         expect(relClose(c.analysis.points[0].force, run.req.workingForce, 1e-9)).toBe(true);
+        // And the spring written as a spring file reads back into the same analysis (the analyze path).
+        const g = c.geometry;
+        const file = readExtensionSpring({
+          kind: 'extension', material: doc.material, wire_diameter: g.wireDiameter, mean_diameter: g.meanDiameter, body_coils: g.bodyCoils,
+          initial_tension: g.initialTension, loop: g.loop.id, loop_radius: g.loopRadius, bend_radius: g.bendRadius,
+          lengths: run.problem.service().lengths, ...(doc.cycles !== undefined ? { cycles: doc.cycles } : {}),
+        }, catalog);
+        const again = checkExtension(analyzeExtension(file.geometry, file.material, file.service), run.req);
+        again.forEach((v, j) => expect(Math.abs(v - c.checks[j])).toBeLessThan(1e-9));
         found++;
       }
     }), { numRuns: 25, seed: 11 });
@@ -102,6 +113,19 @@ describe('extension design', () => {
     expect(grid.analysis.geometry.mass).toBeGreaterThanOrEqual(best * (1 - 1e-4));
     expect(grid.geometry.bodyCoils).toBe(bestX![1]);
     expect(grid.item.wireDiameter).toBe(p.stock[bestX![0]].wireDiameter);
+  });
+
+  it('finds the same spring from US input as from SI input (units at the edge)', () => {
+    const si = { kind: 'extension', units: 'si', material: 'stainless-302', wire_sizes: WIRES, load: { force: 15, length: 50 }, operating_length: 62, operating_force: 30, load_tolerance: 0.1, envelope: { max_outer_diameter: 12, max_free_length: 48 }, cycles: 1e6, top: 1 };
+    const mm = (v: number) => v / 25.4;
+    const lbf = (v: number) => v / 4.4482216152605;
+    const us = { ...si, units: 'us', wire_sizes: WIRES.map((d) => `${d} mm`), load: { force: lbf(15), length: mm(50) }, operating_length: mm(62), operating_force: lbf(30), envelope: { max_outer_diameter: mm(12), max_free_length: mm(48) } };
+    const a = designExtension(requirements(si), catalog).candidates[0];
+    const b = designExtension(requirements(us), catalog).candidates[0];
+    expect(a).toBeDefined();
+    expect(b.item.wireDiameter).toBe(a.item.wireDiameter);
+    expect(b.geometry.bodyCoils).toBe(a.geometry.bodyCoils);
+    expect(relClose(b.analysis.geometry.mass, a.analysis.geometry.mass, 1e-9)).toBe(true);
   });
 
   it('runs the demo requirement: a spring whose loops govern', () => {
