@@ -13,7 +13,8 @@ import { requirementsRecord } from '../../src/report/designReport.js';
 import { admitsSpring, runDesign } from '../../src/spring/design.js';
 import { RELAX_LIMITS, limitingCheck, outward, relaxAdvice } from '../../src/spring/relax.js';
 import { requirementsDocument } from '../../src/spring/requirementsDoc.js';
-import { cli, inputFile } from '../helpers.js';
+import { readFileSync } from 'node:fs';
+import { cli, inputFile, tempPath } from '../helpers.js';
 
 interface Entry { path: string; from: unknown; to: unknown; set: string; relative_change: number | null; group: string; eases: string[]; suggestion: string }
 
@@ -149,6 +150,18 @@ describe('relax advice', () => {
     expect(text).toMatch(/These two changes together admit one/);
     const advice = text.slice(text.indexOf('No single change'));
     expect(advice).not.toMatch(/safety\.static/);
+  });
+
+  it('the HTML report gives the same advice as the text, the pair as one list', async () => {
+    const html = tempPath('clamp.html');
+    const r = await cli('design', clamp, '--report', html);
+    expect(r.code).toBe(1);
+    const page = readFileSync(html, 'utf8');
+    expect(page).toMatch(/<p>No single change of a limit or setting admits a spring.<\/p>/);
+    const list = /<ul>(<li>[\s\S]*?)<\/ul>/.exec(page.slice(page.indexOf('No single change')))![1];
+    expect(list.match(/<li>/g)).toHaveLength(2);
+    const inf = await infeasible([clamp]);
+    for (const e of inf.relax_pair!) expect(list).toContain(`--set ${e.set}`);
   });
 
   it('lists limits by relative change, smallest first, then settings, then margins', async () => {

@@ -94,7 +94,9 @@ export function designHtml(run: DesignRun, system: UnitSystem, frontier?: Fronti
   if (!best) {
     sections.push('<h2>No feasible spring</h2>');
     const lines = relaxLines(run, system);
-    sections.push(lines.map((l) => (l.startsWith('  - ') ? `<ul><li>${esc(l.slice(4))}</li></ul>` : `<p>${esc(l)}</p>`)).join('\n'));
+    // Paragraphs for the headings, one list per run of items.
+    sections.push(lines.map((l) => (l.startsWith('  - ') ? `<li>${esc(l.slice(4))}</li>` : `<p>${esc(l)}</p>`)).join('\n')
+      .replace(/(<li>[\s\S]*?<\/li>)(?=\n<p>|$)/g, '<ul>$1</ul>'));
   } else {
     const fr = frontier ?? computeFrontier(req, 'mass', 'outer_diameter', undefined, 'auto', run.problem);
     const kx = FRONTIER_KEYS[fr.x];
