@@ -14,7 +14,7 @@ import { shearStress } from '../model/stress.js';
 import { stressFactor, type StressCorrection } from '../model/stressFactor.js';
 import { ultimateShearStrength } from '../model/strength.js';
 import { activeCoilMass, surgeFrequency } from '../model/surge.js';
-import { CHECK, CHECKS, activeChecks, shortestLength, staticLimit } from '../spring/checks.js';
+import { CHECK, CHECKS, activeChecks, forceBand, shortestLength, staticLimit } from '../spring/checks.js';
 import { Q } from './model.js';
 
 /** Everything about one stock item, end type and requirement set that a made spring does not change. */
@@ -61,7 +61,7 @@ export function madeSpringContext(req: Requirements, figures: MaterialFigures, e
     shortest: shortestLength(req),
     travel: req.workingLength - shortestLength(req),
     operatingForce: req.operatingForce ?? 0,
-    loadTolerance: req.loadTolerance,
+    loadTolerance: forceBand(req),
     correction: req.correction,
     directShear: req.directShear,
     staticFactor: factor, limit, ultimateShear,
