@@ -127,9 +127,11 @@ describe('the Monte Carlo', () => {
 });
 
 describe('the in-search estimate against the Monte Carlo over random specs', () => {
-  // Measured when written (150 uniform specs, 4000 samples each): mean |estimate - Monte Carlo| 0.0081, worst 0.046;
-  // the product of single-check probabilities (checks taken as independent) was off by 0.052 on average.
-  it('agrees within 0.02 on average and 0.08 at worst over 150 specs whose yields span 0 to 1', () => {
+  // Measured when written (150 uniform specs, 4000 samples each, whose binomial standard error is up to
+  // 0.008): mean |estimate - Monte Carlo| 0.0057, worst 0.041 (the estimate low, where two checks are
+  // nearly the same one: the outer diameter free and at solid); the product of single-check probabilities
+  // (checks taken as independent) was off by 0.052 on average.
+  it('agrees within 0.012 on average and 0.06 at worst over 150 specs whose yields span 0 to 1', () => {
     const u = seedrandom('2026');
     const specs = Array.from({ length: 150 }, () => uniformSpec(u));
     const diffs: number[] = [];
@@ -150,8 +152,8 @@ describe('the in-search estimate against the Monte Carlo over random specs', () 
     console.info(`estimate vs Monte Carlo over ${specs.length} specs: mean |diff| ${mean(diffs).toFixed(4)}, worst ${Math.max(...diffs).toFixed(4)}; independent-checks product: mean ${mean(naive).toFixed(4)}`);
     expect(Math.min(...yields)).toBeLessThan(0.2);
     expect(Math.max(...yields)).toBeGreaterThan(0.95);
-    expect(mean(diffs)).toBeLessThan(0.02);
-    expect(Math.max(...diffs)).toBeLessThan(0.08);
+    expect(mean(diffs)).toBeLessThan(0.012);
+    expect(Math.max(...diffs)).toBeLessThan(0.06);
     expect(mean(diffs)).toBeLessThan(mean(naive));
   });
 });
