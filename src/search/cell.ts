@@ -54,6 +54,8 @@ export interface CellWorkspace {
    * `boundGrowsAlong` speaks of) or higher up, after bracketing. */
   pruneF: Float64Array;
   prunedAtLowest: boolean;
+  /** Set by the scan when an increasing check fails: nothing further up can pass. */
+  stop: boolean;
 }
 
 export function makeWorkspace(p: Problem, relativeTolerance = 1e-10): CellWorkspace {
@@ -71,7 +73,7 @@ export function makeWorkspace(p: Problem, relativeTolerance = 1e-10): CellWorksp
     missX: new Float64Array(p.variables.length), missG: new Float64Array(m), missF: new Float64Array(p.objectiveNames.length), missViolation: Infinity,
     incMask, decMask, relativeTolerance, maxScanPoints: Infinity, scanCoarsening: 1, worstInc: -Infinity, worstDec: -Infinity,
     lower: new Float64Array(m), boundedOut: 0, boundCalls: 0, narrowing: true,
-    badValue: NaN, badObjective: NaN, lastAtGood: false, lastTotal: NaN, pruneF: new Float64Array(p.objectiveNames.length), prunedAtLowest: false,
+    badValue: NaN, badObjective: NaN, lastAtGood: false, lastTotal: NaN, pruneF: new Float64Array(p.objectiveNames.length), prunedAtLowest: false, stop: false,
   };
 }
 
@@ -254,11 +256,13 @@ function firstFeasible(p: Problem, s: number, x: Float64Array, ws: CellWorkspace
     if (!checked && excluded(p, x, grid.at(ka), grid.at(kb), ws)) return -1;
     const mid = (ka + kb) >>> 1;
     const r = firstFeasible(p, s, x, ws, grid, ka, mid, false);
-    return r >= 0 ? r : firstFeasible(p, s, x, ws, grid, mid + 1, kb, false);
+    return r >= 0 || ws.stop ? r : firstFeasible(p, s, x, ws, grid, mid + 1, kb, false);
   }
   for (let k = ka; k <= kb; k++) {
     x[s] = grid.at(k);
     if (evaluateAt(p, x, ws) === 0) return k;
+    // An increasing check that fails here fails at every later point.
+    if (ws.worstInc > 0) { ws.stop = true; return -1; }
   }
   return -1;
 }
@@ -334,8 +338,6 @@ export function solveCell(
   let loBad = NaN;
   // Only the first feasible point is wanted, and the objective grows with the solved variable.
   const first = mode === CellMode.First && p.objectiveTrend !== undefined && p.objectiveTrend[0] === TREND.increasing;
-  // lo has been evaluated and fails a check of unknown trend: the scan may start past it.
-  let loTried = false;
 
   // Increasing constraints only get worse upwards: if violated at lo, the cell is lost.
   x[s] = lo;
@@ -369,15 +371,32 @@ export function solveCell(
         return 'pruned';
       }
     }
-    // The first point of the scan may already meet everything: then the upper end does not matter.
-    if (first) {
+  }
+  if (first) {
+    // Only the first feasible point is wanted: the increasing checks need no bracket of their own,
+    // since the scan stops at the first point where one fails (all later points fail it too).
+    if (loBad === loBad) {
       x[s] = lo;
       if (evaluateAt(p, x, ws) === 0) {
         refineLow(p, s, x, ws, loBad, loBadValue, lo, tol);
         return true;
       }
-      loTried = true;
+      const w = ws.worstInc;
+      // A hair's breadth of violation (see below): settle lo exactly and look again.
+      if (w > 0 && w < (300 * coarse) / Math.max(Math.abs(lo), 1e-12)) {
+        lo = decBoundary(p, s, x, ws, loBad, loBadValue, lo, ws.worstDec, tol);
+        loBad = NaN;
+        x[s] = lo;
+        if (evaluateAt(p, x, ws) === 0) return true;
+      }
+      if (ws.worstInc > 0) return infeasibleCell(ws);
     }
+    // lo itself has been tried and fails a check of unknown trend.
+    const grid = scanGrid;
+    grid.set(lo, hi, v.resolution * ws.scanCoarsening);
+    ws.stop = false;
+    const k = grid.last < 1 ? -1 : firstFeasible(p, s, x, ws, grid, 1, grid.last, false);
+    return k < 0 ? infeasibleCell(ws) : true;
   }
   // And the largest value that still meets the increasing ones.
   x[s] = hi;
@@ -392,7 +411,6 @@ export function solveCell(
     if (w > 0 && w < (300 * coarse) / Math.max(Math.abs(lo), 1e-12) && loBad === loBad) {
       lo = decBoundary(p, s, x, ws, loBad, loBadValue, lo, ws.worstDec, tol);
       loBad = NaN;
-      loTried = false;
       x[s] = lo;
       evaluateAt(p, x, ws);
     }
@@ -407,8 +425,8 @@ export function solveCell(
   const grid = scanGrid;
   grid.set(lo, hi, step);
   if (mode === CellMode.First) {
-    const start = loTried ? 1 : 0;
-    const k = start > grid.last ? -1 : firstFeasible(p, s, x, ws, grid, start, grid.last, start === 0);
+    ws.stop = false;
+    const k = firstFeasible(p, s, x, ws, grid, 0, grid.last, true);
     if (k < 0) return infeasibleCell(ws);
     // x, ws.f and ws.g hold the point found.
     if (k === 0 && loBad === loBad) refineLow(p, s, x, ws, loBad, loBadValue, lo, tol);
