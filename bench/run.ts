@@ -13,6 +13,7 @@ import { gridSearch } from '../src/search/grid.js';
 import { valueAt, valueCount, type Problem } from '../src/search/problem.js';
 import { runDesign } from '../src/spring/design.js';
 import { buildSpringProblem } from '../src/spring/problem.js';
+import { searchSections } from './search.js';
 import { SANDGREN_BEST_KNOWN, sandgrenProblem } from './problems/sandgren.js';
 import { TENSION_COMPRESSION_BEST_KNOWN, tensionCompressionProblem } from './problems/tensionCompression.js';
 import { stockBenchLines } from './stock.js';
@@ -108,6 +109,9 @@ const anyRun = timed(() => runDesign(anyReq, { strategy: 'grid' }), 3);
 say('## Every material, every end type, coil_step 0.25');
 say(`- ${anyRun.value.cells.toLocaleString()} combinations, ${anyRun.value.result.evaluations.toLocaleString()} candidate evaluations, best ${anyRun.value.candidates[0]?.item.choice.material.id ?? 'none'}: **${fmt(anyRun.ms)} ms** (target under 5 s).`);
 say();
+
+// Issue 10's search targets: the brute-force yardstick, resolution, every series, the big genetic space.
+searchSections(catalog, say);
 
 // 4. Genetic search against the grid's optimum.
 function hitRate(p: Problem, gridBest: number, gridEvals: number, share: number, seeds = 50) {

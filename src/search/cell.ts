@@ -122,14 +122,17 @@ function attributeCut(ws: CellWorkspace, g: Float64Array): void {
 function boundary(p: Problem, s: number, x: Float64Array, ws: CellWorkspace, a: number, b: number, mask: Uint8Array, badBelow: boolean, tol: number): number {
   let badValue = NaN;
   let badObjective = NaN;
+  ws.lastAtGood = false;
   while (b - a > tol) {
     const m = 0.5 * (a + b);
     x[s] = m;
-    evaluateAt(p, x, ws);
+    const total = evaluateAt(p, x, ws);
     const w = mask === ws.incMask ? ws.worstInc : ws.worstDec;
     const bad = w > 0;
     if (bad === badBelow) a = m; else b = m;
     if (bad) { badValue = w; badObjective = ws.f[0]; }
+    ws.lastAtGood = !bad;
+    ws.lastTotal = total;
   }
   ws.bounds[0] = badBelow ? a : b;
   ws.badValue = badValue;
@@ -376,8 +379,9 @@ export function solveCell(
     // Only the first feasible point is wanted: the increasing checks need no bracket of their own,
     // since the scan stops at the first point where one fails (all later points fail it too).
     if (loBad === loBad) {
-      x[s] = lo;
-      if (evaluateAt(p, x, ws) === 0) {
+      // The bracket's last evaluation may have been at lo itself (x, ws are still there).
+      const total = ws.lastAtGood ? ws.lastTotal : (x[s] = lo, evaluateAt(p, x, ws));
+      if (total === 0) {
         refineLow(p, s, x, ws, loBad, loBadValue, lo, tol);
         return true;
       }
