@@ -4,7 +4,8 @@ import { Option } from 'commander';
 import { loadCatalog } from '../catalogs/load.js';
 import { readInputFile } from '../input/document.js';
 import { blameOverride, ENVELOPE_SHORTHANDS, parseAssignment, parsePath, sweepValues, withValue } from '../input/overrides.js';
-import { RANK_KEYS, readRequirements, type Requirements } from '../input/requirements.js';
+import { LIMITS } from '../input/limits.js';
+import { RANK_KEYS, readRequirements, searchSize, type Requirements } from '../input/requirements.js';
 import { STATIC_SERVICE_CYCLES } from '../model/fatigue.js';
 import { candidateRecord, countsRecord, designJson, designText, limitingText } from '../report/designReport.js';
 import { toJson, SI_UNITS } from '../report/json.js';
@@ -211,6 +212,11 @@ export function runSweep(file: string, opts: CommonOptions, vary: string, io: Io
       throw blameOverride(e, overrides);
     }
   });
+  // The whole sweep is bounded like one search: a thousand values of a large search would run for hours.
+  const total = reqs.reduce((n, r) => n + searchSize(r).combinations, 0);
+  if (total > LIMITS.combinations) {
+    throw new InputError('--vary', `a sweep of at most ${LIMITS.combinations.toLocaleString('en-US')} combinations in all; ${values.length} values of about ${Math.round(total / values.length).toLocaleString('en-US')} each make ${total.toLocaleString('en-US')} (a larger step, or a smaller search)`, vary);
+  }
   const rows: SweepRow[] = [];
   let system: UnitSystem = 'si';
   reqs.forEach((req, i) => {

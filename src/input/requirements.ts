@@ -106,12 +106,17 @@ function checkWireSizes(materials: MaterialChoice[], wireSizes: (m: MaterialChoi
   }
 }
 
-/** Refuse a search too large to finish, naming the settings that size it. */
-function checkWork(req: Requirements): void {
+/** The size of a search: material wire sizes x end types x coil counts, with its factors. */
+export function searchSize(req: Requirements): { sizes: number; coilCounts: number; combinations: number } {
   const coilCounts = Math.floor((req.activeCoils[1] - req.activeCoils[0]) / req.coilStep + 1e-9) + 1;
   let sizes = 0;
   for (const m of req.materials) sizes += req.wireSizes(m).filter((d) => m.tensileStrength !== undefined || inStrengthRange(m.material, d)).length;
-  const combinations = sizes * req.ends.length * coilCounts;
+  return { sizes, coilCounts, combinations: sizes * req.ends.length * coilCounts };
+}
+
+/** Refuse a search too large to finish, naming the settings that size it. */
+function checkWork(req: Requirements): void {
+  const { sizes, coilCounts, combinations } = searchSize(req);
   if (combinations > LIMITS.combinations) {
     throw new InputError('coil_step', `a search of at most ${LIMITS.combinations.toLocaleString('en-US')} combinations; this one has ${combinations.toLocaleString('en-US')} `
       + `(${sizes} material wire sizes x ${req.ends.length} end types x ${coilCounts} coil counts): use a larger coil_step, a narrower active_coils, or fewer materials, end types or wire_sizes`, req.coilStep);

@@ -400,6 +400,7 @@ const options: BadCase[] = [
   O('--vary with a zero step', 'sweep', ['--vary', 'envelope.max_outer_diameter=14:24:0'], '--vary'),
   O('--vary with a negative step', 'sweep', ['--vary', 'envelope.max_outer_diameter=14:24:-1'], '--vary'),
   O('--vary with too many values', 'sweep', ['--vary', 'envelope.max_outer_diameter=14:24:0.001'], '--vary'),
+  O('--vary with too much work in all', 'sweep', ['--vary', 'envelope.max_outer_diameter=14:24:0.015'], 'combinations in all'),
   O('--vary with two parts', 'sweep', ['--vary', 'envelope.max_outer_diameter=14:24'], '--vary'),
   O('--vary "Infinity"', 'sweep', ['--vary', 'envelope.max_outer_diameter=14:Infinity:1'], '--vary'),
   O('--vary a value the field refuses', 'sweep', ['--vary', 'envelope.max_outer_diameter=0:2:1'], '--vary envelope.max_outer_diameter=0'),
