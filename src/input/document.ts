@@ -67,8 +67,8 @@ export function parseText(text: string, label: string): unknown {
         const doc = parseDocument(text, { prettyErrors: false, lineCounter: lines, logLevel: 'error' });
         if (doc.errors.length) where = ` at line ${lines.linePos(doc.errors[0].pos[0]).line}`;
       } catch { /* keep the message without a line */ }
-      const at = /at position (\d+)/.exec((e as Error).message);
-      if (!where && at) where = ` at line ${lines.linePos(Number(at[1])).line || lineOfOffset(text, Number(at[1]))}`;
+      const offset = jsonErrorOffset((e as Error).message, text);
+      if (offset !== undefined) where = ` at line ${lineOfOffset(text, offset)}`;
       throw new InputError(`${label}${where}`, 'well-formed JSON', firstLine((e as Error).message));
     }
     if (jsonValue === null || typeof jsonValue !== 'object') throw new InputError(label, 'a mapping of fields ({ "key": value })', jsonValue);
@@ -114,6 +114,21 @@ export function parseText(text: string, label: string): unknown {
 
 function firstLine(message: string): string {
   return message.split('\n')[0];
+}
+
+/** Where V8's JSON.parse stopped: its message gives a position, or quotes the text around the token, or
+ * says the input ended. */
+function jsonErrorOffset(message: string, text: string): number | undefined {
+  const at = /at position (\d+)/.exec(message);
+  if (at) return Number(at[1]);
+  if (/end of JSON input/.test(message)) return text.length;
+  const quoted = /Unexpected token '(.)', (?:\.\.\.)?"([\s\S]*?)"(?:\.\.\.)? is not valid JSON/.exec(message);
+  if (quoted) {
+    const start = text.indexOf(quoted[2]);
+    const inside = quoted[2].indexOf(quoted[1]);
+    if (start >= 0 && inside >= 0) return start + inside;
+  }
+  return undefined;
 }
 
 function lineOfOffset(text: string, offset: number): number {
