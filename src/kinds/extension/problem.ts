@@ -203,10 +203,12 @@ export function buildExtensionProblem(req: ExtensionRequirements, catalog: Catal
       // A point that meets the operating band carries at least its lower end; the lever is at least Dlo and
       // the curvature factors at least their values at Dhi.
       const Fleast = on[XC.operating_force_min] === 1 ? Math.max(F1 + kMin * travel, F2req * (1 - tol)) : F1 + kMin * travel;
-      if (shearStress(Fleast, Dlo, d, stressFactor(Dhi / d, correction)) * sf > sAllowBody[i]) return XC.body_stress;
-      if (loopBendingStress(Fleast, Dlo, d, loopBendingFactor(Dhi / d)) * sf > sAllowA[i]) return XC.loop_bending_stress;
-      if (shearStress(Fleast, Dlo, d, KB) * sf > sAllowB[i]) return XC.loop_torsion_stress;
-      return -1;
+      // The worst of the three is named: usually a loop, which is what the advice should point at.
+      const rBody = (shearStress(Fleast, Dlo, d, stressFactor(Dhi / d, correction)) * sf) / sAllowBody[i];
+      const rA = (loopBendingStress(Fleast, Dlo, d, loopBendingFactor(Dhi / d)) * sf) / sAllowA[i];
+      const rB = (shearStress(Fleast, Dlo, d, KB) * sf) / sAllowB[i];
+      const worst = rA >= rB && rA >= rBody ? XC.loop_bending_stress : rB >= rBody ? XC.loop_torsion_stress : XC.body_stress;
+      return Math.max(rBody, rA, rB) > 1 ? worst : -1;
     },
 
     evaluate(x, g, f) {
