@@ -16,6 +16,7 @@ import { FRONTIER_KEYS, computeFrontier, type FrontierKey } from '../spring/fron
 // The HTML report and CSV writers load only when a command writes them (start-up time: issue 10).
 const htmlReport = () => import('../report/html/designHtml.js');
 const csv = () => import('../report/csv.js');
+const specSheet = () => import('../report/html/specSheet.js');
 import { inUnit, sig, unitSymbol } from '../units/format.js';
 import { InputError } from '../units/parse.js';
 import type { UnitSystem } from '../units/systems.js';
@@ -117,8 +118,8 @@ function progress(io: Io, label: string): ((done: number, total: number) => void
   };
 }
 
-async function designCommand(file: string, opts: CommonOptions, io: Io): Promise<number> {
-  checkOutputPaths([{ option: '--report', path: opts.report }], !!opts.force, [file]);
+async function designCommand(file: string, opts: CommonOptions & { spec?: string }, io: Io): Promise<number> {
+  checkOutputPaths([{ option: '--report', path: opts.report }, { option: '--spec', path: opts.spec }], !!opts.force, [file]);
   const { req, doc } = requirementsAndDocument(file, opts);
   requirementNotes(req, io);
   const run = runDesign(req, { strategy: opts.strategy, onProgress: progress(io, 'searching'), document: doc });
@@ -127,6 +128,10 @@ async function designCommand(file: string, opts: CommonOptions, io: Io): Promise
     (await htmlReport()).writeDesignReport(opts.report, run, system, !!opts.force);
     io.stderr(`coilfront: report written to ${opts.report}\n`);
   }
+  if (opts.spec && run.candidates.length) {
+    (await specSheet()).writeSpecSheet(opts.spec, run.candidates[0], req, system, !!opts.force);
+    io.stderr(`coilfront: specification sheet of spring 1 written to ${opts.spec}\n`);
+  } else if (opts.spec) io.stderr('coilfront: no spring to specify: no specification sheet written\n');
   if (opts.json) io.stdout(toJson(designJson(run, !!opts.timing)) + '\n');
   else io.stdout(designText(run, system, !!opts.timing));
   if (run.candidates.length === 0) {
@@ -263,8 +268,9 @@ export function registerSearchCommands(program: Command, io: Io, setCode: (c: nu
     .description('search every standard wire size, coil count and end type for the springs that meet the requirements, best first')
     .argument('<requirements-file>', 'YAML or JSON requirements file (see README)'))
     .option('--report <file.html>', 'also write a self-contained HTML design report')
+    .option('--spec <file.html>', 'also write the best spring\'s one-page specification sheet (as drawn, EN 15800 grade 2)')
     .option('--force', 'overwrite an existing report file')
-    .action(async (file: string, opts: CommonOptions) => setCode(await designCommand(file, opts, io)));
+    .action(async (file: string, opts: CommonOptions & { spec?: string }) => setCode(await designCommand(file, opts, io)));
 
   const keys = Object.keys(FRONTIER_KEYS);
   addCommon(program.command('frontier')

@@ -5,15 +5,18 @@
 // a reference), the service the spring is made for, and the cautions.
 import type { Material } from '../../catalogs/types.js';
 import type { Requirements } from '../../input/requirements.js';
-import type { SpringAnalysis } from '../../model/analysis.js';
+import type { MaterialFigures, SpringAnalysis, SpringGeometry } from '../../model/analysis.js';
 import { CHECK_LABELS, shortestLength, type CheckName } from '../../spring/checks.js';
+import { loadToleranceCatalog, type ToleranceGrade } from '../../tolerance/catalog.js';
 import type { SpringTolerances } from '../../tolerance/model.js';
 import type { YieldResult } from '../../tolerance/monteCarlo.js';
 import { controlledDiameter } from '../../tolerance/precision.js';
+import { specifySpring, type SpecifiedSpring } from '../../tolerance/specify.js';
 import { INCH_MM } from '../../units/kinds.js';
 import { formatQuantity, unitSymbol } from '../../units/format.js';
 import type { UnitSystem } from '../../units/systems.js';
 import { CAUTIONS } from '../cautions.js';
+import { writeOutputFile } from '../writeFile.js';
 import { springDrawing } from './springDrawing.js';
 import { esc, r2 } from './svg.js';
 
@@ -230,4 +233,12 @@ ${notes.length ? `<p class="note warn">${notes.map(esc).join('<br>')}</p>` : ''}
 </body>
 </html>
 `;
+}
+
+/** Write the sheet of a reported spring (as drawn, grade `grade` tolerances, seeded Monte Carlo). */
+export function writeSpecSheet(path: string, c: { geometry: SpringGeometry; item: { figures: MaterialFigures; choice: { material: Material } } }, req: Requirements, system: UnitSystem, force: boolean, grade: ToleranceGrade = 2): SpecifiedSpring {
+  const shown = { ...req, system };
+  const spec = specifySpring(loadToleranceCatalog(), { grade, overrides: {} }, { geometry: c.geometry, figures: c.item.figures, material: c.item.choice.material }, shown);
+  writeOutputFile(path, specSheetHtml(spec.sheet), force, '--spec');
+  return spec;
 }
