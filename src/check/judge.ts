@@ -6,7 +6,7 @@
 import type { Requirements } from '../input/requirements.js';
 import { analyzeSpring, type ServiceConditions, type SpringAnalysis } from '../model/analysis.js';
 import { springServiceConditions } from '../spring/problem.js';
-import { CHECK, CHECKS, CHECK_LABELS, activeChecks, checkAnalysis, staticLimit, type CheckName } from '../spring/checks.js';
+import { CHECK, CHECKS, CHECK_LABELS, activeChecks, checkAnalysis, figuresUnder, forceBand, staticLimit, type CheckName } from '../spring/checks.js';
 import type { EndType } from '../model/geometry.js';
 import type { Kind } from '../units/kinds.js';
 import type { WorkingBand } from './band.js';
@@ -100,8 +100,8 @@ function figureOf(name: CheckName, a: SpringAnalysis, req: Requirements): Figure
       ? { value: a.buckling.maxDeflection, limit: null, relation: '<', kind: 'length', note: 'absolutely stable' }
       : { value: a.buckling.maxDeflection, limit: a.buckling.criticalDeflection, relation: '<', kind: 'length', note: 'largest deflection against the critical deflection' };
     case 'surge': return { value: a.surge.relevant, limit: req.forcingFrequency ? req.safety.surge * req.forcingFrequency : null, relation: '>=', kind: 'frequency' };
-    case 'operating_force_min': return { value: a.points[a.points.length - 1].force, limit: req.operatingForce! * (1 - req.loadTolerance), relation: '>=', kind: 'force' };
-    case 'operating_force_max': return { value: a.points[a.points.length - 1].force, limit: req.operatingForce! * (1 + req.loadTolerance), relation: '<=', kind: 'force' };
+    case 'operating_force_min': return { value: a.points[a.points.length - 1].force, limit: req.operatingForce! * (1 - forceBand(req)), relation: '>=', kind: 'force' };
+    case 'operating_force_max': return { value: a.points[a.points.length - 1].force, limit: req.operatingForce! * (1 + forceBand(req)), relation: '<=', kind: 'force' };
     case 'temperature': return { value: req.temperature ?? null, limit: a.material.maxTemperature, relation: '<=', kind: 'temperature' };
   }
 }
@@ -155,7 +155,8 @@ class JudgedSpring implements Verdict {
 }
 
 export function judge(spring: GivenSpring, j: Judge): Verdict {
-  const analysis = analyzeSpring(spring.geometry, spring.figures, spring.peened === j.service.peened ? j.service : givenService(j.req, spring));
+  // A requirement-level allowable_stress is the allowable of every figure, as in design (figuresUnder).
+  const analysis = analyzeSpring(spring.geometry, figuresUnder(j.req, spring.figures), spring.peened === j.service.peened ? j.service : givenService(j.req, spring));
   const design = checkAnalysis(analysis, j.req);
   const g = new Float64Array(CHECKS.length + 2);
   g.set(design);
