@@ -184,9 +184,9 @@ export function parseMaterials(doc: unknown, file: string): Material[] {
         const minFields = Fields.of(f.require('minimum_strength', 'a tabulated minimum strength law'), 'minimum_strength', 'si');
         const min = readStrength(minFields);
         minFields.rejectUnknown();
-        minimumStrength = { law: min.law, minDiameter: min.min, maxDiameter: min.max };
+        minimumStrength = { law: min.law, minDiameter: min.min, maxDiameter: min.max, isTheLaw: false };
       } else if (lawIsMinimum) {
-        minimumStrength = { law: strength.law, minDiameter: strength.min, maxDiameter: strength.max };
+        minimumStrength = { law: strength.law, minDiameter: strength.min, maxDiameter: strength.max, isTheLaw: true };
       }
       const moduliFields = Fields.of(f.require('moduli', 'moduli bands'), 'moduli', 'si');
       const moduli = readModuli(moduliFields);

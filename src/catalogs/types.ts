@@ -22,7 +22,7 @@ export interface Material {
   minDiameter: number;
   maxDiameter: number;
   /** The tabulated minimum tensile strength of the wire's standard, where one exists (strength_basis: minimum). */
-  minimumStrength?: { law: StrengthLaw; minDiameter: number; maxDiameter: number };
+  minimumStrength?: { law: StrengthLaw; minDiameter: number; maxDiameter: number; /** The published law is itself the minimum. */ isTheLaw: boolean };
   moduli: { bands: ModulusBand[]; source: string };
   density: Sourced<number>;
   allowable: { static: number; staticSetRemoved: number; source: string };

@@ -2,10 +2,12 @@
 // a material id and see how far to trust it.
 import { loadCatalog } from '../catalogs/load.js';
 import { moduliAt, tensileStrength } from '../catalogs/properties.js';
+import { lawAboveMinimum } from '../input/material.js';
 import { toJson, SI_UNITS } from '../report/json.js';
 import { table } from '../report/table.js';
 import { formatQuantity, sig } from '../units/format.js';
 import type { UnitSystem } from '../units/systems.js';
+import type { Material } from '../catalogs/types.js';
 import { EXIT, type Io } from './io.js';
 
 export function materialsCommand(opts: { json?: boolean; units?: UnitSystem }, io: Io): number {
@@ -22,6 +24,7 @@ export function materialsCommand(opts: { json?: boolean; units?: UnitSystem }, i
           tensile_strength_at: [m.minDiameter, dMid, m.maxDiameter].map((d) => ({ diameter: d, tensile_strength: tensileStrength(m, d) })),
           shear_modulus: mod.shearModulus, elastic_modulus: mod.elasticModulus, density: m.density.value, max_temperature: m.maxTemperature.value,
           static_allowable_fraction: m.allowable.static, static_allowable_fraction_set_removed: m.allowable.staticSetRemoved,
+          tabulated_minimum: minimumAt(m).length ? { source: m.minimumStrength!.law.source, at: minimumAt(m) } : null,
           zimmerli: m.fatigue.zimmerli, relative_cost: m.relativeCost.value, wire_series: m.wireSeries,
           sources: { record: m.source, strength: m.strength.source, moduli: m.moduli.source, density: m.density.source, allowable: m.allowable.source, fatigue: m.fatigue.source, max_temperature: m.maxTemperature.source, relative_cost: m.relativeCost.source },
         };
@@ -41,6 +44,19 @@ export function materialsCommand(opts: { json?: boolean; units?: UnitSystem }, i
   const series = [['series', 'sizes', 'range', 'source']];
   for (const s of catalog.series) series.push([s.id, String(s.diameters.length), `${L(s.diameters[0])} - ${L(s.diameters[s.diameters.length - 1])}`, s.source]);
   io.stdout(['Materials (catalogs/materials.yaml; every figure has its source there, "from memory" where it could not be checked)', table(rows), '',
-    'Wire-size series (catalogs/wire-series.yaml)', table(series), ''].join('\n'));
+    ...catalog.materials.filter((m) => minimumAt(m).length).map((m) => `${m.id}: the published law runs ${minimumAt(m).map((p) => `${sig(p.law_above_minimum * 100, 2)}% at ${L(p.diameter)}`).join(', ')} above the tabulated minimum (${m.minimumStrength!.law.source}); strength_basis: minimum uses the minimum`),
+    '', 'Wire-size series (catalogs/wire-series.yaml)', table(series), ''].join('\n'));
   return EXIT.ok;
+}
+
+/** Where the catalog holds the standard's tabulated minimum beside the published law: the law's excess
+ * over it at the small end, the middle and the large end of the table. */
+function minimumAt(m: Material): { diameter: number; tensile_strength_minimum: number; law_above_minimum: number }[] {
+  const min = m.minimumStrength;
+  if (!min) return [];
+  const ds = [min.minDiameter, Math.sqrt(min.minDiameter * min.maxDiameter), min.maxDiameter];
+  return ds.flatMap((d) => {
+    const above = lawAboveMinimum({ material: m }, d);
+    return above ? [{ diameter: d, tensile_strength_minimum: above.minimum, law_above_minimum: above.excess }] : [];
+  });
 }

@@ -9,8 +9,16 @@ import { InputError } from '../units/parse.js';
 import type { UnitSystem } from '../units/systems.js';
 import { Fields, isRecord } from './fields.js';
 
+/** Which tensile strength the figures use: the published law of the catalog (default), or the wire
+ * standard's tabulated minimum where the catalog holds one. */
+export const STRENGTH_BASES = ['law', 'minimum'] as const;
+export type StrengthBasis = (typeof STRENGTH_BASES)[number];
+
 export interface MaterialChoice {
+  /** The catalog record; with strength basis 'minimum' its strength law is the tabulated minimum. */
   material: Material;
+  /** 'law' when absent. */
+  strengthBasis?: StrengthBasis;
   shearModulus?: number;
   elasticModulus?: number;
   density?: number;
@@ -39,6 +47,51 @@ export function parseMaterialChoice(raw: unknown, system: UnitSystem, catalog: C
   };
   f.rejectUnknown();
   return choice;
+}
+
+/**
+ * Apply a strength basis to chosen materials. 'minimum' swaps each record's strength law for the
+ * tabulated minimum of its standard (ASTM A228 for music wire; EN 10270-1 DM, whose law already is
+ * the lower bound), so that every figure, range check and bound reads that one law. A material with
+ * no tabulated minimum is an input error naming the field: the tool never silently keeps the law.
+ */
+export function applyStrengthBasis(choices: MaterialChoice[], basis: StrengthBasis, field: string, catalog?: Catalog): MaterialChoice[] {
+  if (basis === 'law') return choices.map((c) => ({ ...c, strengthBasis: 'law' }));
+  return choices.map((c) => {
+    const m = c.material;
+    const min = m.minimumStrength;
+    if (!min) {
+      const having = (catalog?.materials ?? []).filter((x) => x.minimumStrength).map((x) => x.id);
+      throw new InputError(field, `"law" for ${m.id}, which has only its published law (strength_basis: minimum needs the tabulated minimum tensile strength of the wire's standard; the catalog holds one for ${having.length ? having.join(', ') : 'some materials'}: choose those materials, or keep the law)`, basis);
+    }
+    return { ...c, strengthBasis: 'minimum', material: { ...m, strength: min.law, minDiameter: min.minDiameter, maxDiameter: min.maxDiameter } };
+  });
+}
+
+/** One line for a search's outputs: the basis and, per material, its source. */
+export function strengthBasisSummary(choices: MaterialChoice[]): string {
+  const basis = choices.some((c) => c.strengthBasis === 'minimum') ? 'tabulated minimum (strength_basis: minimum)' : 'published law (strength_basis: law)';
+  const sources = [...new Map(choices.map((c) => [c.material.id, strengthBasisOf(c).source])).entries()].map(([id, s]) => `${id}: ${s}`);
+  return `tensile strength: ${basis}; ${sources.join('; ')}`;
+}
+
+/** The strength the figures use and where it comes from, as the outputs state it. */
+export function strengthBasisOf(choice: MaterialChoice): { basis: StrengthBasis | 'given'; source: string } {
+  if (choice.tensileStrength !== undefined) return { basis: 'given', source: 'tensile_strength given in the input' };
+  return { basis: choice.strengthBasis ?? 'law', source: choice.material.strength.source };
+}
+
+/**
+ * Where the published law is shown and the catalog also holds the standard's tabulated minimum: how far
+ * the law runs above that minimum at wire diameter d (a fraction), and the minimum's source.
+ */
+export function lawAboveMinimum(choice: MaterialChoice, d: number): { minimum: number; excess: number; source: string } | undefined {
+  const m = choice.material;
+  const min = m.minimumStrength;
+  if (!min || choice.tensileStrength !== undefined || (choice.strengthBasis ?? 'law') !== 'law' || min.isTheLaw) return undefined;
+  if (d < min.minDiameter * (1 - 1e-9) || d > min.maxDiameter * (1 + 1e-9)) return undefined;
+  const minimum = tensileStrength({ ...m, strength: min.law }, d);
+  return { minimum, excess: tensileStrength(m, d) / minimum - 1, source: min.law.source };
 }
 
 /** The model's material figures at wire diameter d (mm). */

@@ -11,7 +11,7 @@ import type { StressCorrection } from '../model/stressFactor.js';
 import { InputError, parseNumber, parseQuantity } from '../units/parse.js';
 import type { UnitSystem } from '../units/systems.js';
 import { Fields, isRecord } from './fields.js';
-import { parseMaterialChoice, type MaterialChoice } from './material.js';
+import { applyStrengthBasis, parseMaterialChoice, STRENGTH_BASES, type MaterialChoice, type StrengthBasis } from './material.js';
 import { SURGE_ENDS, type SurgeEnds } from '../model/surge.js';
 import { checkMaterialChoice } from './materialChecks.js';
 import { LIMITS } from './limits.js';
@@ -23,6 +23,8 @@ export type RankKey = (typeof RANK_KEYS)[number];
 export interface Requirements {
   system: UnitSystem;
   materials: MaterialChoice[];
+  /** Tensile strength from the published law (default) or the standard's tabulated minimum. */
+  strengthBasis: StrengthBasis;
   ends: EndType[];
   seating: Seating;
   /** Surge boundary: both ends on plates (default) or one end free; not the buckling seating. */
@@ -151,6 +153,8 @@ export function readRequirements(raw: unknown, catalog: Catalog): Requirements {
     materials = catalog.materials.filter((m) => fam === 'any' || m.family === fam).map((material) => ({ material }));
   } else materials = [parseMaterialChoice(rawMaterial, system, catalog, 'material')];
   materials.forEach((m, i) => checkMaterialChoice(m, Array.isArray(rawMaterial) ? `material[${i}]` : 'material', system));
+  const strengthBasis = (f.choice('strength_basis', STRENGTH_BASES) ?? 'law') as StrengthBasis;
+  materials = applyStrengthBasis(materials, strengthBasis, 'strength_basis', catalog);
 
   const endsRaw = f.get('ends');
   if (Array.isArray(endsRaw) && endsRaw.length === 0) throw new InputError('ends', `one end type or a non-empty list of them (${END_TYPES.join(' | ')})`, endsRaw);
@@ -218,7 +222,7 @@ export function readRequirements(raw: unknown, catalog: Catalog): Requirements {
     sf.rejectUnknown();
   }
   const req: Requirements = {
-    system, materials, ends,
+    system, materials, strengthBasis, ends,
     seating: (f.choice('seating', SEATINGS) ?? DEFAULTS.seating) as Seating,
     surgeEnds: (f.choice('surge_ends', SURGE_ENDS) ?? 'plates') as SurgeEnds,
     workingForce, workingLength,

@@ -10,7 +10,7 @@ import { formatQuantity } from '../units/format.js';
 import { InputError, parseNumber, parseQuantity } from '../units/parse.js';
 import type { UnitSystem } from '../units/systems.js';
 import { Fields } from './fields.js';
-import { materialFigures, parseMaterialChoice, strengthRangeNote, type MaterialChoice } from './material.js';
+import { applyStrengthBasis, materialFigures, parseMaterialChoice, STRENGTH_BASES, strengthRangeNote, type MaterialChoice, type StrengthBasis } from './material.js';
 import { SURGE_ENDS, type SurgeEnds } from '../model/surge.js';
 import { checkMaterialChoice } from './materialChecks.js';
 import { LIMITS } from './limits.js';
@@ -37,7 +37,8 @@ export function parseCycles(raw: unknown, field: string): number | undefined {
 export function readSpringCase(raw: unknown, catalog: Catalog): SpringCase {
   const f = Fields.document(raw);
   const system = f.system;
-  const choice = parseMaterialChoice(f.require('material', 'a material id or { like: <id>, ... }'), system, catalog, 'material');
+  const strengthBasis = (f.choice('strength_basis', STRENGTH_BASES) ?? 'law') as StrengthBasis;
+  const [choice] = applyStrengthBasis([parseMaterialChoice(f.require('material', 'a material id or { like: <id>, ... }'), system, catalog, 'material')], strengthBasis, 'strength_basis', catalog);
   const d = f.requiredQuantity('wire_diameter', 'length', { positive: true });
   const which = f.exactlyOne(['mean_diameter', 'outer_diameter', 'inner_diameter']);
   const given = f.requiredQuantity(which, 'length', { positive: true });

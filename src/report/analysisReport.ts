@@ -2,6 +2,7 @@
 import { rulesOfThumb, type SpringAnalysis } from '../model/analysis.js';
 import { enduranceSourceLabel } from '../model/fatigue.js';
 import { surgeEndsLabel } from '../model/surge.js';
+import { lawAboveMinimum, strengthBasisOf } from '../input/material.js';
 import type { SpringCase } from '../input/springFile.js';
 import { formatQuantity as q, quantityWriter, sig } from '../units/format.js';
 import type { UnitSystem } from '../units/systems.js';
@@ -11,12 +12,15 @@ import { table } from './table.js';
 
 export function analysisJson(c: SpringCase, a: SpringAnalysis, notes: string[]): Record<string, unknown> {
   const g = a.geometry;
+  const basis = strengthBasisOf(c.materialChoice);
+  const above = lawAboveMinimum(c.materialChoice, g.wireDiameter);
   return {
     units: SI_UNITS,
     material: { id: c.materialChoice.material.id, name: c.materialChoice.material.name, standard: c.materialChoice.material.standard,
       tensile_strength: a.material.tensileStrength, allowable_stress: a.material.allowableStress, ultimate_shear_strength: a.material.ultimateShear,
       shear_modulus: a.material.shearModulus, elastic_modulus: a.material.elasticModulus, density: a.material.density,
-      max_temperature: a.material.maxTemperature, set_removed: c.setRemoved, strength_source: c.materialChoice.material.strength.source },
+      max_temperature: a.material.maxTemperature, set_removed: c.setRemoved, strength_basis: basis.basis, strength_source: basis.source,
+      ...(above ? { tabulated_minimum_tensile_strength: above.minimum, law_above_minimum: above.excess, tabulated_minimum_source: above.source } : {}) },
     geometry: { wire_diameter: g.wireDiameter, mean_diameter: g.meanDiameter, outer_diameter: g.outerDiameter, inner_diameter: g.innerDiameter,
       spring_index: g.springIndex, active_coils: g.activeCoils, total_coils: g.totalCoils, ends: g.ends, free_length: g.freeLength,
       solid_length: g.solidLength, pitch: g.pitch, helix_angle: g.helixAngleDeg, wire_length: g.wireLength, wire_volume: g.wireVolume },
@@ -73,6 +77,7 @@ export function analysisText(c: SpringCase, a: SpringAnalysis, system: UnitSyste
     ['shear modulus G', S(a.material.shearModulus), 'elastic modulus E', S(a.material.elasticModulus)],
     ['density', q(a.material.density, 'density', system), 'max temperature', q(a.material.maxTemperature, 'temperature', system)],
   ]));
+  out.push(`  ${strengthLine(c, a, system)}`);
   out.push('');
   out.push('Working points');
   const rows: string[][] = [['', 'length', 'deflection', 'force', 'stress', 'stress / allowable']];
@@ -107,4 +112,16 @@ export function analysisText(c: SpringCase, a: SpringAnalysis, system: UnitSyste
   out.push('');
   out.push(cautionText());
   return out.join('\n') + '\n';
+}
+
+/** Which tensile strength the figures use, with its source; where the published law is used and the
+ * standard's tabulated minimum is known, how far the law runs above it. */
+function strengthLine(c: SpringCase, a: SpringAnalysis, system: UnitSystem): string {
+  const basis = strengthBasisOf(c.materialChoice);
+  const name = basis.basis === 'given' ? 'as given' : basis.basis === 'minimum' ? 'tabulated minimum (strength_basis: minimum)' : 'published law (strength_basis: law)';
+  const above = lawAboveMinimum(c.materialChoice, a.geometry.wireDiameter);
+  const extra = above
+    ? `; the law runs ${sig(above.excess * 100, 2)}% above the tabulated minimum ${q(above.minimum, 'stress', system)} here (${above.source}): strength_basis: minimum uses the minimum`
+    : '';
+  return `tensile strength: ${name}, ${basis.source}${extra}`;
 }

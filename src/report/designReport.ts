@@ -10,6 +10,7 @@ import type { Kind } from '../units/kinds.js';
 import type { UnitSystem } from '../units/systems.js';
 import { cautionText } from './cautions.js';
 import { SI_UNITS } from './json.js';
+import { strengthBasisOf, strengthBasisSummary } from '../input/material.js';
 import { table } from './table.js';
 
 export function candidateRecord(c: Candidate): Record<string, unknown> {
@@ -40,6 +41,7 @@ export function candidateRecord(c: Candidate): Record<string, unknown> {
     solid_stress: a.solid.stress,
     solid_outer_diameter: a.solid.outerDiameter,
     tensile_strength: a.material.tensileStrength,
+    strength_source: strengthBasisOf(c.item.choice).source,
     allowable_stress: a.material.allowableStress,
     static_safety_factor: a.staticSafetyFactor,
     fatigue_safety_factor: a.fatigue ? a.fatigue.safetyFactor : null,
@@ -55,6 +57,7 @@ export function candidateRecord(c: Candidate): Record<string, unknown> {
 export function requirementsRecord(req: Requirements): Record<string, unknown> {
   return {
     materials: req.materials.map((m) => m.material.id), ends: req.ends, seating: req.seating, surge_ends: req.surgeEnds,
+    strength_basis: req.strengthBasis, strength_sources: Object.fromEntries(req.materials.map((m) => [m.material.id, strengthBasisOf(m).source])),
     working_force: req.workingForce, working_length: req.workingLength, operating_length: req.operatingLength ?? null,
     operating_force: req.operatingForce ?? null, load_tolerance: req.loadTolerance,
     max_outer_diameter: req.maxOuterDiameter ?? null, min_inner_diameter: req.minInnerDiameter ?? null,
@@ -253,6 +256,7 @@ export function designText(run: DesignRun, system: UnitSystem, showTiming = fals
   out.push(`Spring design: ${formatQuantity(req.workingForce, 'force', system)} at ${formatQuantity(req.workingLength, 'length', system)}` +
     (req.operatingLength !== undefined ? `, stroke to ${formatQuantity(req.operatingLength, 'length', system)}${req.operatingForce !== undefined ? ` at ${formatQuantity(req.operatingForce, 'force', system)}` : ''}` : '') +
     `; ranked by ${req.rank.replace('_', ' ')}${req.bestPerWire ? ', the best spring of each material and wire size' : ''}`);
+  if (req.strengthBasis === 'minimum') out.push(strengthBasisSummary(req.materials));
   out.push('');
   if (run.candidates.length) {
     out.push(candidateTable(run.candidates, system));

@@ -200,6 +200,12 @@ describe('catalog loader rejects malformed records, naming file, record and fiel
     d.fatigue_classes[0].peened = [0.42, 0.43, 0.36];
     expect(() => parseMaterials(d, 'materials.yaml')).toThrow(/fatigue_classes\[0\]: fatigue_classes\[0\]\.peened\[1\]: expected a fraction at most the one for fewer cycles/);
   });
+  it('a separate minimum table where the law already is the minimum', () => {
+    const d = doc();
+    const dm = d.materials.find((m: { id: string }) => m.id === 'en10270-1-dm');
+    dm.minimum_strength = d.materials[0].minimum_strength;
+    expect(() => parseMaterials(d, 'materials.yaml')).toThrow(/record en10270-1-dm: minimum_strength: expected no separate table when strength\.minimum is true/);
+  });
   it('a wire series out of order', () => {
     expect(() => parseSeries({ series: [{ id: 'x', unit: 'mm', source: 's', diameters: [1, 0.5] }] }, 'wire-series.yaml')).toThrow(/wire-series\.yaml: record x: diameters\[1\]: expected diameters in ascending order/);
   });

@@ -14,6 +14,7 @@ import { CONVENTIONS, figure, htmlTable, page } from './page.js';
 import { cloudPlot, fatiguePlot, forceLengthPlot, sideView, sweepPlot } from './plots.js';
 import { candidateGrid, relaxLines } from '../designReport.js';
 import { surgeEndsLabel } from '../../model/surge.js';
+import { strengthBasisSummary } from '../../input/material.js';
 import { esc } from './svg.js';
 
 export interface SweepSummary { name: string; rows: { value: number; best: Candidate | null }[] }
@@ -25,6 +26,7 @@ function requirementRows(req: Requirements, system: UnitSystem): string[][] {
     ['material', req.materials.map((m) => m.material.id).join(', ')],
     ['end types', req.ends.join(', ')],
     ['seating (buckling)', req.seating],
+    ['tensile strength', strengthBasisSummary(req.materials).replace(/^tensile strength: /, '')],
     ['working load', `${F(req.workingForce)} at ${L(req.workingLength)}`],
     ['operating point', req.operatingLength === undefined ? '-' : `${req.operatingForce === undefined ? 'free force' : F(req.operatingForce)} at ${L(req.operatingLength)}${req.loadTolerance ? `, tolerance ${sig(req.loadTolerance * 100, 3)}%` : ''}`],
     ['largest outer diameter (bore)', L(req.maxOuterDiameter)],
