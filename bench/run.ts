@@ -2,7 +2,7 @@
 // on this machine; nothing here is asserted by the tests.
 import { execFileSync } from 'node:child_process';
 import { writeFileSync } from 'node:fs';
-import { cpus } from 'node:os';
+import { cpus, loadavg } from 'node:os';
 import seedrandom from 'seedrandom';
 import { loadCatalog } from '../src/catalogs/load.js';
 import { readInputFile } from '../src/input/document.js';
@@ -71,6 +71,7 @@ say('# coilfront benchmark results');
 say();
 say(`Machine: ${cpus()[0]?.model ?? 'unknown CPU'}, ${cpus().length} cores; Node ${process.version}. Written by \`npm run bench\` on ${new Date().toISOString().slice(0, 10)}.`);
 say('Times are medians of repeated runs after a warm-up; counts are exact. Nothing here is a test assertion.');
+say(`Load average when the run began: ${loadavg().map((v) => v.toFixed(1)).join(', ')} (1, 5, 15 min) on ${cpus().length} cores: times taken on a busier machine are longer, ratios measured interleaved much less so.`);
 say();
 
 // 1. Inner loop.

@@ -8,16 +8,35 @@
 // A check passes when g <= 0 exactly: no tolerance, so a reported point never shows a positive check.
 import { TREND, type Problem } from './problem.js';
 
-export interface CellWorkspace {
-  g: Float64Array;
-  f: Float64Array;
-  bounds: Float64Array;
+/** What a run has spent and seen, kept apart from the per-cell scratch so that every workspace of
+ * one run (the genetic search's coarse, fine and final ones) adds to the same counts. */
+export interface RunStats {
   /** Evaluations spent, cumulative. */
   evaluations: number;
+  /** Calls of the problem's bracket bounds (each about the cost of one evaluation). */
+  boundCalls: number;
+  /** Cells proved infeasible by the bracket bounds, without a scan. */
+  boundedOut: number;
   /** Per constraint: cells it cut (the worst violation at the cell's least-violation point). */
   cutBy: Float64Array;
   /** Per constraint: the smallest violation seen where it was the only one violated (what to relax). */
   soleViolation: Float64Array;
+}
+
+export function makeRunStats(p: Problem): RunStats {
+  const m = p.constraintNames.length;
+  return { evaluations: 0, boundCalls: 0, boundedOut: 0, cutBy: new Float64Array(m), soleViolation: new Float64Array(m).fill(Infinity) };
+}
+
+/** The cell solver's state: its settings (tolerances, scan step, whether bounds narrow the scan), the
+ * scratch of the cell in hand (last evaluation, least-violation point, boundary search results) and
+ * the run's statistics. */
+export interface CellWorkspace {
+  /** The run's counts (shared between the workspaces of one run). */
+  stats: RunStats;
+  g: Float64Array;
+  f: Float64Array;
+  bounds: Float64Array;
   /** The least-violation point of the current cell (read after an infeasible cell). */
   missX: Float64Array;
   missG: Float64Array;
@@ -33,10 +52,6 @@ export interface CellWorkspace {
   scanCoarsening: number;
   /** Scratch for the problem's bracket bounds. */
   lower: Float64Array;
-  /** Cells proved infeasible by the bracket bounds, without a scan. */
-  boundedOut: number;
-  /** Calls of the problem's bracket bounds (each about the cost of one evaluation). */
-  boundCalls: number;
   /** Rule out sub-intervals of the scan by the bracket bounds. Off, every scan point of a cell that
    * survives its whole-bracket bound is evaluated: slower, but the least-violation point of each
    * infeasible cell is then the one of a full scan (the diagnostics of a search that found nothing). */
@@ -58,7 +73,7 @@ export interface CellWorkspace {
   stop: boolean;
 }
 
-export function makeWorkspace(p: Problem, relativeTolerance = 1e-10): CellWorkspace {
+export function makeWorkspace(p: Problem, relativeTolerance = 1e-10, stats: RunStats = makeRunStats(p)): CellWorkspace {
   const m = p.constraintNames.length;
   const incMask = new Uint8Array(m);
   const decMask = new Uint8Array(m);
@@ -69,10 +84,10 @@ export function makeWorkspace(p: Problem, relativeTolerance = 1e-10): CellWorksp
   }
   return {
     g: new Float64Array(m), f: new Float64Array(p.objectiveNames.length), bounds: new Float64Array(2),
-    evaluations: 0, cutBy: new Float64Array(m), soleViolation: new Float64Array(m).fill(Infinity),
+    stats,
     missX: new Float64Array(p.variables.length), missG: new Float64Array(m), missF: new Float64Array(p.objectiveNames.length), missViolation: Infinity,
     incMask, decMask, relativeTolerance, maxScanPoints: Infinity, scanCoarsening: 1, worstInc: -Infinity, worstDec: -Infinity,
-    lower: new Float64Array(m), boundedOut: 0, boundCalls: 0, narrowing: true,
+    lower: new Float64Array(m), narrowing: true,
     badValue: NaN, badObjective: NaN, lastAtGood: false, lastTotal: NaN, pruneF: new Float64Array(p.objectiveNames.length), prunedAtLowest: false, stop: false,
   };
 }
@@ -80,7 +95,7 @@ export function makeWorkspace(p: Problem, relativeTolerance = 1e-10): CellWorksp
 /** Evaluate at x and keep the bookkeeping that every evaluation feeds. Returns the total violation. */
 function evaluateAt(p: Problem, x: Float64Array, ws: CellWorkspace): number {
   p.evaluate(x, ws.g, ws.f);
-  ws.evaluations++;
+  ws.stats.evaluations++;
   const g = ws.g;
   const inc = ws.incMask;
   let total = 0;
@@ -95,7 +110,7 @@ function evaluateAt(p: Problem, x: Float64Array, ws: CellWorkspace): number {
   }
   ws.worstInc = wInc;
   ws.worstDec = wDec;
-  if (count === 1 && g[sole] < ws.soleViolation[sole]) ws.soleViolation[sole] = g[sole];
+  if (count === 1 && g[sole] < ws.stats.soleViolation[sole]) ws.stats.soleViolation[sole] = g[sole];
   if (count > 0 && total < ws.missViolation) {
     ws.missViolation = total;
     ws.missX.set(x);
@@ -109,7 +124,7 @@ function evaluateAt(p: Problem, x: Float64Array, ws: CellWorkspace): number {
 function attributeCut(ws: CellWorkspace, g: Float64Array): void {
   let jw = 0;
   for (let j = 1; j < g.length; j++) if (g[j] > g[jw]) jw = j;
-  ws.cutBy[jw]++;
+  ws.stats.cutBy[jw]++;
 }
 
 /**
@@ -209,7 +224,7 @@ function refineLow(p: Problem, s: number, x: Float64Array, ws: CellWorkspace, ba
 function excluded(p: Problem, x: Float64Array, lo: number, hi: number, ws: CellWorkspace): boolean {
   ws.lower.fill(-Infinity);
   p.bracketBounds!(x, lo, hi, ws.lower);
-  ws.boundCalls++;
+  ws.stats.boundCalls++;
   for (let j = 0; j < ws.lower.length; j++) {
     if (ws.lower[j] > 0 && ws.incMask[j] === 0 && ws.decMask[j] === 0) return true;
   }
@@ -219,7 +234,7 @@ function excluded(p: Problem, x: Float64Array, lo: number, hi: number, ws: CellW
 /** The same for a whole cell, counted. */
 function boundedOut(p: Problem, x: Float64Array, lo: number, hi: number, ws: CellWorkspace): boolean {
   if (!excluded(p, x, lo, hi, ws)) return false;
-  ws.boundedOut++;
+  ws.stats.boundedOut++;
   return true;
 }
 

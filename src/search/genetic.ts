@@ -56,11 +56,11 @@ export function geneticSearch(p: Problem, opts: GeneticOptions): SearchResult {
   const sizes = p.variables.map((v) => (v.kind === 'continuous' ? 0 : valueCount(v)));
   const memo = new Map<number, { f: number; violation: number; x: Float64Array }>();
   // The workspace and memo in use: coarse for the generations, fine for each round's hill-climb.
-  const fineWs = makeWorkspace(p);
+  const fineWs = makeWorkspace(p, undefined, ws.stats);
   let cw = ws;
   let cm = memo;
   const fineMemo = new Map<number, { f: number; violation: number; x: Float64Array }>();
-  const spent = () => ws.evaluations + fineWs.evaluations;
+  const spent = () => ws.stats.evaluations;
   const increasing = p.objectiveTrend !== undefined && p.objectiveTrend[0] === TREND.increasing;
   const x = new Float64Array(n);
   const cellBest = { f: Infinity, x: new Float64Array(n) };
@@ -193,9 +193,12 @@ export function geneticSearch(p: Problem, opts: GeneticOptions): SearchResult {
   let pop: Individual[] = [];
   while (pop.length < popSize) pop.push(assess(randomGenes()));
   let best = pop.reduce((a, b) => (better(b, a) ? b : a));
-  for (let round = 0; round < 10_000 && spent() < opts.maxEvaluations; round++) {
+  // The budget is checked before each cell, and the reported cells are solved again at the end: keep
+  // back what those cost, so that the whole run stays within maxEvaluations.
+  const budget = Math.max(0, opts.maxEvaluations - 256 - 64 * top.k);
+  for (let round = 0; round < 10_000 && spent() < budget; round++) {
     const cellsBefore = counts.cells;
-    const roundEnd = spent() + 0.5 * (opts.maxEvaluations - spent());
+    const roundEnd = spent() + 0.5 * (budget - spent());
     let sinceBetter = 0;
     cw = ws;
     cm = memo;
@@ -228,8 +231,8 @@ export function geneticSearch(p: Problem, opts: GeneticOptions): SearchResult {
       cw = fineWs;
       cm = fineMemo;
       bestFeasible = Infinity;
-      best = hillClimb(assess(Float64Array.from(best.genes)), opts.maxEvaluations);
-    } else best = hillClimb(best, opts.maxEvaluations);
+      best = hillClimb(assess(Float64Array.from(best.genes)), budget);
+    } else best = hillClimb(best, budget);
     // A whole round that met no combination it had not seen means the space is exhausted.
     if (counts.cells === cellsBefore) break;
     pop = [best];
@@ -237,15 +240,13 @@ export function geneticSearch(p: Problem, opts: GeneticOptions): SearchResult {
     cm = memo;
     while (pop.length < popSize) pop.push(assess(randomGenes()));
   }
-  ws.evaluations += fineWs.evaluations;
   if (s < 0) return packResult('genetic', p, top, null, ws, counts, misses);
   // Solve the reported cells again at the grid's tolerance.
-  const fine = makeWorkspace(p);
+  const fine = makeWorkspace(p, undefined, ws.stats);
   const finalTop = new TopK(top.k, n, p.objectiveNames.length);
   for (let r = 0; r < top.size; r++) {
     x.set(top.x(r));
     if (solveCell(p, s, x, fine, increasing ? CellMode.First : CellMode.All, increasing ? null : (px, f) => finalTop.offer(px, f), null) === true && increasing) finalTop.offer(x, fine.f);
   }
-  ws.evaluations += fine.evaluations;
   return packResult('genetic', p, finalTop.size ? finalTop : top, null, ws, counts, misses);
 }

@@ -88,10 +88,10 @@ export function geneticFront(p: Problem, opts: FrontOptions): { points: FrontPoi
   // Stop on the budget, after 300 generations, or when 15 generations in a row find no new combination
   // (the memo answers revisits for free, so the budget alone would never run out).
   let stale = 0;
-  for (let gen = 0; gen < 300 && stale < 15 && ws.evaluations < opts.maxEvaluations; gen++) {
+  for (let gen = 0; gen < 300 && stale < 15 && ws.stats.evaluations < opts.maxEvaluations; gen++) {
     const cellsBefore = cells;
     const children: Member[] = [];
-    while (children.length < popSize && ws.evaluations < opts.maxEvaluations) {
+    while (children.length < popSize && ws.stats.evaluations < opts.maxEvaluations) {
       const pick = () => { const a = pop[Math.floor(rng() * pop.length)]; const b = pop[Math.floor(rng() * pop.length)]; return better(a, b) ? a : b; };
       const pa = pick();
       const pb = pick();
@@ -106,7 +106,7 @@ export function geneticFront(p: Problem, opts: FrontOptions): { points: FrontPoi
     stale = cells === cellsBefore ? stale + 1 : 0;
   }
   // Report the non-dominated feasible members of everything assessed, solved again to full precision.
-  const fine = makeWorkspace(p);
+  const fine = makeWorkspace(p, undefined, ws.stats);
   const all = [...memo.values()].filter((m) => m.feasible);
   const nd = all.filter((m) => !all.some((q) => q !== m && dominatesMember(q, m)));
   const points: FrontPoint[] = [];
@@ -116,5 +116,5 @@ export function geneticFront(p: Problem, opts: FrontOptions): { points: FrontPoi
   }
   points.sort((u, v) => u.f[ia] - v.f[ia]);
   const cloud = all.map((m) => ({ x: m.x, f: m.f }));
-  return { points, cloud, evaluations: ws.evaluations + fine.evaluations, cells };
+  return { points, cloud, evaluations: ws.stats.evaluations, cells };
 }

@@ -30,11 +30,11 @@ export function packResult(strategy: SearchResult['strategy'], p: Problem, top: 
   ws: CellWorkspace, counts: { cells: number; feasible: number; pruned: number }, misses: NearestMisses): SearchResult {
   const cutBy: Record<string, number> = {};
   const sole: Record<string, number> = {};
-  p.constraintNames.forEach((name, j) => { cutBy[name] = ws.cutBy[j]; sole[name] = ws.soleViolation[j]; });
+  p.constraintNames.forEach((name, j) => { cutBy[name] = ws.stats.cutBy[j]; sole[name] = ws.stats.soleViolation[j]; });
   const best = [];
   for (let i = 0; i < top.size; i++) best.push({ x: Float64Array.from(top.x(i)), f: Float64Array.from(top.f(i)) });
   return {
-    strategy, best, cloud, evaluations: ws.evaluations, boundCalls: ws.boundCalls, cells: counts.cells, feasibleCells: counts.feasible,
+    strategy, best, cloud, evaluations: ws.stats.evaluations, boundCalls: ws.stats.boundCalls, cells: counts.cells, feasibleCells: counts.feasible,
     prunedCells: counts.pruned, cutBy, soleViolation: sole, nearestMisses: misses.items,
   };
 }
