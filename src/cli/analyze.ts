@@ -1,9 +1,9 @@
 // `coilfront analyze SPRING_FILE`: the complete check of one given spring.
 import { loadCatalog } from '../catalogs/load.js';
 import { readInputFile } from '../input/document.js';
-import { readSpringCase } from '../input/springFile.js';
-import { analyzeSpring } from '../model/analysis.js';
-import { analysisJson, analysisText } from '../report/analysisReport.js';
+import { kindOf } from '../kinds/index.js';
+import { writeOutputFile } from '../report/writeFile.js';
+import { InputError } from '../units/parse.js';
 import { toJson } from '../report/json.js';
 import type { UnitSystem } from '../units/systems.js';
 import type { Io } from './io.js';
@@ -14,15 +14,17 @@ export interface AnalyzeOptions { json?: boolean; units?: UnitSystem; report?: s
 export async function analyzeCommand(file: string, opts: AnalyzeOptions, io: Io): Promise<number> {
   checkOutputPaths([{ option: '--report', path: opts.report }], !!opts.force, [file]);
   const catalog = loadCatalog();
-  const c = readSpringCase(readInputFile(file), catalog);
-  const a = analyzeSpring(c.geometry, c.figures, c.service);
+  const raw = readInputFile(file);
+  const kind = kindOf(raw);
+  const c = kind.readSpring(raw, catalog);
+  const a = kind.analyse(c);
   if (opts.report) {
     // The HTML report loads only when asked for (start-up time: issue 10).
-    const { writeSpringReport } = await import('../report/html/springHtml.js');
-    writeSpringReport(opts.report, c, a, opts.units ?? c.system, !!opts.force);
+    if (!kind.report.analysisHtml) throw new InputError('--report', `a report of a kind that has one (the ${kind.label} report is not built yet)`);
+    writeOutputFile(opts.report, await kind.report.analysisHtml(c, a, opts.units ?? c.system), !!opts.force, '--report');
     io.stderr(`coilfront: report written to ${opts.report}\n`);
   }
-  if (opts.json) io.stdout(toJson(analysisJson(c, a, c.notes)) + '\n');
-  else io.stdout(analysisText(c, a, opts.units ?? c.system, c.notes));
+  if (opts.json) io.stdout(toJson(kind.report.analysisJson(c, a)) + '\n');
+  else io.stdout(kind.report.analysisText(c, a, opts.units ?? c.system));
   return EXIT.ok;
 }

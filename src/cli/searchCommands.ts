@@ -1,4 +1,4 @@
-// `coilfront design`, `frontier` and `sweep`: thin commands over runDesign.
+// `coilfront design`, `frontier` and `sweep`: thin commands over the spring kinds (src/kinds/).
 import type { Command } from 'commander';
 import { Option } from 'commander';
 import { loadCatalog } from '../catalogs/load.js';
@@ -6,8 +6,7 @@ import { readInputFile } from '../input/document.js';
 import { blameOverride, ENVELOPE_SHORTHANDS, parseAssignment, parsePath, sweepValues, withValue } from '../input/overrides.js';
 import { LIMITS } from '../input/limits.js';
 import { RANK_KEYS, readRequirements, searchSize, type Requirements } from '../input/requirements.js';
-import { STATIC_SERVICE_CYCLES } from '../model/fatigue.js';
-import { candidateRecord, countsRecord, designJson, designText, limitingText } from '../report/designReport.js';
+import { candidateRecord, countsRecord, limitingText } from '../report/designReport.js';
 import { toJson, SI_UNITS } from '../report/json.js';
 import { writeOutputFile } from '../report/writeFile.js';
 import { cautionText } from '../report/cautions.js';
@@ -16,8 +15,9 @@ import { FRONTIER_KEYS, computeFrontier, type FrontierKey } from '../spring/fron
 // The HTML report and CSV writers load only when a command writes them (start-up time: issue 10).
 const htmlReport = () => import('../report/html/designHtml.js');
 const csv = () => import('../report/csv.js');
-const specSheet = () => import('../report/html/specSheet.js');
-import { inUnit, sig, unitSymbol } from '../units/format.js';
+import { fieldColumns, fieldRow } from '../report/fields.js';
+import { compression } from '../kinds/compression/index.js';
+import { kindOf } from '../kinds/index.js';
 import { InputError } from '../units/parse.js';
 import type { UnitSystem } from '../units/systems.js';
 import { checkOutputPaths, EXIT, type Io } from './io.js';
@@ -86,24 +86,17 @@ function tracedOverrides(file: string, opts: CommonOptions): { doc: unknown; ove
 
 /** The requirements of a command: the file with its overrides, validated; a bad override is blamed on its option. */
 function requirementsOf(file: string, opts: CommonOptions): Requirements {
-  return requirementsAndDocument(file, opts).req;
-}
-
-/** The requirements and the document they were read from (the relax advice changes it by path). */
-function requirementsAndDocument(file: string, opts: CommonOptions): { req: Requirements; doc: unknown } {
   const { doc, overrides } = tracedOverrides(file, opts);
   try {
-    return { req: readRequirements(doc, loadCatalog()), doc };
+    return readRequirements(doc, loadCatalog());
   } catch (e) {
     throw blameOverride(e, overrides);
   }
 }
 
-/** What design prints on stderr about how it read the requirements (as `analyze` notes them). */
+/** What a command prints on stderr about how it read the requirements (as `analyze` notes them). */
 function requirementNotes(req: Requirements, io: Io): void {
-  if (req.cycles !== undefined && req.cycles < STATIC_SERVICE_CYCLES) {
-    io.stderr(`coilfront: note: cycles ${req.cycles} is below ${STATIC_SERVICE_CYCLES.toExponential(0).replace('+', '')}: judged as static service (no fatigue check)\n`);
-  }
+  for (const note of compression.report.requirementNotes(req)) io.stderr(`coilfront: note: ${note}\n`);
 }
 
 function progress(io: Io, label: string): ((done: number, total: number) => void) | undefined {
@@ -120,48 +113,46 @@ function progress(io: Io, label: string): ((done: number, total: number) => void
 
 async function designCommand(file: string, opts: CommonOptions & { spec?: string }, io: Io): Promise<number> {
   checkOutputPaths([{ option: '--report', path: opts.report }, { option: '--spec', path: opts.spec }], !!opts.force, [file]);
-  const { req, doc } = requirementsAndDocument(file, opts);
-  requirementNotes(req, io);
-  const run = runDesign(req, { strategy: opts.strategy, onProgress: progress(io, 'searching'), document: doc });
+  // The document's `kind` picks the spring kind (src/kinds/index.ts); no kind is compression.
+  const { doc, overrides } = tracedOverrides(file, opts);
+  const kind = kindOf(doc);
+  const catalog = loadCatalog();
+  let req;
+  try {
+    req = kind.readRequirements(doc, catalog);
+  } catch (e) {
+    throw blameOverride(e, overrides);
+  }
+  for (const note of kind.report.requirementNotes(req)) io.stderr(`coilfront: note: ${note}\n`);
+  const run = kind.design(req, catalog, { strategy: opts.strategy, onProgress: progress(io, 'searching'), document: doc });
   const system = opts.units ?? req.system;
   if (opts.report) {
-    (await htmlReport()).writeDesignReport(opts.report, run, system, !!opts.force);
+    if (!kind.report.designHtml) throw new InputError('--report', `a report of a kind that has one (the ${kind.label} report is not built yet)`);
+    writeOutputFile(opts.report, await kind.report.designHtml(run, system), !!opts.force, '--report');
     io.stderr(`coilfront: report written to ${opts.report}\n`);
   }
-  if (opts.spec && run.candidates.length) {
-    (await specSheet()).writeSpecSheet(opts.spec, run.candidates[0], req, system, !!opts.force);
-    io.stderr(`coilfront: specification sheet of spring 1 written to ${opts.spec}\n`);
-  } else if (opts.spec) io.stderr('coilfront: no spring to specify: no specification sheet written\n');
-  if (opts.json) io.stdout(toJson(designJson(run, !!opts.timing)) + '\n');
-  else io.stdout(designText(run, system, !!opts.timing));
-  if (run.candidates.length === 0) {
+  if (opts.spec) {
+    if (!kind.report.writeSpecSheet) throw new InputError('--spec', `a kind that has a specification sheet (the ${kind.label} sheet is not built yet)`);
+    if (await kind.report.writeSpecSheet(opts.spec, run, system, !!opts.force)) io.stderr(`coilfront: specification sheet of spring 1 written to ${opts.spec}\n`);
+    else io.stderr('coilfront: no spring to specify: no specification sheet written\n');
+  }
+  if (opts.json) io.stdout(toJson(kind.report.designJson(run, !!opts.timing)) + '\n');
+  else io.stdout(kind.report.designText(run, system, !!opts.timing));
+  if (!kind.found(run)) {
     if (opts.json) io.stderr('coilfront: no spring meets every requirement (see "infeasible" in the JSON)\n');
     return EXIT.infeasible;
   }
   return EXIT.ok;
 }
 
-/** Column names and rows of springs for CSV, in the chosen unit system with units in the names. */
+/** Column names and rows of springs for CSV, in the chosen unit system with units in the names:
+ * rendered from the compression fields registry. */
 export function springColumns(system: UnitSystem): string[] {
-  const u = (k: Parameters<typeof unitSymbol>[0]) => unitSymbol(k, system);
-  return ['material', 'ends', `wire_diameter_${u('length')}`, `mean_diameter_${u('length')}`, `outer_diameter_${u('length')}`, `inner_diameter_${u('length')}`,
-    'spring_index', 'active_coils', 'total_coils', `free_length_${u('length')}`, `solid_length_${u('length')}`, `rate_${u('rate')}`,
-    `working_force_${u('force')}`, `operating_force_${u('force')}`, `max_stress_${u('stress')}`, `solid_stress_${u('stress')}`,
-    'static_safety_factor', 'fatigue_safety_factor', `natural_frequency_Hz`, `mass_${u('mass')}`, 'relative_cost'];
+  return fieldColumns(compression.fields, system);
 }
 
 export function springRow(c: Candidate, system: UnitSystem): (string | number | null)[] {
-  const a = c.analysis;
-  const g = a.geometry;
-  const L = (v: number) => Number(sig(inUnit(v, 'length', system), 6));
-  const F = (v: number) => Number(sig(inUnit(v, 'force', system), 6));
-  const S = (v: number) => Number(sig(inUnit(v, 'stress', system), 6));
-  const last = a.points[a.points.length - 1];
-  return [c.item.choice.material.id, g.ends, L(g.wireDiameter), L(g.meanDiameter), L(g.outerDiameter), L(g.innerDiameter),
-    Number(sig(g.springIndex, 6)), g.activeCoils, g.totalCoils, L(g.freeLength), L(g.solidLength), Number(sig(inUnit(a.rate, 'rate', system), 6)),
-    F(a.points[0].force), a.points.length > 1 ? F(last.force) : null, S(Math.max(...a.points.map((p) => p.stress))), S(a.solid.stress),
-    Number(sig(a.staticSafetyFactor, 5)), a.fatigue ? Number(sig(a.fatigue.safetyFactor, 5)) : null, Number(sig(a.surge.relevant, 5)),
-    Number(sig(inUnit(g.mass, 'mass', system), 6)), Number(sig(g.mass * c.item.choice.material.relativeCost.value, 6))];
+  return fieldRow(compression.fields, c, system);
 }
 
 interface FrontierOptions extends CommonOptions { x: FrontierKey; y: FrontierKey; output?: string }

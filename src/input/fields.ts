@@ -119,6 +119,11 @@ export class Fields {
     throw new InputError(present.map((k) => this.name(k)).join(', '), `only one of ${names} (several given)`);
   }
 
+  /** The document's `kind` (src/kinds/index.ts dispatches on it), when given, must be this one. */
+  expectKind(expected: string): void {
+    if (this.has('kind') && this.raw.kind !== expected) throw new InputError('kind', expected, this.raw.kind);
+  }
+
   /** Fail on keys that were never asked for. Call after reading every known key. */
   rejectUnknown(): void {
     for (const key of Object.keys(this.raw)) {

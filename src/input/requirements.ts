@@ -137,6 +137,7 @@ function pair(f: Fields, key: string, fallback: [number, number], rule: { positi
 
 export function readRequirements(raw: unknown, catalog: Catalog): Requirements {
   const f = Fields.document(raw);
+  f.expectKind('compression');
   const system = f.system;
 
   // Materials: an id, a list of ids, a family, any, or an override object.

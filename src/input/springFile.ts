@@ -36,6 +36,7 @@ export function parseCycles(raw: unknown, field: string): number | undefined {
 
 export function readSpringCase(raw: unknown, catalog: Catalog): SpringCase {
   const f = Fields.document(raw);
+  f.expectKind('compression');
   const system = f.system;
   const strengthBasis = (f.choice('strength_basis', STRENGTH_BASES) ?? 'law') as StrengthBasis;
   const [choice] = applyStrengthBasis([parseMaterialChoice(f.require('material', 'a material id or { like: <id>, ... }'), system, catalog, 'material')], strengthBasis, 'strength_basis', catalog);

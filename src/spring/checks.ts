@@ -3,58 +3,18 @@
 // single-spring analysis, so every spring the search reports can be re-verified independently.
 import type { Requirements } from '../input/requirements.js';
 import type { MaterialFigures, SpringAnalysis } from '../model/analysis.js';
-import { STATIC_SERVICE_CYCLES } from '../model/fatigue.js';
+import { COMPRESSION_CHECKS, Check, type CheckName } from '../kinds/compression/checks.js';
 
-export const CHECKS = [
-  'index_min', 'index_max', 'outer_diameter', 'inner_diameter', 'free_length', 'solid_length', 'clash', 'coil_gaps',
-  'outer_diameter_at_solid', 'static_stress', 'solid_stress', 'fatigue', 'buckling', 'surge', 'operating_force_min',
-  'operating_force_max', 'temperature',
-] as const;
-export type CheckName = (typeof CHECKS)[number];
-export const CHECK = Object.fromEntries(CHECKS.map((c, i) => [c, i])) as Record<CheckName, number>;
+export const CHECKS = COMPRESSION_CHECKS.map((c) => c.name);
+export type { CheckName };
+/** Index of each check in g[] (the registry's `Check`). */
+export const CHECK = Check;
 
-export const CHECK_LABELS: Record<CheckName, string> = {
-  index_min: 'spring index below the lower bound',
-  index_max: 'spring index above the upper bound',
-  outer_diameter: 'outer diameter too large for the bore',
-  inner_diameter: 'inner diameter too small for the rod',
-  free_length: 'free length above the limit',
-  solid_length: 'solid length above the limit',
-  clash: 'too little overrun to solid (clash allowance)',
-  coil_gaps: 'coil gaps below the EN 13906-1 minimum',
-  outer_diameter_at_solid: 'outer diameter at solid too large for the bore',
-  static_stress: 'stress above the static allowable (with its safety factor)',
-  solid_stress: 'stress at solid above the allowable (not solid-safe)',
-  fatigue: 'fatigue safety factor below the target',
-  buckling: 'buckles before the operating length',
-  surge: 'surge frequency too close to the forcing frequency',
-  operating_force_min: 'operating force too low (rate too soft)',
-  operating_force_max: 'operating force too high (rate too stiff)',
-  temperature: 'service temperature above the material\'s maximum',
-};
+export const CHECK_LABELS = Object.fromEntries(COMPRESSION_CHECKS.map((c) => [c.name, c.label])) as Record<CheckName, string>;
 
 /** Which checks apply to these requirements. */
 export function activeChecks(req: Requirements): boolean[] {
-  const fatigue = req.cycles !== undefined && req.cycles >= STATIC_SERVICE_CYCLES && req.operatingLength !== undefined;
-  const on: Record<CheckName, boolean> = {
-    index_min: true, index_max: true,
-    outer_diameter: req.maxOuterDiameter !== undefined,
-    inner_diameter: req.minInnerDiameter !== undefined,
-    free_length: req.maxFreeLength !== undefined,
-    solid_length: req.maxSolidLength !== undefined,
-    clash: true,
-    coil_gaps: req.gapRule,
-    outer_diameter_at_solid: req.maxOuterDiameter !== undefined,
-    static_stress: true,
-    solid_stress: req.solidSafe,
-    fatigue,
-    buckling: !req.guided,
-    surge: req.forcingFrequency !== undefined && req.forcingFrequency > 0,
-    operating_force_min: req.operatingForce !== undefined,
-    operating_force_max: req.operatingForce !== undefined,
-    temperature: req.temperature !== undefined,
-  };
-  return CHECKS.map((c) => on[c]);
+  return COMPRESSION_CHECKS.map((c) => c.active(req));
 }
 
 /** The shortest length in service: the operating length, or the working length when there is no stroke. */

@@ -16,6 +16,7 @@ import { stressFactor } from '../model/stressFactor.js';
 import { ultimateShearStrength } from '../model/strength.js';
 import { activeCoilMass, surgeFrequency } from '../model/surge.js';
 import { TREND, type Problem } from '../search/problem.js';
+import { COMPRESSION_CHECKS } from '../kinds/compression/checks.js';
 import { CHECK, CHECKS, activeChecks, figuresUnder, forceBand, shortestLength, staticLimit } from './checks.js';
 
 export const OBJECTIVES = ['rank', 'mass', 'wire_volume', 'outer_diameter', 'free_length', 'neg_safety_factor', 'neg_static_safety', 'neg_fatigue_safety', 'relative_cost'] as const;
@@ -117,23 +118,9 @@ export function buildSpringProblem(req: Requirements): SpringProblem {
   const rankObjective = OBJ[req.rank === 'safety_factor' ? 'neg_safety_factor' : req.rank];
   const criterion = req.criterion;
   const directShear = req.directShear;
-  const noStroke = req.operatingLength === undefined;
 
   const inc = TREND.increasing;
-  const dec = TREND.decreasing;
   const unk = TREND.unknown;
-  // Trends in the mean diameter D (rate k falls as D^-3, so the free length rises). The stresses mix a
-  // lever arm that rises with D and forces that fall with k: monotone only when the force is fixed
-  // (no stroke). Buckling mixes a longer free length with a wider coil. Those are scanned.
-  const trends: Record<string, number> = {
-    index_min: dec, index_max: inc, outer_diameter: inc, inner_diameter: dec, free_length: inc, solid_length: inc,
-    clash: inc, coil_gaps: inc, outer_diameter_at_solid: inc,
-    static_stress: noStroke ? inc : unk,
-    solid_stress: unk,
-    fatigue: unk,
-    buckling: unk,
-    surge: inc, operating_force_min: inc, operating_force_max: dec, temperature: inc,
-  };
   const NaFewest = req.activeCoils[0];
   const NaMost = req.activeCoils[1];
   const dMin = sd.length ? Math.min(...sd) : 1;
@@ -152,7 +139,8 @@ export function buildSpringProblem(req: Requirements): SpringProblem {
     boundGrowsAlong: req.rank === 'safety_factor' ? undefined : 2,
     constraintNames: CHECKS,
     objectiveNames: OBJECTIVES,
-    constraintTrend: Int8Array.from(CHECKS.map((c) => trends[c])),
+    // Trends in the mean diameter, from the checks registry.
+    constraintTrend: Int8Array.from(COMPRESSION_CHECKS.map((c) => c.trend(req))),
     objectiveTrend: Int8Array.from(OBJECTIVES.map((o, i) => (i === 0 ? (req.rank === 'safety_factor' ? unk : inc) : unk))),
 
     // The index bounds clip the diameter interval directly. The bore and rod limits are left to the

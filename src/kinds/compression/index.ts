@@ -1,0 +1,57 @@
+// Helical compression springs as one SpringKind: what `design`, `analyze` and the library API call
+// when a document says `kind: compression` or says no kind at all.
+import { analyzeSpring, type SpringAnalysis } from '../../model/analysis.js';
+import { STATIC_SERVICE_CYCLES } from '../../model/fatigue.js';
+import { readRequirements, type Requirements } from '../../input/requirements.js';
+import { readSpringCase, type SpringCase } from '../../input/springFile.js';
+import { analysisJson, analysisText } from '../../report/analysisReport.js';
+import { designJson, designText } from '../../report/designReport.js';
+import { candidateAt, runDesign, type Candidate, type DesignRun } from '../../spring/design.js';
+import { buildSpringProblem } from '../../spring/problem.js';
+import type { SpringKind } from '../kind.js';
+import { COMPRESSION_CHECKS } from './checks.js';
+import { COMPRESSION_FIELDS } from './fields.js';
+import { COMPRESSION_OBJECTIVES } from './objectives.js';
+
+export type CompressionKind = SpringKind<SpringCase, SpringAnalysis, Requirements, DesignRun, Candidate>;
+
+export const compression: CompressionKind = {
+  id: 'compression',
+  label: 'helical compression spring',
+  readSpring: (raw, catalog) => readSpringCase(raw, catalog),
+  analyse: (c) => analyzeSpring(c.geometry, c.figures, c.service),
+  readRequirements: (raw, catalog) => readRequirements(raw, catalog),
+  buildProblem(req) {
+    const p = buildSpringProblem(req);
+    return Object.assign(p, { candidateAt: (x: ArrayLike<number>, f: Float64Array) => candidateAt(p, x, f) });
+  },
+  design: (req, _catalog, request = {}) => runDesign(req, { strategy: request.strategy, onProgress: request.onProgress, document: request.document }),
+  found: (run) => run.candidates.length > 0,
+  checks: COMPRESSION_CHECKS,
+  objectives: COMPRESSION_OBJECTIVES,
+  fields: COMPRESSION_FIELDS,
+  report: {
+    analysisText: (c, a, system) => analysisText(c, a, system, c.notes),
+    analysisJson: (c, a) => analysisJson(c, a, c.notes),
+    async analysisHtml(c, a, system) {
+      const { springHtml } = await import('../../report/html/springHtml.js');
+      return springHtml(c, a, system);
+    },
+    designText: (run, system, showTiming) => designText(run, system, showTiming),
+    designJson: (run, showTiming) => designJson(run, showTiming),
+    async designHtml(run, system) {
+      const { designHtml } = await import('../../report/html/designHtml.js');
+      return designHtml(run, system);
+    },
+    async writeSpecSheet(path, run, system, force) {
+      if (!run.candidates.length) return false;
+      const { writeSpecSheet } = await import('../../report/html/specSheet.js');
+      writeSpecSheet(path, run.candidates[0], run.req, system, force);
+      return true;
+    },
+    requirementNotes: (req) => (req.cycles !== undefined && req.cycles < STATIC_SERVICE_CYCLES
+      ? [`cycles ${req.cycles} is below ${STATIC_SERVICE_CYCLES.toExponential(0).replace('+', '')}: judged as static service (no fatigue check)`]
+      : []),
+  },
+  cautions: [],
+};

@@ -1,0 +1,137 @@
+// The spring-kind seam (issue 7). Every kind of spring (compression, extension, later conical) lives
+// in its own folder behind this one interface; the commands and the library API dispatch on the
+// `kind` field of a spring or requirements document through the registry in ./index.ts. Adding a
+// kind is a new folder that exports one `SpringKind` plus one line in that registry.
+//
+// A kind owns what is particular to its springs: how a document of it reads, its analysis, its
+// checks, objectives and output fields (each a registry: one definition per entry, read by the hot
+// loop, the re-verification, the advice and every output format), its search problem, its report
+// sections and drawing, and its cautions. Shared wire mechanics (stress factor, stress, rate,
+// strength, fatigue criteria, surge) stay in src/model/ and are imported, never re-derived.
+import type { Catalog } from '../catalogs/types.js';
+import type { Problem } from '../search/problem.js';
+import type { Kind as UnitKind } from '../units/kinds.js';
+import type { UnitSystem } from '../units/systems.js';
+
+/** How a check or objective moves when the solved variable grows (the values of TREND in
+ * src/search/problem.ts): -1 decreasing, 0 unknown (scanned), 1 increasing. */
+export type Trend = -1 | 0 | 1;
+
+/** One check a spring must pass: defined once, read by the search (its index and trend), the
+ * single-spring re-verification, the advice (what relaxes it) and every report (its label). */
+export interface CheckDefinition<Req> {
+  /** The name in JSON, CSV and the counts ("static_stress"). */
+  readonly name: string;
+  /** What a failure means, in the trade's words. */
+  readonly label: string;
+  /** Its trend in the kind's solved variable under these requirements. */
+  trend(req: Req): Trend;
+  /** Whether these requirements ask for it (an inactive check is -1 everywhere). */
+  active(req: Req): boolean;
+  /** The requirement paths (as `--set` takes them) whose relaxation eases it: the advice hook. */
+  readonly relaxedBy: readonly string[];
+}
+
+/** One objective: what the search minimises, a rank key, a frontier axis, or several of those. */
+export interface ObjectiveDefinition {
+  /** The key users give (`rank: mass`, `--x relative_cost`). */
+  readonly key: string;
+  readonly label: string;
+  /** Unit kind of its value, or null for a plain number (a safety factor, a cost index). */
+  readonly unit: UnitKind | 'volume' | null;
+  /** The search minimises sign * value: -1 for a quantity that is better larger (a safety factor). */
+  readonly sign: 1 | -1;
+  /** Its trend in the solved variable, within a cell (0 when not monotone). */
+  readonly trend: Trend;
+  /** May rank the listed springs (`rank:`). */
+  readonly rankable: boolean;
+  /** May be an axis of the trade-off frontier. */
+  readonly frontierAxis: boolean;
+  /** Has a lower bound by the LP relaxation. */
+  readonly lpBound: boolean;
+}
+
+/** A value of an output field; null where it does not apply (never NaN or undefined in output). */
+export type FieldValue = number | string | null;
+
+/** One column of candidate output, from which JSON, CSV, the text table and the HTML table are
+ * rendered. */
+export interface FieldDefinition<Cand> {
+  /** Name in JSON and (with its unit symbol) in CSV. */
+  readonly name: string;
+  readonly unit: UnitKind | 'volume' | null;
+  /** Significant digits in CSV (tables round for reading, CSV keeps precision). */
+  readonly digits: number;
+  read(c: Cand): FieldValue;
+}
+
+/** The search problem of a kind: a general Problem (the engine knows nothing of springs) plus the
+ * way back from a point to a spring, fully analysed and judged again by the single-spring analysis. */
+export interface KindProblem<Req, Cand> extends Problem {
+  readonly req: Req;
+  /** The spring at point x with its full analysis and its checks re-computed from that analysis. */
+  candidateAt(x: ArrayLike<number>, objectives: Float64Array): Cand;
+}
+
+/** How a kind's results are shown. HTML renderers may be loaded lazily (start-up time). */
+export interface KindReport<Case, Analysis, Req, Run> {
+  analysisText(c: Case, a: Analysis, system: UnitSystem): string;
+  analysisJson(c: Case, a: Analysis): Record<string, unknown>;
+  /** The single-spring HTML report, or undefined when the kind has none yet. */
+  analysisHtml?(c: Case, a: Analysis, system: UnitSystem): Promise<string>;
+  designText(run: Run, system: UnitSystem, showTiming: boolean): string;
+  designJson(run: Run, showTiming: boolean): Record<string, unknown>;
+  /** The design HTML report, or undefined when the kind has none yet. */
+  designHtml?(run: Run, system: UnitSystem): Promise<string>;
+  /** Write the specification sheet of the best spring; false (nothing written) when there is none. */
+  writeSpecSheet?(path: string, run: Run, system: UnitSystem, force: boolean): Promise<boolean>;
+  /** Notes on how the requirements were read, for stderr ("judged as static service"). */
+  requirementNotes(req: Req): string[];
+}
+
+export interface DesignRequest {
+  strategy?: 'auto' | 'grid' | 'genetic';
+  onProgress?: (done: number, total: number) => void;
+  /** The document the requirements were read from (overrides applied): the advice changes it by path. */
+  document?: unknown;
+}
+
+/** Spring cases and requirements say which unit system their file was written in (the default of output). */
+export interface InUnits { readonly system: UnitSystem }
+
+export interface SpringKind<Case extends InUnits = InUnits, Analysis = unknown, Req extends InUnits = InUnits, Run = unknown, Cand = unknown> {
+  /** The value of the `kind` field ('compression', 'extension'). */
+  readonly id: string;
+  /** In words, for headings ("helical compression spring"). */
+  readonly label: string;
+  /** A spring document (raw YAML/JSON value) -> the case to analyse. Throws InputError naming the field. */
+  readSpring(raw: unknown, catalog: Catalog): Case;
+  /** The full single-spring analysis. */
+  analyse(c: Case): Analysis;
+  /** A requirements document -> requirements. Throws InputError naming the field. */
+  readRequirements(raw: unknown, catalog: Catalog): Req;
+  /** The search problem of these requirements. */
+  buildProblem(req: Req, catalog: Catalog): KindProblem<Req, Cand>;
+  /** Requirements -> candidates -> evaluation -> filters -> ranking, every reported spring re-verified. */
+  design(req: Req, catalog: Catalog, request?: DesignRequest): Run;
+  /** Whether a design run found any spring (the exit code of `design`). */
+  found(run: Run): boolean;
+  readonly checks: readonly CheckDefinition<Req>[];
+  readonly objectives: readonly ObjectiveDefinition[];
+  readonly fields: readonly FieldDefinition<Cand>[];
+  readonly report: KindReport<Case, Analysis, Req, Run>;
+  /** The kind's own cautions, printed after the general ones (src/report/cautions.ts). */
+  readonly cautions: readonly string[];
+}
+
+/** A kind with its types erased, as the registry holds it. */
+// eslint-disable-next-line @typescript-eslint/no-explicit-any
+export type AnySpringKind = SpringKind<any, any, any, any, any>;
+
+/** Index constants of a registry, `{ clash: 6, ... }`, for the hot loop: a frozen object of numbers
+ * (a property load V8 folds to a constant), never a Map lookup. */
+export function indexOf<const N extends string>(names: readonly N[]): { readonly [K in N]: number } {
+  const out = {} as { [K in N]: number };
+  names.forEach((n, i) => { out[n] = i; });
+  return Object.freeze(out);
+}
