@@ -103,6 +103,7 @@ function figureOf(name: CheckName, a: SpringAnalysis, req: Requirements): Figure
     case 'operating_force_min': return { value: a.points[a.points.length - 1].force, limit: req.operatingForce! * (1 - forceBand(req)), relation: '>=', kind: 'force' };
     case 'operating_force_max': return { value: a.points[a.points.length - 1].force, limit: req.operatingForce! * (1 + forceBand(req)), relation: '<=', kind: 'force' };
     case 'temperature': return { value: req.temperature ?? null, limit: a.material.maxTemperature, relation: '<=', kind: 'temperature' };
+    case 'yield': return { value: null, limit: req.minYield ?? null, relation: '>=', kind: 'percent', note: 'fraction of made springs that pass every check (seeded Monte Carlo at the tolerances)' };
   }
 }
 

@@ -16,6 +16,8 @@ import { SURGE_ENDS, type SurgeEnds } from '../model/surge.js';
 import { checkMaterialChoice } from './materialChecks.js';
 import { LIMITS } from './limits.js';
 import { parseCycles } from './springFile.js';
+import { readToleranceRequirements } from '../tolerance/request.js';
+import type { ToleranceRequest } from '../tolerance/model.js';
 
 export const RANK_KEYS = ['mass', 'wire_volume', 'outer_diameter', 'free_length', 'safety_factor'] as const;
 export type RankKey = (typeof RANK_KEYS)[number];
@@ -68,6 +70,10 @@ export interface Requirements {
   seed: number;
   /** Mean-diameter scan step (mm) for the checks that are not monotone in it. */
   diameterResolution: number;
+  /** The made spring's tolerances: `tolerance_grade` (EN 15800, default 2) and `tolerances` overrides. */
+  tolerance: ToleranceRequest;
+  /** `min_yield`: the fraction of made springs that must pass every check; unset, the yield is only reported. */
+  minYield?: number;
 }
 
 export const DEFAULTS = {
@@ -252,6 +258,7 @@ export function readRequirements(raw: unknown, catalog: Catalog): Requirements {
     top: f.number('top', { integer: true, positive: true, max: 1000 }) ?? DEFAULTS.top,
     seed: f.number('seed', { integer: true, min: -Number.MAX_SAFE_INTEGER, max: Number.MAX_SAFE_INTEGER }) ?? DEFAULTS.seed,
     diameterResolution: f.quantity('diameter_resolution', 'length', { positive: true }) ?? DEFAULTS.diameterResolution,
+    ...readToleranceRequirements(f),
   };
   if (req.diameterResolution < LIMITS.diameterResolution[0] || req.diameterResolution > LIMITS.diameterResolution[1]) {
     throw new InputError('diameter_resolution', `a length from ${formatQuantity(LIMITS.diameterResolution[0], 'length', system)} to ${formatQuantity(LIMITS.diameterResolution[1], 'length', system)} (finer than a wire maker can hold is no more exact, only slower)`, f.get('diameter_resolution'));

@@ -12,8 +12,24 @@ import { cautionText } from './cautions.js';
 import { SI_UNITS } from './json.js';
 import { strengthBasisOf, strengthBasisSummary } from '../input/material.js';
 import { table } from './table.js';
+import { tolerancesJson } from '../tolerance/model.js';
+import type { CandidateYield } from '../tolerance/confirm.js';
 
-export function candidateRecord(c: Candidate): Record<string, unknown> {
+/** The yield fields of one candidate in the JSON (SI): the Monte Carlo yield, its samples and standard
+ * error, the in-search estimate, the check that limits it, and the +- half-widths it was made to. */
+export function yieldRecord(y: CandidateYield): Record<string, unknown> {
+  return {
+    yield: y.monteCarlo.yield,
+    yield_samples: y.monteCarlo.samples,
+    yield_standard_error: y.monteCarlo.standardError,
+    yield_estimate: y.estimate,
+    yield_limited_by: y.limiting,
+    tolerance_grade: y.tolerances.grade,
+    tolerances: tolerancesJson(y.tolerances),
+  };
+}
+
+export function candidateRecord(c: Candidate, y?: CandidateYield): Record<string, unknown> {
   const a = c.analysis;
   const g = a.geometry;
   const checks: Record<string, number> = {};
@@ -50,6 +66,7 @@ export function candidateRecord(c: Candidate): Record<string, unknown> {
     absolutely_stable: a.buckling.absolutelyStable,
     critical_deflection: a.buckling.absolutelyStable ? null : a.buckling.criticalDeflection,
     checks,
+    ...(y ? yieldRecord(y) : {}),
     warnings: a.warnings.map((w) => w.message),
   };
 }
@@ -66,6 +83,7 @@ export function requirementsRecord(req: Requirements): Record<string, unknown> {
     wire_sizes: req.wireSizesLabel, active_coils: req.activeCoils, coil_step: req.coilStep, index: req.index,
     safety: req.safety, allowable_stress: req.allowableStress ?? null, peened: req.peened, guided: req.guided,
     clash_allowance: req.clashAllowance, rank: req.rank,
+    tolerance_grade: req.tolerance.grade, min_yield: req.minYield ?? null,
   };
 }
 
@@ -93,7 +111,8 @@ export function designJson(run: DesignRun, showTiming = false): Record<string, u
     units: SI_UNITS,
     requirements: requirementsRecord(run.req),
     ...countsRecord(run, showTiming),
-    candidates: run.candidates.map(candidateRecord),
+    candidates: run.candidates.map((c, i) => candidateRecord(c, run.yields?.[i])),
+    ...(run.refused?.length ? { refused_by_monte_carlo: run.refused.map((r) => candidateRecord(r.candidate, r.yield)) } : {}),
     ...(run.candidates.length === 0 ? { infeasible: infeasibleRecord(run) } : {}),
   };
 }
@@ -203,11 +222,12 @@ function failing(c: Candidate): Record<string, number> {
 const num = (v: number, kind: Kind, system: UnitSystem, digits = 4) => sig(inUnit(v, kind, system), digits);
 
 /** The ranked-candidate columns, shared by the terminal table and the HTML report. */
-export function candidateGrid(cands: Candidate[], system: UnitSystem): { header: string[]; rows: string[][] } {
+export function candidateGrid(cands: Candidate[], system: UnitSystem, yields?: CandidateYield[]): { header: string[]; rows: string[][] } {
   const u = (k: Kind) => unitSymbol(k, system);
   const header = [
     '#', 'material', `d ${u('length')}`, `D ${u('length')}`, `OD ${u('length')}`, `ID ${u('length')}`, 'Na', 'Nt', 'ends',
     `L0 ${u('length')}`, `Ls ${u('length')}`, `k ${u('rate')}`, `forces ${u('force')}`, `tau max ${u('stress')}`, 'SF static', 'SF fatigue', `mass ${u('mass')}`,
+    ...(yields ? ['yield', 'yield limited by'] : []),
   ];
   const rows = cands.map((c, i) => {
     const a = c.analysis;
@@ -219,13 +239,34 @@ export function candidateGrid(cands: Candidate[], system: UnitSystem): { header:
       num(g.freeLength, 'length', system), num(g.solidLength, 'length', system), num(a.rate, 'rate', system),
       a.points.map((p) => num(p.force, 'force', system, 3)).join(' / '), num(tauMax, 'stress', system),
       sig(a.staticSafetyFactor, 3), a.fatigue ? sig(a.fatigue.safetyFactor, 3) : '-', num(g.mass, 'mass', system, 3),
+      ...(yields ? [yieldPercent(yields[i].monteCarlo.yield), yields[i].limiting ?? '-'] : []),
     ];
   });
   return { header, rows };
 }
 
-export function candidateTable(cands: Candidate[], system: UnitSystem): string {
-  const { header, rows } = candidateGrid(cands, system);
+/** A yield as a percentage: one decimal, never rounded up to 100% while any sampled spring failed. */
+export function yieldPercent(y: number): string {
+  if (y >= 1) return '100%';
+  const t = Math.floor(y * 1000) / 10;
+  return `${t.toFixed(1)}%`;
+}
+
+/** What the yield column means, under the table. */
+export function yieldNote(run: DesignRun): string[] {
+  if (!run.yields) return [];
+  const req = run.req;
+  const n = run.yields[0]?.monteCarlo.samples ?? 0;
+  const lines = [`Yield: the share of made springs that pass every check, EN 15800 grade ${req.tolerance.grade}${Object.keys(req.tolerance.overrides).length ? ' with the given tolerances' : ''}, each tolerance taken as 3 sigma, the free length adjusted to the working force; seeded Monte Carlo of ${n.toLocaleString('en-US')} springs (seed ${req.seed}).`
+    + (req.minYield !== undefined ? ` min_yield ${yieldPercent(req.minYield)}: the search required it by its estimate; the Monte Carlo confirms each listed spring to within its standard error (about ${sig(Math.sqrt(req.minYield * (1 - req.minYield) / Math.max(n, 1)) * 100, 2)}%).` : ' Add min_yield (such as 0.99) to design for it.')];
+  for (const r of run.refused ?? []) {
+    lines.push(`Refused: a ${r.candidate.item.choice.material.id} spring of d ${formatQuantity(r.candidate.geometry.wireDiameter, 'length', req.system)}, Na ${r.candidate.geometry.activeCoils} passed the search by its yield estimate (${yieldPercent(r.yield.estimate)}) but the Monte Carlo gives ${yieldPercent(r.yield.monteCarlo.yield)} +- ${sig(r.yield.monteCarlo.standardError * 100, 2)}%, below min_yield by more than its standard error: it is left out.`);
+  }
+  return lines;
+}
+
+export function candidateTable(cands: Candidate[], system: UnitSystem, yields?: CandidateYield[]): string {
+  const { header, rows } = candidateGrid(cands, system, yields);
   return table([header, ...rows]);
 }
 
@@ -259,7 +300,8 @@ export function designText(run: DesignRun, system: UnitSystem, showTiming = fals
   if (req.strengthBasis === 'minimum') out.push(strengthBasisSummary(req.materials));
   out.push('');
   if (run.candidates.length) {
-    out.push(candidateTable(run.candidates, system));
+    out.push(candidateTable(run.candidates, system, run.yields));
+    out.push(...yieldNote(run));
     out.push('');
     out.push(countsText(run, system, showTiming));
     const warn = rulesOfThumb(run.candidates[0].analysis, run.problem.service(), quantityWriter(system));
@@ -269,6 +311,8 @@ export function designText(run: DesignRun, system: UnitSystem, showTiming = fals
       for (const w of warn) out.push(`  ! ${w.message}`);
     }
   } else {
+    // Springs the estimate admitted and the Monte Carlo refused are named before the account of the cut.
+    if (run.refused?.length) out.push(...yieldNote(run).slice(1), '');
     out.push(infeasibleText(run, system));
   }
   out.push('');

@@ -73,5 +73,8 @@ export function checkAnalysis(a: SpringAnalysis, req: Requirements): Float64Arra
     set('operating_force_max', (F2 - req.operatingForce * (1 + band)) / req.operatingForce);
   }
   if (req.temperature !== undefined) set('temperature', (req.temperature - a.material.maxTemperature) / Math.max(Math.abs(a.material.maxTemperature), 1));
+  // The yield is a property of the made population, not of this one spring: the search judges it by
+  // its estimate and the reported springs are confirmed by the Monte Carlo (src/tolerance/confirm.ts).
+  // Here it stays -1 (not judged), so this re-verification is of the nominal spring's checks.
   return g;
 }

@@ -8,6 +8,7 @@ import type { SearchResult } from '../search/result.js';
 import { CHECKS, activeChecks, checkAnalysis } from './checks.js';
 import { lpLowerBound, type LpBound } from './lpBound.js';
 import { OBJ, buildSpringProblem, type SpringProblem, type StockItem } from './problem.js';
+import type { CandidateYield } from '../tolerance/confirm.js';
 
 export type StrategyChoice = 'auto' | 'grid' | 'genetic';
 
@@ -48,6 +49,10 @@ export interface DesignRun {
   cells: number;
   searchMs: number;
   document?: unknown;
+  /** Per candidate, its yield at the tolerances (set by confirmRun: the design command and API). */
+  yields?: CandidateYield[];
+  /** Springs the estimate admitted under min_yield that the Monte Carlo refused. */
+  refused?: { candidate: Candidate; yield: CandidateYield }[];
 }
 
 /** Grid cells of the problem: stock x end types x coil counts. */

@@ -18,6 +18,8 @@ import { activeCoilMass, surgeFrequency } from '../model/surge.js';
 import { TREND, type Problem } from '../search/problem.js';
 import { COMPRESSION_CHECKS } from '../kinds/compression/checks.js';
 import { CHECK, CHECKS, activeChecks, figuresUnder, forceBand, shortestLength, staticLimit } from './checks.js';
+import { loadToleranceCatalog, type ToleranceCatalog } from '../tolerance/catalog.js';
+import { inSearchYield } from '../tolerance/inSearch.js';
 
 export const OBJECTIVES = ['rank', 'mass', 'wire_volume', 'outer_diameter', 'free_length', 'neg_safety_factor', 'neg_static_safety', 'neg_fatigue_safety', 'relative_cost'] as const;
 export const OBJ = Object.fromEntries(OBJECTIVES.map((o, i) => [o, i])) as Record<(typeof OBJECTIVES)[number], number>;
@@ -43,7 +45,9 @@ export function springServiceConditions(req: Requirements): ServiceConditions {
   };
 }
 
-export function buildSpringProblem(req: Requirements): SpringProblem {
+/** The problem of these requirements. With `min_yield`, the yield check reads the tolerance catalog
+ * (the one beside the material catalog unless given). */
+export function buildSpringProblem(req: Requirements, tolerances?: ToleranceCatalog): SpringProblem {
   const stock: StockItem[] = [];
   for (const choice of req.materials) {
     for (const d of req.wireSizes(choice)) {
@@ -118,6 +122,11 @@ export function buildSpringProblem(req: Requirements): SpringProblem {
   const rankObjective = OBJ[req.rank === 'safety_factor' ? 'neg_safety_factor' : req.rank];
   const criterion = req.criterion;
   const directShear = req.directShear;
+  // min_yield: the estimated yield of the made springs, worked out only for a candidate that passes
+  // every other check (the estimate costs some fifty check evaluations).
+  const yieldOf = req.minYield !== undefined ? inSearchYield(req, stock, ends, tolerances ?? loadToleranceCatalog()) : null;
+  const minYield = req.minYield ?? 1;
+  const YIELD = CHECK.yield;
 
   const inc = TREND.increasing;
   const unk = TREND.unknown;
@@ -286,6 +295,16 @@ export function buildSpringProblem(req: Requirements): SpringProblem {
         g[15] = (F2 - F2req * (1 + tol)) * invF2req;
       } else { g[14] = -1; g[15] = -1; }
       g[16] = activeMask[16] === 1 ? (temperature - sTmax[i]) / Math.max(Math.abs(sTmax[i]), 1) : -1;
+      g[YIELD] = -1;
+      if (yieldOf !== null) {
+        let nominalPasses = true;
+        for (let j = 0; j < YIELD; j++) if (!(g[j] <= 0)) { nominalPasses = false; break; }
+        // A nominal failure is the verdict already: the yield is left unjudged (-1) there.
+        if (nominalPasses) {
+          const y = yieldOf.estimate(i, e, D, Na);
+          g[YIELD] = y === y ? (minYield - y) / minYield : 1;
+        }
+      }
 
       const volume = wireVolume(d, D, Nt);
       const mass = massOfVolume(volume, sRho[i]);

@@ -74,6 +74,25 @@ export function wireDiameterTolerance(catalog: ToleranceCatalog, material: Mater
   return { halfWidth: last.tolerance, source: `${last.source}; extended beyond the table` };
 }
 
+/** Row and index column of the EN 15800 table for D and w (the last ones beyond the table). */
+function rowIndex(table: CoilDiameterTable, D: number): number {
+  const rows = table.rows;
+  for (let r = 0; r < rows.length; r++) if (D <= rows[r].maxMeanDiameter * (1 + 1e-9)) return r;
+  return rows.length - 1;
+}
+
+function columnIndex(table: CoilDiameterTable, w: number): number {
+  const cols = table.indexColumns;
+  for (let c = 0; c < cols.length; c++) if (w <= cols[c] * (1 + 1e-9)) return c;
+  return cols.length - 1;
+}
+
+/** The coil-diameter half-width alone, +- mm: the same figure as meanDiameterTolerance, without its
+ * notes and source, so that the search's hot loop can look it up per candidate without allocating. */
+export function meanDiameterHalfWidth(table: CoilDiameterTable, grade: ToleranceGrade, D: number, w: number): number {
+  return table.rows[rowIndex(table, D)].grades[grade - 1][columnIndex(table, w)];
+}
+
 /** EN 15800 coil-diameter tolerance, +- mm, by grade, mean diameter D and index w = D/d. */
 export function meanDiameterTolerance(table: CoilDiameterTable, grade: ToleranceGrade, D: number, w: number, notes: string[] = []): Tolerance {
   const lastRow = table.rows[table.rows.length - 1];

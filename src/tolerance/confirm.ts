@@ -1,0 +1,76 @@
+// The reported springs' yield, confirmed by the seeded Monte Carlo: the search judged `min_yield` by its
+// first-order estimate; every spring it reports is then sampled (the requirement's seed, the same
+// tolerance figures) and one whose sampled yield falls below min_yield by more than its standard
+// error is refused, and said so. Without min_yield the yield at the requirement's grade (2 unless
+// given) is reported beside each spring and nothing is refused.
+import type { Requirements } from '../input/requirements.js';
+import type { Candidate, DesignRun } from '../spring/design.js';
+import { CHECKS, type CheckName } from '../spring/checks.js';
+import { loadToleranceCatalog, type ToleranceCatalog } from './catalog.js';
+import { estimateYield, yieldScratch } from './estimate.js';
+import { yieldChecks } from './madeSpring.js';
+import { TOLERANCED, standardDeviations, type SpringTolerances } from './model.js';
+import { monteCarloYield, type YieldResult } from './monteCarlo.js';
+import { designedTolerances, fastEvaluator, nominalQuantities, type DesignedSpring } from './springYield.js';
+
+/** Samples per reported spring: the standard error at a yield of 0.99 is then 0.0007. */
+export const CONFIRM_SAMPLES = 20_000;
+
+export interface CandidateYield {
+  tolerances: SpringTolerances;
+  /** The in-search estimate (first-order reliability). */
+  estimate: number;
+  /** The check the estimate finds most likely to fail, or null. */
+  estimateLimiting: CheckName | null;
+  monteCarlo: YieldResult;
+  /** The check that limits the yield: the one the sampled springs failed most often (else the estimate's). */
+  limiting: CheckName | null;
+  /** min_yield is set and the Monte Carlo yield is below it by more than its standard error. */
+  refused: boolean;
+}
+
+export function designedSpring(c: Candidate): DesignedSpring {
+  return { geometry: c.geometry, figures: c.item.figures, material: c.item.choice.material };
+}
+
+/** Yield of one reported spring: estimate and Monte Carlo at the requirement's tolerances. The sampled
+ * springs are judged by the allocation-free made-spring checks (the same verdicts as the full analysis:
+ * test/tolerance/confirm.test.ts), so twenty thousand samples cost a few tens of milliseconds. */
+export function candidateYield(c: Candidate, req: Requirements, catalog: ToleranceCatalog = loadToleranceCatalog(), samples = CONFIRM_SAMPLES): CandidateYield {
+  const spring = designedSpring(c);
+  const tolerances = designedTolerances(catalog, req.tolerance, spring, req);
+  const nominal = nominalQuantities(spring, req);
+  const sigma = standardDeviations(tolerances);
+  const include = yieldChecks(req);
+  const scratch = yieldScratch(TOLERANCED.length);
+  const evaluate = fastEvaluator(spring, req);
+  const estimate = estimateYield(evaluate, nominal, sigma, include, scratch);
+  const estimateLimiting = scratch.limiting >= 0 && scratch.pass[scratch.limiting] < 1 ? CHECKS[scratch.limiting] : null;
+  const monteCarlo = monteCarloYield(evaluate, nominal, sigma, include, { seed: req.seed, samples });
+  const refused = req.minYield !== undefined && monteCarlo.yield < req.minYield - monteCarlo.standardError;
+  return { tolerances, estimate, estimateLimiting, monteCarlo, limiting: monteCarlo.limiting ?? estimateLimiting, refused };
+}
+
+export interface ConfirmedList {
+  candidates: Candidate[];
+  yields: CandidateYield[];
+  /** Springs the search admitted by the estimate that the Monte Carlo refused (min_yield only). */
+  refused: { candidate: Candidate; yield: CandidateYield }[];
+}
+
+/** Confirm every candidate; the refused ones leave the list (their places are not refilled). */
+export function confirmCandidates(candidates: readonly Candidate[], req: Requirements, catalog: ToleranceCatalog = loadToleranceCatalog(), samples = CONFIRM_SAMPLES): ConfirmedList {
+  const out: ConfirmedList = { candidates: [], yields: [], refused: [] };
+  for (const c of candidates) {
+    const y = candidateYield(c, req, catalog, samples);
+    if (y.refused) out.refused.push({ candidate: c, yield: y });
+    else { out.candidates.push(c); out.yields.push(y); }
+  }
+  return out;
+}
+
+/** The run with its candidates confirmed: yields attached, refused springs moved out of the list. */
+export function confirmRun(run: DesignRun, catalog: ToleranceCatalog = loadToleranceCatalog(), samples = CONFIRM_SAMPLES): DesignRun {
+  const c = confirmCandidates(run.candidates, run.req, catalog, samples);
+  return { ...run, candidates: c.candidates, yields: c.yields, refused: c.refused };
+}
