@@ -51,6 +51,15 @@ chmodSync(launcher, 0o755);
 
 for (const dir of [cliDir, join(root, 'dist', 'src', 'catalogs')]) writeFileSync(join(dir, PREBUILT_CATALOG), json);
 
+// The extension-spring catalog the same way, validated against the materials just read.
+const { loadExtensionCatalogFromYaml, PREBUILT_EXTENSION_CATALOG } = await import(join(root, 'dist', 'src', 'kinds', 'extension', 'catalog.js'));
+const extension = loadExtensionCatalogFromYaml(join(root, 'catalogs'), catalog.materials);
+const extensionJson = JSON.stringify(extension);
+if (!isDeepStrictEqual(JSON.parse(extensionJson), extension)) {
+  throw new Error('build: the validated extension catalog does not survive JSON unchanged (a value JSON cannot hold?)');
+}
+for (const dir of [cliDir, join(root, 'dist', 'src', 'kinds', 'extension')]) writeFileSync(join(dir, PREBUILT_EXTENSION_CATALOG), extensionJson);
+
 // The code cache: what V8 compiled during one run of the demo, for the next starts to reuse.
 const record = spawnSync(process.execPath, [launcher, 'design', join(root, 'examples', 'washer-trigger.yaml')], { env: { ...process.env, COILFRONT_RECORD_CODE_CACHE: '1' }, stdio: ['ignore', 'ignore', 'inherit'] });
 if (record.status !== 0) throw new Error(`build: the bundled CLI failed on the demo (exit ${record.status})`);

@@ -220,16 +220,21 @@ const nan = (v: number) => (Number.isNaN(v) ? Infinity : v);
 const SITE_WORDS: Record<ExtensionSite, string> = { body: 'the body', loopBending: 'the loop in bending (point A)', loopTorsion: 'the loop\'s bend in torsion (point B)' };
 export function siteWords(site: ExtensionSite): string { return SITE_WORDS[site]; }
 
-/** The rules of thumb a designer checks by habit; each broken one becomes a warning (SI figures). */
-export function extensionWarnings(a: ExtensionAnalysis, s: ExtensionService): Warning[] {
+/** How a warning writes its stresses and temperatures (the report passes its unit system's writer). */
+export interface WarningWriter { stress(v: number): string; temperature(v: number): string }
+const n = (v: number, p = 4) => Number(v.toPrecision(p)).toString();
+const SI_WRITER: WarningWriter = { stress: (v) => `${n(v)} MPa`, temperature: (v) => `${n(v)} degC` };
+
+/** The rules of thumb a designer checks by habit; each broken one becomes a warning (SI figures unless
+ * a writer for another unit system is given). */
+export function extensionWarnings(a: ExtensionAnalysis, s: ExtensionService, q: WarningWriter = SI_WRITER): Warning[] {
   const w: Warning[] = [];
-  const n = (v: number, p = 4) => Number(v.toPrecision(p)).toString();
   const g = a.geometry;
   if (g.springIndex < 4 || g.springIndex > 12) w.push({ code: 'index', message: `spring index ${n(g.springIndex)} is outside 4 to 12 (common practice): ${g.springIndex < 4 ? 'hard to coil, high curvature stress' : 'prone to tangling, poor tolerances'}` });
   if (g.bendIndex < 4) w.push({ code: 'bend-index', message: `bend index C2 = 2 r2 / d = ${n(g.bendIndex)} is below 4: the tight bend into the loop raises the torsion there (Shigley sec. 10-11)` });
   const it = a.initialTension;
-  if (it.position === 'above') w.push({ code: 'initial-tension', message: `initial-tension stress ${n(it.stress)} MPa is above the preferred range ${n(it.band.low)} to ${n(it.band.high)} MPa for index ${n(g.springIndex)}: hard to make` });
-  if (it.position === 'below') w.push({ code: 'initial-tension', message: `initial-tension stress ${n(it.stress)} MPa is below the preferred range ${n(it.band.low)} to ${n(it.band.high)} MPa for index ${n(g.springIndex)}: hard to hold to tolerance` });
+  if (it.position === 'above') w.push({ code: 'initial-tension', message: `initial-tension stress ${q.stress(it.stress)} is above the preferred range ${q.stress(it.band.low)} to ${q.stress(it.band.high)} for index ${n(g.springIndex)}: hard to make` });
+  if (it.position === 'below') w.push({ code: 'initial-tension', message: `initial-tension stress ${q.stress(it.stress)} is below the preferred range ${q.stress(it.band.low)} to ${q.stress(it.band.high)} for index ${n(g.springIndex)}: hard to hold to tolerance` });
   for (const site of EXTENSION_SITES) {
     const v = a.staticSafety[site];
     if (Number.isFinite(v) && v < 1) w.push({ code: 'overstress', message: `at the longest evaluated length the stress in ${SITE_WORDS[site]} is ${n(1 / v)} times its static allowable: the spring will take a set or break there` });
@@ -243,7 +248,7 @@ export function extensionWarnings(a: ExtensionAnalysis, s: ExtensionService): Wa
     if (s.peened) w.push({ code: 'loops-unpeened', message: 'peening is credited to the body only: the loops are judged with unpeened data' });
   }
   if (s.forcingFrequency && s.forcingFrequency > 0 && a.surge.frequency < s.surgeMargin * s.forcingFrequency) w.push({ code: 'surge', message: `surge frequency ${n(a.surge.frequency)} Hz is less than ${s.surgeMargin} times the forcing frequency ${n(s.forcingFrequency)} Hz (common practice)` });
-  if (s.temperature !== undefined && s.temperature > a.material.figures.maxTemperature) w.push({ code: 'temperature', message: `service temperature ${n(s.temperature)} degC exceeds the material's maximum ${n(a.material.figures.maxTemperature)} degC: expect relaxation, and the initial tension is the first to go` });
+  if (s.temperature !== undefined && s.temperature > a.material.figures.maxTemperature) w.push({ code: 'temperature', message: `service temperature ${q.temperature(s.temperature)} exceeds the material's maximum ${q.temperature(a.material.figures.maxTemperature)}: expect relaxation, and the initial tension is the first to go` });
   return w;
 }
 

@@ -2,6 +2,7 @@
 // refused with a message naming the file, the record and the field, as for the material catalog.
 import { readFileSync } from 'node:fs';
 import { join } from 'node:path';
+import { fileURLToPath } from 'node:url';
 import { parse as parseYaml } from 'yaml';
 import { CatalogError, catalogDirectory } from '../../catalogs/load.js';
 import { FAMILIES, type Family, type Material } from '../../catalogs/types.js';
@@ -151,17 +152,35 @@ export function parseExtensionCatalog(doc: unknown, materials: readonly Material
 
 let cached: ExtensionCatalog | undefined;
 
-/** The extension catalog beside the material catalog, checked against its materials. */
-export function loadExtensionCatalog(materials: readonly Material[] = []): ExtensionCatalog {
-  if (cached) return cached;
-  const file = join(catalogDirectory(), 'extension.yaml');
+/** The file the build writes beside this module (and beside the CLI bundle): the catalog already
+ * validated, as JSON (scripts/build.mjs), so a run does not parse and check the YAML again. */
+export const PREBUILT_EXTENSION_CATALOG = 'extension-catalog.json';
+
+function readPrebuilt(): ExtensionCatalog | undefined {
+  try {
+    return JSON.parse(readFileSync(fileURLToPath(new URL(PREBUILT_EXTENSION_CATALOG, import.meta.url)), 'utf8')) as ExtensionCatalog;
+  } catch {
+    return undefined;
+  }
+}
+
+/** Read and validate catalogs/extension.yaml of a folder against its materials: the source of truth,
+ * and the one validator (the build runs it to write the pre-validated JSON). */
+export function loadExtensionCatalogFromYaml(directory: string, materials: readonly Material[] = []): ExtensionCatalog {
+  const file = join(directory, 'extension.yaml');
   let doc: unknown;
   try {
     doc = parseYaml(readFileSync(file, 'utf8'));
   } catch (e) {
     throw new CatalogError(`${FILE}: not readable YAML (${(e as Error).message.split('\n')[0]})`);
   }
-  cached = parseExtensionCatalog(doc, materials);
+  return parseExtensionCatalog(doc, materials);
+}
+
+/** The extension catalog beside the material catalog: the build's pre-validated JSON when there is
+ * one, else the YAML, checked against the materials. */
+export function loadExtensionCatalog(materials: readonly Material[] = []): ExtensionCatalog {
+  cached ??= readPrebuilt() ?? loadExtensionCatalogFromYaml(catalogDirectory(), materials);
   return cached;
 }
 

@@ -1,0 +1,396 @@
+// The analysis of one extension spring and the outcome of a design run, for people (text, in the chosen
+// unit system) and for machines (JSON: SI, snake_case, null where a figure does not apply). Every figure
+// is read from the analysis the search re-verified; nothing is computed again here.
+import { enduranceSourceLabel } from '../../model/fatigue.js';
+import { cautionText } from '../../report/cautions.js';
+import { SI_UNITS } from '../../report/json.js';
+import { table } from '../../report/table.js';
+import { formatQuantity, inUnit, quantityWriter, sig, unitSymbol } from '../../units/format.js';
+import type { Kind } from '../../units/kinds.js';
+import type { UnitSystem } from '../../units/systems.js';
+import { EXTENSION_CAUTION, EXTENSION_SITES, extensionWarnings, siteWords, stressPerNewton, type ExtensionAnalysis, type ExtensionService, type ExtensionSite, type SiteFatigue } from './analysis.js';
+import { EXTENSION_CHECKS, EXTENSION_CHECK_LABELS, activeExtensionChecks } from './checks.js';
+import { extensionCandidateAt, type ExtensionCandidate, type ExtensionDesignRun } from './design.js';
+import type { ExtensionRequirements } from './requirements.js';
+import type { ExtensionCase } from './springFile.js';
+
+/** Site names as JSON and CSV write them. */
+export const SITE_KEYS: Record<ExtensionSite, string> = { body: 'body', loopBending: 'loop_bending', loopTorsion: 'loop_torsion' };
+const SITE_SHORT: Record<ExtensionSite, string> = { body: 'body', loopBending: 'loop bending (A)', loopTorsion: 'loop torsion (B)' };
+
+const orNull = (v: number | undefined): number | null => (v === undefined || !Number.isFinite(v) ? null : v);
+const cyclesValue = (c: number | undefined): number | string | null => (c === undefined ? null : Number.isFinite(c) ? c : 'infinite');
+
+/** Where the initial-tension stress sits in its preferred band: 0 at the bottom, 1 at the top (below 0
+ * or above 1 outside it). */
+export function bandFraction(a: ExtensionAnalysis): number {
+  const b = a.initialTension.band;
+  return b.high > b.low ? (a.initialTension.stress - b.low) / (b.high - b.low) : NaN;
+}
+
+/** The lowest fatigue safety factor of the three sites (null in static service or with no alternation). */
+export function fatigueSafety(a: ExtensionAnalysis): number | null {
+  if (!a.fatigue) return null;
+  const v = Math.min(...EXTENSION_SITES.map((s) => (Number.isNaN(a.fatigue![s].safetyFactor) ? Infinity : a.fatigue![s].safetyFactor)));
+  return Number.isFinite(v) ? v : null;
+}
+
+/** The lowest static safety factor of the three sites. */
+export function staticSafety(a: ExtensionAnalysis): number {
+  return Math.min(a.staticSafety.body, a.staticSafety.loopBending, a.staticSafety.loopTorsion);
+}
+
+function siteFatigueJson(s: SiteFatigue): Record<string, unknown> {
+  return {
+    initial_stress: s.initialStress, min_stress: s.minStress, max_stress: s.maxStress, alternating_stress: s.alternatingStress, mean_stress: s.meanStress,
+    endurance_source: s.enduranceSource, endurance_alternating: s.endurance.alternating, endurance_mean: s.endurance.mean,
+    ultimate_strength: s.ultimate, alternating_strength: s.alternatingStrength, safety_factor: orNull(s.safetyFactor),
+  };
+}
+
+function materialJson(c: { materialChoice: ExtensionCase['materialChoice'] }, a: ExtensionAnalysis): Record<string, unknown> {
+  const m = c.materialChoice.material;
+  const f = a.material.figures;
+  return {
+    id: m.id, name: m.name, standard: m.standard, tensile_strength: f.tensileStrength, ultimate_shear_strength: a.material.ultimateShear,
+    shear_modulus: f.shearModulus, elastic_modulus: f.elasticModulus, density: f.density, max_temperature: f.maxTemperature,
+    allowable_stress: { body_torsion: a.material.allowables.bodyTorsion, loop_bending: a.material.allowables.loopBending, loop_torsion: a.material.allowables.loopTorsion },
+    allowable_source: a.material.allowableSource, loop_fatigue_source: a.material.loopFatigue.source, loop_fatigue_stated: a.material.loopFatigueStated,
+    strength_source: m.strength.source,
+  };
+}
+
+/** The whole analysis as JSON (SI). */
+export function extensionAnalysisRecord(a: ExtensionAnalysis, correction: string): Record<string, unknown> {
+  const g = a.geometry;
+  const it = a.initialTension;
+  const fa = a.fatigue;
+  return {
+    geometry: {
+      wire_diameter: g.wireDiameter, mean_diameter: g.meanDiameter, outer_diameter: g.outerDiameter, inner_diameter: g.innerDiameter,
+      spring_index: g.springIndex, body_coils: g.bodyCoils, active_coils: g.activeCoils, loop: g.loop, loop_height: g.loopHeight,
+      loop_radius: g.loopRadius, bend_radius: g.bendRadius, loop_index: g.loopIndex, bend_index: g.bendIndex, body_length: g.bodyLength,
+      free_length: g.freeLength, wire_length: g.wireLength, wire_volume: g.wireVolume,
+    },
+    rate: a.rate,
+    mass: g.mass,
+    stress_factors: { method: correction, body: a.factors.body, loop_bending: a.factors.loopBending, loop_torsion: a.factors.loopTorsion },
+    initial_tension: {
+      force: it.force, stress: it.stress, preferred_low: it.band.low, preferred_middle: it.band.middle, preferred_high: it.band.high,
+      position: it.position, band_fraction: orNull(bandFraction(a)),
+    },
+    points: a.points.map((p) => ({ length: p.length, extension: p.extension, force: p.force, body_stress: p.bodyStress, loop_bending_stress: p.loopBendingStress, loop_torsion_stress: p.loopTorsionStress })),
+    safety_factors: {
+      static: { body: orNull(a.staticSafety.body), loop_bending: orNull(a.staticSafety.loopBending), loop_torsion: orNull(a.staticSafety.loopTorsion), governing: a.points.length ? SITE_KEYS[a.staticSafety.governing] : null },
+      fatigue: fa ? { body: orNull(fa.body.safetyFactor), loop_bending: orNull(fa.loopBending.safetyFactor), loop_torsion: orNull(fa.loopTorsion.safetyFactor), governing: SITE_KEYS[fa.governing] } : null,
+    },
+    safe_extension: { force: a.safeExtension.force, length: a.safeExtension.length, governing: SITE_KEYS[a.safeExtension.governing] },
+    fatigue: fa && {
+      life: fa.life, cycles: cyclesValue(fa.cycles), criterion: fa.criterion, min_force: fa.minForce, max_force: fa.maxForce,
+      body: siteFatigueJson(fa.body), loop_bending: siteFatigueJson(fa.loopBending), loop_torsion: siteFatigueJson(fa.loopTorsion),
+      body_yield_safety_factor: orNull(fa.bodyYieldSafetyFactor), governing: SITE_KEYS[fa.governing],
+    },
+    natural_frequency: a.surge.frequency,
+  };
+}
+
+export function extensionAnalysisJson(c: ExtensionCase, a: ExtensionAnalysis): Record<string, unknown> {
+  return {
+    units: SI_UNITS,
+    kind: 'extension',
+    material: materialJson(c, a),
+    ...extensionAnalysisRecord(a, c.service.correction),
+    warnings: extensionWarnings(a, c.service),
+    notes: c.notes,
+    caution: EXTENSION_CAUTION,
+  };
+}
+
+const positionWords = { inside: 'inside the preferred range', above: 'ABOVE the preferred range (hard to wind)', below: 'below the preferred range (hard to hold to tolerance)' } as const;
+
+/** The lines that show one analysed spring (shared by `analyze` and the chosen spring of `design`). */
+export function extensionAnalysisLines(a: ExtensionAnalysis, service: ExtensionService, correction: string, system: UnitSystem): string[] {
+  const g = a.geometry;
+  const L = (v: number) => formatQuantity(v, 'length', system);
+  const F = (v: number) => formatQuantity(v, 'force', system);
+  const S = (v: number) => formatQuantity(v, 'stress', system);
+  const out: string[] = [];
+  out.push('Geometry (lengths inside the loops)');
+  out.push(table([
+    ['wire diameter d', L(g.wireDiameter), 'mean diameter D', L(g.meanDiameter)],
+    ['outer diameter', L(g.outerDiameter), 'inner diameter', L(g.innerDiameter)],
+    ['spring index C', sig(g.springIndex), 'body stress factor', `${sig(a.factors.body)} (${correction})`],
+    ['body coils Nb', sig(g.bodyCoils), 'active coils Na = Nb + G/E', sig(g.activeCoils)],
+    ['body length (Nb + 1) d', L(g.bodyLength), 'free length L0', L(g.freeLength)],
+    [`${g.loop} loops: height each`, L(g.loopHeight), 'loop radius r1', `${L(g.loopRadius)} (C1 = ${sig(g.loopIndex, 3)}, (K)A = ${sig(a.factors.loopBending)})`],
+    ['bend radius r2', `${L(g.bendRadius)} (C2 = ${sig(g.bendIndex, 3)}, (K)B = ${sig(a.factors.loopTorsion)})`, 'wire length', L(g.wireLength)],
+    ['rate k', formatQuantity(a.rate, 'rate', system), 'mass', formatQuantity(g.mass, 'mass', system)],
+    ['natural frequency', `${sig(a.surge.frequency)} Hz (both ends fixed)`, '', ''],
+  ]));
+  out.push('');
+  const it = a.initialTension;
+  out.push('Initial tension');
+  out.push(table([
+    ['initial tension Fi', F(it.force), 'its stress tau_i', S(it.stress)],
+    ['preferred range at this index', `${S(it.band.low)} to ${S(it.band.high)}`, 'position', `${positionWords[it.position]}${Number.isFinite(bandFraction(a)) ? `, ${sig(bandFraction(a) * 100, 3)}% of the way up` : ''}`],
+  ]));
+  out.push('');
+  const m = a.material;
+  out.push('Material at this diameter');
+  out.push(table([
+    ['tensile strength Sut', S(m.figures.tensileStrength), 'ultimate shear Ssu', S(m.ultimateShear)],
+    ['allowable, body torsion', S(m.allowables.bodyTorsion), 'shear modulus G', S(m.figures.shearModulus)],
+    ['allowable, loop bending (A)', S(m.allowables.loopBending), 'elastic modulus E', S(m.figures.elasticModulus)],
+    ['allowable, loop torsion (B)', S(m.allowables.loopTorsion), 'max temperature', formatQuantity(m.figures.maxTemperature, 'temperature', system)],
+  ]));
+  out.push(`  allowables: ${m.allowableSource}`);
+  out.push('');
+  out.push('Working points');
+  const rows: string[][] = [['', 'length', 'extension', 'force', 'body stress', 'loop bending (A)', 'loop torsion (B)']];
+  // At the free length the spring already carries its initial tension.
+  const per = stressPerNewton(g.wireDiameter, g.meanDiameter, a.factors.body, a.factors.loopBending, a.factors.loopTorsion);
+  rows.push(['free', L(g.freeLength), L(0), F(it.force), S(per.body * it.force), S(per.loopBending * it.force), S(per.loopTorsion * it.force)]);
+  a.points.forEach((p, i) => rows.push([`point ${i + 1}`, L(p.length), L(p.extension), F(p.force), S(p.bodyStress), S(p.loopBendingStress), S(p.loopTorsionStress)]));
+  out.push(table(rows));
+  if (a.points.length) {
+    const s = a.staticSafety;
+    out.push(`  static safety factors at the longest length: body ${sig(s.body, 3)}, loop bending ${sig(s.loopBending, 3)}, loop torsion ${sig(s.loopTorsion, 3)} (${siteWords(s.governing)} governs)`);
+  }
+  out.push(`  largest pull before a set: ${F(a.safeExtension.force)} at ${L(a.safeExtension.length)} (${siteWords(a.safeExtension.governing)} reaches its allowable first)`);
+  out.push('');
+  const fa = a.fatigue;
+  if (fa) {
+    out.push(`Fatigue (${fa.life === 'infinite' ? 'infinite life' : `${sig(fa.cycles, 3)} cycles`}, ${fa.criterion}; load line from the initial-tension stress; body: ${enduranceSourceLabel(fa.body.enduranceSource, service.peened)})`);
+    const fr: string[][] = [['site', 'initial stress', 'alternating', 'mean', 'alternating strength', 'safety factor']];
+    for (const site of EXTENSION_SITES) {
+      const x = fa[site];
+      fr.push([SITE_SHORT[site], S(x.initialStress), S(x.alternatingStress), S(x.meanStress), S(x.alternatingStrength), Number.isFinite(x.safetyFactor) ? sig(x.safetyFactor, 3) : 'n/a (no alternation)']);
+    }
+    out.push(table(fr));
+    out.push(`  ${siteWords(fa.governing)} governs; body yield along the load line: safety factor ${sig(fa.bodyYieldSafetyFactor, 3)}`);
+  } else {
+    out.push('Fatigue: static service (no cycle count, fewer than 1e4 cycles, or a single length)');
+  }
+  return out;
+}
+
+function cautionLines(): string[] {
+  return [cautionText(), `  - ${EXTENSION_CAUTION}`];
+}
+
+export function extensionAnalysisText(c: ExtensionCase, a: ExtensionAnalysis, system: UnitSystem): string {
+  const m = c.materialChoice.material;
+  const out: string[] = [];
+  out.push(`Extension spring analysis: ${m.name} (${m.standard}), ${a.geometry.loop} loops`);
+  out.push('');
+  out.push(...extensionAnalysisLines(a, c.service, c.service.correction, system));
+  out.push('');
+  const all = [...c.notes, ...extensionWarnings(a, c.service, quantityWriter(system)).map((w) => w.message)];
+  out.push(all.length ? 'Warnings' : 'Warnings: none');
+  for (const w of all) out.push(`  ! ${w}`);
+  out.push('');
+  out.push(...cautionLines());
+  return out.join('\n') + '\n';
+}
+
+// ---- design ----
+
+/** One designed spring as JSON (SI). */
+export function extensionCandidateRecord(c: ExtensionCandidate): Record<string, unknown> {
+  const a = c.analysis;
+  const g = a.geometry;
+  const checks: Record<string, number> = {};
+  EXTENSION_CHECKS.forEach((name, i) => { if (c.checks[i] !== -1) checks[name] = c.checks[i]; });
+  const fa = a.fatigue;
+  return {
+    material: c.item.choice.material.id,
+    material_name: c.item.choice.material.name,
+    loop: g.loop,
+    wire_diameter: g.wireDiameter,
+    mean_diameter: g.meanDiameter,
+    outer_diameter: g.outerDiameter,
+    inner_diameter: g.innerDiameter,
+    spring_index: g.springIndex,
+    body_coils: g.bodyCoils,
+    active_coils: g.activeCoils,
+    free_length: g.freeLength,
+    loop_height: g.loopHeight,
+    loop_radius: g.loopRadius,
+    bend_radius: g.bendRadius,
+    initial_tension: a.initialTension.force,
+    initial_tension_stress: a.initialTension.stress,
+    initial_tension_band: { low: a.initialTension.band.low, high: a.initialTension.band.high, position: a.initialTension.position, fraction: orNull(bandFraction(a)) },
+    rate: a.rate,
+    mass: g.mass,
+    wire_volume: g.wireVolume,
+    relative_cost: g.mass * c.item.choice.material.relativeCost.value,
+    points: a.points.map((p) => ({ length: p.length, force: p.force, body_stress: p.bodyStress, loop_bending_stress: p.loopBendingStress, loop_torsion_stress: p.loopTorsionStress })),
+    tensile_strength: a.material.figures.tensileStrength,
+    allowable_stress: { body_torsion: a.material.allowables.bodyTorsion, loop_bending: a.material.allowables.loopBending, loop_torsion: a.material.allowables.loopTorsion },
+    static_safety_factors: { body: orNull(a.staticSafety.body), loop_bending: orNull(a.staticSafety.loopBending), loop_torsion: orNull(a.staticSafety.loopTorsion) },
+    fatigue_safety_factors: fa ? { body: orNull(fa.body.safetyFactor), loop_bending: orNull(fa.loopBending.safetyFactor), loop_torsion: orNull(fa.loopTorsion.safetyFactor) } : null,
+    static_safety_factor: orNull(staticSafety(a)),
+    fatigue_safety_factor: fatigueSafety(a),
+    natural_frequency: a.surge.frequency,
+    checks,
+    warnings: a.warnings.map((w) => w.message),
+  };
+}
+
+export function extensionRequirementsRecord(req: ExtensionRequirements): Record<string, unknown> {
+  return {
+    kind: 'extension', materials: req.materials.map((m) => m.material.id), loop: req.loop.id, loop_length: req.loopLength ?? null, bend_index: req.bendIndex,
+    working_force: req.workingForce, working_length: req.workingLength, operating_length: req.operatingLength ?? null,
+    operating_force: req.operatingForce ?? null, load_tolerance: req.loadTolerance,
+    max_outer_diameter: req.maxOuterDiameter ?? null, max_free_length: req.maxFreeLength ?? null, max_extended_length: req.maxExtendedLength ?? null,
+    cycles: cyclesValue(req.cycles), wire_sizes: req.wireSizesLabel, body_coils: req.bodyCoils, coil_step: req.coilStep, index: req.index,
+    initial_tension_range: req.initialTensionRange, safety: req.safety, peened: req.peened, fatigue_criterion: req.criterion, stress_factor: req.correction,
+    rank: req.rank,
+  };
+}
+
+/** The checks these requirements ask for, in registry order. */
+export function reportedExtensionChecks(req: ExtensionRequirements): string[] {
+  const on = activeExtensionChecks(req);
+  return EXTENSION_CHECKS.filter((_, i) => on[i]);
+}
+
+export function extensionCountsRecord(run: ExtensionDesignRun): Record<string, unknown> {
+  const r = run.result;
+  const cut: Record<string, number> = {};
+  for (const c of reportedExtensionChecks(run.req)) cut[c] = r.cutBy[c] ?? 0;
+  return { strategy: r.strategy, evaluated: r.evaluations, cells: r.cells, feasible: r.feasibleCells, pruned: r.prunedCells, cut_by: cut };
+}
+
+/** The check that cut the most combinations of an infeasible run, in a few words. */
+export function extensionLimitingText(run: ExtensionDesignRun): string {
+  let best: string | null = null;
+  for (const c of reportedExtensionChecks(run.req)) if ((run.result.cutBy[c] ?? 0) > 0 && (best === null || run.result.cutBy[c] > run.result.cutBy[best])) best = c;
+  return best ? `${best}: ${EXTENSION_CHECK_LABELS[best as keyof typeof EXTENSION_CHECK_LABELS]}` : 'no wire stock fits';
+}
+
+function failingChecks(c: ExtensionCandidate): Record<string, number> {
+  const out: Record<string, number> = {};
+  EXTENSION_CHECKS.forEach((name, i) => { if (c.checks[i] > 1e-9) out[name] = c.checks[i]; });
+  return out;
+}
+
+/** The nearest misses of an infeasible run, analysed as the reported springs are (they fail by definition). */
+function nearestMisses(run: ExtensionDesignRun): ExtensionCandidate[] {
+  return run.result.nearestMisses.map((m) => extensionCandidateAt(run.problem, m.x, m.f));
+}
+
+export function extensionDesignJson(run: ExtensionDesignRun): Record<string, unknown> {
+  const misses = run.candidates.length ? [] : nearestMisses(run);
+  return {
+    units: SI_UNITS,
+    kind: 'extension',
+    requirements: extensionRequirementsRecord(run.req),
+    ...extensionCountsRecord(run),
+    candidates: run.candidates.map(extensionCandidateRecord),
+    ...(run.candidates.length === 0 ? {
+      infeasible: {
+        limiting_check: extensionLimitingText(run),
+        nearest_misses: misses.map((c, i) => ({ ...extensionCandidateRecord(c), violation: run.result.nearestMisses[i].violation, failing_checks: failingChecks(c) })),
+      },
+    } : {}),
+    caution: EXTENSION_CAUTION,
+  };
+}
+
+const num = (v: number, kind: Kind, system: UnitSystem, digits = 4) => sig(inUnit(v, kind, system), digits);
+
+/** The ranked-candidate columns, shared by the terminal table and the HTML report. */
+export function extensionCandidateGrid(cands: ExtensionCandidate[], system: UnitSystem): { header: string[]; rows: string[][] } {
+  const u = (k: Kind) => unitSymbol(k, system);
+  const header = [
+    '#', 'material', `d ${u('length')}`, `D ${u('length')}`, `OD ${u('length')}`, 'Nb', 'Na', `L0 ${u('length')}`,
+    `Fi ${u('force')}`, 'Fi band', `k ${u('rate')}`, `forces ${u('force')}`,
+    `body ${u('stress')}`, `loop A ${u('stress')}`, `loop B ${u('stress')}`, 'SF body/A/B', 'SF fatigue', `mass ${u('mass')}`,
+  ];
+  const rows = cands.map((c, i) => {
+    const a = c.analysis;
+    const g = a.geometry;
+    const last = a.points.reduce((m, p) => (p.force > m.force ? p : m), a.points[0]);
+    const s = a.staticSafety;
+    const nf = fatigueSafety(a);
+    const frac = bandFraction(a);
+    return [
+      String(i + 1), c.item.choice.material.id, num(g.wireDiameter, 'length', system), num(g.meanDiameter, 'length', system),
+      num(g.outerDiameter, 'length', system), sig(g.bodyCoils, 4), sig(g.activeCoils, 4), num(g.freeLength, 'length', system),
+      num(a.initialTension.force, 'force', system, 3), Number.isFinite(frac) ? `${sig(frac * 100, 2)}%` : '-', num(a.rate, 'rate', system),
+      a.points.map((p) => num(p.force, 'force', system, 3)).join(' / '),
+      last ? num(last.bodyStress, 'stress', system) : '-', last ? num(last.loopBendingStress, 'stress', system) : '-', last ? num(last.loopTorsionStress, 'stress', system) : '-',
+      `${sig(s.body, 3)}/${sig(s.loopBending, 3)}/${sig(s.loopTorsion, 3)}`, nf === null ? '-' : `${sig(nf, 3)} ${a.fatigue ? shortSite(a.fatigue.governing) : ''}`.trim(),
+      num(g.mass, 'mass', system, 3),
+    ];
+  });
+  return { header, rows };
+}
+
+const shortSite = (s: ExtensionSite) => (s === 'body' ? 'body' : s === 'loopBending' ? 'A' : 'B');
+
+export function extensionCountsText(run: ExtensionDesignRun): string {
+  const r = run.result;
+  const lines: string[] = [];
+  lines.push(`Searched ${r.cells} combinations of material, wire and body coil count (${run.problem.stock.length} wire stock items) with the ${r.strategy} strategy: ${r.evaluations} candidate evaluations.`);
+  lines.push(`Feasible combinations: ${r.feasibleCells}${r.prunedCells ? `; ${r.prunedCells} skipped because their lightest possible spring could not enter the top ${run.req.top}` : ''}.`);
+  const cut = reportedExtensionChecks(run.req).filter((c) => (r.cutBy[c] ?? 0) > 0).map((c) => [c, String(r.cutBy[c]), EXTENSION_CHECK_LABELS[c as keyof typeof EXTENSION_CHECK_LABELS]]);
+  if (cut.length) {
+    lines.push('Combinations cut, by the check that failed worst:');
+    lines.push(table(cut.sort((a, b) => Number(b[1]) - Number(a[1]))));
+  }
+  return lines.join('\n');
+}
+
+export function extensionDesignHeading(req: ExtensionRequirements, system: UnitSystem): string {
+  const F = (v: number) => formatQuantity(v, 'force', system);
+  const L = (v: number) => formatQuantity(v, 'length', system);
+  return `Extension spring design: ${F(req.workingForce)} at ${L(req.workingLength)} inside the loops` +
+    (req.operatingLength !== undefined ? `, stretched to ${L(req.operatingLength)}${req.operatingForce !== undefined ? ` at ${F(req.operatingForce)}` : ''}` : '') +
+    `; ${req.loop.id} loops; ranked by ${req.rank.replace('_', ' ')}`;
+}
+
+export function extensionDesignText(run: ExtensionDesignRun, system: UnitSystem): string {
+  const out: string[] = [];
+  out.push(extensionDesignHeading(run.req, system));
+  out.push('');
+  if (run.candidates.length) {
+    const t = extensionCandidateGrid(run.candidates, system);
+    out.push(table([t.header, ...t.rows]));
+    out.push('  Fi band: where the initial-tension stress sits in its preferred range (0% its bottom, 100% its top); stresses at the longest working length;');
+    out.push('  A: the loop in bending, B: the bend into the loop in torsion.');
+    out.push('');
+    out.push(extensionCountsText(run));
+    out.push('');
+    const best = run.candidates[0];
+    out.push('The best spring');
+    out.push(...extensionAnalysisLines(best.analysis, run.problem.service(), run.req.correction, system).flatMap((l) => l.split('\n')).map((l) => (l ? `  ${l}` : l)));
+    const warn = extensionWarnings(best.analysis, run.problem.service(), quantityWriter(system));
+    if (warn.length) {
+      out.push('');
+      out.push('Notes on the best spring:');
+      for (const w of warn) out.push(`  ! ${w.message}`);
+    }
+  } else {
+    out.push('No spring meets every requirement.');
+    out.push('');
+    out.push(extensionCountsText(run));
+    const misses = nearestMisses(run);
+    if (misses.length) {
+      out.push('');
+      out.push('Nearest misses (least total violation) and the checks they fail:');
+      const t = extensionCandidateGrid(misses, system);
+      out.push(table([t.header, ...t.rows]));
+      misses.forEach((c, i) => {
+        const f = Object.entries(failingChecks(c)).map(([k, v]) => `${k} by ${sig(v * 100, 3)}%`).join(', ');
+        out.push(`  #${i + 1} fails: ${f}`);
+      });
+    }
+    out.push('');
+    out.push(`Limiting check: ${extensionLimitingText(run)}. Relax that requirement first (a larger bore or free length, a wider load tolerance, a larger index range or more body coils, or initial_tension_range: makeable).`);
+  }
+  out.push('');
+  out.push(...cautionLines());
+  return out.join('\n') + '\n';
+}
