@@ -21,6 +21,8 @@ import { kindOf } from '../kinds/index.js';
 import { InputError } from '../units/parse.js';
 import type { UnitSystem } from '../units/systems.js';
 import { checkOutputPaths, EXIT, type Io } from './io.js';
+// frontier and sweep of extension springs (analyze and design dispatch through the kind registry).
+import { extensionFrontier, extensionSweep, isExtension } from './extension.js';
 import { unitsOption } from './options.js';
 
 export interface CommonOptions {
@@ -164,6 +166,8 @@ async function frontierCommand(file: string, opts: FrontierOptions, io: Io): Pro
     if (given) throw new InputError(option, `an option of design or sweep (frontier lists every spring on the ${opts.x} / ${opts.y} frontier; choose the axes with --x and --y)`);
   }
   checkOutputPaths([{ option: '--output', path: opts.output }, { option: '--report', path: opts.report }], !!opts.force, [file]);
+  const traced = tracedOverrides(file, opts);
+  if (isExtension(traced.doc)) return extensionFrontier(traced.doc, traced.overrides, opts, io);
   const req = requirementsOf(file, opts);
   requirementNotes(req, io);
   const system = opts.units ?? req.system;
@@ -191,11 +195,15 @@ interface SweepOptions extends CommonOptions { vary: string; output?: string }
 
 export interface SweepRow { value: number; run: DesignRun; best: Candidate | null; limiting: string | null }
 
-export function runSweep(file: string, opts: CommonOptions, vary: string, io: Io | null): { path: string[]; rows: SweepRow[]; system: UnitSystem } {
+/** --vary path=from:to:step. */
+function parseVary(vary: string): { path: string[]; values: number[] } {
   const eq = vary.indexOf('=');
   if (eq <= 0) throw new InputError('--vary', 'path=from:to:step, such as envelope.max_outer_diameter=14:24:0.5', vary);
-  const path = parsePath(vary.slice(0, eq), '--vary');
-  const values = sweepValues(vary.slice(eq + 1));
+  return { path: parsePath(vary.slice(0, eq), '--vary'), values: sweepValues(vary.slice(eq + 1)) };
+}
+
+export function runSweep(file: string, opts: CommonOptions, vary: string, io: Io | null): { path: string[]; rows: SweepRow[]; system: UnitSystem } {
+  const { path, values } = parseVary(vary);
   const { doc: base, overrides } = tracedOverrides(file, opts);
   const catalog = loadCatalog();
   // Every value is read before any search runs: a bad one is refused at once, and blamed on --vary.
@@ -232,6 +240,11 @@ export function runSweep(file: string, opts: CommonOptions, vary: string, io: Io
 
 async function sweepCommand(file: string, opts: SweepOptions, io: Io): Promise<number> {
   checkOutputPaths([{ option: '--output', path: opts.output }, { option: '--report', path: opts.report }], !!opts.force, [file]);
+  const traced = tracedOverrides(file, opts);
+  if (isExtension(traced.doc)) {
+    const { path, values } = parseVary(opts.vary);
+    return extensionSweep(traced.doc, traced.overrides, path, values, opts, io);
+  }
   const { path, rows, system: fileSystem } = runSweep(file, opts, opts.vary, io);
   const system = opts.units ?? fileSystem;
   const name = path.join('.');

@@ -3,10 +3,12 @@
 // is its folder plus one line here.
 import { InputError } from '../units/parse.js';
 import { compression } from './compression/index.js';
+import { extension } from './extension/index.js';
 import type { AnySpringKind } from './kind.js';
 
 export const KINDS: readonly AnySpringKind[] = [
   compression,
+  extension,
 ];
 
 export const DEFAULT_KIND = 'compression';

@@ -22,6 +22,8 @@ export interface ExtensionDesignRun {
   problem: ExtensionProblem;
   result: SearchResult;
   candidates: ExtensionCandidate[];
+  /** Wall-clock time of the search, ms (shown only when asked: it differs from run to run). */
+  searchMs: number;
 }
 
 /** A reported spring may miss a check by no more than this (normalised): rounding, not a failure. */
@@ -51,9 +53,11 @@ export interface ExtensionDesignOptions {
 }
 
 export function designExtension(req: ExtensionRequirements, catalog: Catalog, opts: ExtensionDesignOptions = {}, ext: ExtensionCatalog = loadExtensionCatalog(catalog.materials)): ExtensionDesignRun {
+  const t0 = performance.now();
   const problem = opts.problem ?? buildExtensionProblem(req, catalog, ext);
-  const result = gridSearch(problem, { top: req.top, collectAll: opts.collectAll, onProgress: opts.onProgress });
+  // One spring per stock item (material and wire size) when asked: the grid keeps the best of each value of variable 0.
+  const result = gridSearch(problem, { top: req.top, collectAll: opts.collectAll, onProgress: opts.onProgress, bestPerValueOf: req.bestPerWire ? 0 : undefined });
   const candidates = result.best.map((b) => extensionCandidateAt(problem, b.x, b.f));
   candidates.forEach(assertExtensionVerified);
-  return { req, problem, result, candidates };
+  return { req, problem, result, candidates, searchMs: performance.now() - t0 };
 }

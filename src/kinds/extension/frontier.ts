@@ -45,6 +45,7 @@ export function frontierValue(c: ExtensionCandidate, k: ExtensionFrontierKey): n
 
 export function computeExtensionFrontier(req: ExtensionRequirements, catalog: Catalog, x: ExtensionFrontierKey, y: ExtensionFrontierKey,
   onProgress?: (done: number, total: number) => void, built?: ExtensionProblem, ext: ExtensionCatalog = loadExtensionCatalog(catalog.materials)): ExtensionFrontier {
+  const t0 = performance.now();
   const problem = built ?? buildExtensionProblem(req, catalog, ext);
   // Mass, volume, outer diameter, free length and cost grow with the mean diameter within a cell (a loop's
   // wire grows with it faster than its reach shrinks: problem.ts), so a cell's first feasible diameter
@@ -53,7 +54,7 @@ export function computeExtensionFrontier(req: ExtensionRequirements, catalog: Ca
   const result = gridSearch(problem, { top: req.top, collectAll: true, everyFeasiblePoint, onProgress });
   const candidates = result.best.map((b) => extensionCandidateAt(problem, b.x, b.f));
   candidates.forEach(assertExtensionVerified);
-  const run: ExtensionDesignRun = { req, problem, result, candidates };
+  const run: ExtensionDesignRun = { req, problem, result, candidates, searchMs: performance.now() - t0 };
   const buf = result.cloud!;
   const ox = EXTENSION_FRONTIER_KEYS[x].objective;
   const oy = EXTENSION_FRONTIER_KEYS[y].objective;

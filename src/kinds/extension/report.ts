@@ -245,7 +245,7 @@ export function extensionRequirementsRecord(req: ExtensionRequirements): Record<
     max_outer_diameter: req.maxOuterDiameter ?? null, max_free_length: req.maxFreeLength ?? null, max_extended_length: req.maxExtendedLength ?? null,
     cycles: cyclesValue(req.cycles), wire_sizes: req.wireSizesLabel, body_coils: req.bodyCoils, coil_step: req.coilStep, index: req.index,
     initial_tension_range: req.initialTensionRange, safety: req.safety, peened: req.peened, fatigue_criterion: req.criterion, stress_factor: req.correction,
-    rank: req.rank,
+    rank: req.rank, best_per_wire: req.bestPerWire,
   };
 }
 
@@ -280,13 +280,15 @@ function nearestMisses(run: ExtensionDesignRun): ExtensionCandidate[] {
   return run.result.nearestMisses.map((m) => extensionCandidateAt(run.problem, m.x, m.f));
 }
 
-export function extensionDesignJson(run: ExtensionDesignRun): Record<string, unknown> {
+// Wall-clock figures break byte-for-byte reproducibility, so they appear only when asked for (--timing).
+export function extensionDesignJson(run: ExtensionDesignRun, showTiming = false): Record<string, unknown> {
   const misses = run.candidates.length ? [] : nearestMisses(run);
   return {
     units: SI_UNITS,
     kind: 'extension',
     requirements: extensionRequirementsRecord(run.req),
     ...extensionCountsRecord(run),
+    ...(showTiming ? { search_ms: run.searchMs } : {}),
     candidates: run.candidates.map(extensionCandidateRecord),
     ...(run.candidates.length === 0 ? {
       infeasible: {
@@ -330,11 +332,11 @@ export function extensionCandidateGrid(cands: ExtensionCandidate[], system: Unit
 
 const shortSite = (s: ExtensionSite) => (s === 'body' ? 'body' : s === 'loopBending' ? 'A' : 'B');
 
-export function extensionCountsText(run: ExtensionDesignRun): string {
+export function extensionCountsText(run: ExtensionDesignRun, showTiming = false): string {
   const r = run.result;
   const lines: string[] = [];
-  lines.push(`Searched ${r.cells} combinations of material, wire and body coil count (${run.problem.stock.length} wire stock items) with the ${r.strategy} strategy: ${r.evaluations} candidate evaluations.`);
-  lines.push(`Feasible combinations: ${r.feasibleCells}${r.prunedCells ? `; ${r.prunedCells} skipped because their lightest possible spring could not enter the top ${run.req.top}` : ''}.`);
+  lines.push(`Searched ${r.cells} combinations of material, wire and body coil count (${run.problem.stock.length} wire stock items) with the ${r.strategy} strategy: ${r.evaluations} candidate evaluations${showTiming ? ` in ${sig(run.searchMs, 3)} ms` : ''}.`);
+  lines.push(`Feasible combinations: ${r.feasibleCells}${r.prunedCells ? `; ${r.prunedCells} skipped because their lightest possible spring ${run.req.bestPerWire ? 'could not beat the best found for its wire' : `could not enter the top ${run.req.top}`}` : ''}.`);
   const cut = reportedExtensionChecks(run.req).filter((c) => (r.cutBy[c] ?? 0) > 0).map((c) => [c, String(r.cutBy[c]), EXTENSION_CHECK_LABELS[c as keyof typeof EXTENSION_CHECK_LABELS]]);
   if (cut.length) {
     lines.push('Combinations cut, by the check that failed worst:');
@@ -348,10 +350,10 @@ export function extensionDesignHeading(req: ExtensionRequirements, system: UnitS
   const L = (v: number) => formatQuantity(v, 'length', system);
   return `Extension spring design: ${F(req.workingForce)} at ${L(req.workingLength)} inside the loops` +
     (req.operatingLength !== undefined ? `, stretched to ${L(req.operatingLength)}${req.operatingForce !== undefined ? ` at ${F(req.operatingForce)}` : ''}` : '') +
-    `; ${req.loop.id} loops; ranked by ${req.rank.replace('_', ' ')}`;
+    `; ${req.loop.id} loops; ranked by ${req.rank.replace('_', ' ')}${req.bestPerWire ? ', the best spring of each material and wire size' : ''}`;
 }
 
-export function extensionDesignText(run: ExtensionDesignRun, system: UnitSystem): string {
+export function extensionDesignText(run: ExtensionDesignRun, system: UnitSystem, showTiming = false): string {
   const out: string[] = [];
   out.push(extensionDesignHeading(run.req, system));
   out.push('');
@@ -361,7 +363,7 @@ export function extensionDesignText(run: ExtensionDesignRun, system: UnitSystem)
     out.push('  Fi band: where the initial-tension stress sits in its preferred range (0% its bottom, 100% its top); stresses at the longest working length;');
     out.push('  A: the loop in bending, B: the bend into the loop in torsion.');
     out.push('');
-    out.push(extensionCountsText(run));
+    out.push(extensionCountsText(run, showTiming));
     out.push('');
     const best = run.candidates[0];
     out.push('The best spring');

@@ -53,6 +53,8 @@ export interface ExtensionRequirements {
   forcingFrequency?: number;
   safety: { static: number; fatigue: number; surge: number };
   rank: ExtensionRankKey;
+  /** List the best spring of each material and wire size instead of the best overall. */
+  bestPerWire: boolean;
   top: number;
   seed: number;
   /** Mean-diameter scan step (mm) for the checks that are not monotone in it. */
@@ -169,6 +171,7 @@ export function readExtensionRequirements(raw: unknown, catalog: Catalog, ext: E
     forcingFrequency: f.quantity('forcing_frequency', 'frequency', { nonNegative: true }),
     safety,
     rank: (f.choice('rank', EXTENSION_RANK_KEYS) ?? DEFAULTS.rank) as ExtensionRankKey,
+    bestPerWire: f.bool('best_per_wire') ?? false,
     top: f.number('top', { integer: true, positive: true, max: 1000 }) ?? DEFAULTS.top,
     seed: f.number('seed', { integer: true }) ?? DEFAULTS.seed,
     diameterResolution: f.quantity('diameter_resolution', 'length', { positive: true }) ?? DEFAULTS.diameterResolution,

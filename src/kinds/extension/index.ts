@@ -1,0 +1,100 @@
+// Helical extension springs as one SpringKind: what `analyze`, `design` and the library API call when a
+// document says `kind: extension`. Everything here is read from this folder's modules; the registries
+// (checks, objectives, fields) are the lists the search and the reports already use.
+import { loadCatalog } from '../../catalogs/load.js';
+import { STATIC_SERVICE_CYCLES } from '../../model/fatigue.js';
+import { InputError } from '../../units/parse.js';
+import type { CheckDefinition, ObjectiveDefinition, SpringKind, Trend } from '../kind.js';
+import { EXTENSION_CAUTION, analyzeExtension, type ExtensionAnalysis } from './analysis.js';
+import { loadExtensionCatalog } from './catalog.js';
+import { EXTENSION_CHECKS, EXTENSION_CHECK_LABELS, activeExtensionChecks, type ExtensionCheck } from './checks.js';
+import { designExtension, extensionCandidateAt, type ExtensionCandidate, type ExtensionDesignRun } from './design.js';
+import { EXTENSION_FIELDS } from './fields.js';
+import { buildExtensionProblem } from './problem.js';
+import { extensionAnalysisJson, extensionAnalysisText, extensionDesignJson, extensionDesignText } from './report.js';
+import { readExtensionRequirements, type ExtensionRequirements } from './requirements.js';
+import { readExtensionSpring, type ExtensionCase } from './springFile.js';
+
+const inc: Trend = 1;
+const dec: Trend = -1;
+const unk: Trend = 0;
+/** The stresses are monotone in the mean diameter only when the force is fixed (no stroke): problem.ts. */
+const stressTrend = (r: ExtensionRequirements): Trend => (r.operatingLength === undefined ? inc : unk);
+
+const CHECK_TRENDS: Record<ExtensionCheck, (r: ExtensionRequirements) => Trend> = {
+  index_min: () => dec, index_max: () => inc, outer_diameter: () => inc, free_length: () => inc, working_extension: () => inc,
+  initial_tension_min: () => unk, initial_tension_max: () => unk,
+  body_stress: stressTrend, loop_bending_stress: stressTrend, loop_torsion_stress: stressTrend,
+  body_fatigue: () => unk, loop_bending_fatigue: () => unk, loop_torsion_fatigue: () => unk,
+  operating_force_min: () => inc, operating_force_max: () => dec, extended_stress: () => unk, surge: () => inc, temperature: () => inc,
+};
+
+const stressRelief = ['operating_length', 'operating_force', 'body_coils', 'material', 'safety.static'];
+const CHECK_RELAXED_BY: Record<ExtensionCheck, readonly string[]> = {
+  index_min: ['index'], index_max: ['index'], outer_diameter: ['envelope.max_outer_diameter'], free_length: ['envelope.max_free_length', 'loop'],
+  working_extension: ['load', 'body_coils', 'loop'], initial_tension_min: ['initial_tension_range', 'load'], initial_tension_max: ['load', 'body_coils'],
+  body_stress: stressRelief, loop_bending_stress: stressRelief, loop_torsion_stress: [...stressRelief, 'bend_index'],
+  body_fatigue: ['cycles', 'operating_length', 'material', 'safety.fatigue'], loop_bending_fatigue: ['cycles', 'operating_length', 'material', 'safety.fatigue'],
+  loop_torsion_fatigue: ['cycles', 'operating_length', 'bend_index', 'material', 'safety.fatigue'],
+  operating_force_min: ['operating_force', 'load_tolerance', 'body_coils'], operating_force_max: ['operating_force', 'load_tolerance', 'body_coils'],
+  extended_stress: ['envelope.max_extended_length', 'material'], surge: ['safety.surge'], temperature: ['material'],
+};
+
+/** The checks of an extension spring, in the order of the search's g[] (checks.ts, XC). */
+export const EXTENSION_CHECK_DEFINITIONS: readonly CheckDefinition<ExtensionRequirements>[] = EXTENSION_CHECKS.map((name, i) => ({
+  name, label: EXTENSION_CHECK_LABELS[name], trend: CHECK_TRENDS[name], active: (r: ExtensionRequirements) => activeExtensionChecks(r)[i], relaxedBy: CHECK_RELAXED_BY[name],
+}));
+
+/** The objectives, in the order of the search's f[1..] (problem.ts, XO). */
+export const EXTENSION_OBJECTIVE_DEFINITIONS = [
+  { key: 'mass', label: 'mass', unit: 'mass', sign: 1, trend: 1, rankable: true, frontierAxis: true, lpBound: false },
+  { key: 'wire_volume', label: 'wire volume', unit: 'volume', sign: 1, trend: 1, rankable: true, frontierAxis: true, lpBound: false },
+  { key: 'outer_diameter', label: 'outer diameter', unit: 'length', sign: 1, trend: 1, rankable: true, frontierAxis: true, lpBound: false },
+  { key: 'free_length', label: 'free length inside the loops', unit: 'length', sign: 1, trend: 1, rankable: true, frontierAxis: true, lpBound: false },
+  { key: 'safety_factor', label: 'safety factor (lowest of body, loops, static and fatigue)', unit: null, sign: -1, trend: 0, rankable: true, frontierAxis: true, lpBound: false },
+  { key: 'relative_cost', label: 'relative cost (mass x cost factor)', unit: null, sign: 1, trend: 1, rankable: false, frontierAxis: true, lpBound: false },
+] as const satisfies readonly ObjectiveDefinition[];
+
+export type ExtensionKind = SpringKind<ExtensionCase, ExtensionAnalysis, ExtensionRequirements, ExtensionDesignRun, ExtensionCandidate>;
+
+export const extension: ExtensionKind = {
+  id: 'extension',
+  label: 'helical extension spring',
+  readSpring: (raw, catalog) => readExtensionSpring(raw, catalog, loadExtensionCatalog(catalog.materials)),
+  analyse: (c) => analyzeExtension(c.geometry, c.material, c.service),
+  readRequirements: (raw, catalog) => readExtensionRequirements(raw, catalog, loadExtensionCatalog(catalog.materials)),
+  buildProblem(req, catalog) {
+    const p = buildExtensionProblem(req, catalog, loadExtensionCatalog(catalog.materials));
+    return Object.assign(p, { candidateAt: (x: ArrayLike<number>, f: Float64Array) => extensionCandidateAt(p, x, f) });
+  },
+  design(req, catalog, request = {}) {
+    // The grid visits every extension space the readers admit; there is no genetic search for them yet.
+    if (request.strategy === 'genetic') throw new InputError('--strategy', 'grid or auto (extension springs are searched by the exhaustive grid)', 'genetic');
+    return designExtension(req, catalog, { onProgress: request.onProgress }, loadExtensionCatalog(catalog.materials));
+  },
+  found: (run) => run.candidates.length > 0,
+  checks: EXTENSION_CHECK_DEFINITIONS,
+  objectives: EXTENSION_OBJECTIVE_DEFINITIONS,
+  fields: EXTENSION_FIELDS,
+  report: {
+    analysisText: (c, a, system) => extensionAnalysisText(c, a, system),
+    analysisJson: (c, a) => extensionAnalysisJson(c, a),
+    async analysisHtml(c, a, system) {
+      const { extensionAnalysisHtml } = await import('./html.js');
+      return extensionAnalysisHtml(c, a, system);
+    },
+    designText: (run, system, showTiming) => extensionDesignText(run, system, showTiming),
+    designJson: (run, showTiming) => extensionDesignJson(run, showTiming),
+    async designHtml(run, system) {
+      const { extensionDesignHtml } = await import('./html.js');
+      return extensionDesignHtml(run, system, loadCatalog());
+    },
+    requirementNotes(req) {
+      const notes: string[] = [];
+      if (req.cycles !== undefined && req.cycles < STATIC_SERVICE_CYCLES) notes.push(`cycles ${req.cycles} is below ${STATIC_SERVICE_CYCLES.toExponential(0).replace('+', '')}: judged as static service (no fatigue check)`);
+      if (req.cycles !== undefined && req.cycles >= STATIC_SERVICE_CYCLES && req.operatingLength === undefined) notes.push('cycles given without operating_length: one working length is no load cycle (no fatigue check)');
+      return notes;
+    },
+  },
+  cautions: [EXTENSION_CAUTION],
+};
