@@ -118,6 +118,8 @@ async function designCommand(file: string, opts: CommonOptions & { spec?: string
   // The document's `kind` picks the spring kind (src/kinds/index.ts); no kind is compression.
   const { doc, overrides } = tracedOverrides(file, opts);
   const kind = kindOf(doc);
+  // Refused before anything runs or is written (the report would be written first).
+  if (opts.spec && !kind.report.writeSpecSheet) throw new InputError('--spec', `a kind that has a specification sheet (the ${kind.label} sheet is not built yet)`);
   const catalog = loadCatalog();
   let req;
   try {
