@@ -148,6 +148,15 @@ describe('coilfront frontier and sweep, kind: extension', () => {
     expect(j.frontier.length).toBe(rows.length);
     const us = await cli('frontier', DEMO, '--units', 'us');
     expect(us.stdout.split('\n')[0]).toMatch(/initial_tension_lbf/);
+    // Every spring on the front, written as a spring file, analyses to the same figures within the limits.
+    for (const c of j.frontier) {
+      const a = JSON.parse((await cli('analyze', springFileOf(c, [60, 75], { cycles: 2e5 }), '--json')).stdout);
+      expect(relClose(a.mass, c.mass, 1e-9)).toBe(true);
+      expect(relClose(a.geometry.outer_diameter, c.outer_diameter, 1e-12)).toBe(true);
+      expect(a.geometry.outer_diameter).toBeLessThanOrEqual(14 + 1e-9);
+      expect(Math.min(a.safety_factors.static.body, a.safety_factors.static.loop_bending, a.safety_factors.static.loop_torsion)).toBeGreaterThanOrEqual(1.2 - 1e-6);
+      expect(a.initial_tension.position).toBe('inside');
+    }
   });
 
   it('frontier refuses an objective extension springs do not have, naming --x', async () => {
@@ -167,5 +176,21 @@ describe('coilfront frontier and sweep, kind: extension', () => {
     const j = JSON.parse((await cli('sweep', DEMO, '--vary', 'envelope.max_outer_diameter=8:14:2', '--json')).stdout);
     expect(j.rows[0].best).toBeNull();
     expect(j.rows[0].limiting_check).toMatch(/^[a-z_]+: /);
+  });
+});
+
+describe('README, extension springs', () => {
+  it('shows demo output that `design examples/extension-pedal-bin.yaml` really prints', async () => {
+    const readme = readFileSync('README.md', 'utf8');
+    const section = readme.slice(readme.indexOf('## Extension springs'));
+    const start = section.indexOf('```\n') + 4;
+    const block = section.slice(start, section.indexOf('\n```', start));
+    const out = (await cli('design', DEMO)).stdout;
+    const shown = block.split('\n').filter((l) => l.trim() !== '...' && l.trim() !== '');
+    expect(shown.length).toBeGreaterThan(4);
+    for (const line of shown) expect(out, line).toContain(line);
+    // The example spring file is the design's best spring as drawn.
+    expect(section).toContain('npm run coilfront -- analyze examples/extension-pedal-bin-spring.yaml');
+    expect((await cli('analyze', SPRING)).code).toBe(0);
   });
 });
