@@ -1,6 +1,7 @@
 // The requirements file of `coilfront design`, `frontier` and `sweep`: what the spring must do and
 // where it must fit. Every field but load, material and envelope has a default, documented in the README.
 import { FAMILIES, type Catalog } from '../catalogs/types.js';
+import { RANK_KEYS, type RankKey } from '../kinds/compression/objectives.js';
 import { findSeries } from '../catalogs/load.js';
 import { inStrengthRange } from '../catalogs/properties.js';
 import { formatQuantity } from '../units/format.js';
@@ -19,8 +20,8 @@ import { parseCycles } from './springFile.js';
 import { readToleranceRequirements } from '../tolerance/request.js';
 import type { ToleranceRequest } from '../tolerance/model.js';
 
-export const RANK_KEYS = ['mass', 'wire_volume', 'outer_diameter', 'free_length', 'safety_factor'] as const;
-export type RankKey = (typeof RANK_KEYS)[number];
+// What may rank the springs is the objectives registry's to say.
+export { RANK_KEYS, type RankKey };
 
 export interface Requirements {
   system: UnitSystem;

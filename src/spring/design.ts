@@ -6,8 +6,9 @@ import { gridSearch } from '../search/grid.js';
 import { valueCount } from '../search/problem.js';
 import type { SearchResult } from '../search/result.js';
 import { CHECKS, activeChecks, checkAnalysis } from './checks.js';
+import { Objective } from '../kinds/compression/objectives.js';
 import { lpLowerBound, type LpBound } from './lpBound.js';
-import { OBJ, buildSpringProblem, type SpringProblem, type StockItem } from './problem.js';
+import { buildSpringProblem, type SpringProblem, type StockItem } from './problem.js';
 import type { CandidateYield } from '../tolerance/confirm.js';
 
 export type StrategyChoice = 'auto' | 'grid' | 'genetic';
@@ -91,7 +92,7 @@ export function runDesign(req: Requirements, opts: DesignOptions = {}): DesignRu
   const candidates = result.best.map((b) => candidateAt(problem, b.x, b.f));
   candidates.forEach(assertVerified);
   const lp: LpBound = opts.skipBound ? { value: null, status: 'not-applicable', models: 0 } : lpLowerBound(problem);
-  const bestValue = candidates.length ? (req.rank === 'mass' ? candidates[0].objectives[OBJ.mass] : candidates[0].objectives[OBJ.wire_volume]) : NaN;
+  const bestValue = candidates.length ? (req.rank === 'mass' ? candidates[0].objectives[Objective.mass] : candidates[0].objectives[Objective.wire_volume]) : NaN;
   const gap = lp.value !== null && Number.isFinite(bestValue) ? (bestValue - lp.value) / bestValue : null;
   return { req, problem, result, candidates, lp, gap, cells, searchMs, document: opts.document };
 }

@@ -4,19 +4,18 @@ import type { Requirements } from '../input/requirements.js';
 import { paretoFront2 } from '../search/pareto.js';
 import { geneticFront } from '../search/geneticFront.js';
 import { AUTO_GRID_CELL_LIMIT, assertVerified, candidateAt, cellCount, runDesign, type Candidate, type DesignRun, type StrategyChoice } from './design.js';
-import { OBJ, buildSpringProblem, type SpringProblem } from './problem.js';
+import { buildSpringProblem, type SpringProblem } from './problem.js';
+import { COMPRESSION_OBJECTIVES, Objective, type FrontierKey } from '../kinds/compression/objectives.js';
+import type { Kind } from '../units/kinds.js';
 
-export const FRONTIER_KEYS = {
-  mass: { objective: OBJ.mass, sign: 1, kind: 'mass' as const, label: 'mass' },
-  wire_volume: { objective: OBJ.wire_volume, sign: 1, kind: null, label: 'wire volume' },
-  outer_diameter: { objective: OBJ.outer_diameter, sign: 1, kind: 'length' as const, label: 'outer diameter' },
-  free_length: { objective: OBJ.free_length, sign: 1, kind: 'length' as const, label: 'free length' },
-  relative_cost: { objective: OBJ.relative_cost, sign: 1, kind: null, label: 'relative cost (mass x cost factor)' },
-  safety_factor: { objective: OBJ.neg_safety_factor, sign: -1, kind: null, label: 'safety factor (lowest of static and fatigue)' },
-  static_safety: { objective: OBJ.neg_static_safety, sign: -1, kind: null, label: 'static safety factor' },
-  fatigue_safety: { objective: OBJ.neg_fatigue_safety, sign: -1, kind: null, label: 'fatigue safety factor' },
-} as const;
-export type FrontierKey = keyof typeof FRONTIER_KEYS;
+export interface FrontierAxis { objective: number; sign: 1 | -1; kind: Kind | null; label: string }
+
+/** The frontier axes, from the objectives registry: the slot in f, the sign it is stored with, the
+ * unit kind (null for a plain number; the wire volume is labelled in mm^3) and the label. */
+export const FRONTIER_KEYS = Object.fromEntries(COMPRESSION_OBJECTIVES.filter((o) => o.frontierAxis).map((o) => [o.key,
+  { objective: Objective[o.key], sign: o.sign, kind: o.unit === 'volume' ? null : o.unit, label: o.label }])) as Record<FrontierKey, FrontierAxis>;
+export type { FrontierKey };
+
 
 export interface Frontier { run: DesignRun; x: FrontierKey; y: FrontierKey; strategy: 'grid' | 'genetic'; cloud: { x: number; y: number }[]; front: Candidate[] }
 

@@ -16,13 +16,12 @@ import { stressFactor } from '../model/stressFactor.js';
 import { ultimateShearStrength } from '../model/strength.js';
 import { activeCoilMass, surgeFrequency } from '../model/surge.js';
 import { TREND, type Problem } from '../search/problem.js';
-import { COMPRESSION_CHECKS } from '../kinds/compression/checks.js';
-import { CHECK, CHECKS, activeChecks, figuresUnder, forceBand, shortestLength, staticLimit } from './checks.js';
+import { COMPRESSION_CHECKS, Check } from '../kinds/compression/checks.js';
+import { OBJECTIVE_SLOTS, Objective, objectiveByKey } from '../kinds/compression/objectives.js';
+import { CHECKS, activeChecks, figuresUnder, forceBand, shortestLength, staticLimit } from './checks.js';
 import { loadToleranceCatalog, type ToleranceCatalog } from '../tolerance/catalog.js';
 import { inSearchYield } from '../tolerance/inSearch.js';
 
-export const OBJECTIVES = ['rank', 'mass', 'wire_volume', 'outer_diameter', 'free_length', 'neg_safety_factor', 'neg_static_safety', 'neg_fatigue_safety', 'relative_cost'] as const;
-export const OBJ = Object.fromEntries(OBJECTIVES.map((o, i) => [o, i])) as Record<(typeof OBJECTIVES)[number], number>;
 
 export interface StockItem { choice: MaterialChoice; wireDiameter: number; figures: MaterialFigures }
 
@@ -119,17 +118,15 @@ export function buildSpringProblem(req: Requirements, tolerances?: ToleranceCata
   const invNfTarget = 1 / nfTarget;
   const sInvLimit = Float64Array.from(sLimit, (v) => 1 / v);
   const temperature = req.temperature ?? -Infinity;
-  const rankObjective = OBJ[req.rank === 'safety_factor' ? 'neg_safety_factor' : req.rank];
+  const rankObjective = Objective[req.rank];
   const criterion = req.criterion;
   const directShear = req.directShear;
   // min_yield: the estimated yield of the made springs, worked out only for a candidate that passes
   // every other check (the estimate costs some fifty check evaluations).
   const yieldOf = req.minYield !== undefined ? inSearchYield(req, stock, ends, tolerances ?? loadToleranceCatalog()) : null;
   const minYield = req.minYield ?? 1;
-  const YIELD = CHECK.yield;
+  const YIELD = Check.yield;
 
-  const inc = TREND.increasing;
-  const unk = TREND.unknown;
   const NaFewest = req.activeCoils[0];
   const NaMost = req.activeCoils[1];
   const dMin = sd.length ? Math.min(...sd) : 1;
@@ -147,10 +144,11 @@ export function buildSpringProblem(req: Requirements, tolerances?: ToleranceCata
     // Mass, volume, outer diameter and free length at the smallest allowed diameter grow with the coil count.
     boundGrowsAlong: req.rank === 'safety_factor' ? undefined : 2,
     constraintNames: CHECKS,
-    objectiveNames: OBJECTIVES,
+    objectiveNames: OBJECTIVE_SLOTS,
     // Trends in the mean diameter, from the checks registry.
     constraintTrend: Int8Array.from(COMPRESSION_CHECKS.map((c) => c.trend(req))),
-    objectiveTrend: Int8Array.from(OBJECTIVES.map((o, i) => (i === 0 ? (req.rank === 'safety_factor' ? unk : inc) : unk))),
+    // The ranked objective's trend comes from the registry; the others are only carried along.
+    objectiveTrend: Int8Array.from(OBJECTIVE_SLOTS.map((_, i) => (i === 0 ? objectiveByKey(req.rank).trend : TREND.unknown))),
 
     // The index bounds clip the diameter interval directly. The bore and rod limits are left to the
     // bisection so that the points just past them are evaluated: they tell what relaxing them would buy.
@@ -167,38 +165,38 @@ export function buildSpringProblem(req: Requirements, tolerances?: ToleranceCata
     branchInfeasible(x, depth) {
       const i = x[0];
       const d = sd[i];
-      if (activeMask[16] === 1 && temperature > sTmax[i]) return CHECK.temperature;
+      if (activeMask[Check.temperature] === 1 && temperature > sTmax[i]) return Check.temperature;
       let Dlo = Cmin * d;
       let Dhi = Cmax * d;
-      if (activeMask[2] === 1) Dhi = Math.min(Dhi, ODmax - d);
-      if (activeMask[3] === 1) Dlo = Math.max(Dlo, IDmin + d);
-      if (Dlo > Dhi * (1 + 1e-12)) return ODmax - d < Cmin * d || activeMask[3] === 0 ? CHECK.outer_diameter : IDmin + d > Cmax * d ? CHECK.inner_diameter : CHECK.outer_diameter;
+      if (activeMask[Check.outer_diameter] === 1) Dhi = Math.min(Dhi, ODmax - d);
+      if (activeMask[Check.inner_diameter] === 1) Dlo = Math.max(Dlo, IDmin + d);
+      if (Dlo > Dhi * (1 + 1e-12)) return ODmax - d < Cmin * d || activeMask[Check.inner_diameter] === 0 ? Check.outer_diameter : IDmin + d > Cmax * d ? Check.inner_diameter : Check.outer_diameter;
       const kMax = springRate(sG[i], d, Dlo, NaFewest, directShear);
       const kMin = springRate(sG[i], d, Dhi, NaMost, directShear);
       let LsMin = Infinity;
       for (let e = depth >= 2 ? x[1] : 0; e < (depth >= 2 ? x[1] + 1 : ends.length); e++) LsMin = Math.min(LsMin, solidLength(d, NaFewest + endQ[e], ends[e]));
       const L0min = L1 + F1 / kMax;
-      if (activeMask[4] === 1 && L0min > L0max) return CHECK.free_length;
-      if (activeMask[5] === 1 && LsMin > Lsmax) return CHECK.solid_length;
-      if (LsMin + xi * (L0min - Lmin) > Lmin) return CHECK.clash;
+      if (activeMask[Check.free_length] === 1 && L0min > L0max) return Check.free_length;
+      if (activeMask[Check.solid_length] === 1 && LsMin > Lsmax) return Check.solid_length;
+      if (LsMin + xi * (L0min - Lmin) > Lmin) return Check.clash;
       const F2lo = F1 + kMin * travel;
       const F2hi = F1 + kMax * travel;
-      if (activeMask[14] === 1) {
-        if (F2hi < F2req * (1 - tol)) return CHECK.operating_force_min;
-        if (F2lo > F2req * (1 + tol)) return CHECK.operating_force_max;
+      if (activeMask[Check.operating_force_min] === 1) {
+        if (F2hi < F2req * (1 - tol)) return Check.operating_force_min;
+        if (F2lo > F2req * (1 + tol)) return Check.operating_force_max;
       }
       // A feasible point carries at least the lower end of the operating band.
-      const F2least = activeMask[14] === 1 ? Math.max(F2lo, F2req * (1 - tol)) : F2lo;
+      const F2least = activeMask[Check.operating_force_min] === 1 ? Math.max(F2lo, F2req * (1 - tol)) : F2lo;
       const Kmin = stressFactor(Dhi / d, correction);
       const limit = sLimit[i];
-      if (shearStress(F2least, Dlo, d, Kmin) * staticFactor > limit) return CHECK.static_stress;
-      if (activeMask[11] === 1 && F2least > F1) {
+      if (shearStress(F2least, Dlo, d, Kmin) * staticFactor > limit) return Check.static_stress;
+      if (activeMask[Check.fatigue] === 1 && F2least > F1) {
         const tauMin = shearStress(F1, Dlo, d, Kmin);
         const tauMax = shearStress(F2least, Dlo, d, Kmin);
         const nf = fatigueSafetyFactorFrom(0.5 * shearStress(F2least - F1, Dlo, d, Kmin), 0.5 * (tauMax + tauMin), sPoint[i], sSsu[i], sSse[i], criterion);
-        if (nf < nfTarget) return CHECK.fatigue;
+        if (nf < nfTarget) return Check.fatigue;
       }
-      if (surgeNeed > 0 && surgeFrequency(kMax, activeCoilMass(d, Dlo, NaFewest, sRho[i]), oneEndFree) < surgeNeed) return CHECK.surge;
+      if (surgeNeed > 0 && surgeFrequency(kMax, activeCoilMass(d, Dlo, NaFewest, sRho[i]), oneEndFree) < surgeNeed) return Check.surge;
       return -1;
     },
 
@@ -213,14 +211,14 @@ export function buildSpringProblem(req: Requirements, tolerances?: ToleranceCata
       const kMin = springRate(sG[i], d, hi, Na, directShear);
       const Kmin = stressFactor(hi / d, correction);
       const limit = sLimit[i];
-      out[9] = (shearStress(F1 + kMin * travel, lo, d, Kmin) * staticFactor - limit) / limit;
-      if (activeMask[10] === 1) {
+      out[Check.static_stress] = (shearStress(F1 + kMin * travel, lo, d, Kmin) * staticFactor - limit) / limit;
+      if (activeMask[Check.solid_stress] === 1) {
         // The solid force F1 + k (L1 - Ls) is least at the softest rate. (With L1 < Ls the coils would
         // be solid before the working length: no bound is offered, the clash check rules that out.)
         const room = L1 - solidLength(d, Na + endQ[e], ends[e]);
-        if (room >= 0) out[10] = (shearStress(F1 + kMin * room, lo, d, Kmin) - limit) / limit;
+        if (room >= 0) out[Check.solid_stress] = (shearStress(F1 + kMin * room, lo, d, Kmin) - limit) / limit;
       }
-      if (activeMask[11] === 1 && travel > 0) {
+      if (activeMask[Check.fatigue] === 1 && travel > 0) {
         // Every criterion's safety factor falls as the alternating or the mean stress rises (the load
         // point moves outwards from the origin), so the least stresses over the bracket give the
         // largest safety factor it can reach.
@@ -228,16 +226,16 @@ export function buildSpringProblem(req: Requirements, tolerances?: ToleranceCata
         const tauMax = shearStress(F1 + kMin * travel, lo, d, Kmin);
         const alt = 0.5 * shearStress(kMin * travel, lo, d, Kmin);
         const nf = fatigueSafetyFactorFrom(alt, 0.5 * (tauMax + tauMin), sPoint[i], sSsu[i], sSse[i], criterion);
-        if (nf === nf) out[11] = (nfTarget - nf) * invNfTarget;
+        if (nf === nf) out[Check.fatigue] = (nfTarget - nf) * invNfTarget;
       }
-      if (activeMask[12] === 1) {
+      if (activeMask[Check.buckling] === 1) {
         // The free length grows with D; the critical share of it, C1 (1 - sqrt(1 - C2 / lambda^2)),
         // grows as the slenderness lambda = alpha L0 / D falls, and L0 / (L0 - Lmin) falls as L0
         // grows: take the least slenderness and the shortest free length of the bracket.
         const L0lo = L1 + F1 / springRate(sG[i], d, lo, Na, directShear);
         const lambda = (alpha * L0lo) / hi;
         const q = sC2[i] / (lambda * lambda);
-        if (q < 1) out[12] = 1 - (sC1[i] * (1 - Math.sqrt(1 - q)) * L0lo) / (L0lo - Lmin);
+        if (q < 1) out[Check.buckling] = 1 - (sC1[i] * (1 - Math.sqrt(1 - q)) * L0lo) / (L0lo - Lmin);
       }
     },
 
@@ -260,41 +258,41 @@ export function buildSpringProblem(req: Requirements, tolerances?: ToleranceCata
 
       // Checks that do not apply stay at -1 and cost nothing.
       // Normalised by the limit; reciprocals are held outside the loop (a multiply is cheaper).
-      g[0] = (Cmin - C) * invCmin;
-      g[1] = (C - Cmax) * invCmax;
-      g[2] = activeMask[2] === 1 ? (D + d - ODmax) * invODmax : -1;
-      g[3] = activeMask[3] === 1 ? (IDmin - (D - d)) * invIDmin : -1;
-      g[4] = activeMask[4] === 1 ? (L0 - L0max) * invL0max : -1;
-      g[5] = activeMask[5] === 1 ? (Ls - Lsmax) * invLsmax : -1;
-      g[6] = (Ls + xi * (L0 - Lmin) - Lmin) * invLmin;
-      if (activeMask[7] === 1) {
+      g[Check.index_min] = (Cmin - C) * invCmin;
+      g[Check.index_max] = (C - Cmax) * invCmax;
+      g[Check.outer_diameter] = activeMask[Check.outer_diameter] === 1 ? (D + d - ODmax) * invODmax : -1;
+      g[Check.inner_diameter] = activeMask[Check.inner_diameter] === 1 ? (IDmin - (D - d)) * invIDmin : -1;
+      g[Check.free_length] = activeMask[Check.free_length] === 1 ? (L0 - L0max) * invL0max : -1;
+      g[Check.solid_length] = activeMask[Check.solid_length] === 1 ? (Ls - Lsmax) * invLsmax : -1;
+      g[Check.clash] = (Ls + xi * (L0 - Lmin) - Lmin) * invLmin;
+      if (activeMask[Check.coil_gaps] === 1) {
         const minGap = minimumGapSum(D, d, Na);
-        g[7] = (minGap - (Lmin - Ls)) / minGap;
-      } else g[7] = -1;
-      g[8] = activeMask[8] === 1 ? (solidOuterDiameter(D, d, pitch(L0, Na, d, endType)) - ODmax) * invODmax : -1;
+        g[Check.coil_gaps] = (minGap - (Lmin - Ls)) / minGap;
+      } else g[Check.coil_gaps] = -1;
+      g[Check.outer_diameter_at_solid] = activeMask[Check.outer_diameter_at_solid] === 1 ? (solidOuterDiameter(D, d, pitch(L0, Na, d, endType)) - ODmax) * invODmax : -1;
       const staticSafety = limit / tauMax;
       const invLimit = sInvLimit[i];
-      g[9] = (tauMax * staticFactor - limit) * invLimit;
-      g[10] = activeMask[10] === 1 ? (shearStress(k * (L0 - Ls), D, d, K) - limit) * invLimit : -1;
+      g[Check.static_stress] = (tauMax * staticFactor - limit) * invLimit;
+      g[Check.solid_stress] = activeMask[Check.solid_stress] === 1 ? (shearStress(k * (L0 - Ls), D, d, K) - limit) * invLimit : -1;
       let fatigueSafety = NaN;
-      if (activeMask[11] === 1) {
+      if (activeMask[Check.fatigue] === 1) {
         const tauMin = shearStress(F1, D, d, K);
         const alt = 0.5 * (tauMax - tauMin);
         const mean = 0.5 * (tauMax + tauMin);
         fatigueSafety = fatigueSafetyFactorFrom(alt, mean, sPoint[i], sSsu[i], sSse[i], criterion);
-        g[11] = (nfTarget - fatigueSafety) * invNfTarget;
-      } else g[11] = -1;
-      if (activeMask[12] === 1) {
+        g[Check.fatigue] = (nfTarget - fatigueSafety) * invNfTarget;
+      } else g[Check.fatigue] = -1;
+      if (activeMask[Check.buckling] === 1) {
         const ymax = L0 - Lmin;
         const ycr = criticalDeflectionFrom(L0, D, sC1[i], sC2[i], alpha);
-        g[12] = ycr === ycr ? (ymax - ycr) / ymax : -1;
-      } else g[12] = -1;
-      g[13] = surgeNeed > 0 ? (surgeNeed - surgeFrequency(k, activeCoilMass(d, D, Na, sRho[i]), oneEndFree)) / surgeNeed : -1;
-      if (activeMask[14] === 1) {
-        g[14] = (F2req * (1 - tol) - F2) * invF2req;
-        g[15] = (F2 - F2req * (1 + tol)) * invF2req;
-      } else { g[14] = -1; g[15] = -1; }
-      g[16] = activeMask[16] === 1 ? (temperature - sTmax[i]) / Math.max(Math.abs(sTmax[i]), 1) : -1;
+        g[Check.buckling] = ycr === ycr ? (ymax - ycr) / ymax : -1;
+      } else g[Check.buckling] = -1;
+      g[Check.surge] = surgeNeed > 0 ? (surgeNeed - surgeFrequency(k, activeCoilMass(d, D, Na, sRho[i]), oneEndFree)) / surgeNeed : -1;
+      if (activeMask[Check.operating_force_min] === 1) {
+        g[Check.operating_force_min] = (F2req * (1 - tol) - F2) * invF2req;
+        g[Check.operating_force_max] = (F2 - F2req * (1 + tol)) * invF2req;
+      } else { g[Check.operating_force_min] = -1; g[Check.operating_force_max] = -1; }
+      g[Check.temperature] = activeMask[Check.temperature] === 1 ? (temperature - sTmax[i]) / Math.max(Math.abs(sTmax[i]), 1) : -1;
       g[YIELD] = -1;
       if (yieldOf !== null) {
         let nominalPasses = true;
@@ -308,16 +306,16 @@ export function buildSpringProblem(req: Requirements, tolerances?: ToleranceCata
 
       const volume = wireVolume(d, D, Nt);
       const mass = massOfVolume(volume, sRho[i]);
-      f[1] = mass;
-      f[2] = volume;
-      f[3] = D + d;
-      f[4] = L0;
+      f[Objective.mass] = mass;
+      f[Objective.wire_volume] = volume;
+      f[Objective.outer_diameter] = D + d;
+      f[Objective.free_length] = L0;
       const sf = fatigueSafety === fatigueSafety && fatigueSafety < staticSafety ? fatigueSafety : staticSafety;
-      f[5] = -sf;
-      f[6] = -staticSafety;
-      f[7] = fatigueSafety === fatigueSafety ? -fatigueSafety : 0;
-      f[8] = mass * sCost[i];
-      f[0] = f[rankObjective];
+      f[Objective.safety_factor] = -sf;
+      f[Objective.static_safety] = -staticSafety;
+      f[Objective.fatigue_safety] = fatigueSafety === fatigueSafety ? -fatigueSafety : 0;
+      f[Objective.relative_cost] = mass * sCost[i];
+      f[Objective.rank] = f[rankObjective];
     },
 
     decode(x) {

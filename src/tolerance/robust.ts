@@ -4,7 +4,7 @@
 // agree with, and what the figures of robustness (mass against yield) are measured with.
 import type { Requirements } from '../input/requirements.js';
 import { candidateAt, runDesign, type Candidate, type DesignRun } from '../spring/design.js';
-import { OBJ } from '../spring/problem.js';
+import { Objective } from '../kinds/compression/objectives.js';
 import type { ToleranceCatalog } from './catalog.js';
 import { estimateYield, yieldScratch } from './estimate.js';
 import { madeSpringChecks, madeSpringContext, yieldChecks, type MadeSpringContext } from './madeSpring.js';
@@ -64,7 +64,7 @@ export function bestReaching(run: DesignRun, yields: Float64Array, minYield: num
   let bestValue = Infinity;
   for (let i = 0; i < yields.length; i++) {
     if (!(yields[i] >= minYield)) continue;
-    const value = cloud!.f(i)[OBJ.rank];
+    const value = cloud!.f(i)[Objective.rank];
     if (value < bestValue) { bestValue = value; best = i; }
   }
   return best;

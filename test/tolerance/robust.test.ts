@@ -5,7 +5,7 @@ import { describe, expect, it } from 'vitest';
 import { parse } from 'yaml';
 import { readRequirements } from '../../src/input/requirements.js';
 import { candidateAt } from '../../src/spring/design.js';
-import { OBJ } from '../../src/spring/problem.js';
+import { Objective } from '../../src/kinds/compression/objectives.js';
 import { loadToleranceCatalog } from '../../src/tolerance/catalog.js';
 import { bestReaching, cloudYields, collectingRun } from '../../src/tolerance/robust.js';
 import { springYield } from '../../src/tolerance/springYield.js';
@@ -15,12 +15,12 @@ const tc = loadToleranceCatalog();
 const req = readRequirements(parse(readFileSync('examples/washer-trigger.yaml', 'utf8')), catalog);
 const run = collectingRun(req);
 const yields = cloudYields(run, tc, { grade: 2, overrides: {} });
-const massAt = (i: number) => run.result.cloud!.f(i)[OBJ.mass];
+const massAt = (i: number) => run.result.cloud!.f(i)[Objective.mass];
 
 describe('robust design on the demo (grade 2)', () => {
   it('the nominal best is the lightest of the cloud and its yield is far below 0.99', () => {
     const i = bestReaching(run, yields, 0);
-    expect(massAt(i)).toBeCloseTo(run.candidates[0].objectives[OBJ.mass], 12);
+    expect(massAt(i)).toBeCloseTo(run.candidates[0].objectives[Objective.mass], 12);
     expect(yields[i]).toBeLessThan(0.6);
   });
 
