@@ -3,7 +3,7 @@
 import { findMaterial } from '../catalogs/load.js';
 import { inStrengthRange, moduliAt, tensileStrength } from '../catalogs/properties.js';
 import type { Catalog, Material } from '../catalogs/types.js';
-import type { MaterialFigures } from '../model/analysis.js';
+import type { MaterialFigures } from '../model/figures.js';
 import { staticAllowable } from '../model/strength.js';
 import { InputError } from '../units/parse.js';
 import type { UnitSystem } from '../units/systems.js';

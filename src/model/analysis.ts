@@ -4,9 +4,10 @@ import { endConditionConstant, criticalDeflection, stableFreeLengthLimit, type S
 import { fractionalOverrun, minimumGapSum, solidOuterDiameter } from './clash.js';
 import {
   INFINITE_LIFE_CYCLES, STATIC_SERVICE_CYCLES, alternatingStrength, cycleStresses, endurancePoint, fatigueSafetyFactor,
-  type EndurancePoint, type EnduranceSource, type FatigueCriterion, type FiniteLifeTable,
+  type EndurancePoint, type EnduranceSource, type FatigueCriterion,
 } from './fatigue.js';
 import { helixAngle, inactiveCoils, pitch, solidLength, springMass, wireLength, wireVolume, type EndType } from './geometry.js';
+import type { MaterialFigures, Warning } from './figures.js';
 import { springRate } from './rate.js';
 import { shearStress } from './stress.js';
 import { stressFactor, type StressCorrection } from './stressFactor.js';
@@ -21,19 +22,7 @@ export interface SpringGeometry {
   freeLength: number;
 }
 
-/** Material figures at this wire diameter. */
-export interface MaterialFigures {
-  tensileStrength: number;
-  /** Static torsional allowable (MPa), already chosen with or without set removal. */
-  allowableStress: number;
-  shearModulus: number;
-  elasticModulus: number;
-  density: number;
-  /** Zimmerli's data apply (spring steels); otherwise the 1e7 row of the finite-life table is the endurance. */
-  zimmerli: boolean;
-  finiteLife: FiniteLifeTable;
-  maxTemperature: number;
-}
+export type { MaterialFigures, Warning };
 
 export interface ServiceConditions {
   /** Lengths to evaluate, mm (each at or above solid). */
@@ -77,7 +66,6 @@ export interface FatigueResult {
   safetyFactor: number;
 }
 
-export interface Warning { code: string; message: string }
 
 export interface SpringAnalysis {
   geometry: {

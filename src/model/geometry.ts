@@ -1,6 +1,7 @@
 // Geometry of a helical compression spring by end type, after the end-type table of the spring
 // handbooks (Associated Spring, Design Handbook; Budynas and Nisbett, Shigley's Mechanical
 // Engineering Design, Table 10-1). All lengths in mm.
+import { massOfVolume } from './mass.js';
 
 export const END_TYPES = ['plain', 'plain-ground', 'squared', 'squared-ground'] as const;
 export type EndType = (typeof END_TYPES)[number];
@@ -60,10 +61,6 @@ export function wireVolume(wireDiameter: number, meanDiameter: number, totalCoil
   return (Math.PI * Math.PI * wireDiameter * wireDiameter * meanDiameter * totalCoils) / 4;
 }
 
-/** Mass in kg of a wire volume (mm^3) at a density (kg/m^3). */
-export function massOfVolume(volume: number, density: number): number {
-  return volume * 1e-9 * density;
-}
 
 /** Mass in kg from the coil's dimensions and density (kg/m^3). */
 export function springMass(wireDiameter: number, meanDiameter: number, totalCoils: number, density: number): number {

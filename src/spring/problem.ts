@@ -9,7 +9,8 @@ import type { MaterialFigures, ServiceConditions, SpringGeometry } from '../mode
 import { bucklingConstant1, bucklingConstant2, criticalDeflectionFrom, endConditionConstant } from '../model/buckling.js';
 import { minimumGapSum, solidOuterDiameter } from '../model/clash.js';
 import { INFINITE_LIFE_CYCLES, endurancePoint, fatigueSafetyFactorFrom, fullyReversedEndurance, type EndurancePoint } from '../model/fatigue.js';
-import { inactiveCoils, massOfVolume, pitch, solidLength, wireVolume, type EndType } from '../model/geometry.js';
+import { inactiveCoils, pitch, solidLength, wireVolume, type EndType } from '../model/geometry.js';
+import { massOfVolume } from '../model/mass.js';
 import { springRate } from '../model/rate.js';
 import { shearStress } from '../model/stress.js';
 import { stressFactor } from '../model/stressFactor.js';

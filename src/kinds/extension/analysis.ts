@@ -10,7 +10,7 @@ import { shearStress } from '../../model/stress.js';
 import { stressFactor, type StressCorrection } from '../../model/stressFactor.js';
 import { ultimateShearStrength } from '../../model/strength.js';
 import { activeCoilMass, surgeFrequency } from '../../model/surge.js';
-import type { Warning } from '../../model/analysis.js';
+import type { Warning } from '../../model/figures.js';
 import { cycleOnLine, loopLifeCurve, offsetAlternatingStrength, yieldAlongLoadLine, type CycleOnLine } from './fatigue.js';
 import { bodyLength, extensionActiveCoils, extensionMass, extensionWireLength, freeLengthInsideLoops, loopWireLength, wireVolumeOfLength } from './geometry.js';
 import { initialTensionBand, initialTensionPosition, type InitialTensionBand, type InitialTensionPosition } from './initialTension.js';

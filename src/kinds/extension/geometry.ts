@@ -4,7 +4,7 @@
 //   L0 = (Nb + 1) d + 2 h,
 // which for standard full loops (h = the inner diameter D - d) is Shigley's L0 = (2C - 1 + Nb) d
 // (Budynas and Nisbett, Shigley's Mechanical Engineering Design, eq. 10-39).
-import { massOfVolume } from '../../model/geometry.js';
+import { massOfVolume } from '../../model/mass.js';
 import type { LoopRule } from './catalog.js';
 
 /** Active coils: the body coils plus the deflection of the two loops, Na = Nb + G/E (Shigley eq. 10-40). */

@@ -1,6 +1,6 @@
 // The figures of a material as an extension spring uses them: the shared figures at the wire diameter,
 // the three static allowables of catalogs/extension.yaml and the loops' fatigue fractions.
-import type { MaterialFigures } from '../../model/analysis.js';
+import type { MaterialFigures } from '../../model/figures.js';
 import type { FiniteLifeTable } from '../../model/fatigue.js';
 import { materialFigures, type MaterialChoice } from '../../input/material.js';
 import { allowablesFor, type ExtensionCatalog } from './catalog.js';
