@@ -8,10 +8,10 @@ import { join } from 'node:path';
 import type { Catalog } from '../src/catalogs/types.js';
 import { readInputFile } from '../src/input/document.js';
 import { withValue } from '../src/input/overrides.js';
-import { readRequirements, type Requirements } from '../src/input/requirements.js';
+import { readRequirements, type Requirements } from '../src/kinds/compression/requirements.js';
 import { geneticSearch } from '../src/search/genetic.js';
 import { gridSearch } from '../src/search/grid.js';
-import { buildSpringProblem } from '../src/spring/problem.js';
+import { buildSpringProblem } from '../src/kinds/compression/problem.js';
 
 const BRUTE_FORCE_SOURCE = '/work/shared/reference/brute-force.c';
 /** The arguments that bench/brute-force-match.yaml restates as a requirement. */

@@ -4,10 +4,10 @@
 import seedrandom from 'seedrandom';
 import { loadCatalog } from '../src/catalogs/load.js';
 import { readInputFile } from '../src/input/document.js';
-import { readRequirements } from '../src/input/requirements.js';
-import { analyzeSpring } from '../src/model/analysis.js';
-import { checkAnalysis } from '../src/spring/checks.js';
-import { springServiceConditions } from '../src/spring/problem.js';
+import { readRequirements } from '../src/kinds/compression/requirements.js';
+import { analyzeSpring } from '../src/kinds/compression/analysis.js';
+import { checkAnalysis } from '../src/kinds/compression/verify.js';
+import { springServiceConditions } from '../src/kinds/compression/problem.js';
 import { readMaterialMap } from '../src/stock/materialMap.js';
 import { runStock } from '../src/stock/run.js';
 import { readStockTable } from '../src/stock/table.js';

@@ -2,7 +2,7 @@
 // `check` and `stock` accept the working force within `working_tolerance`; without it, within the
 // load tolerance; and when that is zero too, within 2%: coilfront's own default, a band narrow enough to
 // mean "this force" and wide enough for a spring whose free length was rounded to a drawing's precision.
-import type { Requirements } from '../input/requirements.js';
+import type { Requirements } from '../kinds/compression/requirements.js';
 import { formatQuantity, sig } from '../units/format.js';
 import type { UnitSystem } from '../units/systems.js';
 

@@ -3,11 +3,11 @@
 // (peened, set removed). The requirements say how it is used: lengths, cycles, seating, temperature,
 // criteria. Where a spring file also states a service condition, the requirement's governs and a note
 // says so when the two differ.
-import type { SpringCase } from '../input/springFile.js';
-import type { Requirements } from '../input/requirements.js';
+import type { SpringCase } from '../kinds/compression/springFile.js';
+import type { Requirements } from '../kinds/compression/requirements.js';
 import { materialFigures, type MaterialChoice } from '../input/material.js';
-import type { MaterialFigures, ServiceConditions, SpringGeometry } from '../model/analysis.js';
-import { springServiceConditions } from '../spring/problem.js';
+import type { MaterialFigures, ServiceConditions, SpringGeometry } from '../kinds/compression/analysis.js';
+import { springServiceConditions } from '../kinds/compression/problem.js';
 import { isRecord } from '../input/fields.js';
 
 export interface GivenSpring {

@@ -4,8 +4,8 @@
 import { loadCatalog } from '../catalogs/load.js';
 import type { Catalog } from '../catalogs/types.js';
 import { isRecord } from '../input/fields.js';
-import { readRequirements, type Requirements } from '../input/requirements.js';
-import { readSpringCase } from '../input/springFile.js';
+import { readRequirements, type Requirements } from '../kinds/compression/requirements.js';
+import { readSpringCase } from '../kinds/compression/springFile.js';
 import { sanitize } from '../report/json.js';
 import { workingBand, type WorkingBand } from './band.js';
 import { givenFromCase } from './given.js';

@@ -1,13 +1,13 @@
 // Every requirement check on one given spring, each with its value, its limit and its margin. The
-// pass/fail of the design checks comes from src/spring/checks.ts (checkAnalysis on the full analysis of
-// src/model/analysis.ts), the same functions that re-verify every spring `design` reports; a given
+// pass/fail of the design checks comes from src/kinds/compression/verify.ts (checkAnalysis on the full analysis of
+// src/kinds/compression/analysis.ts), the same functions that re-verify every spring `design` reports; a given
 // spring adds the band on its working force, and that its material and end type are ones the
 // requirement allows.
-import type { Requirements } from '../input/requirements.js';
-import { analyzeSpring, type ServiceConditions, type SpringAnalysis } from '../model/analysis.js';
-import { springServiceConditions } from '../spring/problem.js';
-import { CHECK, CHECKS, CHECK_LABELS, activeChecks, checkAnalysis, figuresUnder, forceBand, staticLimit, type CheckName } from '../spring/checks.js';
-import type { EndType } from '../model/geometry.js';
+import type { Requirements } from '../kinds/compression/requirements.js';
+import { analyzeSpring, type ServiceConditions, type SpringAnalysis } from '../kinds/compression/analysis.js';
+import { springServiceConditions } from '../kinds/compression/problem.js';
+import { CHECK, CHECKS, CHECK_LABELS, activeChecks, checkAnalysis, figuresUnder, forceBand, staticLimit, type CheckName } from '../kinds/compression/verify.js';
+import type { EndType } from '../kinds/compression/geometry.js';
 import type { Kind } from '../units/kinds.js';
 import type { WorkingBand } from './band.js';
 import { givenService, type GivenSpring } from './given.js';
@@ -35,7 +35,7 @@ export interface CheckLine {
   limit: number | string | null;
   relation: '<=' | '>=' | '<' | 'in';
   kind: ValueKind;
-  /** Normalised check value, g <= 0 passes (as src/spring/checks.ts defines it); NaN: not computable. */
+  /** Normalised check value, g <= 0 passes (as src/kinds/compression/verify.ts defines it); NaN: not computable. */
   g: number;
   /** -g: how far inside its limit the spring is, as a fraction of the limit; null for categorical checks. */
   margin: number | null;

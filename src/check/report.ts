@@ -1,7 +1,7 @@
 // A verdict for people (text) and machines (JSON, SI): every check with the spring's figure, the limit
 // and the margin, which band the working force was held to, and what fails by how much.
-import { rulesOfThumb } from '../model/analysis.js';
-import type { Requirements } from '../input/requirements.js';
+import { rulesOfThumb } from '../kinds/compression/analysis.js';
+import type { Requirements } from '../kinds/compression/requirements.js';
 import { cautionText } from '../report/cautions.js';
 import { SI_UNITS } from '../report/json.js';
 import { table } from '../report/table.js';

@@ -5,13 +5,13 @@ import { loadCatalog } from '../catalogs/load.js';
 import { readInputFile } from '../input/document.js';
 import { blameOverride, ENVELOPE_SHORTHANDS, parseAssignment, parsePath, sweepValues, withValue } from '../input/overrides.js';
 import { LIMITS } from '../input/limits.js';
-import { RANK_KEYS, readRequirements, searchSize, type Requirements } from '../input/requirements.js';
+import { RANK_KEYS, readRequirements, searchSize, type Requirements } from '../kinds/compression/requirements.js';
 import { candidateRecord, countsRecord, limitingText } from '../report/designReport.js';
 import { toJson, SI_UNITS } from '../report/json.js';
 import { writeOutputFile } from '../report/writeFile.js';
 import { cautionText } from '../report/cautions.js';
-import { runDesign, type Candidate, type DesignRun, type StrategyChoice } from '../spring/design.js';
-import { FRONTIER_KEYS, computeFrontier, type FrontierKey } from '../spring/frontier.js';
+import { runDesign, type Candidate, type DesignRun, type StrategyChoice } from '../kinds/compression/design.js';
+import { FRONTIER_KEYS, computeFrontier, type FrontierKey } from '../kinds/compression/frontier.js';
 // The HTML report and CSV writers load only when a command writes them (start-up time: issue 10).
 const htmlReport = () => import('../report/html/designHtml.js');
 const csv = () => import('../report/csv.js');

@@ -11,7 +11,7 @@ import { stockCsv, stockJson, stockText } from '../stock/report.js';
 import { runStock, STOCK_RANK_KEYS, type StockRankKey } from '../stock/run.js';
 import { InputError, parseFraction, parseNumber } from '../units/parse.js';
 import type { UnitSystem } from '../units/systems.js';
-import type { StrategyChoice } from '../spring/design.js';
+import type { StrategyChoice } from '../kinds/compression/design.js';
 import { EXIT, type Io } from './io.js';
 import { addOverrideOptions, rawWithOverrides, type CommonOptions } from './searchCommands.js';
 

@@ -1,9 +1,9 @@
 // The analysis of one spring for people (text) and for machines (JSON, SI).
-import { rulesOfThumb, type SpringAnalysis } from '../model/analysis.js';
+import { rulesOfThumb, type SpringAnalysis } from '../kinds/compression/analysis.js';
 import { enduranceSourceLabel } from '../model/fatigue.js';
 import { surgeEndsLabel } from '../model/surge.js';
 import { lawAboveMinimum, strengthBasisOf } from '../input/material.js';
-import type { SpringCase } from '../input/springFile.js';
+import type { SpringCase } from '../kinds/compression/springFile.js';
 import { formatQuantity as q, quantityWriter, sig } from '../units/format.js';
 import type { UnitSystem } from '../units/systems.js';
 import { cautionText } from './cautions.js';

@@ -1,11 +1,11 @@
 // The outcome of a design run, for people (text) and machines (JSON, SI), including the honest
 // account of an infeasible run: what cut the candidates, the nearest misses, and what to relax.
-import type { Requirements } from '../input/requirements.js';
-import { CHECK_LABELS, CHECKS, type CheckName } from '../spring/checks.js';
-import { candidateAt, reportedChecks, type Candidate, type DesignRun } from '../spring/design.js';
-import { limitingCheck, outward, relaxAdvice, type RelaxAdvice, type RelaxChange } from '../spring/relax.js';
+import type { Requirements } from '../kinds/compression/requirements.js';
+import { CHECK_LABELS, CHECKS, type CheckName } from '../kinds/compression/verify.js';
+import { candidateAt, reportedChecks, type Candidate, type DesignRun } from '../kinds/compression/design.js';
+import { limitingCheck, outward, relaxAdvice, type RelaxAdvice, type RelaxChange } from '../kinds/compression/relax.js';
 import { formatQuantity, inUnit, quantityWriter, sig, unitSymbol } from '../units/format.js';
-import { rulesOfThumb } from '../model/analysis.js';
+import { rulesOfThumb } from '../kinds/compression/analysis.js';
 import type { Kind } from '../units/kinds.js';
 import type { UnitSystem } from '../units/systems.js';
 import { cautionText } from './cautions.js';

@@ -10,7 +10,7 @@ import { toCsv } from '../report/csv.js';
 import { requirementsRecord } from '../report/designReport.js';
 import { SI_UNITS } from '../report/json.js';
 import { table } from '../report/table.js';
-import { CHECK_LABELS, type CheckName } from '../spring/checks.js';
+import { CHECK_LABELS, type CheckName } from '../kinds/compression/verify.js';
 import { formatQuantity, inUnit, sig, unitSymbol } from '../units/format.js';
 import type { Kind } from '../units/kinds.js';
 import type { UnitSystem } from '../units/systems.js';

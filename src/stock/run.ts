@@ -1,5 +1,5 @@
 // `stock`: every row of a stock table through the same checks as `check` (the full analysis of
-// src/model/analysis.ts, the verdicts of src/spring/checks.ts, the working-force band), the passing
+// src/kinds/compression/analysis.ts, the verdicts of src/kinds/compression/verify.ts, the working-force band), the passing
 // rows ranked like `design`, the rows that fail closest, and optionally the best custom spring beside them.
 import type { Catalog } from '../catalogs/types.js';
 import { endsStated } from '../check/index.js';
@@ -7,12 +7,12 @@ import { workingBand, type WorkingBand } from '../check/band.js';
 import type { GivenSpring } from '../check/given.js';
 import { findMaterial } from '../catalogs/load.js';
 import { materialFigures, strengthRangeNote, type MaterialChoice } from '../input/material.js';
-import type { MaterialFigures } from '../model/analysis.js';
-import { inactiveCoils, solidLength } from '../model/geometry.js';
+import type { MaterialFigures } from '../kinds/compression/analysis.js';
+import { inactiveCoils, solidLength } from '../kinds/compression/geometry.js';
 import { judge, makeJudge, type Judge, type Verdict } from '../check/judge.js';
-import { readRequirements, type RankKey, type Requirements } from '../input/requirements.js';
-import { shortestLength } from '../spring/checks.js';
-import { runDesign, type Candidate, type DesignRun, type StrategyChoice } from '../spring/design.js';
+import { readRequirements, type RankKey, type Requirements } from '../kinds/compression/requirements.js';
+import { shortestLength } from '../kinds/compression/verify.js';
+import { runDesign, type Candidate, type DesignRun, type StrategyChoice } from '../kinds/compression/design.js';
 import { InputError } from '../units/parse.js';
 import type { UnitSystem } from '../units/systems.js';
 import { readMaterialMap } from './materialMap.js';

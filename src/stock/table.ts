@@ -3,7 +3,7 @@
 // and what was expected, and counted.
 import { parse } from 'csv-parse/sync';
 import type { Catalog } from '../catalogs/types.js';
-import { END_TYPES, type EndType } from '../model/geometry.js';
+import { END_TYPES, type EndType } from '../kinds/compression/geometry.js';
 import { InputError, parseNumber, parseQuantity } from '../units/parse.js';
 import type { UnitSystem } from '../units/systems.js';
 import { COIL_FIELDS, DIAMETER_FIELDS, STOCK_FIELDS, readHeader, type Column, type Layout, type StockField } from './columns.js';

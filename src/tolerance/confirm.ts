@@ -3,9 +3,9 @@
 // tolerance figures) and one whose sampled yield falls below min_yield by more than its standard
 // error is refused, and said so. Without min_yield the yield at the requirement's grade (2 unless
 // given) is reported beside each spring and nothing is refused.
-import type { Requirements } from '../input/requirements.js';
-import type { Candidate, DesignRun } from '../spring/design.js';
-import { CHECKS, type CheckName } from '../spring/checks.js';
+import type { Requirements } from '../kinds/compression/requirements.js';
+import type { Candidate, DesignRun } from '../kinds/compression/design.js';
+import { CHECKS, type CheckName } from '../kinds/compression/verify.js';
 import { loadToleranceCatalog, type ToleranceCatalog } from './catalog.js';
 import { estimateYield, yieldScratch } from './estimate.js';
 import { yieldChecks } from './madeSpring.js';

@@ -1,8 +1,8 @@
 // One reported spring made ready for a specification: rounded to drawing precision and re-checked,
 // its tolerances, its yield by estimate and by Monte Carlo, gathered as the specification sheet's input.
 import type { Material } from '../catalogs/types.js';
-import type { Requirements } from '../input/requirements.js';
-import type { MaterialFigures, SpringGeometry } from '../model/analysis.js';
+import type { Requirements } from '../kinds/compression/requirements.js';
+import type { MaterialFigures, SpringGeometry } from '../kinds/compression/analysis.js';
 import type { SpecSheetInput } from '../report/html/specSheet.js';
 import type { ToleranceCatalog } from './catalog.js';
 import type { ToleranceRequest } from './model.js';

@@ -2,11 +2,11 @@
 // afford, and the Monte Carlo that re-analyses every sampled spring through the single-spring analysis
 // and the requirement checks (the same path `analyze` and the re-verification take).
 import type { Material } from '../catalogs/types.js';
-import type { Requirements } from '../input/requirements.js';
-import { analyzeSpring, type MaterialFigures, type SpringGeometry } from '../model/analysis.js';
+import type { Requirements } from '../kinds/compression/requirements.js';
+import { analyzeSpring, type MaterialFigures, type SpringGeometry } from '../kinds/compression/analysis.js';
 import { springRate } from '../model/rate.js';
-import { CHECKS, checkAnalysis, type CheckName } from '../spring/checks.js';
-import { springServiceConditions } from '../spring/problem.js';
+import { CHECKS, checkAnalysis, type CheckName } from '../kinds/compression/verify.js';
+import { springServiceConditions } from '../kinds/compression/problem.js';
 import type { ToleranceCatalog } from './catalog.js';
 import { estimateYield, yieldScratch, type CheckEvaluator } from './estimate.js';
 import { madeSpringChecks, madeSpringContext, yieldChecks } from './madeSpring.js';

@@ -6,9 +6,9 @@ import { stringify } from 'yaml';
 import { loadCatalog } from '../../src/catalogs/load.js';
 import { check, checkDocuments } from '../../src/check/index.js';
 import { readInputFile } from '../../src/input/document.js';
-import { readRequirements } from '../../src/input/requirements.js';
-import { candidateAt, runDesign } from '../../src/spring/design.js';
-import { springDocument } from '../../src/spring/springDoc.js';
+import { readRequirements } from '../../src/kinds/compression/requirements.js';
+import { candidateAt, runDesign } from '../../src/kinds/compression/design.js';
+import { springDocument } from '../../src/kinds/compression/springDoc.js';
 import { cli, inputFile } from '../helpers.js';
 
 const catalog = loadCatalog();

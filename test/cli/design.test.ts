@@ -70,7 +70,7 @@ describe('coilfront design', () => {
     expect(out.infeasible.relax.length).toBeGreaterThan(0);
   });
 
-  it('the relax advice is true: applying its first change admits a spring (the full battery: test/spring/relax.test.ts)', async () => {
+  it('the relax advice is true: applying its first change admits a spring (the full battery: test/kinds/compression/relax.test.ts)', async () => {
     const j = JSON.parse((await cli('design', demo, '--max-od', '12', '--json')).stdout);
     const s = j.infeasible.relax[0];
     expect(s).toBeDefined();

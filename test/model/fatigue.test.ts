@@ -2,12 +2,12 @@ import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { loadCatalog } from '../../src/catalogs/load.js';
 import { materialFigures } from '../../src/input/material.js';
-import { analyzeSpring } from '../../src/model/analysis.js';
+import { analyzeSpring } from '../../src/kinds/compression/analysis.js';
 import {
   alternatingStrength, endurancePoint, FATIGUE_CRITERIA, fatigueSafetyFactor, fullyReversedEndurance, lifeCurve, repeatedStressEquivalent,
   repeatedStressFraction, ZIMMERLI_PEENED, ZIMMERLI_UNPEENED,
 } from '../../src/model/fatigue.js';
-import { END_TYPES, inactiveCoils, solidLength } from '../../src/model/geometry.js';
+import { END_TYPES, inactiveCoils, solidLength } from '../../src/kinds/compression/geometry.js';
 
 const KPSI = 6.894757293168361; // MPa per kpsi
 

@@ -1,7 +1,7 @@
 // Surge frequency: its own boundary setting, independent of the buckling seating.
 import { describe, expect, it } from 'vitest';
-import { analyzeSpring, type MaterialFigures, type ServiceConditions } from '../../src/model/analysis.js';
-import { SEATINGS } from '../../src/model/buckling.js';
+import { analyzeSpring, type MaterialFigures, type ServiceConditions } from '../../src/kinds/compression/analysis.js';
+import { SEATINGS } from '../../src/kinds/compression/buckling.js';
 import { activeCoilMass, surgeFrequency } from '../../src/model/surge.js';
 
 const steel: MaterialFigures = {

@@ -9,9 +9,9 @@ import { chromium, type Browser } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { parse } from 'yaml';
 import { loadCatalog } from '../../src/catalogs/load.js';
-import { readRequirements } from '../../src/input/requirements.js';
+import { readRequirements } from '../../src/kinds/compression/requirements.js';
 import { specSheetHtml } from '../../src/report/html/specSheet.js';
-import { runDesign } from '../../src/spring/design.js';
+import { runDesign } from '../../src/kinds/compression/design.js';
 import { loadToleranceCatalog } from '../../src/tolerance/catalog.js';
 import { specifySpring } from '../../src/tolerance/specify.js';
 

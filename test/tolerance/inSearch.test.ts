@@ -7,10 +7,10 @@ import { readFileSync } from 'node:fs';
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { parse } from 'yaml';
-import { readRequirements, type Requirements } from '../../src/input/requirements.js';
-import { CHECK, activeChecks } from '../../src/spring/checks.js';
-import { runDesign } from '../../src/spring/design.js';
-import { OBJ } from '../../src/spring/problem.js';
+import { readRequirements, type Requirements } from '../../src/kinds/compression/requirements.js';
+import { CHECK, activeChecks } from '../../src/kinds/compression/verify.js';
+import { runDesign } from '../../src/kinds/compression/design.js';
+import { Objective } from '../../src/kinds/compression/objectives.js';
 import { loadToleranceCatalog } from '../../src/tolerance/catalog.js';
 import { candidateYield, confirmRun, designedSpring } from '../../src/tolerance/confirm.js';
 import { yieldChecks } from '../../src/tolerance/madeSpring.js';
@@ -64,7 +64,7 @@ function both(base: Requirements, minYield: number) {
   const searched = runDesign(req).candidates[0] ?? null;
   const run = collectingRun(base);
   const i = bestReaching(run, cloudYields(run, tc, base.tolerance), minYield);
-  return { req, searched, referenceMass: i >= 0 ? run.result.cloud!.f(i)[OBJ.mass] : null, referenceX: i >= 0 ? Array.from(run.result.cloud!.x(i)) : null };
+  return { req, searched, referenceMass: i >= 0 ? run.result.cloud!.f(i)[Objective.mass] : null, referenceX: i >= 0 ? Array.from(run.result.cloud!.x(i)) : null };
 }
 
 describe('the in-search yield check agrees with the exhaustive reference (robust.ts)', () => {
@@ -80,7 +80,7 @@ describe('the in-search yield check agrees with the exhaustive reference (robust
         expect(searched.geometry.activeCoils).toBe(decodedRef.geometry.activeCoils);
         // The reference walks the scan grid; the search refines the first feasible step downwards.
         expect(Math.abs(searched.geometry.meanDiameter - decodedRef.geometry.meanDiameter)).toBeLessThanOrEqual(2 * req.diameterResolution + 1e-9);
-        expect(searched.objectives[OBJ.mass]).toBeLessThanOrEqual(referenceMass * (1 + 1e-3));
+        expect(searched.objectives[Objective.mass]).toBeLessThanOrEqual(referenceMass * (1 + 1e-3));
         expect(candidateYield(searched, req, tc).estimate).toBeGreaterThanOrEqual(minYield);
       }
     }, 60_000);
@@ -91,8 +91,8 @@ describe('raising min_yield never lowers the best mass (property)', () => {
   it('over the demo, with random pairs of min_yield and tolerance grades', () => {
     fc.assert(fc.property(fc.double({ min: 0.05, max: 0.995, noNaN: true }), fc.double({ min: 0.05, max: 0.995, noNaN: true }), fc.constantFrom(1, 2, 3), (a, b, grade) => {
       const [lo, hi] = a <= b ? [a, b] : [b, a];
-      const best = (y: number) => runDesign(demo({ min_yield: y, tolerance_grade: grade, top: 1 })).candidates[0]?.objectives[OBJ.mass] ?? Infinity;
-      const nominal = runDesign(demo({ top: 1 })).candidates[0].objectives[OBJ.mass];
+      const best = (y: number) => runDesign(demo({ min_yield: y, tolerance_grade: grade, top: 1 })).candidates[0]?.objectives[Objective.mass] ?? Infinity;
+      const nominal = runDesign(demo({ top: 1 })).candidates[0].objectives[Objective.mass];
       const mLo = best(lo);
       expect(mLo).toBeGreaterThanOrEqual(nominal);
       expect(best(hi)).toBeGreaterThanOrEqual(mLo);

@@ -3,8 +3,8 @@
 import { readFileSync } from 'node:fs';
 import { describe, expect, it } from 'vitest';
 import { parse } from 'yaml';
-import { readRequirements } from '../../src/input/requirements.js';
-import { candidateAt } from '../../src/spring/design.js';
+import { readRequirements } from '../../src/kinds/compression/requirements.js';
+import { candidateAt } from '../../src/kinds/compression/design.js';
 import { Objective } from '../../src/kinds/compression/objectives.js';
 import { loadToleranceCatalog } from '../../src/tolerance/catalog.js';
 import { bestReaching, cloudYields, collectingRun } from '../../src/tolerance/robust.js';

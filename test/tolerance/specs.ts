@@ -3,10 +3,10 @@
 import fc from 'fast-check';
 import { findMaterial, loadCatalog } from '../../src/catalogs/load.js';
 import { materialFigures } from '../../src/input/material.js';
-import { readRequirements, type Requirements } from '../../src/input/requirements.js';
-import type { EndType } from '../../src/model/geometry.js';
-import { inactiveCoils, pitch, solidLength } from '../../src/model/geometry.js';
-import { solidOuterDiameter } from '../../src/model/clash.js';
+import { readRequirements, type Requirements } from '../../src/kinds/compression/requirements.js';
+import type { EndType } from '../../src/kinds/compression/geometry.js';
+import { inactiveCoils, pitch, solidLength } from '../../src/kinds/compression/geometry.js';
+import { solidOuterDiameter } from '../../src/kinds/compression/clash.js';
 import { springRate } from '../../src/model/rate.js';
 import type { DesignedSpring } from '../../src/tolerance/springYield.js';
 

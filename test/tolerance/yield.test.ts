@@ -2,9 +2,9 @@
 import fc from 'fast-check';
 import seedrandom from 'seedrandom';
 import { describe, expect, it } from 'vitest';
-import { analyzeSpring } from '../../src/model/analysis.js';
-import { CHECK, CHECKS, checkAnalysis } from '../../src/spring/checks.js';
-import { springServiceConditions } from '../../src/spring/problem.js';
+import { analyzeSpring } from '../../src/kinds/compression/analysis.js';
+import { CHECK, CHECKS, checkAnalysis } from '../../src/kinds/compression/verify.js';
+import { springServiceConditions } from '../../src/kinds/compression/problem.js';
 import { loadToleranceCatalog } from '../../src/tolerance/catalog.js';
 import { estimateYield, normalCdf, yieldScratch } from '../../src/tolerance/estimate.js';
 import { madeSpringChecks, madeSpringContext, yieldChecks } from '../../src/tolerance/madeSpring.js';

@@ -2,7 +2,7 @@
 // (the solved variable), when the requirements ask for it, and the requirement paths whose relaxation
 // eases it. The search's hot loop addresses them through `Check` (g[Check.clash]), the single-spring
 // re-verification and the advice through the same names, the reports through the labels.
-import type { Requirements } from '../../input/requirements.js';
+import type { Requirements } from './requirements.js';
 import { STATIC_SERVICE_CYCLES } from '../../model/fatigue.js';
 import { indexOf, type CheckDefinition, type Trend } from '../kind.js';
 

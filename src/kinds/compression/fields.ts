@@ -1,7 +1,7 @@
 // The output fields of a compression spring, one definition each: name, unit kind and how to read it
 // (in SI) from a candidate. CSV is rendered from this list (src/report/fields.ts); a new column is one
 // entry here.
-import type { Candidate } from '../../spring/design.js';
+import type { Candidate } from './design.js';
 import type { FieldDefinition } from '../kind.js';
 
 const last = (c: Candidate) => c.analysis.points[c.analysis.points.length - 1];

@@ -1,13 +1,13 @@
 // Helical compression springs as one SpringKind: what `design`, `analyze` and the library API call
 // when a document says `kind: compression` or says no kind at all.
-import { analyzeSpring, type SpringAnalysis } from '../../model/analysis.js';
+import { analyzeSpring, type SpringAnalysis } from './analysis.js';
 import { STATIC_SERVICE_CYCLES } from '../../model/fatigue.js';
-import { readRequirements, type Requirements } from '../../input/requirements.js';
-import { readSpringCase, type SpringCase } from '../../input/springFile.js';
+import { readRequirements, type Requirements } from './requirements.js';
+import { readSpringCase, type SpringCase } from './springFile.js';
 import { analysisJson, analysisText } from '../../report/analysisReport.js';
 import { designJson, designText } from '../../report/designReport.js';
-import { candidateAt, runDesign, type Candidate, type DesignRun } from '../../spring/design.js';
-import { buildSpringProblem } from '../../spring/problem.js';
+import { candidateAt, runDesign, type Candidate, type DesignRun } from './design.js';
+import { buildSpringProblem } from './problem.js';
 import { confirmRun } from '../../tolerance/confirm.js';
 import type { SpringKind } from '../kind.js';
 import { COMPRESSION_CHECKS } from './checks.js';

@@ -8,8 +8,8 @@ import { FATIGUE_CRITERIA, type FatigueCriterion } from '../../model/fatigue.js'
 import type { StressCorrection } from '../../model/stressFactor.js';
 import { Fields, isRecord } from '../../input/fields.js';
 import { parseMaterialChoice, type MaterialChoice } from '../../input/material.js';
-import { DEFAULTS } from '../../input/requirements.js';
-import { parseCycles } from '../../input/springFile.js';
+import { DEFAULTS } from '../compression/requirements.js';
+import { parseCycles } from '../compression/springFile.js';
 import { formatQuantity } from '../../units/format.js';
 import { InputError, parseNumber, parseQuantity } from '../../units/parse.js';
 import type { UnitSystem } from '../../units/systems.js';

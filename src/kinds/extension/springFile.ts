@@ -5,7 +5,7 @@ import { FATIGUE_CRITERIA, type FatigueCriterion } from '../../model/fatigue.js'
 import type { StressCorrection } from '../../model/stressFactor.js';
 import { Fields } from '../../input/fields.js';
 import { parseMaterialChoice, strengthRangeNote, type MaterialChoice } from '../../input/material.js';
-import { parseCycles } from '../../input/springFile.js';
+import { parseCycles } from '../compression/springFile.js';
 import { formatQuantity } from '../../units/format.js';
 import { InputError, parseQuantity } from '../../units/parse.js';
 import type { UnitSystem } from '../../units/systems.js';

@@ -1,12 +1,12 @@
 // The HTML design report: requirements and counts, the feasible cloud and its front with the chosen
 // spring marked, the ranked table, the chosen spring's force-length and fatigue diagrams and its
 // drawing to scale, the sweep when one was run, conventions and cautions.
-import type { Requirements } from '../../input/requirements.js';
-import { rulesOfThumb, type ServiceConditions, type SpringAnalysis } from '../../model/analysis.js';
-import type { Candidate, DesignRun } from '../../spring/design.js';
-import { reportedChecks } from '../../spring/design.js';
-import { CHECK_LABELS, type CheckName } from '../../spring/checks.js';
-import { computeFrontier, FRONTIER_KEYS, type Frontier } from '../../spring/frontier.js';
+import type { Requirements } from '../../kinds/compression/requirements.js';
+import { rulesOfThumb, type ServiceConditions, type SpringAnalysis } from '../../kinds/compression/analysis.js';
+import type { Candidate, DesignRun } from '../../kinds/compression/design.js';
+import { reportedChecks } from '../../kinds/compression/design.js';
+import { CHECK_LABELS, type CheckName } from '../../kinds/compression/verify.js';
+import { computeFrontier, FRONTIER_KEYS, type Frontier } from '../../kinds/compression/frontier.js';
 import { formatQuantity, inUnit, quantityWriter, sig, unitSymbol } from '../../units/format.js';
 import type { UnitSystem } from '../../units/systems.js';
 import { writeOutputFile } from '../writeFile.js';

@@ -1,5 +1,5 @@
 // The report's plots as SVG strings, drawn from the same figures the CLI prints.
-import type { SpringAnalysis } from '../../model/analysis.js';
+import type { SpringAnalysis } from '../../kinds/compression/analysis.js';
 import { alternatingStrength, fullyReversedEndurance } from '../../model/fatigue.js';
 import { inUnit, unitSymbol } from '../../units/format.js';
 import type { UnitSystem } from '../../units/systems.js';

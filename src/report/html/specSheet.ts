@@ -4,9 +4,9 @@
 // its EN 15800 grade, the wire by its standard), what is left to the maker (the free length, given as
 // a reference), the service the spring is made for, and the cautions.
 import type { Material } from '../../catalogs/types.js';
-import type { Requirements } from '../../input/requirements.js';
-import type { MaterialFigures, SpringAnalysis, SpringGeometry } from '../../model/analysis.js';
-import { CHECK_LABELS, shortestLength, type CheckName } from '../../spring/checks.js';
+import type { Requirements } from '../../kinds/compression/requirements.js';
+import type { MaterialFigures, SpringAnalysis, SpringGeometry } from '../../kinds/compression/analysis.js';
+import { CHECK_LABELS, shortestLength, type CheckName } from '../../kinds/compression/verify.js';
 import { loadToleranceCatalog, type ToleranceGrade } from '../../tolerance/catalog.js';
 import type { SpringTolerances } from '../../tolerance/model.js';
 import type { YieldResult } from '../../tolerance/monteCarlo.js';

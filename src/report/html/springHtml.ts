@@ -1,6 +1,6 @@
 // The HTML report of one analysed spring.
-import type { SpringCase } from '../../input/springFile.js';
-import type { SpringAnalysis } from '../../model/analysis.js';
+import type { SpringCase } from '../../kinds/compression/springFile.js';
+import type { SpringAnalysis } from '../../kinds/compression/analysis.js';
 import type { UnitSystem } from '../../units/systems.js';
 import { writeOutputFile } from '../writeFile.js';
 import { springSections } from './designHtml.js';

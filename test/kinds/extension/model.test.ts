@@ -6,7 +6,7 @@ import { readFileSync } from 'node:fs';
 import { describe, expect, it } from 'vitest';
 import { CatalogError, loadCatalog } from '../../../src/catalogs/load.js';
 import { alternatingStrengthFrom, fullyReversedEndurance, type FatigueCriterion } from '../../../src/model/fatigue.js';
-import { wireVolume } from '../../../src/model/geometry.js';
+import { wireVolume } from '../../../src/kinds/compression/geometry.js';
 import { massOfVolume } from '../../../src/model/mass.js';
 import { analyzeExtension } from '../../../src/kinds/extension/analysis.js';
 import { loadExtensionCatalog, parseExtensionCatalog } from '../../../src/kinds/extension/catalog.js';

@@ -5,14 +5,14 @@ import { fractionalOverrun, minimumGapSum, solidOuterDiameter } from './clash.js
 import {
   INFINITE_LIFE_CYCLES, STATIC_SERVICE_CYCLES, alternatingStrength, cycleStresses, endurancePoint, fatigueSafetyFactor,
   type EndurancePoint, type EnduranceSource, type FatigueCriterion,
-} from './fatigue.js';
+} from '../../model/fatigue.js';
 import { helixAngle, inactiveCoils, pitch, solidLength, springMass, wireLength, wireVolume, type EndType } from './geometry.js';
-import type { MaterialFigures, Warning } from './figures.js';
-import { springRate } from './rate.js';
-import { shearStress } from './stress.js';
-import { stressFactor, type StressCorrection } from './stressFactor.js';
-import { ultimateShearStrength } from './strength.js';
-import { activeCoilMass, surgeFrequency, type SurgeEnds } from './surge.js';
+import type { MaterialFigures, Warning } from '../../model/figures.js';
+import { springRate } from '../../model/rate.js';
+import { shearStress } from '../../model/stress.js';
+import { stressFactor, type StressCorrection } from '../../model/stressFactor.js';
+import { ultimateShearStrength } from '../../model/strength.js';
+import { activeCoilMass, surgeFrequency, type SurgeEnds } from '../../model/surge.js';
 
 export interface SpringGeometry {
   wireDiameter: number;

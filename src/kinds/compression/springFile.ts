@@ -1,19 +1,19 @@
 // The spring file of `coilfront analyze`: one given spring and how it is used.
-import type { Catalog } from '../catalogs/types.js';
-import type { MaterialFigures, ServiceConditions, SpringGeometry } from '../model/analysis.js';
-import { SEATINGS, type Seating } from '../model/buckling.js';
-import { FATIGUE_CRITERIA, type FatigueCriterion } from '../model/fatigue.js';
-import { END_TYPES, inactiveCoils, solidLength, type EndType } from '../model/geometry.js';
-import { springRate } from '../model/rate.js';
-import type { StressCorrection } from '../model/stressFactor.js';
-import { formatQuantity } from '../units/format.js';
-import { InputError, parseNumber, parseQuantity } from '../units/parse.js';
-import type { UnitSystem } from '../units/systems.js';
-import { Fields } from './fields.js';
-import { applyStrengthBasis, materialFigures, parseMaterialChoice, STRENGTH_BASES, strengthRangeNote, type MaterialChoice, type StrengthBasis } from './material.js';
-import { SURGE_ENDS, type SurgeEnds } from '../model/surge.js';
-import { checkMaterialChoice } from './materialChecks.js';
-import { LIMITS } from './limits.js';
+import type { Catalog } from '../../catalogs/types.js';
+import type { MaterialFigures, ServiceConditions, SpringGeometry } from './analysis.js';
+import { SEATINGS, type Seating } from './buckling.js';
+import { FATIGUE_CRITERIA, type FatigueCriterion } from '../../model/fatigue.js';
+import { END_TYPES, inactiveCoils, solidLength, type EndType } from './geometry.js';
+import { springRate } from '../../model/rate.js';
+import type { StressCorrection } from '../../model/stressFactor.js';
+import { formatQuantity } from '../../units/format.js';
+import { InputError, parseNumber, parseQuantity } from '../../units/parse.js';
+import type { UnitSystem } from '../../units/systems.js';
+import { Fields } from '../../input/fields.js';
+import { applyStrengthBasis, materialFigures, parseMaterialChoice, STRENGTH_BASES, strengthRangeNote, type MaterialChoice, type StrengthBasis } from '../../input/material.js';
+import { SURGE_ENDS, type SurgeEnds } from '../../model/surge.js';
+import { checkMaterialChoice } from '../../input/materialChecks.js';
+import { LIMITS } from '../../input/limits.js';
 
 export interface SpringCase {
   system: UnitSystem;

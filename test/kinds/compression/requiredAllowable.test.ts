@@ -2,14 +2,14 @@
 // Sources: 1 psi = 6.894 757 293 168 kPa (NIST SP 811, Appendix B.8, lbf/in^2 to Pa); the 302 stainless scenario with a
 // 90 kpsi allowable is invented for the test (the trigger spring of our own demo).
 import { describe, expect, it } from 'vitest';
-import { loadCatalog } from '../../src/catalogs/load.js';
-import { readInputFile } from '../../src/input/document.js';
-import { readRequirements } from '../../src/input/requirements.js';
-import { readSpringCase } from '../../src/input/springFile.js';
-import { analyzeSpring } from '../../src/model/analysis.js';
-import { runDesign } from '../../src/spring/design.js';
-import { springDocument } from '../../src/spring/springDoc.js';
-import { cli } from '../helpers.js';
+import { loadCatalog } from '../../../src/catalogs/load.js';
+import { readInputFile } from '../../../src/input/document.js';
+import { readRequirements } from '../../../src/kinds/compression/requirements.js';
+import { readSpringCase } from '../../../src/kinds/compression/springFile.js';
+import { analyzeSpring } from '../../../src/kinds/compression/analysis.js';
+import { runDesign } from '../../../src/kinds/compression/design.js';
+import { springDocument } from '../../../src/kinds/compression/springDoc.js';
+import { cli } from '../../helpers.js';
 
 const KPSI = 6.894757293168;
 const allowable = 90 * KPSI;

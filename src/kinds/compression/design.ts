@@ -1,15 +1,15 @@
 // Requirements -> candidates -> evaluation -> filters -> ranking: one design run, whichever strategy.
-import type { Requirements } from '../input/requirements.js';
-import { analyzeSpring, type SpringAnalysis, type SpringGeometry } from '../model/analysis.js';
-import { geneticSearch } from '../search/genetic.js';
-import { gridSearch } from '../search/grid.js';
-import { valueCount } from '../search/problem.js';
-import type { SearchResult } from '../search/result.js';
-import { CHECKS, activeChecks, checkAnalysis } from './checks.js';
-import { Objective } from '../kinds/compression/objectives.js';
+import type { Requirements } from './requirements.js';
+import { analyzeSpring, type SpringAnalysis, type SpringGeometry } from './analysis.js';
+import { geneticSearch } from '../../search/genetic.js';
+import { gridSearch } from '../../search/grid.js';
+import { valueCount } from '../../search/problem.js';
+import type { SearchResult } from '../../search/result.js';
+import { CHECKS, activeChecks, checkAnalysis } from './verify.js';
+import { Objective } from './objectives.js';
 import { lpLowerBound, type LpBound } from './lpBound.js';
 import { buildSpringProblem, type SpringProblem, type StockItem } from './problem.js';
-import type { CandidateYield } from '../tolerance/confirm.js';
+import type { CandidateYield } from '../../tolerance/confirm.js';
 
 export type StrategyChoice = 'auto' | 'grid' | 'genetic';
 

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { criticalDeflection, endConditionConstant, stableFreeLengthLimit } from '../../src/model/buckling.js';
+import { criticalDeflection, endConditionConstant, stableFreeLengthLimit } from '../../../src/kinds/compression/buckling.js';
 
 describe('buckling', () => {
   it('end-condition constants 0.5, 0.707, 1, 2 (source: Shigley 9th ed., Table 10-2)', () => {

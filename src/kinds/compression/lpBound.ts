@@ -6,12 +6,12 @@
 // terms), and each strength law is taken per segment. Every simplification loosens the constraints, so the LP optimum is a valid lower bound
 // on every discrete spring the grid could find: the gap between the grid's best and this bound says
 // how much any finer wire or coil choice could still gain.
-import { strengthPiece, tensileStrength } from '../catalogs/properties.js';
-import type { Requirements } from '../input/requirements.js';
-import { inactiveCoils } from '../model/geometry.js';
-import { stressFactor } from '../model/stressFactor.js';
-import { minimiseLinear, type LinearRow } from '../search/lp.js';
-import { forceBand, shortestLength } from './checks.js';
+import { strengthPiece, tensileStrength } from '../../catalogs/properties.js';
+import type { Requirements } from './requirements.js';
+import { inactiveCoils } from './geometry.js';
+import { stressFactor } from '../../model/stressFactor.js';
+import { minimiseLinear, type LinearRow } from '../../search/lp.js';
+import { forceBand, shortestLength } from './verify.js';
 import type { SpringProblem, StockItem } from './problem.js';
 
 type V = 'u' | 'v' | 'w' | 't';

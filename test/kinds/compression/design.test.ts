@@ -1,15 +1,15 @@
 // Invariants of the spring search (property tests with fast-check, over requirements of our own making).
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import { loadCatalog } from '../../src/catalogs/load.js';
-import { readRequirements } from '../../src/input/requirements.js';
-import { readSpringCase } from '../../src/input/springFile.js';
-import { analyzeSpring } from '../../src/model/analysis.js';
-import { paretoFront2, dominates } from '../../src/search/pareto.js';
-import { checkAnalysis } from '../../src/spring/checks.js';
-import { runDesign } from '../../src/spring/design.js';
-import { springDocument } from '../../src/spring/springDoc.js';
-import { computeFrontier } from '../../src/spring/frontier.js';
+import { loadCatalog } from '../../../src/catalogs/load.js';
+import { readRequirements } from '../../../src/kinds/compression/requirements.js';
+import { readSpringCase } from '../../../src/kinds/compression/springFile.js';
+import { analyzeSpring } from '../../../src/kinds/compression/analysis.js';
+import { paretoFront2, dominates } from '../../../src/search/pareto.js';
+import { checkAnalysis } from '../../../src/kinds/compression/verify.js';
+import { runDesign } from '../../../src/kinds/compression/design.js';
+import { springDocument } from '../../../src/kinds/compression/springDoc.js';
+import { computeFrontier } from '../../../src/kinds/compression/frontier.js';
 
 const catalog = loadCatalog();
 

@@ -1,10 +1,10 @@
 // Invariants of the single-spring analysis (property tests).
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import { analyzeSpring, type MaterialFigures, type ServiceConditions } from '../../src/model/analysis.js';
-import { END_TYPES, inactiveCoils, solidLength } from '../../src/model/geometry.js';
-import { SEATINGS } from '../../src/model/buckling.js';
-import { sanitize } from '../../src/report/json.js';
+import { analyzeSpring, type MaterialFigures, type ServiceConditions } from '../../../src/kinds/compression/analysis.js';
+import { END_TYPES, inactiveCoils, solidLength } from '../../../src/kinds/compression/geometry.js';
+import { SEATINGS } from '../../../src/kinds/compression/buckling.js';
+import { sanitize } from '../../../src/report/json.js';
 
 const steel: MaterialFigures = {
   tensileStrength: 1800, allowableStress: 810, shearModulus: 81500, elasticModulus: 206000, density: 7850,

@@ -1,8 +1,8 @@
 // The requirements document (SI, as `design` reads it) that stands for a set of requirements already
 // read, so that a change can be applied by path exactly as `--set` applies it, and read again through
 // the same checks. Used when the caller no longer has the file it read.
-import type { MaterialChoice } from '../input/material.js';
-import type { Requirements } from '../input/requirements.js';
+import type { MaterialChoice } from '../../input/material.js';
+import type { Requirements } from './requirements.js';
 
 function materialValue(ch: MaterialChoice): unknown {
   const overrides = { shear_modulus: ch.shearModulus, elastic_modulus: ch.elasticModulus, density: ch.density, tensile_strength: ch.tensileStrength, allowable_stress: ch.allowableStress };

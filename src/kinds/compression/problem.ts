@@ -2,26 +2,26 @@
 // material and one of its standard wire sizes), end type, active coils (stepped), mean diameter
 // (continuous, solved per cell). The free length follows from the working load and the rate.
 // Everything per stock item is computed once into typed arrays; evaluate() allocates nothing.
-import { inStrengthRange } from '../catalogs/properties.js';
-import type { Requirements } from '../input/requirements.js';
-import { materialFigures, type MaterialChoice } from '../input/material.js';
-import type { MaterialFigures, ServiceConditions, SpringGeometry } from '../model/analysis.js';
-import { bucklingConstant1, bucklingConstant2, criticalDeflectionFrom, endConditionConstant } from '../model/buckling.js';
-import { minimumGapSum, solidOuterDiameter } from '../model/clash.js';
-import { INFINITE_LIFE_CYCLES, endurancePoint, fatigueSafetyFactorFrom, fullyReversedEndurance, type EndurancePoint } from '../model/fatigue.js';
-import { inactiveCoils, pitch, solidLength, wireVolume, type EndType } from '../model/geometry.js';
-import { massOfVolume } from '../model/mass.js';
-import { springRate } from '../model/rate.js';
-import { shearStress } from '../model/stress.js';
-import { stressFactor } from '../model/stressFactor.js';
-import { ultimateShearStrength } from '../model/strength.js';
-import { activeCoilMass, surgeFrequency } from '../model/surge.js';
-import { TREND, type Problem } from '../search/problem.js';
-import { COMPRESSION_CHECKS, Check } from '../kinds/compression/checks.js';
-import { OBJECTIVE_SLOTS, Objective, objectiveByKey } from '../kinds/compression/objectives.js';
-import { CHECKS, activeChecks, figuresUnder, forceBand, shortestLength, staticLimit } from './checks.js';
-import { loadToleranceCatalog, type ToleranceCatalog } from '../tolerance/catalog.js';
-import { inSearchYield } from '../tolerance/inSearch.js';
+import { inStrengthRange } from '../../catalogs/properties.js';
+import type { Requirements } from './requirements.js';
+import { materialFigures, type MaterialChoice } from '../../input/material.js';
+import type { MaterialFigures, ServiceConditions, SpringGeometry } from './analysis.js';
+import { bucklingConstant1, bucklingConstant2, criticalDeflectionFrom, endConditionConstant } from './buckling.js';
+import { minimumGapSum, solidOuterDiameter } from './clash.js';
+import { INFINITE_LIFE_CYCLES, endurancePoint, fatigueSafetyFactorFrom, fullyReversedEndurance, type EndurancePoint } from '../../model/fatigue.js';
+import { inactiveCoils, pitch, solidLength, wireVolume, type EndType } from './geometry.js';
+import { massOfVolume } from '../../model/mass.js';
+import { springRate } from '../../model/rate.js';
+import { shearStress } from '../../model/stress.js';
+import { stressFactor } from '../../model/stressFactor.js';
+import { ultimateShearStrength } from '../../model/strength.js';
+import { activeCoilMass, surgeFrequency } from '../../model/surge.js';
+import { TREND, type Problem } from '../../search/problem.js';
+import { COMPRESSION_CHECKS, Check } from './checks.js';
+import { OBJECTIVE_SLOTS, Objective, objectiveByKey } from './objectives.js';
+import { CHECKS, activeChecks, figuresUnder, forceBand, shortestLength, staticLimit } from './verify.js';
+import { loadToleranceCatalog, type ToleranceCatalog } from '../../tolerance/catalog.js';
+import { inSearchYield } from '../../tolerance/inSearch.js';
 
 
 export interface StockItem { choice: MaterialChoice; wireDiameter: number; figures: MaterialFigures }

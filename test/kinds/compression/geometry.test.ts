@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { END_TYPES, freeLengthFromPitch, inactiveCoils, pitch, solidLength } from '../../src/model/geometry.js';
+import { END_TYPES, freeLengthFromPitch, inactiveCoils, pitch, solidLength } from '../../../src/kinds/compression/geometry.js';
 
 // Source: the end-type table of the spring handbooks (Associated Spring, Design Handbook;
 // Budynas and Nisbett, Shigley 9th ed., Table 10-1).

@@ -6,15 +6,15 @@
 // The requirement sets are scenarios of our own, invented for these tests (no outside values), except
 // where a line says otherwise.
 import { describe, expect, it } from 'vitest';
-import { loadCatalog } from '../../src/catalogs/load.js';
-import { readInputFile } from '../../src/input/document.js';
-import { readRequirements, type Requirements } from '../../src/input/requirements.js';
-import { requirementsRecord } from '../../src/report/designReport.js';
-import { admitsSpring, runDesign } from '../../src/spring/design.js';
-import { RELAX_LIMITS, limitingCheck, outward, relaxAdvice } from '../../src/spring/relax.js';
-import { requirementsDocument } from '../../src/spring/requirementsDoc.js';
+import { loadCatalog } from '../../../src/catalogs/load.js';
+import { readInputFile } from '../../../src/input/document.js';
+import { readRequirements, type Requirements } from '../../../src/kinds/compression/requirements.js';
+import { requirementsRecord } from '../../../src/report/designReport.js';
+import { admitsSpring, runDesign } from '../../../src/kinds/compression/design.js';
+import { RELAX_LIMITS, limitingCheck, outward, relaxAdvice } from '../../../src/kinds/compression/relax.js';
+import { requirementsDocument } from '../../../src/kinds/compression/requirementsDoc.js';
 import { readFileSync } from 'node:fs';
-import { cli, inputFile, tempPath } from '../helpers.js';
+import { cli, inputFile, tempPath } from '../../helpers.js';
 
 interface Entry { path: string; from: unknown; to: unknown; set: string; relative_change: number | null; group: string; eases: string[]; suggestion: string }
 

@@ -1,12 +1,12 @@
 // The trade-off frontier: every feasible spring (one per combination at its smallest feasible mean
 // diameter, or sampled along it for a safety factor) and its Pareto set on two objectives.
-import type { Requirements } from '../input/requirements.js';
-import { paretoFront2 } from '../search/pareto.js';
-import { geneticFront } from '../search/geneticFront.js';
+import type { Requirements } from './requirements.js';
+import { paretoFront2 } from '../../search/pareto.js';
+import { geneticFront } from '../../search/geneticFront.js';
 import { AUTO_GRID_CELL_LIMIT, assertVerified, candidateAt, cellCount, runDesign, type Candidate, type DesignRun, type StrategyChoice } from './design.js';
 import { buildSpringProblem, type SpringProblem } from './problem.js';
-import { COMPRESSION_OBJECTIVES, Objective, type FrontierKey } from '../kinds/compression/objectives.js';
-import type { Kind } from '../units/kinds.js';
+import { COMPRESSION_OBJECTIVES, Objective, type FrontierKey } from './objectives.js';
+import type { Kind } from '../../units/kinds.js';
 
 export interface FrontierAxis { objective: number; sign: 1 | -1; kind: Kind | null; label: string }
 

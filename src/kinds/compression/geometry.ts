@@ -1,7 +1,7 @@
 // Geometry of a helical compression spring by end type, after the end-type table of the spring
 // handbooks (Associated Spring, Design Handbook; Budynas and Nisbett, Shigley's Mechanical
 // Engineering Design, Table 10-1). All lengths in mm.
-import { massOfVolume } from './mass.js';
+import { massOfVolume } from '../../model/mass.js';
 
 export const END_TYPES = ['plain', 'plain-ground', 'squared', 'squared-ground'] as const;
 export type EndType = (typeof END_TYPES)[number];

@@ -1,9 +1,9 @@
 // The checks a spring must pass to meet a set of requirements, named in the trade's words. The search
 // evaluates them in its hot loop (problem.ts); `checkAnalysis` evaluates the same checks on a full
 // single-spring analysis, so every spring the search reports can be re-verified independently.
-import type { Requirements } from '../input/requirements.js';
-import type { MaterialFigures, SpringAnalysis } from '../model/analysis.js';
-import { COMPRESSION_CHECKS, Check, type CheckName } from '../kinds/compression/checks.js';
+import type { Requirements } from './requirements.js';
+import type { MaterialFigures, SpringAnalysis } from './analysis.js';
+import { COMPRESSION_CHECKS, Check, type CheckName } from './checks.js';
 
 export const CHECKS = COMPRESSION_CHECKS.map((c) => c.name);
 export type { CheckName };

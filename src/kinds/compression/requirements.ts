@@ -1,24 +1,24 @@
 // The requirements file of `coilfront design`, `frontier` and `sweep`: what the spring must do and
 // where it must fit. Every field but load, material and envelope has a default, documented in the README.
-import { FAMILIES, type Catalog } from '../catalogs/types.js';
-import { RANK_KEYS, type RankKey } from '../kinds/compression/objectives.js';
-import { findSeries } from '../catalogs/load.js';
-import { inStrengthRange } from '../catalogs/properties.js';
-import { formatQuantity } from '../units/format.js';
-import { SEATINGS, type Seating } from '../model/buckling.js';
-import { FATIGUE_CRITERIA, type FatigueCriterion } from '../model/fatigue.js';
-import { END_TYPES, type EndType } from '../model/geometry.js';
-import type { StressCorrection } from '../model/stressFactor.js';
-import { InputError, parseNumber, parseQuantity } from '../units/parse.js';
-import type { UnitSystem } from '../units/systems.js';
-import { Fields, isRecord } from './fields.js';
-import { applyStrengthBasis, parseMaterialChoice, STRENGTH_BASES, type MaterialChoice, type StrengthBasis } from './material.js';
-import { SURGE_ENDS, type SurgeEnds } from '../model/surge.js';
-import { checkMaterialChoice } from './materialChecks.js';
-import { LIMITS } from './limits.js';
+import { FAMILIES, type Catalog } from '../../catalogs/types.js';
+import { RANK_KEYS, type RankKey } from './objectives.js';
+import { findSeries } from '../../catalogs/load.js';
+import { inStrengthRange } from '../../catalogs/properties.js';
+import { formatQuantity } from '../../units/format.js';
+import { SEATINGS, type Seating } from './buckling.js';
+import { FATIGUE_CRITERIA, type FatigueCriterion } from '../../model/fatigue.js';
+import { END_TYPES, type EndType } from './geometry.js';
+import type { StressCorrection } from '../../model/stressFactor.js';
+import { InputError, parseNumber, parseQuantity } from '../../units/parse.js';
+import type { UnitSystem } from '../../units/systems.js';
+import { Fields, isRecord } from '../../input/fields.js';
+import { applyStrengthBasis, parseMaterialChoice, STRENGTH_BASES, type MaterialChoice, type StrengthBasis } from '../../input/material.js';
+import { SURGE_ENDS, type SurgeEnds } from '../../model/surge.js';
+import { checkMaterialChoice } from '../../input/materialChecks.js';
+import { LIMITS } from '../../input/limits.js';
 import { parseCycles } from './springFile.js';
-import { readToleranceRequirements } from '../tolerance/request.js';
-import type { ToleranceRequest } from '../tolerance/model.js';
+import { readToleranceRequirements } from '../../tolerance/request.js';
+import type { ToleranceRequest } from '../../tolerance/model.js';
 
 // What may rank the springs is the objectives registry's to say.
 export { RANK_KEYS, type RankKey };

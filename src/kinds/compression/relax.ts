@@ -8,16 +8,16 @@
 // first; then settings (guided, seating, end types, peening, another material); and only when none of
 // those works alone, the best pair of them and, as a last resort, margins (safety factors, never
 // below 1; clash allowance, never below 10%). A safety factor is never advised below 1.
-import type { Catalog } from '../catalogs/types.js';
-import { FAMILIES } from '../catalogs/types.js';
-import { loadCatalog } from '../catalogs/load.js';
-import { isRecord } from '../input/fields.js';
-import { withValue } from '../input/overrides.js';
-import { readRequirements, type Requirements } from '../input/requirements.js';
-import { SEATINGS, endConditionConstant } from '../model/buckling.js';
-import { INFINITE_LIFE_CYCLES, STATIC_SERVICE_CYCLES } from '../model/fatigue.js';
-import { END_TYPES } from '../model/geometry.js';
-import { CHECKS, activeChecks, type CheckName } from './checks.js';
+import type { Catalog } from '../../catalogs/types.js';
+import { FAMILIES } from '../../catalogs/types.js';
+import { loadCatalog } from '../../catalogs/load.js';
+import { isRecord } from '../../input/fields.js';
+import { withValue } from '../../input/overrides.js';
+import { readRequirements, type Requirements } from './requirements.js';
+import { SEATINGS, endConditionConstant } from './buckling.js';
+import { INFINITE_LIFE_CYCLES, STATIC_SERVICE_CYCLES } from '../../model/fatigue.js';
+import { END_TYPES } from './geometry.js';
+import { CHECKS, activeChecks, type CheckName } from './verify.js';
 import { admitsSpring, type DesignRun } from './design.js';
 import { requirementsDocument } from './requirementsDoc.js';
 

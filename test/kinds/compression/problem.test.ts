@@ -2,14 +2,14 @@
 // declared trends hold, and bracket bounds are true lower bounds.
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import { loadCatalog } from '../../src/catalogs/load.js';
-import { readInputFile } from '../../src/input/document.js';
-import { readRequirements } from '../../src/input/requirements.js';
-import { gridSearch } from '../../src/search/grid.js';
-import { TREND, valueAt, valueCount } from '../../src/search/problem.js';
-import { CHECKS } from '../../src/spring/checks.js';
-import { runDesign } from '../../src/spring/design.js';
-import { buildSpringProblem } from '../../src/spring/problem.js';
+import { loadCatalog } from '../../../src/catalogs/load.js';
+import { readInputFile } from '../../../src/input/document.js';
+import { readRequirements } from '../../../src/kinds/compression/requirements.js';
+import { gridSearch } from '../../../src/search/grid.js';
+import { TREND, valueAt, valueCount } from '../../../src/search/problem.js';
+import { CHECKS } from '../../../src/kinds/compression/verify.js';
+import { runDesign } from '../../../src/kinds/compression/design.js';
+import { buildSpringProblem } from '../../../src/kinds/compression/problem.js';
 
 const catalog = loadCatalog();
 

@@ -1,6 +1,6 @@
 // The spring file (as `coilfront analyze` reads it) that describes a candidate under its requirements,
 // so that any spring the search reports can be checked again, independently, by the single-spring path.
-import type { Requirements } from '../input/requirements.js';
+import type { Requirements } from './requirements.js';
 import type { Candidate } from './design.js';
 
 export function springDocument(c: Candidate, req: Requirements): Record<string, unknown> {
