@@ -117,7 +117,15 @@ describe('coilfront design, kind: extension', () => {
     expect(r.stdout).toMatch(/Limiting check: /);
     const j = await cli('design', file, '--json');
     expect(j.code).toBe(1);
-    expect(JSON.parse(j.stdout).infeasible.limiting_check).toMatch(/^[a-z_]+: /);
+    const inf = JSON.parse(j.stdout).infeasible;
+    expect(inf.limiting_check).toMatch(/^[a-z_]+: /);
+    // The advice: the bore that admits a spring, found by running the design; applied, it admits one,
+    // and a bore 90% of the way there still does not (a looser bore never excludes a spring).
+    const od = inf.relax.find((c: any) => c.path === 'envelope.max_outer_diameter');
+    expect(od.from).toBe(5);
+    expect(r.stdout).toContain(`[--set ${od.set}]`);
+    expect((await cli('design', file, '--set', od.set)).code).toBe(0);
+    expect((await cli('design', file, '--set', `envelope.max_outer_diameter=${5 + 0.9 * (od.to - 5)}`)).code).toBe(1);
   });
 
   it('--per-wire lists one spring per wire size; --strategy genetic is refused by name', async () => {

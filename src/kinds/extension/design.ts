@@ -24,6 +24,8 @@ export interface ExtensionDesignRun {
   candidates: ExtensionCandidate[];
   /** Wall-clock time of the search, ms (shown only when asked: it differs from run to run). */
   searchMs: number;
+  /** The requirements document (overrides applied), when known: the relax advice changes it by path. */
+  document?: unknown;
 }
 
 /** A reported spring may miss a check by no more than this (normalised): rounding, not a failure. */
@@ -50,6 +52,7 @@ export interface ExtensionDesignOptions {
   collectAll?: boolean;
   onProgress?: (done: number, total: number) => void;
   problem?: ExtensionProblem;
+  document?: unknown;
 }
 
 export function designExtension(req: ExtensionRequirements, catalog: Catalog, opts: ExtensionDesignOptions = {}, ext: ExtensionCatalog = loadExtensionCatalog(catalog.materials)): ExtensionDesignRun {
@@ -59,5 +62,5 @@ export function designExtension(req: ExtensionRequirements, catalog: Catalog, op
   const result = gridSearch(problem, { top: req.top, collectAll: opts.collectAll, onProgress: opts.onProgress, bestPerValueOf: req.bestPerWire ? 0 : undefined });
   const candidates = result.best.map((b) => extensionCandidateAt(problem, b.x, b.f));
   candidates.forEach(assertExtensionVerified);
-  return { req, problem, result, candidates, searchMs: performance.now() - t0 };
+  return { req, problem, result, candidates, searchMs: performance.now() - t0, document: opts.document };
 }

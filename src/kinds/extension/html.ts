@@ -12,7 +12,7 @@ import { EXTENSION_CAUTION, extensionWarnings, siteWords, stressPerNewton, type 
 import type { ExtensionCandidate, ExtensionDesignRun } from './design.js';
 import { EXTENSION_FRONTIER_KEYS, computeExtensionFrontier, frontierValue, type ExtensionFrontier } from './frontier.js';
 import { EXTENSION_CHECK_LABELS } from './checks.js';
-import { bandFraction, extensionCandidateGrid, extensionLimitingText, reportedExtensionChecks } from './report.js';
+import { bandFraction, extensionCandidateGrid, extensionRelaxLines, reportedExtensionChecks } from './report.js';
 import type { ExtensionRequirements } from './requirements.js';
 import type { ExtensionCase } from './springFile.js';
 import type { Catalog } from '../../catalogs/types.js';
@@ -222,7 +222,8 @@ export function extensionDesignHtml(run: ExtensionDesignRun, system: UnitSystem,
   const best = run.candidates[0];
   if (!best) {
     sections.push('<h2>No feasible spring</h2>');
-    sections.push(`<p>${esc(`Limiting check: ${extensionLimitingText(run)}.`)}</p>`);
+    const lines = extensionRelaxLines(run);
+    sections.push(`<p>${esc(lines[0])}</p>${lines.length > 1 ? `<ul>${lines.slice(1).map((l) => `<li>${esc(l.slice(4))}</li>`).join('')}</ul>` : ''}`);
   } else {
     const fr = frontier ?? computeExtensionFrontier(req, catalog, 'mass', 'outer_diameter', undefined, run.problem);
     const kx = EXTENSION_FRONTIER_KEYS[fr.x];

@@ -70,7 +70,7 @@ export const extension: ExtensionKind = {
   design(req, catalog, request = {}) {
     // The grid visits every extension space the readers admit; there is no genetic search for them yet.
     if (request.strategy === 'genetic') throw new InputError('--strategy', 'grid or auto (extension springs are searched by the exhaustive grid)', 'genetic');
-    return designExtension(req, catalog, { onProgress: request.onProgress }, loadExtensionCatalog(catalog.materials));
+    return designExtension(req, catalog, { onProgress: request.onProgress, document: request.document }, loadExtensionCatalog(catalog.materials));
   },
   found: (run) => run.candidates.length > 0,
   checks: EXTENSION_CHECK_DEFINITIONS,

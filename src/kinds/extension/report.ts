@@ -1,6 +1,7 @@
 // The analysis of one extension spring and the outcome of a design run, for people (text, in the chosen
 // unit system) and for machines (JSON: SI, snake_case, null where a figure does not apply). Every figure
 // is read from the analysis the search re-verified; nothing is computed again here.
+import { loadCatalog } from '../../catalogs/load.js';
 import { enduranceSourceLabel } from '../../model/fatigue.js';
 import { cautionText } from '../../report/cautions.js';
 import { SI_UNITS } from '../../report/json.js';
@@ -12,6 +13,8 @@ import { EXTENSION_CAUTION, EXTENSION_SITES, extensionWarnings, siteWords, stres
 import { EXTENSION_CHECKS, EXTENSION_CHECK_LABELS, activeExtensionChecks } from './checks.js';
 import { extensionCandidateAt, type ExtensionCandidate, type ExtensionDesignRun } from './design.js';
 import type { ExtensionRequirements } from './requirements.js';
+import { loadExtensionCatalog } from './catalog.js';
+import { extensionRelaxAdvice, type ExtensionRelaxChange } from './relax.js';
 import type { ExtensionCase } from './springFile.js';
 
 /** Site names as JSON and CSV write them. */
@@ -280,6 +283,38 @@ function nearestMisses(run: ExtensionDesignRun): ExtensionCandidate[] {
   return run.result.nearestMisses.map((m) => extensionCandidateAt(run.problem, m.x, m.f));
 }
 
+// The advice is worked out once per run (it re-runs the design a few dozen times) and shared by the
+// text, the JSON and the HTML report of that run.
+const adviceCache = new WeakMap<ExtensionDesignRun, { changes: ExtensionRelaxChange[]; runs: number }>();
+
+export function extensionAdviceFor(run: ExtensionDesignRun): { changes: ExtensionRelaxChange[]; runs: number } {
+  let a = adviceCache.get(run);
+  if (!a) {
+    const catalog = loadCatalog();
+    a = extensionRelaxAdvice(run.req, run.document, catalog, loadExtensionCatalog(catalog.materials));
+    adviceCache.set(run, a);
+  }
+  return a;
+}
+
+/** One change in words, in the file's units, with the exact `--set` that applies it. */
+export function describeExtensionChange(c: ExtensionRelaxChange, fileSystem: UnitSystem): string {
+  const arg = /[\s{}[\]]/.test(c.set) ? `"${c.set}"` : c.set;
+  if (typeof c.to === 'number' && typeof c.from === 'number') {
+    const show = (v: number) => (c.unit ? `${sig(v, 4)} ${unitSymbol(c.unit, fileSystem)}` : c.path === 'load_tolerance' ? `${sig(v * 100, 3)}%` : String(v));
+    return `${c.to > c.from ? 'raise' : 'lower'} ${c.path} from ${show(c.from)} to ${show(c.to)} [--set ${arg}]`;
+  }
+  return `set ${c.path} to ${c.to}${c.from !== null ? ` (was ${c.from})` : ''} [--set ${arg}]`;
+}
+
+export function extensionRelaxLines(run: ExtensionDesignRun): string[] {
+  if (run.document === undefined) return [`Limiting check: ${extensionLimitingText(run)}.`];
+  const a = extensionAdviceFor(run);
+  if (!a.changes.length) return [`Limiting check: ${extensionLimitingText(run)}. No single change of a limit or setting tried (${a.runs} runs) admits a spring: reconsider the loads, the stroke or the space.`];
+  return [`Limiting check: ${extensionLimitingText(run)}. The smallest single changes that admit a spring (each was run; values in the file's units):`,
+    ...a.changes.map((c) => `  - ${describeExtensionChange(c, run.req.system)}`)];
+}
+
 // Wall-clock figures break byte-for-byte reproducibility, so they appear only when asked for (--timing).
 export function extensionDesignJson(run: ExtensionDesignRun, showTiming = false): Record<string, unknown> {
   const misses = run.candidates.length ? [] : nearestMisses(run);
@@ -293,6 +328,7 @@ export function extensionDesignJson(run: ExtensionDesignRun, showTiming = false)
     ...(run.candidates.length === 0 ? {
       infeasible: {
         limiting_check: extensionLimitingText(run),
+        relax: run.document === undefined ? null : extensionAdviceFor(run).changes.map((c) => ({ path: c.path, from: c.from, to: c.to, set: c.set, suggestion: describeExtensionChange(c, run.req.system) })),
         nearest_misses: misses.map((c, i) => ({ ...extensionCandidateRecord(c), violation: run.result.nearestMisses[i].violation, failing_checks: failingChecks(c) })),
       },
     } : {}),
@@ -390,7 +426,7 @@ export function extensionDesignText(run: ExtensionDesignRun, system: UnitSystem,
       });
     }
     out.push('');
-    out.push(`Limiting check: ${extensionLimitingText(run)}. Relax that requirement first (a larger bore or free length, a wider load tolerance, a larger index range or more body coils, or initial_tension_range: makeable).`);
+    out.push(...extensionRelaxLines(run));
   }
   out.push('');
   out.push(...cautionLines());
