@@ -9,6 +9,7 @@ import { springServiceConditions } from '../kinds/compression/problem.js';
 import { CHECK, CHECKS, CHECK_LABELS, activeChecks, checkAnalysis, figuresUnder, forceBand, staticLimit, type CheckName } from '../kinds/compression/verify.js';
 import type { EndType } from '../kinds/compression/geometry.js';
 import type { Kind } from '../units/kinds.js';
+import { springYieldFigures, yieldShortfall } from '../tolerance/confirm.js';
 import type { WorkingBand } from './band.js';
 import { givenService, type GivenSpring } from './given.js';
 
@@ -77,7 +78,7 @@ export function makeJudge(req: Requirements, band: WorkingBand, endsStated: bool
 type Figure = Pick<CheckLine, 'value' | 'limit' | 'relation' | 'kind'> & { note?: string };
 
 /** The figure and limit behind each design check, for people; the verdict itself is checkAnalysis's. */
-function figureOf(name: CheckName, a: SpringAnalysis, req: Requirements): Figure {
+function figureOf(name: CheckName, a: SpringAnalysis, req: Requirements, madeYield: number | null): Figure {
   const g = a.geometry;
   switch (name) {
     case 'index_min': return { value: g.springIndex, limit: req.index[0], relation: '>=', kind: 'number' };
@@ -103,7 +104,7 @@ function figureOf(name: CheckName, a: SpringAnalysis, req: Requirements): Figure
     case 'operating_force_min': return { value: a.points[a.points.length - 1].force, limit: req.operatingForce! * (1 - forceBand(req)), relation: '>=', kind: 'force' };
     case 'operating_force_max': return { value: a.points[a.points.length - 1].force, limit: req.operatingForce! * (1 + forceBand(req)), relation: '<=', kind: 'force' };
     case 'temperature': return { value: req.temperature ?? null, limit: a.material.maxTemperature, relation: '<=', kind: 'temperature' };
-    case 'yield': return { value: null, limit: req.minYield ?? null, relation: '>=', kind: 'percent', note: 'fraction of made springs that pass every check (seeded Monte Carlo at the tolerances)' };
+    case 'yield': return { value: madeYield, limit: req.minYield ?? null, relation: '>=', kind: 'percent', note: `share of made springs that pass every check: seeded Monte Carlo at EN 15800 grade ${req.tolerance.grade}${Object.keys(req.tolerance.overrides).length ? ' and the given tolerances' : ''}, accepted within its standard error` };
   }
 }
 
@@ -117,7 +118,9 @@ class JudgedSpring implements Verdict {
 
   constructor(readonly spring: GivenSpring, readonly analysis: SpringAnalysis, private readonly j: Judge,
     /** checkAnalysis's values, then the working band's low and high sides. */
-    private readonly g: Float64Array, private readonly materialOk: boolean, private readonly endsOk: boolean | null) {
+    private readonly g: Float64Array, private readonly materialOk: boolean, private readonly endsOk: boolean | null,
+    /** The Monte Carlo yield of the made springs, when min_yield asks for it. */
+    readonly madeYield: number | null = null) {
     const fail = (name: AnyCheckName, by: number) => { this.pass = false; this.failingNames.push(name); this.violation += by; };
     const n = CHECKS.length;
     if (!passes(g[n])) fail('working_force_min', Number.isNaN(g[n]) ? 1 : g[n]);
@@ -138,7 +141,7 @@ class JudgedSpring implements Verdict {
       ({ name, label, value: fig.value, limit: fig.limit, relation: fig.relation, kind: fig.kind, ...(fig.note ? { note: fig.note } : {}), g: gv, margin: Number.isNaN(gv) ? null : -gv, pass: passes(gv) });
     lines.push(numeric('working_force_min', GIVEN_CHECK_LABELS.working_force_min, g[n], { value: F1, limit: j.band.low, relation: '>=', kind: 'force' }));
     lines.push(numeric('working_force_max', GIVEN_CHECK_LABELS.working_force_max, g[n + 1], { value: F1, limit: j.band.high, relation: '<=', kind: 'force' }));
-    CHECKS.forEach((name, i) => { if (j.active[i]) lines.push(numeric(name, CHECK_LABELS[name], g[CHECK[name]], figureOf(name, analysis, req))); });
+    CHECKS.forEach((name, i) => { if (j.active[i]) lines.push(numeric(name, CHECK_LABELS[name], g[CHECK[name]], figureOf(name, analysis, req, this.madeYield))); });
     const id = this.spring.choice.material.id;
     lines.push({ name: 'material', label: GIVEN_CHECK_LABELS.material, value: id, limit: [...j.allowedMaterials].join(', '), relation: 'in', kind: 'text', g: this.materialOk ? -1 : 1, margin: null, pass: this.materialOk });
     if (this.endsOk !== null) {
@@ -162,7 +165,14 @@ export function judge(spring: GivenSpring, j: Judge): Verdict {
   const g = new Float64Array(CHECKS.length + 2);
   g.set(design);
   const F1 = analysis.points[0].force;
+  // min_yield: the made springs' yield by the same Monte Carlo, seed and rule as design's confirmation.
+  let madeYield: number | null = null;
+  if (j.active[CHECK.yield] && j.req.minYield !== undefined) {
+    const y = springYieldFigures({ geometry: spring.geometry, figures: analysis.material, material: spring.choice.material }, j.req);
+    madeYield = y.monteCarlo.yield;
+    g[CHECK.yield] = yieldShortfall(y.monteCarlo, j.req.minYield);
+  }
   g[CHECKS.length] = (j.band.low - F1) / j.band.force;
   g[CHECKS.length + 1] = (F1 - j.band.high) / j.band.force;
-  return new JudgedSpring(spring, analysis, j, g, j.allowedMaterials.has(spring.choice.material.id), j.allowedEnds ? j.allowedEnds.includes(spring.geometry.ends) : null);
+  return new JudgedSpring(spring, analysis, j, g, j.allowedMaterials.has(spring.choice.material.id), j.allowedEnds ? j.allowedEnds.includes(spring.geometry.ends) : null, madeYield);
 }

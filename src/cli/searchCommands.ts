@@ -113,8 +113,20 @@ function progress(io: Io, label: string): ((done: number, total: number) => void
   };
 }
 
-async function designCommand(file: string, opts: CommonOptions & { spec?: string }, io: Io): Promise<number> {
-  checkOutputPaths([{ option: '--report', path: opts.report }, { option: '--spec', path: opts.spec }], !!opts.force, [file]);
+interface DesignOptions extends CommonOptions { spec?: string; springFile?: string; pick?: string }
+
+/** --pick: the rank of the spring --spec and --spring-file write (1, the best, when not given). */
+function readPick(opts: DesignOptions): number {
+  if (opts.pick === undefined) return 1;
+  if (!opts.spec && !opts.springFile) throw new InputError('--pick', 'used with --spring-file or --spec (it chooses the spring they write)', opts.pick);
+  const n = Number(opts.pick.trim());
+  if (!(Number.isInteger(n) && n >= 1 && n <= 1000)) throw new InputError('--pick', 'a whole number from 1 (the best spring) to the number listed', opts.pick);
+  return n;
+}
+
+async function designCommand(file: string, opts: DesignOptions, io: Io): Promise<number> {
+  checkOutputPaths([{ option: '--report', path: opts.report }, { option: '--spec', path: opts.spec }, { option: '--spring-file', path: opts.springFile }], !!opts.force, [file]);
+  const pick = readPick(opts);
   // The document's `kind` picks the spring kind (src/kinds/index.ts); no kind is compression.
   const { doc, overrides } = tracedOverrides(file, opts);
   const kind = kindOf(doc);
@@ -130,6 +142,12 @@ async function designCommand(file: string, opts: CommonOptions & { spec?: string
   for (const note of kind.report.requirementNotes(req)) io.stderr(`coilfront: note: ${note}\n`);
   const run = kind.design(req, catalog, { strategy: opts.strategy, onProgress: progress(io, 'searching'), document: doc });
   const system = opts.units ?? req.system;
+  // Everything that could refuse an output is settled before the first file is written.
+  const listed = kind.report.listed ? kind.report.listed(run) : 0;
+  if ((opts.spec || opts.springFile) && listed > 0 && pick > listed) {
+    throw new InputError('--pick', `a rank from 1 to ${listed} (the springs listed; --top lists more)`, String(pick));
+  }
+  if (opts.springFile && !kind.report.springFile) throw new InputError('--spring-file', `a kind that exports spring files (the ${kind.label} export is not built yet)`);
   if (opts.report) {
     if (!kind.report.designHtml) throw new InputError('--report', `a report of a kind that has one (the ${kind.label} report is not built yet)`);
     writeOutputFile(opts.report, await kind.report.designHtml(run, system), !!opts.force, '--report');
@@ -137,8 +155,16 @@ async function designCommand(file: string, opts: CommonOptions & { spec?: string
   }
   if (opts.spec) {
     if (!kind.report.writeSpecSheet) throw new InputError('--spec', `a kind that has a specification sheet (the ${kind.label} sheet is not built yet)`);
-    if (await kind.report.writeSpecSheet(opts.spec, run, system, !!opts.force)) io.stderr(`coilfront: specification sheet of spring 1 written to ${opts.spec}\n`);
+    if (await kind.report.writeSpecSheet(opts.spec, run, system, !!opts.force, pick)) io.stderr(`coilfront: specification sheet of spring ${pick} written to ${opts.spec}\n`);
     else io.stderr('coilfront: no spring to specify: no specification sheet written\n');
+  }
+  if (opts.springFile) {
+    const out = kind.report.springFile!(run, pick);
+    if (out) {
+      writeOutputFile(opts.springFile, out.text, !!opts.force, '--spring-file');
+      for (const note of out.notes) io.stderr(`coilfront: note: ${note}\n`);
+      io.stderr(`coilfront: spring ${pick} written to ${opts.springFile} at drawing precision (coilfront analyze or check reads it)\n`);
+    } else io.stderr('coilfront: no spring to export: no spring file written\n');
   }
   if (opts.json) io.stdout(toJson(kind.report.designJson(run, !!opts.timing)) + '\n');
   else io.stdout(kind.report.designText(run, system, !!opts.timing));
@@ -274,9 +300,11 @@ export function registerSearchCommands(program: Command, io: Io, setCode: (c: nu
     .description('search every standard wire size, coil count and end type for the springs that meet the requirements, best first')
     .argument('<requirements-file>', 'YAML or JSON requirements file (see README)'))
     .option('--report <file.html>', 'also write a self-contained HTML design report')
-    .option('--spec <file.html>', 'also write the best spring\'s one-page specification sheet (as drawn, EN 15800 grade 2)')
-    .option('--force', 'overwrite an existing report file')
-    .action(async (file: string, opts: CommonOptions & { spec?: string }) => setCode(await designCommand(file, opts, io)));
+    .option('--spec <file.html>', 'also write the chosen spring\'s one-page specification sheet (as drawn, at the tolerance grade, 2 unless given)')
+    .option('--spring-file <file.yaml>', 'also write the chosen spring as a spring file (as `analyze` and `check` read it), at drawing precision, with the requirement\'s service conditions')
+    .option('--pick <n>', 'the rank of the spring --spec and --spring-file write (default 1, the best)')
+    .option('--force', 'overwrite existing output files')
+    .action(async (file: string, opts: DesignOptions) => setCode(await designCommand(file, opts, io)));
 
   const keys = Object.keys(FRONTIER_KEYS);
   addCommon(program.command('frontier')

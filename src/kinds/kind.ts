@@ -83,8 +83,13 @@ export interface KindReport<Case, Analysis, Req, Run> {
   designJson(run: Run, showTiming: boolean): Record<string, unknown>;
   /** The design HTML report, or undefined when the kind has none yet. */
   designHtml?(run: Run, system: UnitSystem): Promise<string>;
-  /** Write the specification sheet of the best spring; false (nothing written) when there is none. */
-  writeSpecSheet?(path: string, run: Run, system: UnitSystem, force: boolean): Promise<boolean>;
+  /** Write the specification sheet of the spring ranked `pick` (1 = best); false (nothing written) when there is none. */
+  writeSpecSheet?(path: string, run: Run, system: UnitSystem, force: boolean, pick?: number): Promise<boolean>;
+  /** The spring file (as `analyze` and `check` read it) of the spring ranked `pick`, at drawing
+   * precision, with notes for stderr; null when there is no such spring. */
+  springFile?(run: Run, pick: number): { text: string; notes: string[] } | null;
+  /** How many springs the run lists (the range of --pick). */
+  listed?(run: Run): number;
   /** Notes on how the requirements were read, for stderr ("judged as static service"). */
   requirementNotes(req: Req): string[];
 }

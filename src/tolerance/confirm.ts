@@ -37,7 +37,11 @@ export function designedSpring(c: Candidate): DesignedSpring {
  * springs are judged by the allocation-free made-spring checks (the same verdicts as the full analysis:
  * test/tolerance/confirm.test.ts), so twenty thousand samples cost a few tens of milliseconds. */
 export function candidateYield(c: Candidate, req: Requirements, catalog: ToleranceCatalog = loadToleranceCatalog(), samples = CONFIRM_SAMPLES): CandidateYield {
-  const spring = designedSpring(c);
+  return springYieldFigures(designedSpring(c), req, catalog, samples);
+}
+
+/** The same for any spring (a given one, a stock part, an exported drawing): `check` judges min_yield by it. */
+export function springYieldFigures(spring: DesignedSpring, req: Requirements, catalog: ToleranceCatalog = loadToleranceCatalog(), samples = CONFIRM_SAMPLES): CandidateYield {
   const tolerances = designedTolerances(catalog, req.tolerance, spring, req);
   const nominal = nominalQuantities(spring, req);
   const sigma = standardDeviations(tolerances);
@@ -47,8 +51,14 @@ export function candidateYield(c: Candidate, req: Requirements, catalog: Toleran
   const estimate = estimateYield(evaluate, nominal, sigma, include, scratch);
   const estimateLimiting = scratch.limiting >= 0 && scratch.pass[scratch.limiting] < 1 ? CHECKS[scratch.limiting] : null;
   const monteCarlo = monteCarloYield(evaluate, nominal, sigma, include, { seed: req.seed, samples });
-  const refused = req.minYield !== undefined && monteCarlo.yield < req.minYield - monteCarlo.standardError;
+  const refused = req.minYield !== undefined && yieldShortfall(monteCarlo, req.minYield) > 0;
   return { tolerances, estimate, estimateLimiting, monteCarlo, limiting: monteCarlo.limiting ?? estimateLimiting, refused };
+}
+
+/** How far a sampled yield falls below min_yield beyond its standard error, relative to min_yield (the
+ * check value: <= 0 passes). Design refuses and `check` fails a spring by this one rule. */
+export function yieldShortfall(mc: YieldResult, minYield: number): number {
+  return (minYield - mc.standardError - mc.yield) / minYield;
 }
 
 export interface ConfirmedList {

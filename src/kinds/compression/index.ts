@@ -9,6 +9,7 @@ import { designJson, designText } from '../../report/designReport.js';
 import { candidateAt, runDesign, type Candidate, type DesignRun } from './design.js';
 import { buildSpringProblem } from './problem.js';
 import { confirmRun } from '../../tolerance/confirm.js';
+import { springFileText } from './springDoc.js';
 import type { SpringKind } from '../kind.js';
 import { COMPRESSION_CHECKS } from './checks.js';
 import { COMPRESSION_FIELDS } from './fields.js';
@@ -45,12 +46,21 @@ export const compression: CompressionKind = {
       const { designHtml } = await import('../../report/html/designHtml.js');
       return designHtml(run, system);
     },
-    async writeSpecSheet(path, run, system, force) {
-      if (!run.candidates.length) return false;
+    async writeSpecSheet(path, run, system, force, pick = 1) {
+      const c = run.candidates[pick - 1];
+      if (!c) return false;
       const { writeSpecSheet } = await import('../../report/html/specSheet.js');
-      writeSpecSheet(path, run.candidates[0], run.req, system, force);
+      writeSpecSheet(path, c, run.req, system, force);
       return true;
     },
+    springFile(run, pick) {
+      const c = run.candidates[pick - 1];
+      if (!c) return null;
+      const { text, exported } = springFileText(c, run.req, pick);
+      const notes = exported.drawn.failing.length ? [`spring ${pick} as drawn fails ${exported.drawn.failing.join(', ')} (the file says so)`] : [];
+      return { text, notes };
+    },
+    listed: (run) => run.candidates.length,
     requirementNotes: (req) => (req.cycles !== undefined && req.cycles < STATIC_SERVICE_CYCLES
       ? [`cycles ${req.cycles} is below ${STATIC_SERVICE_CYCLES.toExponential(0).replace('+', '')}: judged as static service (no fatigue check)`]
       : []),

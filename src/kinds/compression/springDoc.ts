@@ -2,6 +2,11 @@
 // so that any spring the search reports can be checked again, independently, by the single-spring path.
 import type { Requirements } from './requirements.js';
 import type { Candidate } from './design.js';
+import { drawnSpring, type DrawnSpring } from '../../tolerance/precision.js';
+import { INCH_MM } from '../../units/kinds.js';
+import type { UnitSystem } from '../../units/systems.js';
+import { stringify as stringifyYaml } from 'yaml';
+import { CAUTIONS } from '../../report/cautions.js';
 
 export function springDocument(c: Candidate, req: Requirements): Record<string, unknown> {
   const g = c.geometry;
@@ -36,4 +41,54 @@ export function springDocument(c: Candidate, req: Requirements): Record<string, 
   if (req.temperature !== undefined) doc.temperature = req.temperature;
   if (req.forcingFrequency !== undefined) doc.forcing_frequency = req.forcingFrequency;
   return doc;
+}
+
+/** A length as a drawing writes it: mm as a number in SI, "0.620 in" in US (binary noise cleaned). */
+function drawnLength(mm: number, system: UnitSystem): number | string {
+  return system === 'us' ? `${Number((mm / INCH_MM).toPrecision(10))} in` : Number(mm.toPrecision(10));
+}
+
+export interface ExportedSpring {
+  /** The spring file (plain data, as `analyze` and `check` read it). */
+  doc: Record<string, unknown>;
+  /** The spring as drawn and its checks at those values. */
+  drawn: DrawnSpring;
+}
+
+/**
+ * The spring file of a reported spring at drawing precision (src/tolerance/precision.ts): the wire as
+ * listed, the controlled diameter (outer in a bore, inner over a rod) to 0.01 mm or 0.001 in, the free
+ * length to 0.1 mm or 0.01 in, the coils to the coil step, with the requirement's service conditions.
+ * Lengths of the spring are written in the requirement's unit system.
+ */
+export function drawnSpringDocument(c: Candidate, req: Requirements): ExportedSpring {
+  const drawn = drawnSpring(c.geometry, c.item.figures, req);
+  const g = drawn.geometry;
+  const base = springDocument({ ...c, geometry: g }, req);
+  const doc: Record<string, unknown> = {};
+  for (const [k, v] of Object.entries(base)) {
+    if (k === 'mean_diameter') doc[drawn.controlled === 'outer' ? 'outer_diameter' : 'inner_diameter'] = drawnLength(drawn.controlledValue, req.system);
+    else if (k === 'wire_diameter' || k === 'free_length') doc[k] = drawnLength(v as number, req.system);
+    else doc[k] = v;
+  }
+  return { doc, drawn };
+}
+
+/** The exported spring as a YAML file: a comment header (which spring, the precision, its verdict as
+ * drawn, the cautions), then the document. */
+export function springFileText(c: Candidate, req: Requirements, rank: number): { text: string; exported: ExportedSpring } {
+  const exported = drawnSpringDocument(c, req);
+  const { drawn } = exported;
+  const precision = req.system === 'us' ? 'diameters to 0.001 in, free length to 0.01 in' : 'diameters to 0.01 mm, free length to 0.1 mm';
+  const header = [
+    `Spring ${rank} of a coilfront design, as drawn: wire as listed, ${precision}, coils to ${req.coilStep}.`,
+    `The ${drawn.controlled} diameter is the controlled one; the free length is the one to adjust to meet the working force.`,
+    drawn.failing.length
+      ? `As drawn it FAILS ${drawn.failing.join(', ')}: check it with \`coilfront check\` before use.`
+      : `As drawn it passes every check of the requirements it was designed for (\`coilfront check\` this file against them).`,
+    `Working force at the working length as drawn: ${Number(drawn.workingForce.toPrecision(5))} N (${Number((drawn.workingForceDeviation * 100).toPrecision(3))}% from the requirement).`,
+    ...CAUTIONS,
+  ];
+  const text = header.map((l) => `# ${l}`).join('\n') + '\n' + stringifyYaml(exported.doc, { lineWidth: 0 });
+  return { text, exported };
 }

@@ -235,10 +235,11 @@ ${notes.length ? `<p class="note warn">${notes.map(esc).join('<br>')}</p>` : ''}
 `;
 }
 
-/** Write the sheet of a reported spring (as drawn, grade `grade` tolerances, seeded Monte Carlo). */
-export function writeSpecSheet(path: string, c: { geometry: SpringGeometry; item: { figures: MaterialFigures; choice: { material: Material } } }, req: Requirements, system: UnitSystem, force: boolean, grade: ToleranceGrade = 2): SpecifiedSpring {
+/** Write the sheet of a reported spring (as drawn, at the requirement's tolerance grade and overrides,
+ * or grade `grade` when given, seeded Monte Carlo). */
+export function writeSpecSheet(path: string, c: { geometry: SpringGeometry; item: { figures: MaterialFigures; choice: { material: Material } } }, req: Requirements, system: UnitSystem, force: boolean, grade?: ToleranceGrade): SpecifiedSpring {
   const shown = { ...req, system };
-  const spec = specifySpring(loadToleranceCatalog(), { grade, overrides: {} }, { geometry: c.geometry, figures: c.item.figures, material: c.item.choice.material }, shown);
+  const spec = specifySpring(loadToleranceCatalog(), grade === undefined ? req.tolerance : { grade, overrides: {} }, { geometry: c.geometry, figures: c.item.figures, material: c.item.choice.material }, shown);
   writeOutputFile(path, specSheetHtml(spec.sheet), force, '--spec');
   return spec;
 }
