@@ -1,5 +1,6 @@
 // The few infeasible points closest to feasibility, kept for the "nothing is feasible" report.
-import type { Miss } from './result.js';
+/** An infeasible point, its checks, objectives and total violation. */
+export interface Miss { x: Float64Array; g: Float64Array; f: Float64Array; violation: number }
 
 export class NearestMisses {
   readonly items: Miss[] = [];

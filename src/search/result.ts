@@ -2,11 +2,12 @@
 // counts that explain the outcome (what each check cut, what to relax, the nearest misses).
 import type { PointBuffer, TopK } from './archive.js';
 import type { CellWorkspace } from './cell.js';
-import type { NearestMisses } from './misses.js';
+import type { Miss, NearestMisses } from './misses.js';
+
+export type { Miss };
 import type { Problem } from './problem.js';
 
 export interface Point { x: Float64Array; f: Float64Array }
-export interface Miss { x: Float64Array; g: Float64Array; f: Float64Array; violation: number }
 
 export interface SearchResult {
   strategy: 'grid' | 'genetic';

@@ -1,0 +1,105 @@
+// No outside values here: coilfront's own layering (issue 7, "Dependency direction"). Imports point
+// downwards only, and no file or folder of src/ imports itself back through others.
+//
+// Layers, lowest first (a unit may import its own layer or any lower one):
+//   0 units                 quantities and unit systems
+//   1 model, search         shared wire mechanics; the search engine (knows nothing of springs)
+//   2 catalogs              materials and wire series, validated
+//   3 input                 reading documents and their fields, materials, overrides
+//   4 kinds, kinds/<kind>   the spring-kind seam and one folder per kind
+//   5 tolerance             made-spring scatter and yield
+//   6 report                shared rendering and the reports
+//   7 check, stock          one given spring or a stock table against requirements
+//   8 api                   the library API
+//   9 cli                   the command line, thin over the rest
+// The debts below are the edges that break this today, each with the way out; the test fails on any
+// new one, and on a listed one that has been paid (delete its line then), so the list only shrinks.
+import { describe, expect, it } from 'vitest';
+import { cycles, importGraph, sourceFiles, unitGraph, unitOf } from './imports.js';
+
+const LAYER: Record<string, number> = {
+  units: 0, model: 1, search: 1, catalogs: 2, input: 3, kinds: 4, tolerance: 5, report: 6, check: 7, stock: 7, api: 8, cli: 9,
+};
+
+function layerOf(unit: string): number {
+  const top = unit.split('/')[0];
+  if (!(top in LAYER)) throw new Error(`src/${unit} has no layer: add it to LAYER in ${import.meta.url}`);
+  return LAYER[top];
+}
+
+/** Upward imports that exist today, unit -> unit, and the way out of each. */
+const UPWARD_DEBTS: Record<string, string> = {
+  'catalogs -> input': 'catalogs/load.ts reads YAML with input/fields.ts: the field reader belongs below both',
+  'kinds/compression -> tolerance': 'min_yield in the search and the spec sheet: tolerance is compression physics, it moves into the kind',
+  'kinds/compression -> report': 'the compression report sections still live in src/report/: they move into the kind',
+  'kinds/extension -> report': 'the extension report sections import the shared text table and JSON helpers in src/report/: those move below kinds',
+  'tolerance -> report': 'specify.ts builds the spec sheet input from the sheet module: the input type belongs to tolerance',
+  'report -> check': 'report/html/stockSection.ts is the stock command\'s section: it moves into src/stock/',
+  'report -> stock': 'the same stockSection.ts',
+};
+
+/** Imports from one kind into another that exist today, and the way out. */
+const ACROSS_DEBTS: Record<string, string> = {
+  'kinds/extension -> kinds/compression': 'extension requirements take the compression DEFAULTS and parseCycles: the shared defaults and the cycles reader move below the kinds (src/input/)',
+};
+
+/** File cycles that exist today (sorted members joined by ' | '), and the way out of each. */
+const CYCLE_DEBTS: Record<string, string> = {
+  'src/kinds/compression/design.ts | src/tolerance/confirm.ts': 'the Monte Carlo confirmation of min_yield takes the design types; it moves into the kind with tolerance',
+  'src/report/html/specSheet.ts | src/tolerance/specify.ts': 'specify builds the sheet input and the sheet imports its types: one of them should own SpecSheetInput',
+};
+
+const graph = importGraph(sourceFiles());
+const units = unitGraph(graph);
+
+describe('dependency direction', () => {
+  it('every folder of src/ has a layer', () => {
+    for (const u of units.keys()) expect(() => layerOf(u)).not.toThrow();
+  });
+
+  it('no file of src/ imports itself back through others (beyond the listed debts)', () => {
+    const found = cycles(graph).map((c) => c.join(' | '));
+    expect(found.filter((c) => !(c in CYCLE_DEBTS)), 'new import cycles between files').toEqual([]);
+    expect(Object.keys(CYCLE_DEBTS).filter((c) => !found.includes(c)), 'paid cycle debts: delete their lines').toEqual([]);
+  });
+
+  it('layers import downwards only (beyond the listed debts)', () => {
+    const upward: string[] = [];
+    for (const [from, edges] of units) {
+      for (const to of edges.keys()) if (layerOf(to) > layerOf(from)) upward.push(`${from} -> ${to}`);
+    }
+    const fresh = upward.filter((e) => !(e in UPWARD_DEBTS)).map((e) => `${e} (${units.get(e.split(' -> ')[0])!.get(e.split(' -> ')[1])![0]})`);
+    expect(fresh, 'new upward imports').toEqual([]);
+    expect(Object.keys(UPWARD_DEBTS).filter((e) => !upward.includes(e)), 'paid upward debts: delete their lines').toEqual([]);
+  });
+
+  it('no folder imports itself back through others, once the listed debts are set aside', () => {
+    // src/kinds/index.ts, the registry, is the one file that names every kind (kinds -> kinds/<kind>);
+    // each kind implements src/kinds/kind.ts (kinds/<kind> -> kinds). That pair is the seam, not a cycle.
+    const debts = new Set([...Object.keys(UPWARD_DEBTS), ...Object.keys(ACROSS_DEBTS)]);
+    const simple = new Map([...units].map(([u, edges]) => [u, [...edges.keys()].filter((t) => !debts.has(`${u} -> ${t}`) && !(u === 'kinds' && t.startsWith('kinds/')))]));
+    expect(cycles(simple)).toEqual([]);
+  });
+
+  it('one kind never imports another: shared code lives below the kinds', () => {
+    const across: string[] = [];
+    for (const [from, edges] of units) {
+      if (!from.startsWith('kinds/')) continue;
+      for (const [to] of edges) if (to.startsWith('kinds/') && to !== from) across.push(`${from} -> ${to}`);
+    }
+    expect(across.filter((e) => !(e in ACROSS_DEBTS)).map((e) => `${e} (${units.get(e.split(' -> ')[0])!.get(e.split(' -> ')[1])![0]})`), 'new imports across kinds').toEqual([]);
+    expect(Object.keys(ACROSS_DEBTS).filter((e) => !across.includes(e)), 'paid debts: delete their lines').toEqual([]);
+  });
+
+  it('the search engine knows nothing of springs, catalogs or input', () => {
+    const edges = [...(units.get('search') ?? new Map()).keys()];
+    expect(edges.filter((u) => u !== 'units')).toEqual([]);
+  });
+
+  it('the reader sees its own folder as one unit', () => {
+    // A check of the checker: the unit of a kind's file is its kind.
+    expect(unitOf('src/kinds/compression/problem.ts')).toBe('kinds/compression');
+    expect(unitOf('src/kinds/kind.ts')).toBe('kinds');
+    expect(unitOf('src/search/grid.ts')).toBe('search');
+  });
+});
