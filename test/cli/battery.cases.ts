@@ -291,7 +291,10 @@ const requirementFields: BadCase[] = [
   R('coil step negative', { coil_step: -0.25 }, 'coil_step'),
   R('coil step 1e-9', { coil_step: 1e-9 }, 'coil_step'),
   R('coil step huge', { coil_step: 1e6 }, 'coil_step'),
-  R('coil step too fine for every material', { material: 'any', ends: ['plain', 'squared', 'squared-ground', 'plain-ground'], coil_step: 0.01 }, 'coil_step'),
+  // Every material, every end type at coil_step 0.01 (2,149,996 combinations) is the genetic search's
+  // under --strategy auto; only a grid forced onto it is too much work.
+  { ...R('coil step too fine for a forced grid', { material: 'any', ends: ['plain', 'squared', 'squared-ground', 'plain-ground'], coil_step: 0.01 }, 'coil_step'), args: ['--strategy', 'grid'] },
+  R('coil step too fine for the best of every wire', { material: 'any', ends: ['plain', 'squared', 'squared-ground', 'plain-ground'], coil_step: 0.01, best_per_wire: true }, 'coil_step'),
   R('index reversed', { index: [12, 4] }, 'index'),
   R('index at 1', { index: [1, 12] }, 'index[0]'),
   R('index huge', { index: [4, 1e6] }, 'index[1]'),

@@ -4,6 +4,7 @@
 import { readFileSync } from 'node:fs';
 import { parse } from 'csv-parse/sync';
 import { describe, expect, it } from 'vitest';
+import { LIMITS } from '../../src/input/limits.js';
 import { cli, inputFile, tempPath } from '../helpers.js';
 
 const demo = 'examples/washer-trigger.yaml';
@@ -99,6 +100,25 @@ top: 6
       expect(only.candidates[0].mass).toBeCloseTo(c.mass, 12);
     }
   });
+
+  it('a space too large for the grid goes to the genetic search, within its budget; a grid forced onto it is refused naming coil_step', async () => {
+    // The demo's loads over every material and end type at coil_step 0.01: 2,149,996 combinations.
+    const huge = inputFile(readFileSync(demo, 'utf8') + '\n');
+    const over = ['--set', 'material=any', '--set', 'ends=[plain, plain-ground, squared, squared-ground]', '--set', 'coil_step=0.01'];
+    const auto = await cli('design', huge, ...over, '--json', '--top', '3');
+    expect(auto.code, auto.stderr).toBe(0);
+    const out = JSON.parse(auto.stdout);
+    expect(out.strategy).toBe('genetic');
+    expect(out.evaluated).toBeGreaterThan(0);
+    expect(out.evaluated).toBeLessThanOrEqual(LIMITS.geneticEvaluations);
+    expect(out.candidates.length).toBeGreaterThan(0);
+    const grid = await cli('design', huge, ...over, '--strategy', 'grid', '--json');
+    expect(grid.code).toBe(2);
+    expect(grid.stdout).toBe('');
+    expect(grid.stderr).toMatch(/^coilfront: error: coil_step: /);
+    expect(grid.stderr).toContain('2,149,996');
+    expect(grid.stderr).toContain('--strategy auto');
+  }, 120_000);
 
   it('the genetic strategy is reproducible: same seed, same output, byte for byte', async () => {
     const a = await cli('design', demo, '--strategy', 'genetic', '--seed', '42', '--json');

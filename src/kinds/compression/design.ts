@@ -1,5 +1,6 @@
 // Requirements -> candidates -> evaluation -> filters -> ranking: one design run, whichever strategy.
-import type { Requirements } from './requirements.js';
+import { LIMITS } from '../../input/limits.js';
+import { gridWorkError, type Requirements } from './requirements.js';
 import { analyzeSpring, type SpringAnalysis, type SpringGeometry } from './analysis.js';
 import { geneticSearch } from '../../search/genetic.js';
 import { gridSearch } from '../../search/grid.js';
@@ -19,8 +20,10 @@ export interface DesignOptions {
   collectAll?: boolean;
   /** With collectAll, every feasible diameter step of each cell too (for non-monotone objectives). */
   everyFeasiblePoint?: boolean;
-  /** Budget of the genetic search, in evaluations. */
+  /** Budget of the genetic search, in evaluations (default LIMITS.geneticEvaluations). */
   maxEvaluations?: number;
+  /** What forces the grid when the caller does (for the refusal of one too large). */
+  gridReason?: string;
   onProgress?: (done: number, total: number) => void;
   /** The problem, when the caller has built it already. */
   problem?: SpringProblem;
@@ -75,19 +78,35 @@ export function assertVerified(c: Candidate): void {
   if (worst > 1e-6) throw new Error(`a reported spring failed re-verification (${CHECKS[c.checks.indexOf(worst)]} by ${worst.toExponential(2)}); please report this`);
 }
 
-export const AUTO_GRID_CELL_LIMIT = 2_000_000;
+/** Above this many combinations the automatic choice is the genetic search: the grid's own limit. */
+export const AUTO_GRID_CELL_LIMIT = LIMITS.gridCombinations;
+
+/** The strategy that will run: the grid visits every combination, so its work is the number of
+ * combinations and a grid too large is refused (naming the settings that size it); the genetic search's
+ * work is its evaluation budget, whatever the size of the space. */
+export function chooseStrategy(req: Requirements, problem: SpringProblem, opts: Pick<DesignOptions, 'strategy' | 'gridReason'>): 'grid' | 'genetic' {
+  const cells = cellCount(problem);
+  // The best spring per wire size needs every wire looked at: that is the grid's job.
+  const strategy = !req.bestPerWire && (opts.strategy === 'genetic' || (opts.strategy !== 'grid' && cells > AUTO_GRID_CELL_LIMIT)) ? 'genetic' : 'grid';
+  if (strategy === 'grid' && cells > LIMITS.gridCombinations) {
+    const why = opts.gridReason ?? (req.bestPerWire ? 'best_per_wire looks at every wire size' : opts.strategy === 'grid' ? 'asked for by --strategy grid' : 'this command looks at every combination');
+    const sizes = problem.stock.length;
+    const refusal = gridWorkError(req, why, { sizes, coilCounts: Math.round(cells / Math.max(1, sizes * req.ends.length)), combinations: cells });
+    if (refusal) throw refusal;
+  }
+  return strategy;
+}
 
 export function runDesign(req: Requirements, opts: DesignOptions = {}): DesignRun {
   const problem = opts.problem ?? buildSpringProblem(req);
   const cells = cellCount(problem);
-  // The best spring per wire size needs every wire looked at: that is the grid's job.
-  const strategy = !req.bestPerWire && (opts.strategy === 'genetic' || (opts.strategy !== 'grid' && cells > AUTO_GRID_CELL_LIMIT)) ? 'genetic' : 'grid';
+  const strategy = chooseStrategy(req, problem, opts);
   const t0 = performance.now();
   const result = problem.stock.length === 0
     ? emptyResult()
     : strategy === 'grid'
       ? gridSearch(problem, { top: req.top, collectAll: opts.collectAll, everyFeasiblePoint: opts.everyFeasiblePoint, maxScanPoints: 40, onProgress: opts.onProgress, bestPerValueOf: req.bestPerWire && !opts.collectAll ? 0 : undefined })
-      : geneticSearch(problem, { seed: req.seed, maxEvaluations: opts.maxEvaluations ?? 2_000_000, top: req.top });
+      : geneticSearch(problem, { seed: req.seed, maxEvaluations: opts.maxEvaluations ?? LIMITS.geneticEvaluations, top: req.top });
   const searchMs = performance.now() - t0;
   const candidates = result.best.map((b) => candidateAt(problem, b.x, b.f));
   candidates.forEach(assertVerified);
@@ -101,9 +120,9 @@ export function runDesign(req: Requirements, opts: DesignOptions = {}): DesignRu
 export const PROBE_EVALUATIONS = 100_000;
 
 /** Whether any spring meets these requirements: one design run kept to the essentials (top 1, no
- * bound). The grid's answer does not depend on top. */
+ * bound, not per wire). The grid's answer depends on neither top nor per-wire ranking. */
 export function admitsSpring(req: Requirements): boolean {
-  return runDesign({ ...req, top: 1 }, { skipBound: true, maxEvaluations: PROBE_EVALUATIONS }).candidates.length > 0;
+  return runDesign({ ...req, top: 1, bestPerWire: false }, { skipBound: true, maxEvaluations: PROBE_EVALUATIONS }).candidates.length > 0;
 }
 
 function emptyResult(): SearchResult {

@@ -27,7 +27,8 @@ export function computeFrontier(req: Requirements, x: FrontierKey, y: FrontierKe
   const problem = built ?? buildSpringProblem(req);
   const genetic = !everyFeasiblePoint && (strategy === 'genetic' || (strategy === 'auto' && cellCount(problem) > AUTO_GRID_CELL_LIMIT));
   if (genetic) return geneticFrontier(req, problem, x, y);
-  const run = runDesign(req, { strategy: 'grid', collectAll: true, everyFeasiblePoint, onProgress, problem });
+  const run = runDesign(req, { strategy: 'grid', collectAll: true, everyFeasiblePoint, onProgress, problem,
+    gridReason: strategy === 'grid' ? 'asked for by --strategy grid' : 'a safety-factor axis needs every combination' });
   const cloudBuf = run.result.cloud!;
   const xs = new Float64Array(cloudBuf.size);
   const ys = new Float64Array(cloudBuf.size);

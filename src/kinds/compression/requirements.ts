@@ -123,13 +123,15 @@ export function searchSize(req: Requirements): { sizes: number; coilCounts: numb
   return { sizes, coilCounts, combinations: sizes * req.ends.length * coilCounts };
 }
 
-/** Refuse a search too large to finish, naming the settings that size it. */
-function checkWork(req: Requirements): void {
-  const { sizes, coilCounts, combinations } = searchSize(req);
-  if (combinations > LIMITS.combinations) {
-    throw new InputError('coil_step', `a search of at most ${LIMITS.combinations.toLocaleString('en-US')} combinations; this one has ${combinations.toLocaleString('en-US')} `
-      + `(${sizes} material wire sizes x ${req.ends.length} end types x ${coilCounts} coil counts): use a larger coil_step, a narrower active_coils, or fewer materials, end types or wire_sizes`, req.coilStep);
-  }
+/** The refusal of a grid search too large to finish, naming the settings that size it; null when it
+ * fits. `size` is the search's own count when it is known (wire sizes outside what the problem can use
+ * already left out). `why` says what asked for the grid (the automatic choice never does above the limit). */
+export function gridWorkError(req: Requirements, why: string, size = searchSize(req)): InputError | null {
+  const { sizes, coilCounts, combinations } = size;
+  if (combinations <= LIMITS.gridCombinations) return null;
+  return new InputError('coil_step', `a grid search (${why}) of at most ${LIMITS.gridCombinations.toLocaleString('en-US')} combinations; this one has ${combinations.toLocaleString('en-US')} `
+    + `(${sizes} material wire sizes x ${req.ends.length} end types x ${coilCounts} coil counts): use a larger coil_step, a narrower active_coils, or fewer materials, end types or wire_sizes`
+    + (why.includes('--strategy') ? ', or --strategy auto (the genetic search takes spaces this large)' : ''), req.coilStep);
 }
 
 function pair(f: Fields, key: string, fallback: [number, number], rule: { positive?: boolean; integer?: boolean; min?: number; max?: number }): [number, number] {
@@ -264,7 +266,6 @@ export function readRequirements(raw: unknown, catalog: Catalog): Requirements {
   if (req.diameterResolution < LIMITS.diameterResolution[0] || req.diameterResolution > LIMITS.diameterResolution[1]) {
     throw new InputError('diameter_resolution', `a length from ${formatQuantity(LIMITS.diameterResolution[0], 'length', system)} to ${formatQuantity(LIMITS.diameterResolution[1], 'length', system)} (finer than a wire maker can hold is no more exact, only slower)`, f.get('diameter_resolution'));
   }
-  checkWork(req);
   if (req.loadTolerance >= 1) throw new InputError('load_tolerance', 'a fraction below 1 (such as 0.1 or "10%")', f.get('load_tolerance'));
   if (req.workingTolerance !== undefined && req.workingTolerance >= 1) throw new InputError('working_tolerance', 'a fraction below 1 (such as 0.02 or "2%")', f.get('working_tolerance'));
   f.get('material_map'); // the stock table's material words; read and checked by src/stock/materialMap.ts
