@@ -11,7 +11,7 @@ import { toJson, SI_UNITS } from '../report/json.js';
 import { writeOutputFile } from '../report/writeFile.js';
 import { cautionText } from '../report/cautions.js';
 import { runDesign, type Candidate, type DesignRun, type StrategyChoice } from '../kinds/compression/design.js';
-import { FRONTIER_KEYS, computeFrontier, type FrontierKey } from '../kinds/compression/frontier.js';
+import { FRONTIER_KEYS, computeFrontier, reportFrontier, type FrontierKey } from '../kinds/compression/frontier.js';
 // The HTML report and CSV writers load only when a command writes them (start-up time: issue 10).
 const htmlReport = () => import('../report/html/designHtml.js');
 const csv = () => import('../report/csv.js');
@@ -288,7 +288,8 @@ async function sweepCommand(file: string, opts: SweepOptions, io: Io): Promise<n
     } else io.stdout(csvText);
   }
   if (opts.report) {
-    (await htmlReport()).writeDesignReport(opts.report, rows.find((r) => r.best)?.run ?? rows[0].run, system, !!opts.force, undefined, { name, rows });
+    const shown = rows.find((r) => r.best)?.run ?? rows[0].run;
+    (await htmlReport()).writeDesignReport(opts.report, shown, system, !!opts.force, reportFrontier(shown), { name, rows });
     io.stderr(`coilfront: report written to ${opts.report}\n`);
   }
   if (!opts.json) io.stderr(cautionText() + '\n');

@@ -12,6 +12,7 @@ import { runStock, STOCK_RANK_KEYS, type StockRankKey } from '../stock/run.js';
 import { InputError, parseFraction, parseNumber } from '../units/parse.js';
 import type { UnitSystem } from '../units/systems.js';
 import type { StrategyChoice } from '../kinds/compression/design.js';
+import { reportFrontier } from '../kinds/compression/frontier.js';
 import { EXIT, type Io } from './io.js';
 import { addOverrideOptions, rawWithOverrides, type CommonOptions } from './searchCommands.js';
 
@@ -49,7 +50,7 @@ export function stockCommand(reqFile: string, tableFile: string, opts: StockCliO
     io.stderr(`coilfront: ${run.results.length} checked rows written to ${opts.output}\n`);
   }
   if (opts.report) {
-    const html = run.compare ? designHtml(run.compare.run, system, undefined, undefined, stockSection(run, system, tableFile)) : stockHtml(run, system, tableFile);
+    const html = run.compare ? designHtml(run.compare.run, system, reportFrontier(run.compare.run), undefined, stockSection(run, system, tableFile)) : stockHtml(run, system, tableFile);
     writeStockReport(opts.report, html, !!opts.force);
     io.stderr(`coilfront: report written to ${opts.report}\n`);
   }

@@ -55,3 +55,9 @@ function geneticFrontier(req: Requirements, problem: SpringProblem, x: FrontierK
   return { run, x, y, strategy: 'genetic', cloud, front };
 }
 
+
+/** The frontier a design report draws beside a run: mass against outer diameter over the run's own
+ * problem; null when the run found no spring. The caller computes it, so the report never searches. */
+export function reportFrontier(run: DesignRun): Frontier | null {
+  return run.candidates.length ? computeFrontier(run.req, 'mass', 'outer_diameter', undefined, 'auto', run.problem) : null;
+}

@@ -11,6 +11,7 @@ import { buildSpringProblem } from './problem.js';
 import { confirmRun } from '../../tolerance/confirm.js';
 import { springFileText } from './springDoc.js';
 import type { SpringKind } from '../kind.js';
+import { reportFrontier } from './frontier.js';
 import { COMPRESSION_CHECKS } from './checks.js';
 import { COMPRESSION_FIELDS } from './fields.js';
 import { COMPRESSION_OBJECTIVES } from './objectives.js';
@@ -44,7 +45,7 @@ export const compression: CompressionKind = {
     designJson: (run, showTiming) => designJson(run, showTiming),
     async designHtml(run, system) {
       const { designHtml } = await import('../../report/html/designHtml.js');
-      return designHtml(run, system);
+      return designHtml(run, system, reportFrontier(run));
     },
     async writeSpecSheet(path, run, system, force, pick = 1) {
       const c = run.candidates[pick - 1];

@@ -6,7 +6,7 @@ import { rulesOfThumb, type ServiceConditions, type SpringAnalysis } from '../..
 import type { Candidate, DesignRun } from '../../kinds/compression/design.js';
 import { reportedChecks } from '../../kinds/compression/design.js';
 import { CHECK_LABELS, type CheckName } from '../../kinds/compression/verify.js';
-import { computeFrontier, FRONTIER_KEYS, type Frontier } from '../../kinds/compression/frontier.js';
+import { FRONTIER_KEYS, type Frontier } from '../../kinds/compression/frontier.js';
 import { formatQuantity, inUnit, quantityWriter, sig, unitSymbol } from '../../units/format.js';
 import type { UnitSystem } from '../../units/systems.js';
 import { writeOutputFile } from '../writeFile.js';
@@ -78,7 +78,9 @@ function conventionsSection(): string {
 }
 
 /** `extra`: sections of another command placed before the conventions (the stock section of `stock --compare`). */
-export function designHtml(run: DesignRun, system: UnitSystem, frontier?: Frontier, sweep?: SweepSummary, extra: string[] = []): string {
+/** The report draws the frontier it is given (reportFrontier(run) for a design run), never searching
+ * again itself; a run with no spring has none. */
+export function designHtml(run: DesignRun, system: UnitSystem, frontier: Frontier | null, sweep?: SweepSummary, extra: string[] = []): string {
   const req = run.req;
   const sections: string[] = [];
   sections.push('<h2>Requirements</h2>');
@@ -100,7 +102,8 @@ export function designHtml(run: DesignRun, system: UnitSystem, frontier?: Fronti
     sections.push(lines.map((l) => (l.startsWith('  - ') ? `<li>${esc(l.slice(4))}</li>` : `<p>${esc(l)}</p>`)).join('\n')
       .replace(/(<li>[\s\S]*?<\/li>)(?=\n<p>|$)/g, '<ul>$1</ul>'));
   } else {
-    const fr = frontier ?? computeFrontier(req, 'mass', 'outer_diameter', undefined, 'auto', run.problem);
+    const fr = frontier;
+    if (!fr) throw new Error('designHtml: a run with springs is drawn with its frontier (reportFrontier); please report this');
     const kx = FRONTIER_KEYS[fr.x];
     const ky = FRONTIER_KEYS[fr.y];
     const label = (k: typeof kx, key: string) => (k.kind ? `${k.label} (${unitSymbol(k.kind, system)})` : key === 'wire_volume' ? 'wire volume (mm^3)' : k.label);
@@ -127,6 +130,6 @@ export function designHtml(run: DesignRun, system: UnitSystem, frontier?: Fronti
   return page('coilfront design report', subtitle, sections);
 }
 
-export function writeDesignReport(path: string, run: DesignRun, system: UnitSystem, force: boolean, frontier?: Frontier, sweep?: SweepSummary): void {
+export function writeDesignReport(path: string, run: DesignRun, system: UnitSystem, force: boolean, frontier: Frontier | null, sweep?: SweepSummary): void {
   writeOutputFile(path, designHtml(run, system, frontier, sweep), force, '--report');
 }
