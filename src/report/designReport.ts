@@ -282,8 +282,7 @@ export function countsText(run: DesignRun, system: UnitSystem, showTiming = fals
     lines.push(table(cut.sort((a, b) => Number(b[1]) - Number(a[1]))));
   }
   if (run.lp.status === 'bound' && run.lp.value !== null) {
-    const kind: Kind = run.req.rank === 'mass' ? 'mass' : 'length';
-    const bound = run.req.rank === 'mass' ? formatQuantity(run.lp.value, kind, system) : `${sig(inUnit(run.lp.value, 'length', system) * (system === 'us' ? 1 / (25.4 * 25.4) : 1), 4)} ${system === 'us' ? 'in^3' : 'mm^3'}`;
+    const bound = formatQuantity(run.lp.value, run.req.rank === 'mass' ? 'mass' : 'volume', system);
     lines.push(`LP lower bound on ${run.req.rank.replace('_', ' ')} (log-space relaxation): ${bound}${run.gap !== null ? `; the best spring is ${sig(run.gap * 100, 3)}% above it` : ''}.`);
   } else if (run.lp.status === 'infeasible') {
     lines.push('LP relaxation: infeasible. Even with continuous wire sizes and coil counts no spring meets the stress, rate, envelope and solid-length relations together.');

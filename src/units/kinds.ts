@@ -1,9 +1,9 @@
 // Physical kinds of quantity a spring file can carry, each with its core (SI) unit
 // and the factors that bring every accepted unit to that core unit.
-// Core units: mm, N, MPa, kg/m^3, degC, Hz, N/mm, kg. Inch and pound factors are exact by definition
+// Core units: mm, N, MPa, kg/m^3, degC, Hz, N/mm, kg, mm^3. Inch and pound factors are exact by definition
 // (1 in = 25.4 mm, 1 lbf = 4.4482216152605 N, 1 lb = 0.45359237 kg).
 
-export type Kind = 'length' | 'force' | 'stress' | 'density' | 'temperature' | 'frequency' | 'rate' | 'mass';
+export type Kind = 'length' | 'force' | 'stress' | 'density' | 'temperature' | 'frequency' | 'rate' | 'mass' | 'volume';
 
 export const INCH_MM = 25.4;
 export const LBF_N = 4.4482216152605;
@@ -61,6 +61,10 @@ const UNITS: Record<string, UnitDef> = {
   kg: { kind: 'mass', factor: 1 },
   g: { kind: 'mass', factor: 1e-3 },
   lb: { kind: 'mass', factor: LB_KG },
+  // volume -> mm^3 (wire volume, the material a spring takes)
+  mm3: { kind: 'volume', factor: 1 },
+  cm3: { kind: 'volume', factor: 1e3 },
+  in3: { kind: 'volume', factor: INCH_MM ** 3 },
 };
 
 export function lookupUnit(symbol: string): UnitDef | undefined {

@@ -35,6 +35,7 @@ const KIND_WORDS: Record<Kind, string> = {
   frequency: 'a frequency (Hz, rpm)',
   rate: 'a spring rate (N/mm, N/m, lbf/in)',
   mass: 'a mass (kg, g, lb)',
+  volume: 'a volume (mm3, cm3, in3)',
 };
 
 const NUMBER_WITH_UNIT = /^\s*([-+]?(?:\d+\.?\d*|\.\d+)(?:[eE][-+]?\d+)?)\s*(.*?)\s*$/;
@@ -62,6 +63,7 @@ export const SANE_RANGE: Record<Kind, { min: number; max: number; floor?: number
   frequency: { min: 1e-6, max: 1e7 },
   rate: { min: 1e-9, max: 1e9 },
   mass: { min: 1e-12, max: 1e6 },
+  volume: { min: 1e-9, max: 1e15 }, // 1 um^3 .. 1 m^3
 };
 
 function checkRange(value: number, kind: Kind, system: UnitSystem, field: string, raw: unknown): void {

@@ -21,6 +21,7 @@ const SI: Record<Kind, DisplayUnit> = {
   frequency: scale('Hz', 1),
   rate: scale('N/mm', 1),
   mass: scale('kg', 1),
+  volume: scale('mm^3', 1),
 };
 
 const US: Record<Kind, DisplayUnit> = {
@@ -32,6 +33,7 @@ const US: Record<Kind, DisplayUnit> = {
   frequency: scale('Hz', 1),
   rate: scale('lbf/in', LBF_N / INCH_MM),
   mass: scale('lb', LB_KG),
+  volume: scale('in^3', INCH_MM ** 3),
 };
 
 export function displayUnit(system: UnitSystem, kind: Kind): DisplayUnit {

@@ -15,6 +15,16 @@ describe('parsing quantities', () => {
     expect(parseQuantity('7850 kg/m3', 'density', 'us', 'x')).toBeCloseTo(7850, 9);
     expect(parseQuantity('0.284 lb/in^3', 'density', 'si', 'x')).toBeCloseTo(7861.1, 1);
     expect(parseQuantity('212 F', 'temperature', 'si', 'x')).toBeCloseTo(100, 9);
+    // 1 in^3 = 25.4^3 mm^3 = 16387.064 mm^3 exactly (from the inch's definition).
+    expect(parseQuantity('1 in^3', 'volume', 'si', 'x')).toBeCloseTo(16387.064, 9);
+    expect(parseQuantity(2, 'volume', 'us', 'x')).toBeCloseTo(32774.128, 9);
+    expect(parseQuantity('3 cm3', 'volume', 'si', 'x')).toBe(3000);
+  });
+
+  it('writes wire volume as mm^3 in SI and in^3 in US customary', () => {
+    expect(displayUnit('si', 'volume').symbol).toBe('mm^3');
+    expect(displayUnit('us', 'volume').symbol).toBe('in^3');
+    expect(displayUnit('us', 'volume').fromCore(16387.064)).toBeCloseTo(1, 12);
   });
 
   it('rejects a unit of the wrong kind, naming the field', () => {
@@ -24,7 +34,7 @@ describe('parsing quantities', () => {
     expect(() => parseQuantity(NaN, 'length', 'si', 'wire_diameter')).toThrow(InputError);
   });
 
-  const kinds: Kind[] = ['length', 'force', 'stress', 'density', 'temperature', 'rate', 'mass'];
+  const kinds: Kind[] = ['length', 'force', 'stress', 'density', 'temperature', 'rate', 'mass', 'volume'];
   it('round-trips SI <-> US for every kind (property)', () => {
     // Values inside the range a spring quantity can have (SANE_RANGE); outside it parseQuantity refuses them.
     const kindAndValue = fc.constantFrom(...kinds).chain((kind) => {

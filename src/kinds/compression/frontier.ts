@@ -11,9 +11,9 @@ import type { Kind } from '../../units/kinds.js';
 export interface FrontierAxis { objective: number; sign: 1 | -1; kind: Kind | null; label: string }
 
 /** The frontier axes, from the objectives registry: the slot in f, the sign it is stored with, the
- * unit kind (null for a plain number; the wire volume is labelled in mm^3) and the label. */
+ * unit kind (null for a plain number) and the label. */
 export const FRONTIER_KEYS = Object.fromEntries(COMPRESSION_OBJECTIVES.filter((o) => o.frontierAxis).map((o) => [o.key,
-  { objective: Objective[o.key], sign: o.sign, kind: o.unit === 'volume' ? null : o.unit, label: o.label }])) as Record<FrontierKey, FrontierAxis>;
+  { objective: Objective[o.key], sign: o.sign, kind: o.unit, label: o.label }])) as Record<FrontierKey, FrontierAxis>;
 export type { FrontierKey };
 
 

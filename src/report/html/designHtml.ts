@@ -90,7 +90,7 @@ export function designHtml(run: DesignRun, system: UnitSystem, frontier: Frontie
     ['strategy', r.strategy], ['combinations', String(r.cells)], ['candidate evaluations', String(r.evaluations)], ['feasible combinations', String(r.feasibleCells)],
     ['pruned by the incumbent bound', String(r.prunedCells)],
     ...reportedChecks(req).filter((c) => r.cutBy[c] > 0).map((c) => [`cut: ${CHECK_LABELS[c as CheckName]}`, String(r.cutBy[c])]),
-    ['LP lower bound', run.lp.value !== null ? (req.rank === 'mass' ? formatQuantity(run.lp.value, 'mass', system) : `${sig(run.lp.value, 4)} mm^3`) : run.lp.status],
+    ['LP lower bound', run.lp.value !== null ? formatQuantity(run.lp.value, req.rank === 'mass' ? 'mass' : 'volume', system) : run.lp.status],
     ['gap of the best spring to the bound', run.gap !== null ? `${sig(run.gap * 100, 3)}%` : '-'],
   ];
   sections.push(htmlTable(['count', 'value'], counts, { cls: 'kv' }));
@@ -106,7 +106,7 @@ export function designHtml(run: DesignRun, system: UnitSystem, frontier: Frontie
     if (!fr) throw new Error('designHtml: a run with springs is drawn with its frontier (reportFrontier); please report this');
     const kx = FRONTIER_KEYS[fr.x];
     const ky = FRONTIER_KEYS[fr.y];
-    const label = (k: typeof kx, key: string) => (k.kind ? `${k.label} (${unitSymbol(k.kind, system)})` : key === 'wire_volume' ? 'wire volume (mm^3)' : k.label);
+    const label = (k: typeof kx, key: string) => (k.kind ? `${k.label} (${unitSymbol(k.kind, system)})` : k.label);
     const conv = (k: typeof kx, v: number) => (k.kind ? inUnit(v, k.kind, system) : v);
     const pt = (c: Candidate) => ({ x: conv(kx, kx.sign * c.objectives[kx.objective]), y: conv(ky, ky.sign * c.objectives[ky.objective]) });
     const cloud = fr.cloud.map((p) => ({ x: conv(kx, p.x), y: conv(ky, p.y) }));
