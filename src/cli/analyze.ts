@@ -1,7 +1,7 @@
-// `coilfront analyze SPRING_FILE`: the complete check of one given spring.
-import { loadCatalog } from '../catalogs/load.js';
+// `coilfront analyze SPRING_FILE`: the complete check of one given spring (a thin layer over the
+// library's analyze, src/api/analyze.ts, which dispatches on the kind).
+import { analysisResult, analyzeDocument } from '../api/analyze.js';
 import { readInputFile } from '../input/document.js';
-import { kindOf } from '../kinds/index.js';
 import { writeOutputFile } from '../report/writeFile.js';
 import { InputError } from '../units/parse.js';
 import { toJson } from '../report/json.js';
@@ -13,18 +13,15 @@ export interface AnalyzeOptions { json?: boolean; units?: UnitSystem; report?: s
 
 export async function analyzeCommand(file: string, opts: AnalyzeOptions, io: Io): Promise<number> {
   checkOutputPaths([{ option: '--report', path: opts.report }], !!opts.force, [file]);
-  const catalog = loadCatalog();
-  const raw = readInputFile(file);
-  const kind = kindOf(raw);
-  const c = kind.readSpring(raw, catalog);
-  const a = kind.analyse(c);
+  const o = analyzeDocument(readInputFile(file));
+  const { kind, spring: c, analysis: a } = o;
   if (opts.report) {
     // The HTML report loads only when asked for (start-up time: issue 10).
     if (!kind.report.analysisHtml) throw new InputError('--report', `a report of a kind that has one (the ${kind.label} report is not built yet)`);
     writeOutputFile(opts.report, await kind.report.analysisHtml(c, a, opts.units ?? c.system), !!opts.force, '--report');
     io.stderr(`coilfront: report written to ${opts.report}\n`);
   }
-  if (opts.json) io.stdout(toJson(kind.report.analysisJson(c, a)) + '\n');
+  if (opts.json) io.stdout(toJson(analysisResult(o)) + '\n');
   else io.stdout(kind.report.analysisText(c, a, opts.units ?? c.system));
   return EXIT.ok;
 }

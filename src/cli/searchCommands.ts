@@ -1,23 +1,26 @@
-// `coilfront design`, `frontier` and `sweep`: thin commands over the spring kinds (src/kinds/).
+// `coilfront design`, `frontier` and `sweep`: thin commands over the library API (src/api/), which
+// dispatches on the spring kinds (src/kinds/): read the file, apply the command-line overrides, call
+// the API's reading and running steps, render.
 import type { Command } from 'commander';
 import { Option } from 'commander';
-import { loadCatalog } from '../catalogs/load.js';
 import { readInputFile } from '../input/document.js';
-import { blameOverride, ENVELOPE_SHORTHANDS, parseAssignment, parsePath, sweepValues, withValue } from '../input/overrides.js';
-import { LIMITS } from '../input/limits.js';
-import { RANK_KEYS, readRequirements, searchSize, type Requirements } from '../kinds/compression/requirements.js';
-import { candidateRecord, countsRecord, limitingText } from '../report/designReport.js';
-import { toJson, SI_UNITS } from '../report/json.js';
+import { ENVELOPE_SHORTHANDS, parseAssignment, parsePath, sweepValues, withValue } from '../input/overrides.js';
+import { RANK_KEYS, type Requirements } from '../kinds/compression/requirements.js';
+import { toJson } from '../report/json.js';
 import { writeOutputFile } from '../report/writeFile.js';
 import { cautionText } from '../report/cautions.js';
-import { runDesign, type Candidate, type DesignRun, type StrategyChoice } from '../kinds/compression/design.js';
-import { FRONTIER_KEYS, computeFrontier, reportFrontier, type FrontierKey } from '../kinds/compression/frontier.js';
+import type { Candidate, StrategyChoice } from '../kinds/compression/design.js';
+import { FRONTIER_KEYS, reportFrontier, type FrontierKey } from '../kinds/compression/frontier.js';
+import { designResult, planCompression, planDesign, runPlan } from '../api/design.js';
+import { frontierOfPlan, frontierResult } from '../api/frontier.js';
+import { blamed } from '../api/options.js';
+import { kindOf } from '../kinds/index.js';
+import { planSweep, runSweepPlan, sweepResult, type SweepRow } from '../api/sweep.js';
 // The HTML report and CSV writers load only when a command writes them (start-up time: issue 10).
 const htmlReport = () => import('../report/html/designHtml.js');
 const csv = () => import('../report/csv.js');
 import { fieldColumns, fieldRow } from '../report/fields.js';
 import { compression } from '../kinds/compression/index.js';
-import { kindOf } from '../kinds/index.js';
 import { InputError } from '../units/parse.js';
 import type { UnitSystem } from '../units/systems.js';
 import { checkOutputPaths, EXIT, type Io } from './io.js';
@@ -86,14 +89,9 @@ function tracedOverrides(file: string, opts: CommonOptions): { doc: unknown; ove
   return { doc, overrides };
 }
 
-/** The requirements of a command: the file with its overrides, validated; a bad override is blamed on its option. */
-function requirementsOf(file: string, opts: CommonOptions): Requirements {
-  const { doc, overrides } = tracedOverrides(file, opts);
-  try {
-    return readRequirements(doc, loadCatalog());
-  } catch (e) {
-    throw blameOverride(e, overrides);
-  }
+/** The plan of a command: its document with the overrides, read by the API; a bad override is blamed on its option. */
+function planOf<P>(traced: { doc: unknown; overrides: Override[] }, plan: (doc: unknown) => P): P {
+  return blamed(() => plan(traced.doc), traced.overrides);
 }
 
 /** What a command prints on stderr about how it read the requirements (as `analyze` notes them). */
@@ -128,19 +126,14 @@ async function designCommand(file: string, opts: DesignOptions, io: Io): Promise
   checkOutputPaths([{ option: '--report', path: opts.report }, { option: '--spec', path: opts.spec }, { option: '--spring-file', path: opts.springFile }], !!opts.force, [file]);
   const pick = readPick(opts);
   // The document's `kind` picks the spring kind (src/kinds/index.ts); no kind is compression.
-  const { doc, overrides } = tracedOverrides(file, opts);
-  const kind = kindOf(doc);
+  const traced = tracedOverrides(file, opts);
+  const kind = kindOf(traced.doc);
   // Refused before anything runs or is written (the report would be written first).
   if (opts.spec && !kind.report.writeSpecSheet) throw new InputError('--spec', `a kind that has a specification sheet (the ${kind.label} sheet is not built yet)`);
-  const catalog = loadCatalog();
-  let req;
-  try {
-    req = kind.readRequirements(doc, catalog);
-  } catch (e) {
-    throw blameOverride(e, overrides);
-  }
+  const plan = planOf(traced, planDesign);
+  const req = plan.req;
   for (const note of kind.report.requirementNotes(req)) io.stderr(`coilfront: note: ${note}\n`);
-  const run = kind.design(req, catalog, { strategy: opts.strategy, onProgress: progress(io, 'searching'), document: doc });
+  const run = runPlan(plan, { strategy: opts.strategy, onProgress: progress(io, 'searching') });
   const system = opts.units ?? req.system;
   // Everything that could refuse an output is settled before the first file is written.
   const listed = kind.report.listed ? kind.report.listed(run) : 0;
@@ -166,7 +159,7 @@ async function designCommand(file: string, opts: DesignOptions, io: Io): Promise
       io.stderr(`coilfront: spring ${pick} written to ${opts.springFile} at drawing precision (coilfront analyze or check reads it)\n`);
     } else io.stderr('coilfront: no spring to export: no spring file written\n');
   }
-  if (opts.json) io.stdout(toJson(kind.report.designJson(run, !!opts.timing)) + '\n');
+  if (opts.json) io.stdout(toJson(designResult(plan, run, !!opts.timing)) + '\n');
   else io.stdout(kind.report.designText(run, system, !!opts.timing));
   if (!kind.found(run)) {
     if (opts.json) io.stderr('coilfront: no spring meets every requirement (see "infeasible" in the JSON)\n');
@@ -196,14 +189,12 @@ async function frontierCommand(file: string, opts: FrontierOptions, io: Io): Pro
   checkOutputPaths([{ option: '--output', path: opts.output }, { option: '--report', path: opts.report }], !!opts.force, [file]);
   const traced = tracedOverrides(file, opts);
   if (isExtension(traced.doc)) return extensionFrontier(traced.doc, traced.overrides, opts, io);
-  const req = requirementsOf(file, opts);
-  requirementNotes(req, io);
-  const system = opts.units ?? req.system;
-  const fr = computeFrontier(req, opts.x, opts.y, progress(io, 'mapping'), opts.strategy);
-  const keyValue = (c: Candidate, k: FrontierKey) => FRONTIER_KEYS[k].sign * c.objectives[FRONTIER_KEYS[k].objective];
+  const plan = planOf(traced, planCompression);
+  requirementNotes(plan.req, io);
+  const system = opts.units ?? plan.req.system;
+  const fr = frontierOfPlan(plan, opts.x, opts.y, { strategy: opts.strategy, onProgress: progress(io, 'mapping') });
   if (opts.json) {
-    io.stdout(toJson({ units: SI_UNITS, x: opts.x, y: opts.y, feasible: fr.cloud.length, ...countsRecord(fr.run), frontier_strategy: fr.strategy,
-      frontier: fr.front.map((c) => ({ [opts.x]: keyValue(c, opts.x), [opts.y]: keyValue(c, opts.y), ...candidateRecord(c) })) }) + '\n');
+    io.stdout(toJson(frontierResult(fr)) + '\n');
   } else {
     const csvText = (await csv()).toCsv(['rank', ...springColumns(system)], fr.front.map((c, i) => [i + 1, ...springRow(c, system)]));
     if (opts.output) {
@@ -221,8 +212,6 @@ async function frontierCommand(file: string, opts: FrontierOptions, io: Io): Pro
 
 interface SweepOptions extends CommonOptions { vary: string; output?: string }
 
-export interface SweepRow { value: number; run: DesignRun; best: Candidate | null; limiting: string | null }
-
 /** --vary path=from:to:step. */
 function parseVary(vary: string): { path: string[]; values: number[] } {
   const eq = vary.indexOf('=');
@@ -231,39 +220,11 @@ function parseVary(vary: string): { path: string[]; values: number[] } {
 }
 
 export function runSweep(file: string, opts: CommonOptions, vary: string, io: Io | null): { path: string[]; rows: SweepRow[]; system: UnitSystem } {
-  const { path, values } = parseVary(vary);
-  const { doc: base, overrides } = tracedOverrides(file, opts);
-  const catalog = loadCatalog();
-  // Every value is read before any search runs: a bad one is refused at once, and blamed on --vary.
-  const reqs = values.map((value) => {
-    try {
-      return readRequirements(withValue(base, path, value), catalog);
-    } catch (e) {
-      const byVary = blameOverride(e, [{ path, option: '--vary' }]);
-      if (byVary !== e && e instanceof InputError) throw new InputError(`--vary ${e.field}=${value}`, e.expected);
-      throw blameOverride(e, overrides);
-    }
-  });
-  // The whole sweep is bounded like one search: a thousand values of a large search would run for hours.
-  const total = reqs.reduce((n, r) => n + searchSize(r).combinations, 0);
-  if (total > LIMITS.combinations) {
-    throw new InputError('--vary', `a sweep of at most ${LIMITS.combinations.toLocaleString('en-US')} combinations in all; ${values.length} values of about ${Math.round(total / values.length).toLocaleString('en-US')} each make ${total.toLocaleString('en-US')} (a larger step, or a smaller search)`, vary);
-  }
-  const rows: SweepRow[] = [];
-  let system: UnitSystem = 'si';
-  reqs.forEach((req, i) => {
-    const value = values[i];
-    system = req.system;
-    const run = runDesign(req, { strategy: opts.strategy });
-    let limiting: string | null = null;
-    if (!run.candidates.length) {
-      limiting = limitingText(run);
-    }
-    rows.push({ value, run, best: run.candidates[0] ?? null, limiting });
-    if (io?.interactive) io.stderr(`\rsweep ${i + 1}/${values.length}`);
-  });
+  const { doc, overrides } = tracedOverrides(file, opts);
+  const plan = planSweep(doc, vary, overrides, '--vary');
+  const rows = runSweepPlan(plan, { strategy: opts.strategy, onStep: io?.interactive ? (done, total) => io.stderr(`\rsweep ${done}/${total}`) : undefined });
   if (io?.interactive) io.stderr('\r' + ' '.repeat(30) + '\r');
-  return { path, rows, system };
+  return { path: plan.path, rows, system: plan.system };
 }
 
 async function sweepCommand(file: string, opts: SweepOptions, io: Io): Promise<number> {
@@ -277,8 +238,7 @@ async function sweepCommand(file: string, opts: SweepOptions, io: Io): Promise<n
   const system = opts.units ?? fileSystem;
   const name = path.join('.');
   if (opts.json) {
-    io.stdout(toJson({ units: SI_UNITS, vary: name, note: `${name} values are as given on the command line, in the file's unit system`,
-      rows: rows.map((r) => ({ value: r.value, feasible: r.run.result.feasibleCells, best: r.best ? candidateRecord(r.best) : null, limiting_check: r.limiting })) }) + '\n');
+    io.stdout(toJson(sweepResult(path, rows)) + '\n');
   } else {
     const csvText = (await csv()).toCsv([`${name} (${fileSystem === 'us' ? 'in/lbf/psi' : 'mm/N/MPa'})`, 'feasible_combinations', ...springColumns(system), 'limiting_check'],
       rows.map((r) => [r.value, r.run.result.feasibleCells, ...(r.best ? springRow(r.best, system) : springColumns(system).map((_, i) => (i === 0 ? 'none' : null))), r.limiting]));

@@ -2,7 +2,8 @@
 // is null and a neighbouring field says why).
 
 export function finiteOrNull(v: number): number | null {
-  return Number.isFinite(v) ? v : null;
+  // -0 prints as 0: the library's records (src/api/) are then equal to the JSON read back.
+  return Number.isFinite(v) ? (v === 0 ? 0 : v) : null;
 }
 
 /** Deep copy with every non-finite number replaced by null. */

@@ -1,0 +1,99 @@
+// `sweep` in the library: the design re-run for each value of one requirement (what a tighter
+// envelope costs). Takes the plain object a requirements file holds and returns exactly what
+// `coilfront sweep --json` prints.
+import { loadCatalog } from '../catalogs/load.js';
+import type { Catalog } from '../catalogs/types.js';
+import { LIMITS } from '../input/limits.js';
+import { blameOverride, parsePath, sweepValues, withValue } from '../input/overrides.js';
+import { readRequirements, searchSize, type Requirements } from '../kinds/compression/requirements.js';
+import { candidateRecord, limitingText } from '../report/designReport.js';
+import { SI_UNITS, sanitize } from '../report/json.js';
+import { runDesign, type Candidate, type DesignRun, type StrategyChoice } from '../kinds/compression/design.js';
+import { InputError } from '../units/parse.js';
+import type { UnitSystem } from '../units/systems.js';
+import { withRequirementOptions, type Override, type RankedOptions } from './options.js';
+import type { SweepResult } from './types.js';
+
+/** The requirement to vary: "path=from:to:step" as `--vary` takes it, or its path and values. */
+export type SweepVary = string | { path: string; values: readonly number[] };
+
+export interface SweepOptions extends RankedOptions {
+  vary: SweepVary;
+}
+
+export interface SweepRow { value: number; run: DesignRun; best: Candidate | null; limiting: string | null }
+
+/** Every value's requirements, read (and checked) before any search runs. */
+export interface SweepPlan { path: string[]; values: number[]; reqs: Requirements[]; system: UnitSystem }
+
+/** The most values one sweep runs (as `--vary` allows). */
+const MAX_VALUES = 1000;
+
+function parseVary(vary: unknown, option: string): { path: string[]; values: number[] } {
+  const relabel = (e: unknown) => (e instanceof InputError && e.field === '--vary' && option !== '--vary' ? new InputError(option, e.expected, e.got) : e);
+  try {
+    if (typeof vary === 'string') {
+      const eq = vary.indexOf('=');
+      if (eq <= 0) throw new InputError(option, 'path=from:to:step, such as envelope.max_outer_diameter=14:24:0.5', vary);
+      return { path: parsePath(vary.slice(0, eq), option), values: sweepValues(vary.slice(eq + 1)) };
+    }
+    if (vary && typeof vary === 'object' && typeof (vary as { path?: unknown }).path === 'string' && Array.isArray((vary as { values?: unknown }).values)) {
+      const { path, values } = vary as { path: string; values: unknown[] };
+      if (values.length === 0 || values.length > MAX_VALUES || values.some((v) => typeof v !== 'number' || !Number.isFinite(v))) {
+        throw new InputError(`${option}.values`, `a list of 1 to ${MAX_VALUES} finite numbers`, values);
+      }
+      return { path: parsePath(path, `${option}.path`), values: values as number[] };
+    }
+    throw new InputError(option, '"path=from:to:step" or { path, values }', vary);
+  } catch (e) {
+    throw relabel(e);
+  }
+}
+
+/**
+ * Read the requirements at every value of the sweep. A bad value is blamed on the vary option (with the
+ * field and value), a bad override on its own option; the whole sweep is bounded like one search.
+ */
+export function planSweep(document: unknown, vary: SweepVary, overrides: readonly Override[] = [], option = 'options.vary', catalog: Catalog = loadCatalog()): SweepPlan {
+  const { path, values } = parseVary(vary, option);
+  const reqs = values.map((value) => {
+    try {
+      return readRequirements(withValue(document, path, value), catalog);
+    } catch (e) {
+      const byVary = blameOverride(e, [{ path, option }]);
+      if (byVary !== e && e instanceof InputError) throw new InputError(`${option} ${e.field}=${value}`, e.expected);
+      throw blameOverride(e, overrides);
+    }
+  });
+  // The whole sweep is bounded like one search: a thousand values of a large search would run for hours.
+  const total = reqs.reduce((n, r) => n + searchSize(r).combinations, 0);
+  if (total > LIMITS.combinations) {
+    throw new InputError(option, `a sweep of at most ${LIMITS.combinations.toLocaleString('en-US')} combinations in all; ${values.length} values of about ${Math.round(total / values.length).toLocaleString('en-US')} each make ${total.toLocaleString('en-US')} (a larger step, or a smaller search)`, vary);
+  }
+  return { path, values, reqs, system: reqs.length ? reqs[reqs.length - 1].system : 'si' };
+}
+
+/** One design per value, in order; onStep after each. */
+export function runSweepPlan(plan: SweepPlan, options: { strategy?: StrategyChoice; onStep?: (done: number, total: number) => void } = {}): SweepRow[] {
+  return plan.reqs.map((req, i) => {
+    const run = runDesign(req, { strategy: options.strategy });
+    options.onStep?.(i + 1, plan.reqs.length);
+    return { value: plan.values[i], run, best: run.candidates[0] ?? null, limiting: run.candidates.length ? null : limitingText(run) };
+  });
+}
+
+/** The JSON record of a sweep, as `sweep --json` prints it. */
+export function sweepResult(path: readonly string[], rows: readonly SweepRow[]): SweepResult {
+  const name = path.join('.');
+  return sanitize({
+    units: SI_UNITS, vary: name, note: `${name} values are as given on the command line, in the file's unit system`,
+    rows: rows.map((r) => ({ value: r.value, feasible: r.run.result.feasibleCells, best: r.best ? candidateRecord(r.best) : null, limiting_check: r.limiting })),
+  }) as SweepResult;
+}
+
+export function sweep(requirements: unknown, options: SweepOptions): SweepResult {
+  const o: Partial<SweepOptions> = options ?? {};
+  const { document, overrides } = withRequirementOptions(requirements, o);
+  const plan = planSweep(document, o.vary as SweepVary, overrides, 'options.vary', o.catalog);
+  return sweepResult(plan.path, runSweepPlan(plan, { strategy: o.strategy, onStep: o.onProgress }));
+}

@@ -1,0 +1,104 @@
+// The records the library returns: exactly what the matching command prints with --json (SI units;
+// a figure that does not apply is null, never NaN, Infinity or undefined). The fields named here are
+// the ones a program is likely to read; every record carries the rest of the command's JSON as well.
+
+/** The units of every figure in a record. */
+export interface Units {
+  length: 'mm'; force: 'N'; rate: 'N/mm'; stress: 'MPa'; mass: 'kg'; density: 'kg/m^3';
+  frequency: 'Hz'; temperature: 'degC'; volume: 'mm^3'; angle: 'deg';
+}
+
+/** One spring the search found (one row of `design --json`'s candidates). */
+export interface CandidateRecord {
+  material: string;
+  material_name: string;
+  ends: string;
+  wire_diameter: number;
+  mean_diameter: number;
+  outer_diameter: number;
+  inner_diameter: number;
+  spring_index: number;
+  active_coils: number;
+  total_coils: number;
+  free_length: number;
+  solid_length: number;
+  rate: number;
+  mass: number;
+  wire_volume: number;
+  static_safety_factor: number | null;
+  fatigue_safety_factor: number | null;
+  points: { length: number; force: number; stress: number }[];
+  warnings: string[];
+  [field: string]: unknown;
+}
+
+/** How a search went: what `design`, `frontier` and `sweep` report beside their springs. */
+export interface SearchCounts {
+  strategy: string;
+  evaluated: number;
+  cells: number;
+  feasible: number;
+  pruned: number;
+  cut_by: Record<string, number>;
+  lp_bound: number | null;
+  lp_status: string;
+  gap: number | null;
+}
+
+/** What `coilfront design --json` prints. */
+export interface DesignResult extends SearchCounts {
+  units: Units;
+  requirements: Record<string, unknown>;
+  /** Present with `timing: true` only (it makes the output differ from run to run). */
+  search_ms?: number;
+  /** Best first; empty when no spring meets every requirement (then `infeasible` says why). */
+  candidates: CandidateRecord[];
+  infeasible?: Record<string, unknown>;
+  [field: string]: unknown;
+}
+
+/** What `coilfront analyze --json` prints. */
+export interface AnalysisResult {
+  units: Units;
+  material: Record<string, unknown>;
+  geometry: Record<string, unknown>;
+  rate: number;
+  mass: number;
+  points: { length: number; deflection: number; force: number; stress: number; stress_ratio: number | null }[];
+  safety_factors: { static: number | null; fatigue: number | null };
+  warnings: unknown[];
+  notes: string[];
+  [field: string]: unknown;
+}
+
+/** What `coilfront frontier --json` prints: the Pareto set on the two objectives x and y. */
+export interface FrontierResult extends SearchCounts {
+  units: Units;
+  x: string;
+  y: string;
+  frontier_strategy: 'grid' | 'genetic';
+  /** Each spring with its two objective values under the keys named by x and y. */
+  frontier: CandidateRecord[];
+  [field: string]: unknown;
+}
+
+/** One run of a sweep: the value of the varied requirement and the best spring at it. */
+export interface SweepRowRecord {
+  value: number;
+  feasible: number;
+  best: CandidateRecord | null;
+  /** The check that cut most when nothing is feasible. */
+  limiting_check: string | null;
+}
+
+/** What `coilfront sweep --json` prints. */
+export interface SweepResult {
+  units: Units;
+  vary: string;
+  note: string;
+  rows: SweepRowRecord[];
+}
+
+/** What `coilfront check --json` and `stock --json` print (see the README for their fields). */
+export type CheckResult = Record<string, unknown>;
+export type StockResult = Record<string, unknown>;

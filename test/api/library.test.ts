@@ -1,0 +1,93 @@
+// No outside values here: each check is a property of our own behaviour on our own demo scenarios.
+// The library API (src/index.ts): every function takes the plain object an input file holds and returns
+// exactly what the command prints with --json; bad input throws an InputError naming the field and what
+// was expected. (test/api/package.test.ts runs the same from the packed tarball.)
+import { readFileSync } from 'node:fs';
+import { parse } from 'yaml';
+import { describe, expect, it } from 'vitest';
+import { analyze, check, design, frontier, InputError, stock, sweep } from '../../src/index.js';
+import { cli } from '../helpers.js';
+
+const read = (path: string): Record<string, unknown> => parse(readFileSync(path, 'utf8'));
+const demo = 'examples/washer-trigger.yaml';
+const valve = 'examples/valve-return-spring.yaml';
+const printed = (value: unknown) => JSON.stringify(value, null, 2) + '\n';
+
+async function sameAsCli(value: unknown, ...args: string[]): Promise<void> {
+  const r = await cli(...args, '--json');
+  expect(printed(value)).toBe(r.stdout);
+  expect(value).toStrictEqual(JSON.parse(r.stdout));
+}
+
+function thrown(f: () => unknown): InputError {
+  try {
+    f();
+  } catch (e) {
+    expect(e).toBeInstanceOf(InputError);
+    return e as InputError;
+  }
+  throw new Error('expected an InputError');
+}
+
+describe('the library returns what the command prints with --json', () => {
+  it('design, with and without options', async () => {
+    await sameAsCli(design(read(demo)), 'design', demo);
+    await sameAsCli(design(read(demo), { top: 3, rank: 'outer_diameter', perWire: true }), 'design', demo, '--top', '3', '--rank', 'outer_diameter', '--per-wire');
+  });
+
+  it('analyze', async () => {
+    await sameAsCli(analyze(read(valve)), 'analyze', valve);
+  });
+
+  it('frontier on two chosen axes', async () => {
+    await sameAsCli(frontier(read(demo), { x: 'relative_cost', y: 'free_length' }), 'frontier', demo, '--x', 'relative_cost', '--y', 'free_length');
+  });
+
+  it('sweep, its range as --vary writes it or as a path and a list of values', async () => {
+    const byText = sweep(read(demo), { vary: 'envelope.max_outer_diameter=12:16:2' });
+    await sameAsCli(byText, 'sweep', demo, '--vary', 'envelope.max_outer_diameter=12:16:2');
+    expect(sweep(read(demo), { vary: { path: 'envelope.max_outer_diameter', values: [12, 14, 16] } })).toStrictEqual(byText);
+  });
+
+  it('check and stock', async () => {
+    const dispenser = 'examples/stock-dispenser.yaml';
+    await sameAsCli(check(read(valve), read(demo)), 'check', valve, demo);
+    await sameAsCli(stock(read(dispenser), readFileSync('examples/stock-springs.csv', 'utf8'), { label: 'examples/stock-springs.csv' }), 'stock', dispenser, 'examples/stock-springs.csv');
+  });
+});
+
+describe('documents as plain objects', () => {
+  it('reads quantities written with their units as the file would', () => {
+    const doc = read(demo);
+    const withUnits = { ...doc, load: { force: '20 N', length: '3.5 cm' }, operating_length: '25 mm', envelope: { max_outer_diameter: '16 mm', min_inner_diameter: '6.5 mm', max_free_length: '0.06 m' } };
+    expect(design(withUnits, { top: 2 })).toStrictEqual(design(doc, { top: 2 }));
+  });
+
+  it('never changes the caller\'s object', () => {
+    const doc = read(demo);
+    const before = structuredClone(doc);
+    design(doc, { top: 1, rank: 'free_length', seed: 7 });
+    sweep(doc, { vary: 'envelope.max_outer_diameter=14:14:1' });
+    expect(doc).toStrictEqual(before);
+  });
+});
+
+describe('bad input throws an InputError with the field and what was expected', () => {
+  it('a bad value in the document names its path', () => {
+    const e = thrown(() => design({ ...read(demo), load: { force: 'twenty', length: 35 } }));
+    expect(e.field).toBe('load.force');
+    expect(e.expected).toMatch(/force/);
+    expect(thrown(() => analyze({ ...read(valve), wire_diameter: -1 })).field).toBe('wire_diameter');
+    expect(thrown(() => design('not a document')).expected).toBeTruthy();
+  });
+
+  it('a bad option names the option', () => {
+    expect(thrown(() => design(read(demo), { top: -3 })).field).toBe('options.top');
+    expect(thrown(() => design(read(demo), { rank: 'cheapest' as never })).field).toBe('options.rank');
+    expect(thrown(() => frontier(read(demo), { x: 'mass', y: 'mass' })).field).toBe('options.y');
+    expect(thrown(() => frontier(read(demo), { x: 'weight' as never })).field).toBe('options.x');
+    expect(thrown(() => sweep(read(demo), { vary: 'envelope.max_outer_diameter=16:12:1' })).field).toBe('options.vary');
+    expect(thrown(() => sweep(read(demo), { vary: { path: 'envelope.max_outer_diameter', values: [] } })).field).toBe('options.vary.values');
+    expect(thrown(() => sweep(read(demo), { vary: 'envelope.max_outer_diameter=-2:2:2' })).field).toMatch(/^options\.vary envelope\.max_outer_diameter=-2$/);
+  });
+});
