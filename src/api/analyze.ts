@@ -11,7 +11,11 @@ import type { AnalysisResult } from './types.js';
 export type AnalyzeOptions = CatalogOption;
 
 /** A spring read by the kind its document names, and its analysis. */
-export interface SpringAnalysisOf { kind: AnySpringKind; spring: InUnits; analysis: unknown }
+export interface SpringAnalysisOf {
+  kind: AnySpringKind;
+  spring: InUnits;
+  analysis: unknown;
+}
 
 /** Read a spring document through its kind (src/kinds/index.ts) and analyse it; throws InputError naming the field. */
 export function analyzeDocument(spring: unknown, catalog: Catalog = loadCatalog()): SpringAnalysisOf {

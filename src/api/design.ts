@@ -20,7 +20,12 @@ export interface DesignOptions extends RankedOptions {
 
 /** Requirements read from their document (overrides applied) by the kind the document names, with
  * the document kept for the advice. */
-export interface DesignPlan<Req extends InUnits = InUnits> { kind: AnySpringKind; req: Req; document: unknown; catalog: Catalog }
+export interface DesignPlan<Req extends InUnits = InUnits> {
+  kind: AnySpringKind;
+  req: Req;
+  document: unknown;
+  catalog: Catalog;
+}
 
 /** Read a requirements document through its kind (src/kinds/index.ts); throws InputError naming the field. */
 export function planDesign(document: unknown, catalog: Catalog = loadCatalog()): DesignPlan {

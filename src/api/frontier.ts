@@ -26,7 +26,12 @@ function axis(value: unknown, name: string, fallback: FrontierKey): FrontierKey 
 }
 
 /** The frontier of a plan on the axes x and y. */
-export function frontierOfPlan(plan: DesignPlan<Requirements>, x: FrontierKey, y: FrontierKey, options: Pick<SearchOptions, 'strategy' | 'onProgress'> = {}): Frontier {
+export function frontierOfPlan(
+  plan: DesignPlan<Requirements>,
+  x: FrontierKey,
+  y: FrontierKey,
+  options: Pick<SearchOptions, 'strategy' | 'onProgress'> = {},
+): Frontier {
   return computeFrontier(plan.req, x, y, options.onProgress, options.strategy);
 }
 
@@ -34,7 +39,12 @@ export function frontierOfPlan(plan: DesignPlan<Requirements>, x: FrontierKey, y
 export function frontierResult(fr: Frontier): FrontierResult {
   const value = (c: Candidate, k: FrontierKey) => FRONTIER_KEYS[k].sign * c.objectives[FRONTIER_KEYS[k].objective];
   return sanitize({
-    units: SI_UNITS, x: fr.x, y: fr.y, feasible: fr.cloud.length, ...countsRecord(fr.run), frontier_strategy: fr.strategy,
+    units: SI_UNITS,
+    x: fr.x,
+    y: fr.y,
+    feasible: fr.cloud.length,
+    ...countsRecord(fr.run),
+    frontier_strategy: fr.strategy,
     frontier: fr.front.map((c) => ({ [fr.x]: value(c, fr.x), [fr.y]: value(c, fr.y), ...candidateRecord(c) })),
   }) as FrontierResult;
 }

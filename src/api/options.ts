@@ -31,9 +31,17 @@ export interface RankedOptions extends SearchOptions {
 }
 
 /** A requirement set by an option: its path in the document and the option's name in messages. */
-export interface Override { path: string[]; option: string }
+export interface Override {
+  path: string[];
+  option: string;
+}
 
-const REQUIREMENT_OPTIONS: readonly [keyof RankedOptions, string][] = [['seed', 'seed'], ['top', 'top'], ['rank', 'rank'], ['perWire', 'best_per_wire']];
+const REQUIREMENT_OPTIONS: readonly [keyof RankedOptions, string][] = [
+  ['seed', 'seed'],
+  ['top', 'top'],
+  ['rank', 'rank'],
+  ['perWire', 'best_per_wire'],
+];
 
 /** The document with the requirement options written in (a copy: the caller's object is never changed). */
 export function withRequirementOptions(document: unknown, options: RankedOptions): { document: unknown; overrides: Override[] } {

@@ -21,10 +21,20 @@ export interface SweepOptions extends RankedOptions {
   vary: SweepVary;
 }
 
-export interface SweepRow { value: number; run: DesignRun; best: Candidate | null; limiting: string | null }
+export interface SweepRow {
+  value: number;
+  run: DesignRun;
+  best: Candidate | null;
+  limiting: string | null;
+}
 
 /** Every value's requirements, read (and checked) before any search runs. */
-export interface SweepPlan { path: string[]; values: number[]; reqs: Requirements[]; system: UnitSystem }
+export interface SweepPlan {
+  path: string[];
+  values: number[];
+  reqs: Requirements[];
+  system: UnitSystem;
+}
 
 /** The most values one sweep runs (as `--vary` allows). */
 const MAX_VALUES = 1000;
@@ -54,7 +64,13 @@ function parseVary(vary: unknown, option: string): { path: string[]; values: num
  * Read the requirements at every value of the sweep. A bad value is blamed on the vary option (with the
  * field and value), a bad override on its own option; the whole sweep is bounded like one search.
  */
-export function planSweep(document: unknown, vary: SweepVary, overrides: readonly Override[] = [], option = 'options.vary', catalog: Catalog = loadCatalog()): SweepPlan {
+export function planSweep(
+  document: unknown,
+  vary: SweepVary,
+  overrides: readonly Override[] = [],
+  option = 'options.vary',
+  catalog: Catalog = loadCatalog(),
+): SweepPlan {
   const { path, values } = parseVary(vary, option);
   const reqs = values.map((value) => {
     try {
@@ -68,7 +84,11 @@ export function planSweep(document: unknown, vary: SweepVary, overrides: readonl
   // The whole sweep is bounded like one search: a thousand values of a large search would run for hours.
   const total = reqs.reduce((n, r) => n + searchSize(r).combinations, 0);
   if (total > LIMITS.combinations) {
-    throw new InputError(option, `a sweep of at most ${LIMITS.combinations.toLocaleString('en-US')} combinations in all; ${values.length} values of about ${Math.round(total / values.length).toLocaleString('en-US')} each make ${total.toLocaleString('en-US')} (a larger step, or a smaller search)`, vary);
+    throw new InputError(
+      option,
+      `a sweep of at most ${LIMITS.combinations.toLocaleString('en-US')} combinations in all; ${values.length} values of about ${Math.round(total / values.length).toLocaleString('en-US')} each make ${total.toLocaleString('en-US')} (a larger step, or a smaller search)`,
+      vary,
+    );
   }
   return { path, values, reqs, system: reqs.length ? reqs[reqs.length - 1].system : 'si' };
 }
@@ -86,8 +106,15 @@ export function runSweepPlan(plan: SweepPlan, options: { strategy?: StrategyChoi
 export function sweepResult(path: readonly string[], rows: readonly SweepRow[]): SweepResult {
   const name = path.join('.');
   return sanitize({
-    units: SI_UNITS, vary: name, note: `${name} values are as given on the command line, in the file's unit system`,
-    rows: rows.map((r) => ({ value: r.value, feasible: r.run.result.feasibleCells, best: r.best ? candidateRecord(r.best) : null, limiting_check: r.limiting })),
+    units: SI_UNITS,
+    vary: name,
+    note: `${name} values are as given on the command line, in the file's unit system`,
+    rows: rows.map((r) => ({
+      value: r.value,
+      feasible: r.run.result.feasibleCells,
+      best: r.best ? candidateRecord(r.best) : null,
+      limiting_check: r.limiting,
+    })),
   }) as SweepResult;
 }
 

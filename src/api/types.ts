@@ -4,8 +4,16 @@
 
 /** The units of every figure in a record. */
 export interface Units {
-  length: 'mm'; force: 'N'; rate: 'N/mm'; stress: 'MPa'; mass: 'kg'; density: 'kg/m^3';
-  frequency: 'Hz'; temperature: 'degC'; volume: 'mm^3'; angle: 'deg';
+  length: 'mm';
+  force: 'N';
+  rate: 'N/mm';
+  stress: 'MPa';
+  mass: 'kg';
+  density: 'kg/m^3';
+  frequency: 'Hz';
+  temperature: 'degC';
+  volume: 'mm^3';
+  angle: 'deg';
 }
 
 /** One spring the search found (one row of `design --json`'s candidates). */

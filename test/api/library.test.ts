@@ -32,7 +32,16 @@ function thrown(f: () => unknown): InputError {
 describe('the library returns what the command prints with --json', () => {
   it('design, with and without options', async () => {
     await sameAsCli(design(read(demo)), 'design', demo);
-    await sameAsCli(design(read(demo), { top: 3, rank: 'outer_diameter', perWire: true }), 'design', demo, '--top', '3', '--rank', 'outer_diameter', '--per-wire');
+    await sameAsCli(
+      design(read(demo), { top: 3, rank: 'outer_diameter', perWire: true }),
+      'design',
+      demo,
+      '--top',
+      '3',
+      '--rank',
+      'outer_diameter',
+      '--per-wire',
+    );
   });
 
   it('analyze', async () => {
@@ -52,18 +61,28 @@ describe('the library returns what the command prints with --json', () => {
   it('check and stock', async () => {
     const dispenser = 'examples/stock-dispenser.yaml';
     await sameAsCli(check(read(valve), read(demo)), 'check', valve, demo);
-    await sameAsCli(stock(read(dispenser), readFileSync('examples/stock-springs.csv', 'utf8'), { label: 'examples/stock-springs.csv' }), 'stock', dispenser, 'examples/stock-springs.csv');
+    await sameAsCli(
+      stock(read(dispenser), readFileSync('examples/stock-springs.csv', 'utf8'), { label: 'examples/stock-springs.csv' }),
+      'stock',
+      dispenser,
+      'examples/stock-springs.csv',
+    );
   });
 });
 
 describe('documents as plain objects', () => {
   it('reads quantities written with their units as the file would', () => {
     const doc = read(demo);
-    const withUnits = { ...doc, load: { force: '20 N', length: '3.5 cm' }, operating_length: '25 mm', envelope: { max_outer_diameter: '16 mm', min_inner_diameter: '6.5 mm', max_free_length: '0.06 m' } };
+    const withUnits = {
+      ...doc,
+      load: { force: '20 N', length: '3.5 cm' },
+      operating_length: '25 mm',
+      envelope: { max_outer_diameter: '16 mm', min_inner_diameter: '6.5 mm', max_free_length: '0.06 m' },
+    };
     expect(design(withUnits, { top: 2 })).toStrictEqual(design(doc, { top: 2 }));
   });
 
-  it('never changes the caller\'s object', () => {
+  it("never changes the caller's object", () => {
     const doc = read(demo);
     const before = structuredClone(doc);
     design(doc, { top: 1, rank: 'free_length', seed: 7 });
