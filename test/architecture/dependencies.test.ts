@@ -10,7 +10,7 @@
 //   5 tolerance             made-spring scatter and yield
 //   6 report                shared rendering and the reports
 //   7 check, stock          one given spring or a stock table against requirements
-//   8 api                   the library API
+//   8 api, . (src/index.ts) the library API and the package's entry, which re-exports it
 //   9 cli                   the command line, thin over the rest
 // The debts below are the edges that break this today, each with the way out; the test fails on any
 // new one, and on a listed one that has been paid (delete its line then), so the list only shrinks.
@@ -18,7 +18,7 @@ import { describe, expect, it } from 'vitest';
 import { cycles, importGraph, sourceFiles, unitGraph, unitOf } from './imports.js';
 
 const LAYER: Record<string, number> = {
-  units: 0, model: 1, search: 1, catalogs: 2, input: 3, kinds: 4, tolerance: 5, report: 6, check: 7, stock: 7, api: 8, cli: 9,
+  units: 0, model: 1, search: 1, catalogs: 2, input: 3, kinds: 4, tolerance: 5, report: 6, check: 7, stock: 7, api: 8, '.': 8, cli: 9,
 };
 
 function layerOf(unit: string): number {
