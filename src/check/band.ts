@@ -19,7 +19,8 @@ export interface WorkingBand {
   high: number;
 }
 
-export function workingBand(req: Requirements): WorkingBand {
+/** Compression and extension requirements alike: the working force, its length and the two tolerances. */
+export function workingBand(req: Pick<Requirements, 'workingTolerance' | 'loadTolerance' | 'workingForce' | 'workingLength'>): WorkingBand {
   const [tolerance, source]: [number, BandSource] = req.workingTolerance !== undefined
     ? [req.workingTolerance, 'working_tolerance']
     : req.loadTolerance > 0 ? [req.loadTolerance, 'load_tolerance'] : [DEFAULT_WORKING_TOLERANCE, 'default'];

@@ -11,12 +11,29 @@ import { workingBand, type WorkingBand } from './band.js';
 import { givenFromCase } from './given.js';
 import { judge, makeJudge, type Verdict } from './judge.js';
 import { checkJson } from './report.js';
+import { kindOf } from '../kinds/index.js';
+import { InputError } from '../units/parse.js';
+import { checkExtensionDocuments, extensionCheckJson, type ExtensionCheckOutcome } from './extension.js';
 
 export interface CheckOutcome { req: Requirements; band: WorkingBand; verdict: Verdict; notes: string[] }
 
 /** Whether a requirements document names its end types (otherwise the default does not restrict a given spring). */
 export function endsStated(rawRequirements: unknown): boolean {
   return isRecord(rawRequirements) && rawRequirements.ends !== undefined && rawRequirements.ends !== null;
+}
+
+/** The kind both files are of (through the kind registry); a spring of one kind under requirements of another is refused by `kind`. */
+export function givenKind(spring: unknown, requirements: unknown): string {
+  const s = kindOf(spring).id;
+  const r = kindOf(requirements).id;
+  if (s !== r) throw new InputError('kind', `the same kind in the spring file and the requirements file (the spring file is ${s}, the requirements ${r}; a missing kind means compression)`, s);
+  return s;
+}
+
+/** `check` of either kind: the compression verdict, or the extension one (src/check/extension.ts). */
+export function checkAnyDocuments(spring: unknown, requirements: unknown, catalog: Catalog = loadCatalog()): (CheckOutcome & { kind: 'compression' }) | ExtensionCheckOutcome {
+  if (givenKind(spring, requirements) === 'extension') return checkExtensionDocuments(spring, requirements, catalog);
+  return { kind: 'compression', ...checkDocuments(spring, requirements, catalog) };
 }
 
 export function checkDocuments(spring: unknown, requirements: unknown, catalog: Catalog = loadCatalog()): CheckOutcome {
@@ -30,9 +47,10 @@ export function checkDocuments(spring: unknown, requirements: unknown, catalog: 
 
 /** The JSON record of `check` (SI units; no NaN or Infinity: a figure that does not apply is null). */
 export function check(spring: unknown, requirements: unknown, options: { catalog?: Catalog } = {}): Record<string, unknown> {
-  const o = checkDocuments(spring, requirements, options.catalog);
-  return sanitize(checkJson(o.verdict, o.band, o.notes)) as Record<string, unknown>;
+  const o = checkAnyDocuments(spring, requirements, options.catalog);
+  return sanitize(o.kind === 'extension' ? extensionCheckJson(o.verdict, o.band, o.notes) : checkJson(o.verdict, o.band, o.notes)) as Record<string, unknown>;
 }
 
 export { workingBand, type WorkingBand } from './band.js';
 export { judge, makeJudge, PASS_TOLERANCE, type Verdict, type CheckLine } from './judge.js';
+export { checkExtensionDocuments, judgeExtension, type ExtensionCheckOutcome, type ExtensionVerdict } from './extension.js';

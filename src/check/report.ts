@@ -28,7 +28,7 @@ export function givenSpringRecord(v: Verdict): Record<string, unknown> {
   };
 }
 
-export function checkLineRecord(l: CheckLine): Record<string, unknown> {
+export function checkLineRecord(l: Omit<CheckLine, 'name'> & { name: string }): Record<string, unknown> {
   return { name: l.name, label: l.label, value: l.value, relation: l.relation, limit: l.limit, margin: l.margin, pass: l.pass, ...(l.note ? { note: l.note } : {}) };
 }
 
@@ -69,7 +69,7 @@ export function writeMargin(m: number | null): string {
 }
 
 /** "outer_diameter by 2.5% (16.4 mm, limit 16 mm)" */
-export function failureText(l: CheckLine, system: UnitSystem): string {
+export function failureText(l: Omit<CheckLine, 'name'> & { name: string }, system: UnitSystem): string {
   // Five figures: a near miss by a fraction of a percent must not read "10.35 N against <= 10.35 N".
   const by = l.margin === null ? `(${writeValue(l.value, l.kind, system)}, not ${l.limit})` : `by ${sig(-l.margin * 100, 3)}% (${writeValue(l.value, l.kind, system, 5)} against ${l.relation} ${writeValue(l.limit, l.kind, system, 5)})`;
   return `${l.name} ${by}`;

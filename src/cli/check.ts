@@ -1,7 +1,8 @@
 // `coilfront check SPRING_FILE REQ_FILE`: every requirement check on one given spring, with margins.
 import type { Command } from 'commander';
 import { loadCatalog } from '../catalogs/load.js';
-import { checkDocuments } from '../check/index.js';
+import { checkAnyDocuments } from '../check/index.js';
+import { extensionCheckJson, extensionCheckText } from '../check/extension.js';
 import { checkJson, checkText } from '../check/report.js';
 import { readInputFile } from '../input/document.js';
 import { toJson } from '../report/json.js';
@@ -15,9 +16,12 @@ interface CheckOptions extends CommonOptions { json?: boolean; units?: UnitSyste
 export function checkCommand(springFile: string, reqFile: string, opts: CheckOptions, io: Io): number {
   const spring = readInputFile(springFile);
   const requirements = rawWithOverrides(reqFile, opts);
-  const o = checkDocuments(spring, requirements, loadCatalog());
+  const o = checkAnyDocuments(spring, requirements, loadCatalog());
   const system = opts.units ?? o.req.system;
-  if (opts.json) io.stdout(toJson(checkJson(o.verdict, o.band, o.notes)) + '\n');
+  if (o.kind === 'extension') {
+    if (opts.json) io.stdout(toJson(extensionCheckJson(o.verdict, o.band, o.notes)) + '\n');
+    else io.stdout(extensionCheckText(o, system));
+  } else if (opts.json) io.stdout(toJson(checkJson(o.verdict, o.band, o.notes)) + '\n');
   else io.stdout(checkText(o.verdict, o.req, o.band, o.notes, system));
   if (!o.verdict.pass) {
     io.stderr(`coilfront: the spring fails ${o.verdict.failing.map((l) => l.name).join(', ')}\n`);

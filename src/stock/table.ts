@@ -115,7 +115,7 @@ function readRow(cells: string[], line: number, layout: Layout, o: TableOptions)
   const kind = cell('kind');
   if (kind !== undefined) {
     const k = kind.toLowerCase();
-    if (k === 'extension') throw new RowError(cols.kind!.name, 'compression (extension springs are not checked yet: coilfront checks compression springs only)');
+    if (k === 'extension') throw new RowError(cols.kind!.name, 'compression (stock tables hold compression springs only: write an extension row as a spring file with kind: extension and run coilfront check SPRING_FILE REQ_FILE on it against an extension requirements file)');
     if (k !== 'compression') throw new RowError(cols.kind!.name, `compression or extension, got ${JSON.stringify(kind)}`);
   }
   const materialWord = need('material', 'a material');

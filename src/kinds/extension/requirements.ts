@@ -37,6 +37,8 @@ export interface ExtensionRequirements {
   operatingLength?: number;
   operatingForce?: number;
   loadTolerance: number;
+  /** The band a given spring's working force must fall in (`check`); the design meets that force exactly. */
+  workingTolerance?: number;
   maxOuterDiameter?: number;
   maxFreeLength?: number;
   /** The longest the spring is ever stretched (assembly, over-travel): reached without a set. */
@@ -161,6 +163,7 @@ export function readExtensionRequirements(raw: unknown, catalog: Catalog, ext: E
     kind: 'extension', system, materials, wireSizes, wireSizesLabel: label, loop, loopLength, bendIndex,
     workingForce, workingLength, operatingLength, operatingForce,
     loadTolerance: f.fraction('load_tolerance') ?? DEFAULTS.loadTolerance,
+    workingTolerance: f.fraction('working_tolerance'),
     maxOuterDiameter, maxFreeLength, maxExtendedLength, bodyCoils, coilStep, index,
     initialTensionRange: (f.choice('initial_tension_range', INITIAL_TENSION_RANGES) ?? EXTENSION_DEFAULTS.initialTensionRange) as InitialTensionRange,
     cycles: parseCycles(f.get('cycles'), 'cycles'),
@@ -177,6 +180,7 @@ export function readExtensionRequirements(raw: unknown, catalog: Catalog, ext: E
     diameterResolution: f.quantity('diameter_resolution', 'length', { positive: true }) ?? DEFAULTS.diameterResolution,
   };
   if (req.loadTolerance >= 1) throw new InputError('load_tolerance', 'a fraction below 1 (such as 0.1 or "10%")', f.get('load_tolerance'));
+  if (req.workingTolerance !== undefined && req.workingTolerance >= 1) throw new InputError('working_tolerance', 'a fraction below 1 (such as 0.02 or "2%")', f.get('working_tolerance'));
   if (req.diameterResolution < 1e-4) throw new InputError('diameter_resolution', 'a scan step of at least 0.0001 mm', f.get('diameter_resolution'));
   f.rejectUnknown();
   return req;
