@@ -9,16 +9,21 @@ import seedrandom from 'seedrandom';
 import { TopK } from './archive.js';
 import { CellMode, evaluateFixed, makeWorkspace, solveCell } from './cell.js';
 import { NearestMisses } from './misses.js';
-import { TREND, solvedIndex, valueAt, valueCount, type Problem } from './problem.js';
+import { cellKey, decode as decodeGenes, encoding, mutate as mutateGenes, randomGenes as sampleGenes, resolveCell, tournament as pick } from './operators.js';
+import { TREND, type Problem } from './problem.js';
 import { packResult, type SearchResult } from './result.js';
+import { reachesBound, termination, type StopReason, type Termination } from './termination.js';
 
 export interface GeneticOptions {
   seed: number | string;
   /** Stop once this many problem evaluations are spent (bisection steps count). */
   maxEvaluations: number;
   populationSize?: number;
-  /** Stop after this many generations without improvement. */
+  /** End a round of generations after this many without improvement. */
   stallGenerations?: number;
+  /** When to stop, in full (its budget, when given, replaces maxEvaluations): with a proven lower
+   * bound the run stops as soon as its incumbent reaches it. */
+  termination?: Termination;
   top?: number;
   /** Relative bisection tolerance while searching (default 1e-3 with discrete genes only, else 1e-7). */
   searchTolerance?: number;
@@ -38,13 +43,15 @@ function better(a: Individual, b: Individual): boolean {
 
 export function geneticSearch(p: Problem, opts: GeneticOptions): SearchResult {
   const rng = seedrandom(String(opts.seed));
-  const s = solvedIndex(p);
-  const n = p.variables.length;
+  const enc = encoding(p);
+  const { s, n, sizes } = enc;
+  const until = opts.termination ?? termination({ maxEvaluations: opts.maxEvaluations, stallGenerations: opts.stallGenerations });
+  let stoppedBy: StopReason = 'budget';
   // Bisection to 1e-3 (relative) while searching discrete genes: the kept end of each bracket is always
   // on the feasible side, so a cell is never judged feasible wrongly, only up to about 0.1% worse, which
   // is far below the steps between neighbouring cells. Real genes move by small amounts, so there it is
   // 1e-7. The final top cells are solved again to the grid's 1e-10 before they are reported.
-  const discreteGenes = p.variables.every((v, i) => i === s || v.kind !== 'continuous');
+  const discreteGenes = enc.discrete;
   const ws = makeWorkspace(p, opts.searchTolerance ?? (discreteGenes ? 1e-3 : 1e-7));
   // Likewise the scan of the non-monotone checks looks at every 4th diameter step while searching.
   if (discreteGenes) ws.scanCoarsening = opts.scanCoarsening ?? 4;
@@ -52,8 +59,7 @@ export function geneticSearch(p: Problem, opts: GeneticOptions): SearchResult {
   const misses = new NearestMisses(5);
   const counts = { cells: 0, feasible: 0, pruned: 0 };
   const popSize = opts.populationSize ?? 12;
-  const stall = opts.stallGenerations ?? 30;
-  const sizes = p.variables.map((v) => (v.kind === 'continuous' ? 0 : valueCount(v)));
+  const stall = until.stallGenerations;
   const memo = new Map<number, { f: number; violation: number; x: Float64Array }>();
   // The workspace and memo in use: coarse for the generations, fine for each round's hill-climb.
   const fineWs = makeWorkspace(p, undefined, ws.stats);
@@ -70,22 +76,14 @@ export function geneticSearch(p: Problem, opts: GeneticOptions): SearchResult {
   };
 
   let bestFeasible = Infinity;
+  // The best objective met so far at any precision, and the evaluations spent when it was met.
+  let incumbent = Infinity;
+  let foundAt = 0;
   // A cell is abandoned when its bound loses to the k-th best kept, so the reported list stays whole.
   const prune = (f: Float64Array) => f[0] >= bestFeasible && f[0] >= top.threshold();
 
-  const key = (genes: Float64Array): number => {
-    let k = 0;
-    for (let i = 0; i < n; i++) if (i !== s) k = k * sizes[i] + genes[i];
-    return k;
-  };
-
-  const decode = (genes: Float64Array): void => {
-    for (let i = 0; i < n; i++) {
-      const v = p.variables[i];
-      if (i === s) continue;
-      x[i] = v.kind === 'continuous' ? genes[i] : valueAt(v, genes[i]);
-    }
-  };
+  const key = (genes: Float64Array): number => cellKey(enc, genes);
+  const decode = (genes: Float64Array): void => decodeGenes(enc, genes, x);
 
   const assess = (genes: Float64Array): Individual => {
     const k = discreteGenes ? key(genes) : -1;
@@ -119,41 +117,25 @@ export function geneticSearch(p: Problem, opts: GeneticOptions): SearchResult {
       misses.offer(cw.missX, cw.missG, cw.missF, cw.missViolation);
     }
     if (violation === 0 && f < bestFeasible && top.size > 0) bestFeasible = top.f(0)[0];
+    if (violation === 0 && f < incumbent) { incumbent = f; foundAt = spent(); }
     const ind = { genes, f, violation, x: Float64Array.from(x) };
     if (k >= 0) cm.set(k, { f, violation, x: ind.x });
     return ind;
   };
 
-  const randomGenes = (): Float64Array => {
-    const g = new Float64Array(n);
-    p.variables.forEach((v, i) => {
-      if (i === s) return;
-      g[i] = v.kind === 'continuous' ? v.min + rng() * (v.max - v.min) : Math.floor(rng() * sizes[i]);
-    });
-    return g;
-  };
-
-  const mutate = (g: Float64Array, rate: number): void => {
-    p.variables.forEach((v, i) => {
-      if (i === s || rng() >= rate) return;
-      if (v.kind === 'continuous') {
-        const span = v.max - v.min;
-        const gauss = Math.sqrt(-2 * Math.log(1 - rng())) * Math.cos(2 * Math.PI * rng());
-        g[i] = Math.min(v.max, Math.max(v.min, g[i] + gauss * 0.05 * span));
-      } else if (rng() < 0.15) {
-        g[i] = Math.floor(rng() * sizes[i]);
-      } else {
-        const reach = Math.max(1, Math.round(sizes[i] / 12));
-        const step = 1 + Math.floor(rng() * reach);
-        g[i] = Math.min(sizes[i] - 1, Math.max(0, g[i] + (rng() < 0.5 ? -step : step)));
-      }
-    });
-  };
-
-  const tournament = (pop: Individual[]): Individual => {
-    const a = pop[Math.floor(rng() * pop.length)];
-    const b = pop[Math.floor(rng() * pop.length)];
-    return better(a, b) ? a : b;
+  const randomGenes = (): Float64Array => sampleGenes(enc, rng);
+  // A random value now and then lets an integer gene leave its neighbourhood.
+  const mutate = (g: Float64Array, rate: number): void => mutateGenes(enc, g, rate, 0.15, rng);
+  const tournament = (pop: Individual[]): Individual => pick(pop, better, rng);
+  // The incumbent is proven optimal (within the tolerance) once it reaches the lower bound.
+  let best: Individual = { genes: new Float64Array(n), f: Infinity, violation: Infinity, x: new Float64Array(n) };
+  const proven = (ind: Individual): boolean => ind.violation === 0 && reachesBound(until, ind.f);
+  // The run ends early on a proven bound, or when it has gone stallEvaluations without a better
+  // incumbent (a run that has found nothing feasible keeps looking until its budget is spent).
+  const halted = (): boolean => {
+    if (proven(best)) { stoppedBy = 'bound'; return true; }
+    if (incumbent < Infinity && spent() - foundAt >= until.stallEvaluations) { stoppedBy = 'stall'; return true; }
+    return false;
   };
 
   // Closing hill-climb over the integer genes: moves of one step in one gene or in two genes at once
@@ -166,7 +148,7 @@ export function geneticSearch(p: Problem, opts: GeneticOptions): SearchResult {
     let here = from;
     let last = -1;
     let improved = true;
-    while (improved && spent() < limit) {
+    while (improved && spent() < limit && !halted()) {
       improved = false;
       // The move that worked last is tried first: descents along one gene are common.
       for (let t = -1; t < moves.length && spent() < limit; t++) {
@@ -192,17 +174,18 @@ export function geneticSearch(p: Problem, opts: GeneticOptions): SearchResult {
   const fineClimb = s >= 0 && discreteGenes;
   let pop: Individual[] = [];
   while (pop.length < popSize) pop.push(assess(randomGenes()));
-  let best = pop.reduce((a, b) => (better(b, a) ? b : a));
+  best = pop.reduce((a, b) => (better(b, a) ? b : a));
   // The budget is checked before each cell, and the reported cells are solved again at the end: keep
   // back what those cost, so that the whole run stays within maxEvaluations.
-  const budget = Math.max(0, opts.maxEvaluations - 256 - 64 * top.k);
+  const budget = Math.max(0, until.maxEvaluations - 256 - 64 * top.k);
   for (let round = 0; round < 10_000 && spent() < budget; round++) {
+    if (halted()) break;
     const cellsBefore = counts.cells;
     const roundEnd = spent() + 0.5 * (budget - spent());
     let sinceBetter = 0;
     cw = ws;
     cm = memo;
-    while (spent() < roundEnd && sinceBetter < stall) {
+    while (spent() < roundEnd && sinceBetter < stall && !halted()) {
       pop.sort((a, b) => (better(a, b) ? -1 : better(b, a) ? 1 : 0));
       const next: Individual[] = [pop[0], pop[1]];
       while (next.length < popSize && spent() < roundEnd) {
@@ -234,19 +217,20 @@ export function geneticSearch(p: Problem, opts: GeneticOptions): SearchResult {
       best = hillClimb(assess(Float64Array.from(best.genes)), budget);
     } else best = hillClimb(best, budget);
     // A whole round that met no combination it had not seen means the space is exhausted.
-    if (counts.cells === cellsBefore) break;
+    if (halted()) break;
+    if (counts.cells === cellsBefore) { stoppedBy = 'exhausted'; break; }
     pop = [best];
     cw = ws;
     cm = memo;
     while (pop.length < popSize) pop.push(assess(randomGenes()));
   }
-  if (s < 0) return packResult('genetic', p, top, null, ws, counts, misses);
+  if (s < 0) return { ...packResult('genetic', p, top, null, ws, counts, misses, stoppedBy), evaluationsToBest: foundAt };
   // Solve the reported cells again at the grid's tolerance.
   const fine = makeWorkspace(p, undefined, ws.stats);
   const finalTop = new TopK(top.k, n, p.objectiveNames.length);
   for (let r = 0; r < top.size; r++) {
     x.set(top.x(r));
-    if (solveCell(p, s, x, fine, increasing ? CellMode.First : CellMode.All, increasing ? null : (px, f) => finalTop.offer(px, f), null) === true && increasing) finalTop.offer(x, fine.f);
+    resolveCell(p, s, x, fine, increasing, (px, f) => finalTop.offer(px, f));
   }
-  return packResult('genetic', p, finalTop.size ? finalTop : top, null, ws, counts, misses);
+  return { ...packResult('genetic', p, finalTop.size ? finalTop : top, null, ws, counts, misses, stoppedBy), evaluationsToBest: foundAt };
 }

@@ -4,7 +4,9 @@
 // the same cell solve as the single-objective search, seeded through seedrandom.
 import seedrandom from 'seedrandom';
 import { CellMode, makeWorkspace, solveCell } from './cell.js';
-import { solvedIndex, valueAt, valueCount, type Problem } from './problem.js';
+import { cellKey, decode, encoding, mutate as mutateGenes, randomGenes, resolveCell, tournament } from './operators.js';
+import type { Problem } from './problem.js';
+import { termination, type StopReason, type Termination } from './termination.js';
 
 export interface FrontOptions {
   seed: number | string;
@@ -12,11 +14,14 @@ export interface FrontOptions {
   objectives: [number, number];
   maxEvaluations: number;
   populationSize?: number;
+  /** When to stop, in full (replaces maxEvaluations); its stall count is in generations that meet no
+   * combination not seen before (default 15). */
+  termination?: Termination;
 }
 
 export interface FrontPoint { x: Float64Array; f: Float64Array }
 
-interface Member { genes: Int32Array; feasible: boolean; violation: number; a: number; b: number; x: Float64Array; f: Float64Array; rank: number; crowd: number }
+interface Member { genes: Float64Array; feasible: boolean; violation: number; a: number; b: number; x: Float64Array; f: Float64Array; rank: number; crowd: number }
 
 /** Constraint-domination of p over q on objectives (a, b). */
 function dominatesMember(p: Member, q: Member): boolean {
@@ -48,25 +53,25 @@ function better(p: Member, q: Member): boolean {
   return p.rank < q.rank || (p.rank === q.rank && p.crowd > q.crowd);
 }
 
-export function geneticFront(p: Problem, opts: FrontOptions): { points: FrontPoint[]; cloud: FrontPoint[]; evaluations: number; cells: number } {
+export function geneticFront(p: Problem, opts: FrontOptions): { points: FrontPoint[]; cloud: FrontPoint[]; evaluations: number; cells: number; stoppedBy: StopReason } {
   const rng = seedrandom(String(opts.seed));
-  const s = solvedIndex(p);
-  if (p.variables.some((v, i) => i !== s && v.kind === 'continuous')) throw new Error('geneticFront: discrete variables and one solved variable only');
-  const n = p.variables.length;
+  const enc = encoding(p);
+  const { s, n } = enc;
+  if (!enc.discrete || s < 0) throw new Error('geneticFront: discrete variables and one solved variable only');
+  const until = opts.termination ?? termination({ maxEvaluations: opts.maxEvaluations, stallGenerations: 15 });
   const ws = makeWorkspace(p, 1e-3);
   ws.scanCoarsening = 4;
-  const sizes = p.variables.map((v, i) => (i === s ? 1 : valueCount(v)));
   const [ia, ib] = opts.objectives;
   const popSize = opts.populationSize ?? 40;
-  const memo = new Map<string, Member>();
+  const memo = new Map<number, Member>();
   const x = new Float64Array(n);
   let cells = 0;
 
-  const assess = (genes: Int32Array): Member => {
-    const key = genes.join(',');
+  const assess = (genes: Float64Array): Member => {
+    const key = cellKey(enc, genes);
     const known = memo.get(key);
     if (known) return { ...known, genes };
-    for (let i = 0; i < n; i++) if (i !== s) x[i] = valueAt(p.variables[i], genes[i]);
+    decode(enc, genes, x);
     cells++;
     const r = solveCell(p, s, x, ws, CellMode.First, null, null);
     const m: Member = r === true
@@ -75,28 +80,21 @@ export function geneticFront(p: Problem, opts: FrontOptions): { points: FrontPoi
     memo.set(key, m);
     return m;
   };
-  const random = (): Int32Array => Int32Array.from(sizes, (k, i) => (i === s ? 0 : Math.floor(rng() * k)));
-  const mutate = (g: Int32Array): void => {
-    for (let i = 0; i < n; i++) {
-      if (i === s || rng() >= 1.5 / Math.max(1, n - 1)) continue;
-      const reach = Math.max(1, Math.round(sizes[i] / 12));
-      g[i] = Math.min(sizes[i] - 1, Math.max(0, g[i] + (rng() < 0.5 ? -1 : 1) * (1 + Math.floor(rng() * reach))));
-    }
-  };
-  let pop: Member[] = Array.from({ length: popSize }, () => assess(random()));
+  const rate = 1.5 / Math.max(1, n - 1);
+  let pop: Member[] = Array.from({ length: popSize }, () => assess(randomGenes(enc, rng)));
   rankAndCrowd(pop);
-  // Stop on the budget, after 300 generations, or when 15 generations in a row find no new combination
+  // Stop on the budget, after 300 generations, or when stallGenerations in a row find no new combination
   // (the memo answers revisits for free, so the budget alone would never run out).
   let stale = 0;
-  for (let gen = 0; gen < 300 && stale < 15 && ws.stats.evaluations < opts.maxEvaluations; gen++) {
+  let gen = 0;
+  for (; gen < 300 && stale < until.stallGenerations && ws.stats.evaluations < until.maxEvaluations; gen++) {
     const cellsBefore = cells;
     const children: Member[] = [];
-    while (children.length < popSize && ws.stats.evaluations < opts.maxEvaluations) {
-      const pick = () => { const a = pop[Math.floor(rng() * pop.length)]; const b = pop[Math.floor(rng() * pop.length)]; return better(a, b) ? a : b; };
-      const pa = pick();
-      const pb = pick();
-      const child = Int32Array.from(pa.genes, (g, i) => (rng() < 0.5 ? g : pb.genes[i]));
-      mutate(child);
+    while (children.length < popSize && ws.stats.evaluations < until.maxEvaluations) {
+      const pa = tournament(pop, better, rng);
+      const pb = tournament(pop, better, rng);
+      const child = Float64Array.from(pa.genes, (g, i) => (rng() < 0.5 ? g : pb.genes[i]));
+      mutateGenes(enc, child, rate, 0, rng);
       children.push(assess(child));
     }
     const merged = [...pop, ...children];
@@ -112,9 +110,10 @@ export function geneticFront(p: Problem, opts: FrontOptions): { points: FrontPoi
   const points: FrontPoint[] = [];
   for (const m of nd) {
     x.set(m.x);
-    if (solveCell(p, s, x, fine, CellMode.First, null, null) === true) points.push({ x: Float64Array.from(x), f: Float64Array.from(fine.f) });
+    resolveCell(p, s, x, fine, true, (px, f) => points.push({ x: Float64Array.from(px), f: Float64Array.from(f) }));
   }
   points.sort((u, v) => u.f[ia] - v.f[ia]);
   const cloud = all.map((m) => ({ x: m.x, f: m.f }));
-  return { points, cloud, evaluations: ws.stats.evaluations, cells };
+  const stoppedBy: StopReason = stale >= until.stallGenerations ? 'exhausted' : 'budget';
+  return { points, cloud, evaluations: ws.stats.evaluations, cells, stoppedBy };
 }

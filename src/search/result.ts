@@ -2,18 +2,22 @@
 // counts that explain the outcome (what each check cut, what to relax, the nearest misses).
 import type { PointBuffer, TopK } from './archive.js';
 import type { CellWorkspace } from './cell.js';
-import type { Miss, NearestMisses } from './misses.js';
-
-export type { Miss };
+import type { NearestMisses } from './misses.js';
 import type { Problem } from './problem.js';
+import type { StopReason } from './termination.js';
 
 export interface Point { x: Float64Array; f: Float64Array }
+export interface Miss { x: Float64Array; g: Float64Array; f: Float64Array; violation: number }
 
 export interface SearchResult {
   strategy: 'grid' | 'genetic';
+  /** Why the run stopped (the grid always completes). */
+  stoppedBy: StopReason;
   best: Point[];
   cloud: PointBuffer | null;
   evaluations: number;
+  /** Evaluations spent when the best objective value of the run was first met (genetic search). */
+  evaluationsToBest?: number;
   /** Calls of the problem's interval bounds (each costs about one evaluation). */
   boundCalls?: number;
   cells: number;
@@ -28,14 +32,14 @@ export interface SearchResult {
 
 /** Gather a strategy's stores into its result, with counts keyed by constraint name. */
 export function packResult(strategy: SearchResult['strategy'], p: Problem, top: TopK, cloud: PointBuffer | null,
-  ws: CellWorkspace, counts: { cells: number; feasible: number; pruned: number }, misses: NearestMisses): SearchResult {
+  ws: CellWorkspace, counts: { cells: number; feasible: number; pruned: number }, misses: NearestMisses, stoppedBy: StopReason = 'complete'): SearchResult {
   const cutBy: Record<string, number> = {};
   const sole: Record<string, number> = {};
   p.constraintNames.forEach((name, j) => { cutBy[name] = ws.stats.cutBy[j]; sole[name] = ws.stats.soleViolation[j]; });
   const best = [];
   for (let i = 0; i < top.size; i++) best.push({ x: Float64Array.from(top.x(i)), f: Float64Array.from(top.f(i)) });
   return {
-    strategy, best, cloud, evaluations: ws.stats.evaluations, boundCalls: ws.stats.boundCalls, cells: counts.cells, feasibleCells: counts.feasible,
+    strategy, stoppedBy, best, cloud, evaluations: ws.stats.evaluations, boundCalls: ws.stats.boundCalls, cells: counts.cells, feasibleCells: counts.feasible,
     prunedCells: counts.pruned, cutBy, soleViolation: sole, nearestMisses: misses.items,
   };
 }
