@@ -15,6 +15,13 @@ export const LIMITS = {
   diameterResolution: [1e-3, 10] as [number, number],
   /** A safety factor beyond 100 admits no spring; a surge margin beyond 1000 neither (common practice asks 15 to 20). */
   safetyMax: 100,
+  /**
+   * Smallest safety factor or surge margin accepted. Below 1 the spring is designed to exceed its own
+   * allowable stress (or to run at or below its surge frequency): never safe advice, so refused rather
+   * than warned about. 1 designs to the allowable itself; common practice asks 1.1 to 1.5 (static) and
+   * 1.3 to 2 (fatigue).
+   */
+  safetyMin: 1,
   surgeMarginMax: 1000,
   /** Solid force margin over the largest working force: up to 100%. */
   clashAllowanceMax: 1,

@@ -226,9 +226,9 @@ export function readRequirements(raw: unknown, catalog: Catalog): Requirements {
   const safety = { ...DEFAULTS.safety };
   if (safetyRaw !== undefined && safetyRaw !== null) {
     const sf = Fields.of(safetyRaw, 'safety', system);
-    safety.static = sf.number('static', { positive: true, max: LIMITS.safetyMax }) ?? safety.static;
-    safety.fatigue = sf.number('fatigue', { positive: true, max: LIMITS.safetyMax }) ?? safety.fatigue;
-    safety.surge = sf.number('surge', { positive: true, max: LIMITS.surgeMarginMax }) ?? safety.surge;
+    safety.static = sf.number('static', { min: LIMITS.safetyMin, max: LIMITS.safetyMax }) ?? safety.static;
+    safety.fatigue = sf.number('fatigue', { min: LIMITS.safetyMin, max: LIMITS.safetyMax }) ?? safety.fatigue;
+    safety.surge = sf.number('surge', { min: LIMITS.safetyMin, max: LIMITS.surgeMarginMax }) ?? safety.surge;
     sf.rejectUnknown();
   }
   const req: Requirements = {

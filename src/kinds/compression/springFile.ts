@@ -98,7 +98,7 @@ export function readSpringCase(raw: unknown, catalog: Catalog): SpringCase {
     forcingFrequency: f.quantity('forcing_frequency', 'frequency', { nonNegative: true }),
     clashAllowance: f.fraction('clash_allowance', LIMITS.clashAllowanceMax) ?? 0.15,
     gapRule: f.bool('coil_gap_rule') ?? false,
-    surgeMargin: f.number('surge_margin', { positive: true, max: LIMITS.surgeMarginMax }) ?? 15,
+    surgeMargin: f.number('surge_margin', { min: LIMITS.safetyMin, max: LIMITS.surgeMarginMax }) ?? 15,
   };
   f.rejectUnknown();
   const notes: string[] = [];

@@ -7,6 +7,7 @@ import { FAMILIES, type Catalog } from '../../catalogs/types.js';
 import { FATIGUE_CRITERIA, type FatigueCriterion } from '../../model/fatigue.js';
 import type { StressCorrection } from '../../model/stressFactor.js';
 import { Fields, isRecord } from '../../input/fields.js';
+import { LIMITS } from '../../input/limits.js';
 import { parseMaterialChoice, type MaterialChoice } from '../../input/material.js';
 import { DEFAULTS } from '../compression/requirements.js';
 import { parseCycles } from '../compression/springFile.js';
@@ -154,9 +155,9 @@ export function readExtensionRequirements(raw: unknown, catalog: Catalog, ext: E
   const safetyRaw = f.get('safety');
   if (safetyRaw !== undefined && safetyRaw !== null) {
     const sf = Fields.of(safetyRaw, 'safety', system);
-    safety.static = sf.number('static', { positive: true }) ?? safety.static;
-    safety.fatigue = sf.number('fatigue', { positive: true }) ?? safety.fatigue;
-    safety.surge = sf.number('surge', { positive: true }) ?? safety.surge;
+    safety.static = sf.number('static', { min: LIMITS.safetyMin, max: LIMITS.safetyMax }) ?? safety.static;
+    safety.fatigue = sf.number('fatigue', { min: LIMITS.safetyMin, max: LIMITS.safetyMax }) ?? safety.fatigue;
+    safety.surge = sf.number('surge', { min: LIMITS.safetyMin, max: LIMITS.surgeMarginMax }) ?? safety.surge;
     sf.rejectUnknown();
   }
   const req: ExtensionRequirements = {

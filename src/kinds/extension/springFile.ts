@@ -4,6 +4,7 @@ import type { Catalog } from '../../catalogs/types.js';
 import { FATIGUE_CRITERIA, type FatigueCriterion } from '../../model/fatigue.js';
 import type { StressCorrection } from '../../model/stressFactor.js';
 import { Fields } from '../../input/fields.js';
+import { LIMITS } from '../../input/limits.js';
 import { parseMaterialChoice, strengthRangeNote, type MaterialChoice } from '../../input/material.js';
 import { parseCycles } from '../compression/springFile.js';
 import { formatQuantity } from '../../units/format.js';
@@ -95,7 +96,7 @@ export function readExtensionSpring(raw: unknown, catalog: Catalog, ext: Extensi
     lengths, cycles, peened: f.bool('peened') ?? false, criterion, correction,
     temperature: f.quantity('temperature', 'temperature'),
     forcingFrequency: f.quantity('forcing_frequency', 'frequency', { nonNegative: true }),
-    surgeMargin: f.number('surge_margin', { positive: true }) ?? 15,
+    surgeMargin: f.number('surge_margin', { min: LIMITS.safetyMin, max: LIMITS.surgeMarginMax }) ?? 15,
   };
   f.rejectUnknown();
   const notes: string[] = [];
