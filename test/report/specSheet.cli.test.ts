@@ -2,7 +2,7 @@
 // of our own output, no outside values; the sheet's rendering is tested in specSheet.browser.test.ts).
 import { existsSync, readFileSync, writeFileSync } from 'node:fs';
 import { describe, expect, it } from 'vitest';
-import { cli, tempPath } from '../helpers.js';
+import { cli, inputFile, tempPath } from '../helpers.js';
 
 describe('design --spec', () => {
   it('writes the sheet of spring 1 as drawn, the same bytes every run, and leaves stdout as it was', async () => {
@@ -20,6 +20,22 @@ describe('design --spec', () => {
     expect(html).toContain('302/304 austenitic stainless steel');
     expect(html).toContain('15.7'); // the outer diameter of spring 1, drawn to 0.01 mm
     expect(html).not.toMatch(/<script|NaN|Infinity|undefined/);
+  });
+
+  it('is drawn at the requirement\'s own tolerance grade, its yield sampled as the design\'s is', async () => {
+    // A grade-1 requirement once got a grade-2 sheet (and a yield at grade 2), sampled 5,000 times where
+    // the design confirms with 20,000. The sheet's spring is the drawn one (dimensions rounded as a
+    // drawing gives them), so its yield may differ a little from the design's: not compared here.
+    const req = inputFile(readFileSync('examples/washer-trigger.yaml', 'utf8') + 'tolerance_grade: 1\n');
+    const p = tempPath('spec-grade1.html');
+    const r = await cli('design', req, '--json', '--spec', p);
+    expect(r.code).toBe(0);
+    const best = JSON.parse(r.stdout).candidates[0];
+    expect(best.tolerance_grade).toBe(1);
+    const html = readFileSync(p, 'utf8');
+    expect(html).toContain('EN 15800 grade 1');
+    expect(html).not.toContain('EN 15800 grade 2');
+    expect(html).toContain(`${best.yield_samples} samples`);
   });
 
   it('writes it in the units asked for', async () => {

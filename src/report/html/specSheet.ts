@@ -8,6 +8,7 @@ import type { Requirements } from '../../kinds/compression/requirements.js';
 import type { MaterialFigures, SpringAnalysis, SpringGeometry } from '../../kinds/compression/analysis.js';
 import { CHECK_LABELS, shortestLength, type CheckName } from '../../kinds/compression/verify.js';
 import { loadToleranceCatalog, type ToleranceGrade } from '../../tolerance/catalog.js';
+import { CONFIRM_SAMPLES } from '../../tolerance/confirm.js';
 import type { SpringTolerances } from '../../tolerance/model.js';
 import type { YieldResult } from '../../tolerance/monteCarlo.js';
 import { controlledDiameter } from '../../tolerance/precision.js';
@@ -236,10 +237,10 @@ ${notes.length ? `<p class="note warn">${notes.map(esc).join('<br>')}</p>` : ''}
 }
 
 /** Write the sheet of a reported spring (as drawn, at the requirement's tolerance grade and overrides,
- * or grade `grade` when given, seeded Monte Carlo). */
+ * or grade `grade` when given, seeded Monte Carlo with as many samples as the design's confirmation). */
 export function writeSpecSheet(path: string, c: { geometry: SpringGeometry; item: { figures: MaterialFigures; choice: { material: Material } } }, req: Requirements, system: UnitSystem, force: boolean, grade?: ToleranceGrade): SpecifiedSpring {
   const shown = { ...req, system };
-  const spec = specifySpring(loadToleranceCatalog(), grade === undefined ? req.tolerance : { grade, overrides: {} }, { geometry: c.geometry, figures: c.item.figures, material: c.item.choice.material }, shown);
+  const spec = specifySpring(loadToleranceCatalog(), grade === undefined ? req.tolerance : { grade, overrides: {} }, { geometry: c.geometry, figures: c.item.figures, material: c.item.choice.material }, shown, { samples: CONFIRM_SAMPLES });
   writeOutputFile(path, specSheetHtml(spec.sheet), force, '--spec');
   return spec;
 }
