@@ -1,3 +1,4 @@
+// source: none needed; nothing here is checked against a value from outside the project.
 // The standing bad-input battery, as data: each row is one bad input (a whole file, a field of a spring
 // or requirements file, or a command-line option), the exit code it must give and the field (or option,
 // or file) its one message must name. test/cli/battery.test.ts runs every row through the CLI in-process

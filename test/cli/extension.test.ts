@@ -1,3 +1,4 @@
+// source: none needed; nothing here is checked against a value from outside the project.
 // `kind: extension` end to end through the CLI: analyze, design, frontier and sweep, in text and --json,
 // SI and US, and every spring a command reports read back through `analyze` as a spring file. No outside
 // values: properties of our own behaviour on our own demo scenario (the pedal bin, invented for the

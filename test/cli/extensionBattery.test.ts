@@ -1,3 +1,4 @@
+// source: none needed; nothing here is checked against a value from outside the project.
 // Bad input in extension-spring files and options, through the CLI in-process, under the contract of
 // the standing battery (test/cli/battery.test.ts): the exit code, one line on stderr naming the field or
 // option, nothing on stdout, no stack trace, no NaN/Infinity/undefined, nothing written. No outside

@@ -1,3 +1,4 @@
+// source: none needed; nothing here is checked against a value from outside the project.
 // Issue 12's input-side behaviours that are not refusals (the refusals are rows of the battery in
 // battery.cases.ts). No outside values: properties of our own CLI on our own demo scenarios.
 import { readFileSync, writeFileSync } from 'node:fs';

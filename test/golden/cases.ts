@@ -1,3 +1,4 @@
+// source: none needed; nothing here is checked against a value from outside the project.
 // No outside values here: the expected outputs are coilfront's own, recorded before the seam
 // restructuring (issue 7) so that every later commit can prove it changed no output byte.
 export interface GoldenCase { name: string; args: string[] }
