@@ -29,7 +29,7 @@ export function packageVersion(): string {
 export function buildProgram(io: Io, setCode: (c: number) => void): Command {
   const program = new Command('coilfront');
   program
-    .description('Design and check helical compression springs: analyse one spring, or search standard wire sizes and coil counts for the lightest springs that meet your requirements.')
+    .description('Design and check helical compression and extension springs (kind: extension in the file): analyse one spring, or search standard wire sizes and coil counts for the lightest springs that meet your requirements.')
     .version(packageVersion(), '-V, --version')
     // A usage mistake is one line, like every other bad input, with the pointer to --help on it.
     .configureOutput({ writeOut: io.stdout, writeErr: io.stderr, outputError: (text, write) => write(`coilfront: ${text.trim().replace(/\n+/g, ' ')} (run coilfront --help for usage)\n`) })
