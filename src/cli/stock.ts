@@ -6,7 +6,7 @@ import { loadCatalog } from '../catalogs/load.js';
 import { toJson } from '../report/json.js';
 import { writeOutputFile } from '../report/writeFile.js';
 import { designHtml } from '../report/html/designHtml.js';
-import { stockHtml, stockSection, writeStockReport } from '../report/html/stockSection.js';
+import { stockHtml, stockSection, writeStockReport } from '../stock/html.js';
 import { stockCsv, stockJson, stockText } from '../stock/report.js';
 import { runStock, STOCK_RANK_KEYS, type StockRankKey } from '../stock/run.js';
 import { InputError, parseFraction, parseNumber } from '../units/parse.js';

@@ -2,13 +2,29 @@
 // its tolerances, its yield by estimate and by Monte Carlo, gathered as the specification sheet's input.
 import type { Material } from '../catalogs/types.js';
 import type { Requirements } from '../kinds/compression/requirements.js';
-import type { MaterialFigures, SpringGeometry } from '../kinds/compression/analysis.js';
-import type { SpecSheetInput } from '../report/html/specSheet.js';
+import type { MaterialFigures, SpringAnalysis, SpringGeometry } from '../kinds/compression/analysis.js';
 import type { ToleranceCatalog } from './catalog.js';
-import type { ToleranceRequest } from './model.js';
-import type { MonteCarloOptions } from './monteCarlo.js';
+import type { SpringTolerances, ToleranceRequest } from './model.js';
+import type { MonteCarloOptions, YieldResult } from './monteCarlo.js';
 import { drawnSpring, type DrawnSpring } from './precision.js';
 import { springYield, type SpringYield } from './springYield.js';
+
+export type CoilingDirection = 'right' | 'left' | 'optional';
+
+/** What the sheet is made from: a reported spring (as drawn), its requirements, tolerances and yield. */
+export interface SpecSheetInput {
+  analysis: SpringAnalysis;
+  requirements: Requirements;
+  material: Material;
+  tolerances: SpringTolerances;
+  yield?: { estimate: number; monteCarlo?: YieldResult; seed?: number };
+  /** Items the requirements do not carry; the sheet says "maker's choice" or "to be agreed" without them. */
+  part?: string;
+  coilingDirection?: CoilingDirection;
+  finish?: string;
+  /** Written as the sheet's date line (kept out by default so that the same input gives the same bytes). */
+  date?: string;
+}
 
 export interface SpecifiedSpring {
   drawn: DrawnSpring;

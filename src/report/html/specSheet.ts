@@ -10,9 +10,8 @@ import { CHECK_LABELS, shortestLength, type CheckName } from '../../kinds/compre
 import { loadToleranceCatalog, type ToleranceGrade } from '../../tolerance/catalog.js';
 import { CONFIRM_SAMPLES } from '../../tolerance/confirm.js';
 import type { SpringTolerances } from '../../tolerance/model.js';
-import type { YieldResult } from '../../tolerance/monteCarlo.js';
 import { controlledDiameter } from '../../tolerance/precision.js';
-import { specifySpring, type SpecifiedSpring } from '../../tolerance/specify.js';
+import { specifySpring, type SpecSheetInput, type SpecifiedSpring } from '../../tolerance/specify.js';
 import { INCH_MM } from '../../units/kinds.js';
 import { formatQuantity, unitSymbol } from '../../units/format.js';
 import type { UnitSystem } from '../../units/systems.js';
@@ -20,23 +19,6 @@ import { CAUTIONS } from '../cautions.js';
 import { writeOutputFile } from '../writeFile.js';
 import { springDrawing } from './springDrawing.js';
 import { esc, r2 } from './svg.js';
-
-export type CoilingDirection = 'right' | 'left' | 'optional';
-
-/** What the sheet is made from: a reported spring (as drawn), its requirements, tolerances and yield. */
-export interface SpecSheetInput {
-  analysis: SpringAnalysis;
-  requirements: Requirements;
-  material: Material;
-  tolerances: SpringTolerances;
-  yield?: { estimate: number; monteCarlo?: YieldResult; seed?: number };
-  /** Items the requirements do not carry; the sheet says "maker's choice" or "to be agreed" without them. */
-  part?: string;
-  coilingDirection?: CoilingDirection;
-  finish?: string;
-  /** Written as the sheet's date line (kept out by default so that the same input gives the same bytes). */
-  date?: string;
-}
 
 /** The working force's band on the sheet: the requirement's load tolerance, 2% when that is zero, or
  * the residual given as the working-force tolerance when wider (the maker adjusts the free length to it). */

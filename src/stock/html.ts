@@ -1,16 +1,16 @@
 // The stock section of an HTML report: the passing rows ranked, the near misses with what they fail,
 // the rows each check cut, the table's rates beside coilfront's, the bad rows, and the comparison with
 // the best custom spring when one was run; then the best stock spring's own diagrams.
-import { bandText } from '../../check/band.js';
-import { givenService } from '../../check/given.js';
-import { compareRows, compareSummary, missText, stockGrid, STOCK_NOTE } from '../../stock/report.js';
-import type { StockRun } from '../../stock/run.js';
-import { sig } from '../../units/format.js';
-import type { UnitSystem } from '../../units/systems.js';
-import { writeOutputFile } from '../writeFile.js';
-import { springSections } from './designHtml.js';
-import { CONVENTIONS, htmlTable, page } from './page.js';
-import { esc } from './svg.js';
+import { bandText } from '../check/band.js';
+import { givenService } from '../check/given.js';
+import { compareRows, compareSummary, missText, stockGrid, STOCK_NOTE } from './report.js';
+import type { StockRun } from './run.js';
+import { sig } from '../units/format.js';
+import type { UnitSystem } from '../units/systems.js';
+import { writeOutputFile } from '../report/writeFile.js';
+import { springSections } from '../report/html/designHtml.js';
+import { CONVENTIONS, htmlTable, page } from '../report/html/page.js';
+import { esc } from '../report/html/svg.js';
 
 export function stockSection(run: StockRun, system: UnitSystem, tableLabel: string): string[] {
   const out: string[] = [];
