@@ -40,6 +40,18 @@ describe('README', () => {
     for (const line of shown) expect(out, line).toContain(line);
   });
 
+  it('shows the robust design (min_yield 0.99) that the command it gives really prints', async () => {
+    const section = readme.slice(readme.indexOf('## The demo'));
+    const command = section.indexOf('--set min_yield=0.99');
+    expect(command).toBeGreaterThan(0);
+    const from = section.indexOf('```\n', command) + 4;
+    const block = section.slice(from, section.indexOf('\n```', from));
+    const out = (await cli('design', 'examples/washer-trigger.yaml', '--set', 'min_yield=0.99')).stdout;
+    const shown = block.split('\n').filter((l) => l.trim() !== '');
+    expect(shown.length).toBeGreaterThan(2);
+    for (const line of shown) expect(out, line).toContain(line);
+  });
+
   it('carries the safety cautions', () => {
     expect(readme).toMatch(/verify material figures and tolerances with your spring supplier/);
     expect(readme).toMatch(/test prototypes/);

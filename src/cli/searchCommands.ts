@@ -30,7 +30,7 @@ import { unitsOption } from './options.js';
 
 export interface CommonOptions {
   json?: boolean; units?: UnitSystem; set?: string[]; strategy?: StrategyChoice; seed?: string; top?: string; rank?: string;
-  maxOd?: string; minId?: string; maxFreeLength?: string; maxSolidLength?: string; report?: string; force?: boolean; perWire?: boolean; timing?: boolean;
+  maxOd?: string; minId?: string; maxFreeLength?: string; maxSolidLength?: string; report?: string; force?: boolean; perWire?: boolean; variants?: boolean; timing?: boolean;
 }
 
 function collect(value: string, previous: string[] = []): string[] {
@@ -56,7 +56,8 @@ function addCommon(cmd: Command, ranked = true): Command {
     .option('--seed <n>', 'random seed for the genetic strategy (overrides the file)')
     .addOption(hide(new Option('--top <n>', 'how many candidates to list (overrides the file)')))
     .addOption(hide(new Option('--rank <key>', 'ranking objective (overrides the file)').choices([...RANK_KEYS])))
-    .addOption(hide(new Option('--per-wire', 'list the best spring of each material and wire size (overrides the file\'s best_per_wire)')))
+    .addOption(hide(new Option('--variants', 'list every feasible spring (each coil count of a wire) instead of the best of each material, wire size and end type (overrides the file\'s variants)')))
+    .addOption(new Option('--per-wire', 'the best spring of each material, wire size and end type: the default (overrides the file\'s variants)').hideHelp())
     .option('--timing', 'also report the search time (which makes the output differ from run to run)');
   return cmd;
 }
@@ -86,6 +87,7 @@ function tracedOverrides(file: string, opts: CommonOptions): { doc: unknown; ove
   if (opts.top !== undefined) apply('--top', `top=${JSON.stringify(opts.top)}`);
   if (opts.rank !== undefined) apply('--rank', `rank=${opts.rank}`);
   if (opts.perWire) apply('--per-wire', 'best_per_wire=true');
+  if (opts.variants) apply('--variants', 'best_per_wire=false');
   return { doc, overrides };
 }
 
@@ -183,7 +185,7 @@ interface FrontierOptions extends CommonOptions { x: FrontierKey; y: FrontierKey
 async function frontierCommand(file: string, opts: FrontierOptions, io: Io): Promise<number> {
   if (opts.x === opts.y) throw new InputError('--y', 'an objective other than --x');
   // The frontier is every non-dominated spring: a count, a ranking or one-per-wire would cut it silently.
-  for (const [option, given] of [['--top', opts.top !== undefined], ['--rank', opts.rank !== undefined], ['--per-wire', !!opts.perWire]] as const) {
+  for (const [option, given] of [['--top', opts.top !== undefined], ['--rank', opts.rank !== undefined], ['--per-wire', !!opts.perWire], ['--variants', !!opts.variants]] as const) {
     if (given) throw new InputError(option, `an option of design or sweep (frontier lists every spring on the ${opts.x} / ${opts.y} frontier; choose the axes with --x and --y)`);
   }
   checkOutputPaths([{ option: '--output', path: opts.output }, { option: '--report', path: opts.report }], !!opts.force, [file]);

@@ -67,6 +67,7 @@ export function candidateRecord(c: Candidate, y?: CandidateYield): Record<string
     critical_deflection: a.buckling.absolutelyStable ? null : a.buckling.criticalDeflection,
     checks,
     ...(y ? yieldRecord(y) : {}),
+    ...(c.variants !== undefined ? { variants: c.variants } : {}),
     warnings: a.warnings.map((w) => w.message),
   };
 }
@@ -224,10 +225,12 @@ const num = (v: number, kind: Kind, system: UnitSystem, digits = 4) => sig(inUni
 /** The ranked-candidate columns, shared by the terminal table and the HTML report. */
 export function candidateGrid(cands: Candidate[], system: UnitSystem, yields?: CandidateYield[]): { header: string[]; rows: string[][] } {
   const u = (k: Kind) => unitSymbol(k, system);
+  const grouped = cands.some((c) => c.variants !== undefined);
   const header = [
     '#', 'material', `d ${u('length')}`, `D ${u('length')}`, `OD ${u('length')}`, `ID ${u('length')}`, 'Na', 'Nt', 'ends',
     `L0 ${u('length')}`, `Ls ${u('length')}`, `k ${u('rate')}`, `forces ${u('force')}`, `tau max ${u('stress')}`, 'SF static', 'SF fatigue', `mass ${u('mass')}`,
     ...(yields ? ['yield', 'yield limited by'] : []),
+    ...(grouped ? ['of'] : []),
   ];
   const rows = cands.map((c, i) => {
     const a = c.analysis;
@@ -240,6 +243,7 @@ export function candidateGrid(cands: Candidate[], system: UnitSystem, yields?: C
       a.points.map((p) => num(p.force, 'force', system, 3)).join(' / '), num(tauMax, 'stress', system),
       sig(a.staticSafetyFactor, 3), a.fatigue ? sig(a.fatigue.safetyFactor, 3) : '-', num(g.mass, 'mass', system, 3),
       ...(yields ? [yieldPercent(yields[i].monteCarlo.yield), yields[i].limiting ?? '-'] : []),
+      ...(grouped ? [c.variants !== undefined ? String(c.variants) : '-'] : []),
     ];
   });
   return { header, rows };
@@ -274,7 +278,7 @@ export function countsText(run: DesignRun, system: UnitSystem, showTiming = fals
   const r = run.result;
   const lines: string[] = [];
   lines.push(`Searched ${r.cells} combinations of material, wire, ends and coil count (${run.problem.stock.length} wire stock items) with the ${r.strategy} strategy: ${r.evaluations} candidate evaluations${showTiming ? ` in ${sig(run.searchMs, 3)} ms` : ''}.`);
-  const skipped = run.req.bestPerWire ? 'could not beat the best found for its wire' : `could not enter the top ${run.req.top}`;
+  const skipped = `could not enter the top ${run.req.top}`;
   lines.push(`Feasible combinations: ${r.feasibleCells}${r.prunedCells ? `; ${r.prunedCells} skipped because their lightest possible spring ${skipped}` : ''}.`);
   const cut = reportedChecks(run.req).filter((c) => r.cutBy[c] > 0).map((c) => [c, String(r.cutBy[c]), CHECK_LABELS[c as CheckName]]);
   if (cut.length) {
@@ -290,12 +294,19 @@ export function countsText(run: DesignRun, system: UnitSystem, showTiming = fals
   return lines.join('\n');
 }
 
+/** What each row of the grouped list stands for, in the header. */
+function groupedHeader(run: DesignRun): string {
+  const total = run.result.feasibleCells;
+  const rows = run.candidates.length;
+  return `; the best spring of each material, wire size and end type: ${rows} row${rows === 1 ? '' : 's'} for ${total} feasible spring${total === 1 ? '' : 's'} (column "of": the feasible coil counts each row stands for; --variants lists them all)`;
+}
+
 export function designText(run: DesignRun, system: UnitSystem, showTiming = false): string {
   const out: string[] = [];
   const req = run.req;
   out.push(`Spring design: ${formatQuantity(req.workingForce, 'force', system)} at ${formatQuantity(req.workingLength, 'length', system)}` +
     (req.operatingLength !== undefined ? `, stroke to ${formatQuantity(req.operatingLength, 'length', system)}${req.operatingForce !== undefined ? ` at ${formatQuantity(req.operatingForce, 'force', system)}` : ''}` : '') +
-    `; ranked by ${req.rank.replace('_', ' ')}${req.bestPerWire ? ', the best spring of each material and wire size' : ''}`);
+    `; ranked by ${req.rank.replace('_', ' ')}${run.grouped ? groupedHeader(run) : req.bestPerWire ? ', the best springs the genetic search found (not grouped)' : ', every feasible spring (--variants)'}`);
   if (req.strengthBasis === 'minimum') out.push(strengthBasisSummary(req.materials));
   out.push('');
   if (run.candidates.length) {

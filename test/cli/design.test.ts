@@ -21,7 +21,7 @@ describe('coilfront design', () => {
   });
 
   it('--json gives SI candidates with every documented field, best first, within the envelope', async () => {
-    const r = await cli('design', demo, '--json');
+    const r = await cli('design', demo, '--json', '--variants');
     expect(r.code).toBe(0);
     expect(r.stdout).not.toMatch(/NaN|Infinity/);
     const j = JSON.parse(r.stdout);
@@ -89,7 +89,7 @@ wire_sizes: metric
 coil_step: 0.5
 top: 6
 `);
-    const all = JSON.parse((await cli('design', req, '--json')).stdout);
+    const all = JSON.parse((await cli('design', req, '--json', '--variants')).stdout);
     const per = JSON.parse((await cli('design', req, '--json', '--per-wire')).stdout);
     const keys = per.candidates.map((c: { material: string; wire_diameter: number }) => `${c.material}@${c.wire_diameter}`);
     expect(new Set(keys).size).toBe(keys.length);

@@ -114,7 +114,7 @@ describe('confirming the reported springs by the Monte Carlo', () => {
   }, 60_000);
 
   it('without min_yield every spring is listed with its yield at grade 2; the edge spring of the demo makes under half', () => {
-    const run = confirmRun(runDesign(demo({ top: 3 })), tc, 5000);
+    const run = confirmRun(runDesign(demo({ top: 3, variants: true })), tc, 5000);
     expect(run.candidates).toHaveLength(3);
     expect(run.refused).toEqual([]);
     expect(run.yields![0].monteCarlo.yield).toBeLessThan(0.5);
@@ -123,7 +123,7 @@ describe('confirming the reported springs by the Monte Carlo', () => {
   });
 
   it('with min_yield 0.99 the listed springs are confirmed within their standard error, or refused and moved out', () => {
-    const run = confirmRun(runDesign(demo({ min_yield: 0.99, top: 5 })), tc);
+    const run = confirmRun(runDesign(demo({ min_yield: 0.99, top: 5, variants: true })), tc);
     for (const y of run.yields!) expect(y.monteCarlo.yield).toBeGreaterThanOrEqual(0.99 - y.monteCarlo.standardError);
     for (const r of run.refused!) expect(r.yield.monteCarlo.yield).toBeLessThan(0.99 - r.yield.monteCarlo.standardError);
     expect(run.candidates.length + run.refused!.length).toBe(5);

@@ -7,6 +7,7 @@ import { termination, type Termination } from '../../search/termination.js';
 import { gridSearch } from '../../search/grid.js';
 import { valueCount } from '../../search/problem.js';
 import type { SearchResult } from '../../search/result.js';
+import { bestPerGroup } from './variants.js';
 import { CHECKS, activeChecks, checkAnalysis } from './verify.js';
 import { Objective } from './objectives.js';
 import { lpLowerBound, type LpBound } from './lpBound.js';
@@ -36,6 +37,8 @@ export interface DesignOptions {
 }
 
 export interface Candidate {
+  /** In the grouped list: how many feasible springs (coil counts) of its material, wire size and end type this one stands for. */
+  variants?: number;
   item: StockItem;
   geometry: SpringGeometry;
   analysis: SpringAnalysis;
@@ -54,6 +57,8 @@ export interface DesignRun {
   cells: number;
   searchMs: number;
   document?: unknown;
+  /** The list holds the best spring of each material, wire size and end type (candidates carry `variants`). */
+  grouped?: boolean;
   /** Per candidate, its yield at the tolerances (set by confirmRun: the design command and API). */
   yields?: CandidateYield[];
   /** Springs the estimate admitted under min_yield that the Monte Carlo refused. */
@@ -87,10 +92,12 @@ export const AUTO_GRID_CELL_LIMIT = LIMITS.gridCombinations;
  * work is its evaluation budget, whatever the size of the space. */
 export function chooseStrategy(req: Requirements, problem: SpringProblem, opts: Pick<DesignOptions, 'strategy' | 'gridReason'>): 'grid' | 'genetic' {
   const cells = cellCount(problem);
-  // The best spring per wire size needs every wire looked at: that is the grid's job.
-  const strategy = !req.bestPerWire && (opts.strategy === 'genetic' || (opts.strategy !== 'grid' && cells > AUTO_GRID_CELL_LIMIT)) ? 'genetic' : 'grid';
+  // The best spring of each material, wire size and end type needs every cell looked at: that is the
+  // grid's job (an explicit --strategy genetic lists the best springs it finds instead).
+  const grouping = req.bestPerWire && opts.strategy !== 'genetic';
+  const strategy = !grouping && (opts.strategy === 'genetic' || (opts.strategy !== 'grid' && cells > AUTO_GRID_CELL_LIMIT)) ? 'genetic' : 'grid';
   if (strategy === 'grid' && cells > LIMITS.gridCombinations) {
-    const why = opts.gridReason ?? (req.bestPerWire ? 'best_per_wire looks at every wire size' : opts.strategy === 'grid' ? 'asked for by --strategy grid' : 'this command looks at every combination');
+    const why = opts.gridReason ?? (grouping ? 'the best spring of each material, wire size and end type needs every combination looked at (--variants or --strategy genetic lists the best found instead)' : opts.strategy === 'grid' ? 'asked for by --strategy grid' : 'this command looks at every combination');
     const sizes = problem.stock.length;
     const refusal = gridWorkError(req, why, { sizes, coilCounts: Math.round(cells / Math.max(1, sizes * req.ends.length)), combinations: cells });
     if (refusal) throw refusal;
@@ -101,6 +108,8 @@ export function chooseStrategy(req: Requirements, problem: SpringProblem, opts: 
 export function runDesign(req: Requirements, opts: DesignOptions = {}): DesignRun {
   const problem = opts.problem ?? buildSpringProblem(req);
   const cells = cellCount(problem);
+  // An explicit genetic search lists its best springs as found (grouping needs every cell looked at).
+  const grouped = req.bestPerWire && !opts.collectAll && opts.strategy !== 'genetic';
   const strategy = chooseStrategy(req, problem, opts);
   // The LP bound comes first: the genetic search stops once its incumbent reaches it.
   const lp: LpBound = opts.skipBound ? { value: null, status: 'not-applicable', models: 0 } : lpLowerBound(problem);
@@ -108,14 +117,21 @@ export function runDesign(req: Requirements, opts: DesignOptions = {}): DesignRu
   const result = problem.stock.length === 0
     ? emptyResult()
     : strategy === 'grid'
-      ? gridSearch(problem, { top: req.top, collectAll: opts.collectAll, everyFeasiblePoint: opts.everyFeasiblePoint, maxScanPoints: 40, onProgress: opts.onProgress, bestPerValueOf: req.bestPerWire && !opts.collectAll ? 0 : undefined })
+      ? gridSearch(problem, { top: req.top, collectAll: opts.collectAll || grouped, everyFeasiblePoint: opts.everyFeasiblePoint, maxScanPoints: 40, onProgress: opts.onProgress })
       : geneticSearch(problem, { seed: req.seed, maxEvaluations: 0, top: req.top, termination: geneticTermination(opts.maxEvaluations ?? LIMITS.geneticEvaluations, lp.value) });
   const searchMs = performance.now() - t0;
-  const candidates = result.best.map((b) => candidateAt(problem, b.x, b.f));
+  // Grouped: the best of each material, wire size and end type, each with the count of feasible springs
+  // (coil counts) it stands for; the cloud is dropped again (nobody asked for it).
+  const groups = grouped && result.cloud ? bestPerGroup(result.cloud, req.top) : null;
+  if (groups) {
+    result.best = groups.map((g) => g.best);
+    result.cloud = null;
+  }
+  const candidates = result.best.map((b, i) => ({ ...candidateAt(problem, b.x, b.f), ...(groups ? { variants: groups[i].feasible } : {}) }));
   candidates.forEach(assertVerified);
   const bestValue = candidates.length ? (req.rank === 'mass' ? candidates[0].objectives[Objective.mass] : candidates[0].objectives[Objective.wire_volume]) : NaN;
   const gap = lp.value !== null && Number.isFinite(bestValue) ? (bestValue - lp.value) / bestValue : null;
-  return { req, problem, result, candidates, lp, gap, cells, searchMs, document: opts.document };
+  return { req, problem, result, candidates, lp, gap, cells, searchMs, document: opts.document, grouped: groups !== null };
 }
 
 /** When the genetic search of a design stops: its budget spent; 60% of its budget spent without a

@@ -64,7 +64,7 @@ export interface Requirements {
   solidSafe: boolean;
   /** The spring runs over a rod or in a bore that keeps it from buckling: the buckling check is off. */
   guided: boolean;
-  /** List the best spring of each material and wire size instead of the overall best ones. */
+  /** List the best spring of each material, wire size and end type (the default) instead of every feasible variant. */
   bestPerWire: boolean;
   rank: RankKey;
   top: number;
@@ -256,7 +256,9 @@ export function readRequirements(raw: unknown, catalog: Catalog): Requirements {
     gapRule: f.bool('coil_gap_rule') ?? false,
     solidSafe: f.bool('solid_safe') ?? false,
     guided: f.bool('guided') ?? false,
-    bestPerWire: f.bool('best_per_wire') ?? false,
+    // The ranked list holds the best spring of each material, wire size and end type unless `variants`
+    // asks for every feasible spring (best_per_wire: false, the older spelling, means the same).
+    bestPerWire: !(f.bool('variants') ?? (f.bool('best_per_wire') === false)),
     rank: (f.choice('rank', RANK_KEYS) ?? DEFAULTS.rank) as RankKey,
     top: f.number('top', { integer: true, positive: true, max: 1000 }) ?? DEFAULTS.top,
     seed: f.number('seed', { integer: true, min: -Number.MAX_SAFE_INTEGER, max: Number.MAX_SAFE_INTEGER }) ?? DEFAULTS.seed,

@@ -48,9 +48,9 @@ describe('a requirement-level allowable_stress', () => {
     expect(rows.length).toBeGreaterThan(0);
     for (const row of rows) {
       const cells = row.trim().split(/\s+/);
-      // Counted from the end: ... tau max, SF static, SF fatigue, mass, yield, yield limited by.
-      const tauPsi = Number(cells[cells.length - 6]);
-      const sf = Number(cells[cells.length - 5]);
+      // Counted from the end: ... tau max, SF static, SF fatigue, mass, yield, yield limited by, of.
+      const tauPsi = Number(cells[cells.length - 7]);
+      const sf = Number(cells[cells.length - 6]);
       expect(sf).toBeCloseTo((90000 / tauPsi), 2);
     }
     // The catalog allowable of this wire (0.35 Sut, about 92.3 kpsi) must not appear; 90 kpsi does.

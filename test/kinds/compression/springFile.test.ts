@@ -103,7 +103,7 @@ describe('design --spring-file and --pick', () => {
   const dir = mkdtempSync(join(tmpdir(), 'coilfront-springfile-'));
   it('writes the picked spring, which analyze reads and check passes', async () => {
     const out = join(dir, 'second.yaml');
-    const r = await cli('design', 'examples/washer-trigger.yaml', '--spring-file', out, '--pick', '2', '--json');
+    const r = await cli('design', 'examples/washer-trigger.yaml', '--variants', '--spring-file', out, '--pick', '2', '--json');
     expect(r.code).toBe(0);
     const listed = JSON.parse(r.stdout).candidates[1];
     const doc = parse(readFileSync(out, 'utf8'));
@@ -133,7 +133,7 @@ describe('design --spring-file and --pick', () => {
 
   it('refuses a --pick beyond the list, or without a file to write, naming --pick; nothing written', async () => {
     const out = join(dir, 'far.yaml');
-    const r = await cli('design', 'examples/washer-trigger.yaml', '--spring-file', out, '--pick', '11');
+    const r = await cli('design', 'examples/washer-trigger.yaml', '--variants', '--spring-file', out, '--pick', '11');
     expect(r.code).toBe(2);
     expect(r.stderr).toMatch(/--pick.*1 to 10/);
     expect(existsSync(out)).toBe(false);
