@@ -94,8 +94,9 @@ export function chooseStrategy(req: Requirements, problem: SpringProblem, opts: 
   const cells = cellCount(problem);
   // The best spring of each material, wire size and end type needs every cell looked at: that is the
   // grid's job (an explicit --strategy genetic lists the best springs it finds instead).
+  // Past the grid's size the genetic search runs and its best springs are listed as found.
   const grouping = req.bestPerWire && opts.strategy !== 'genetic';
-  const strategy = !grouping && (opts.strategy === 'genetic' || (opts.strategy !== 'grid' && cells > AUTO_GRID_CELL_LIMIT)) ? 'genetic' : 'grid';
+  const strategy = opts.strategy === 'genetic' || (opts.strategy !== 'grid' && cells > AUTO_GRID_CELL_LIMIT) ? 'genetic' : 'grid';
   if (strategy === 'grid' && cells > LIMITS.gridCombinations) {
     const why = opts.gridReason ?? (grouping ? 'the best spring of each material, wire size and end type needs every combination looked at (--variants or --strategy genetic lists the best found instead)' : opts.strategy === 'grid' ? 'asked for by --strategy grid' : 'this command looks at every combination');
     const sizes = problem.stock.length;
@@ -108,9 +109,9 @@ export function chooseStrategy(req: Requirements, problem: SpringProblem, opts: 
 export function runDesign(req: Requirements, opts: DesignOptions = {}): DesignRun {
   const problem = opts.problem ?? buildSpringProblem(req);
   const cells = cellCount(problem);
-  // An explicit genetic search lists its best springs as found (grouping needs every cell looked at).
-  const grouped = req.bestPerWire && !opts.collectAll && opts.strategy !== 'genetic';
   const strategy = chooseStrategy(req, problem, opts);
+  // A genetic search lists its best springs as found (grouping needs every cell looked at).
+  const grouped = req.bestPerWire && !opts.collectAll && strategy === 'grid';
   // The LP bound comes first: the genetic search stops once its incumbent reaches it.
   const lp: LpBound = opts.skipBound ? { value: null, status: 'not-applicable', models: 0 } : lpLowerBound(problem);
   const t0 = performance.now();
