@@ -94,9 +94,11 @@ export function chooseStrategy(req: Requirements, problem: SpringProblem, opts: 
   const cells = cellCount(problem);
   // The best spring of each material, wire size and end type needs every cell looked at: that is the
   // grid's job (an explicit --strategy genetic lists the best springs it finds instead).
-  // Past the grid's size the genetic search runs and its best springs are listed as found.
+  // Past the grid's size the default grouped list gives way to the genetic search (its best springs
+  // listed as found); a grouped list asked for in so many words (--per-wire) forces the grid.
   const grouping = req.bestPerWire && opts.strategy !== 'genetic';
-  const strategy = opts.strategy === 'genetic' || (opts.strategy !== 'grid' && cells > AUTO_GRID_CELL_LIMIT) ? 'genetic' : 'grid';
+  const forced = opts.strategy === 'grid' || (grouping && req.bestPerWireAsked === true);
+  const strategy = opts.strategy === 'genetic' || (!forced && cells > AUTO_GRID_CELL_LIMIT) ? 'genetic' : 'grid';
   if (strategy === 'grid' && cells > LIMITS.gridCombinations) {
     const why = opts.gridReason ?? (grouping ? 'the best spring of each material, wire size and end type needs every combination looked at (--variants or --strategy genetic lists the best found instead)' : opts.strategy === 'grid' ? 'asked for by --strategy grid' : 'this command looks at every combination');
     const sizes = problem.stock.length;

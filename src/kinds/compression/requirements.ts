@@ -66,6 +66,9 @@ export interface Requirements {
   guided: boolean;
   /** List the best spring of each material, wire size and end type (the default) instead of every feasible variant. */
   bestPerWire: boolean;
+  /** The grouped list was asked for in so many words (best_per_wire: true, --per-wire): the grid must
+   * run, and a space past its size is refused rather than handed to the genetic search. */
+  bestPerWireAsked?: boolean;
   rank: RankKey;
   top: number;
   seed: number;
@@ -259,6 +262,7 @@ export function readRequirements(raw: unknown, catalog: Catalog): Requirements {
     // The ranked list holds the best spring of each material, wire size and end type unless `variants`
     // asks for every feasible spring (best_per_wire: false, the older spelling, means the same).
     bestPerWire: !(f.bool('variants') ?? (f.bool('best_per_wire') === false)),
+    bestPerWireAsked: f.bool('best_per_wire') === true && f.bool('variants') !== true,
     rank: (f.choice('rank', RANK_KEYS) ?? DEFAULTS.rank) as RankKey,
     top: f.number('top', { integer: true, positive: true, max: 1000 }) ?? DEFAULTS.top,
     seed: f.number('seed', { integer: true, min: -Number.MAX_SAFE_INTEGER, max: Number.MAX_SAFE_INTEGER }) ?? DEFAULTS.seed,
