@@ -36,7 +36,8 @@ export function requirementsDocument(req: Requirements): Record<string, unknown>
     coil_gap_rule: req.gapRule,
     solid_safe: req.solidSafe,
     guided: req.guided,
-    best_per_wire: req.bestPerWire,
+    // The grouped list is the default: written only when asked for (it then forces the grid) or turned off.
+    ...(req.bestPerWireAsked ? { best_per_wire: true } : req.bestPerWire ? {} : { best_per_wire: false }),
     rank: req.rank,
     top: req.top,
     seed: req.seed,
