@@ -4,7 +4,7 @@ import { readFileSync, existsSync } from 'node:fs';
 import { dirname, join, resolve } from 'node:path';
 import { fileURLToPath } from 'node:url';
 import { parse as parseYaml } from 'yaml';
-import { Fields, isRecord } from '../input/fields.js';
+import { Fields, isRecord } from '../units/fields.js';
 import { InputError } from '../units/parse.js';
 import type { Catalog, Family, Material, ModulusBand, StrengthLaw, WireSeries } from './types.js';
 import { FAMILIES } from './types.js';

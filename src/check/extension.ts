@@ -5,7 +5,7 @@
 // fixes that force, so it is checked, not solved), a material the requirement allows, and the loop type
 // the requirement names.
 import type { Catalog } from '../catalogs/types.js';
-import { isRecord } from '../input/fields.js';
+import { isRecord } from '../units/fields.js';
 import { analyzeExtension, extensionWarnings, type ExtensionAnalysis } from '../kinds/extension/analysis.js';
 import { EXTENSION_CAUTION } from '../kinds/extension/analysis.js';
 import { EXTENSION_CHECKS, EXTENSION_CHECK_LABELS, activeExtensionChecks, checkExtension, extensionService, type ExtensionCheck } from '../kinds/extension/checks.js';

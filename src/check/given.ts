@@ -8,7 +8,7 @@ import type { Requirements } from '../kinds/compression/requirements.js';
 import { materialFigures, type MaterialChoice } from '../input/material.js';
 import type { MaterialFigures, ServiceConditions, SpringGeometry } from '../kinds/compression/analysis.js';
 import { springServiceConditions } from '../kinds/compression/problem.js';
-import { isRecord } from '../input/fields.js';
+import { isRecord } from '../units/fields.js';
 
 export interface GivenSpring {
   choice: MaterialChoice;

@@ -3,7 +3,7 @@
 // what `coilfront check --json` prints.
 import { loadCatalog } from '../catalogs/load.js';
 import type { Catalog } from '../catalogs/types.js';
-import { isRecord } from '../input/fields.js';
+import { isRecord } from '../units/fields.js';
 import { readRequirements, type Requirements } from '../kinds/compression/requirements.js';
 import { readSpringCase } from '../kinds/compression/springFile.js';
 import { sanitize } from '../report/json.js';

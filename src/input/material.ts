@@ -7,7 +7,7 @@ import type { MaterialFigures } from '../model/figures.js';
 import { staticAllowable } from '../model/strength.js';
 import { InputError } from '../units/parse.js';
 import type { UnitSystem } from '../units/systems.js';
-import { Fields, isRecord } from './fields.js';
+import { Fields, isRecord } from '../units/fields.js';
 
 /** Which tensile strength the figures use: the published law of the catalog (default), or the wire
  * standard's tabulated minimum where the catalog holds one. */

@@ -3,7 +3,7 @@
 // is validated, so an override meets the same checks and messages as the file.
 import { parse } from 'yaml';
 import { decimal, InputError } from '../units/parse.js';
-import { isRecord } from './fields.js';
+import { isRecord } from '../units/fields.js';
 
 /** The value that removes a setting: `--set envelope.max_free_length=none`. An empty value is refused
  * (a stray `--set key=` must not silently drop a limit). */

@@ -2,7 +2,7 @@
 // "Music wire", the catalog says stainless-302 and music-wire. `material_map` in the requirements
 // maps one to the other; a word that is a catalog id needs no entry.
 import type { Catalog } from '../catalogs/types.js';
-import { isRecord } from '../input/fields.js';
+import { isRecord } from '../units/fields.js';
 import { lookupMaterial } from '../input/material.js';
 import { InputError } from '../units/parse.js';
 

@@ -6,7 +6,7 @@ import { join } from 'node:path';
 import { parse as parseYaml } from 'yaml';
 import { CatalogError, catalogDirectory } from '../catalogs/load.js';
 import { FAMILIES, type Family } from '../catalogs/types.js';
-import { Fields } from '../input/fields.js';
+import { Fields } from '../units/fields.js';
 import { InputError, parseQuantity } from '../units/parse.js';
 
 export const GRADES = [1, 2, 3] as const;

@@ -29,7 +29,6 @@ function layerOf(unit: string): number {
 
 /** Upward imports that exist today, unit -> unit, and the way out of each. */
 const UPWARD_DEBTS: Record<string, string> = {
-  'catalogs -> input': 'catalogs/load.ts reads YAML with input/fields.ts: the field reader belongs below both',
   'kinds/compression -> tolerance': 'min_yield in the search and the spec sheet: tolerance is compression physics, it moves into the kind',
   'kinds/compression -> report': 'the compression report sections still live in src/report/: they move into the kind',
   'kinds/extension -> report': 'the extension report sections import the shared text table and JSON helpers in src/report/: those move below kinds',

@@ -1,6 +1,6 @@
 // The tolerance fields of a requirements file: tolerance_grade, tolerances { ... }, min_yield.
 import { describe, expect, it } from 'vitest';
-import { Fields } from '../../src/input/fields.js';
+import { Fields } from '../../src/units/fields.js';
 import { readToleranceRequirements } from '../../src/tolerance/request.js';
 
 const read = (doc: Record<string, unknown>) => {

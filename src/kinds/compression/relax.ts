@@ -11,7 +11,7 @@
 import type { Catalog } from '../../catalogs/types.js';
 import { FAMILIES } from '../../catalogs/types.js';
 import { loadCatalog } from '../../catalogs/load.js';
-import { isRecord } from '../../input/fields.js';
+import { isRecord } from '../../units/fields.js';
 import { withValue } from '../../input/overrides.js';
 import { readRequirements, type Requirements } from './requirements.js';
 import { SEATINGS, endConditionConstant } from './buckling.js';

@@ -11,7 +11,7 @@ import { END_TYPES, type EndType } from './geometry.js';
 import type { StressCorrection } from '../../model/stressFactor.js';
 import { InputError, parseNumber, parseQuantity } from '../../units/parse.js';
 import type { UnitSystem } from '../../units/systems.js';
-import { Fields, isRecord } from '../../input/fields.js';
+import { Fields, isRecord } from '../../units/fields.js';
 import { applyStrengthBasis, parseMaterialChoice, STRENGTH_BASES, type MaterialChoice, type StrengthBasis } from '../../input/material.js';
 import { SURGE_ENDS, type SurgeEnds } from '../../model/surge.js';
 import { checkMaterialChoice } from '../../input/materialChecks.js';

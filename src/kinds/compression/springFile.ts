@@ -9,7 +9,7 @@ import type { StressCorrection } from '../../model/stressFactor.js';
 import { formatQuantity } from '../../units/format.js';
 import { InputError, parseNumber, parseQuantity } from '../../units/parse.js';
 import type { UnitSystem } from '../../units/systems.js';
-import { Fields } from '../../input/fields.js';
+import { Fields } from '../../units/fields.js';
 import { applyStrengthBasis, materialFigures, parseMaterialChoice, STRENGTH_BASES, strengthRangeNote, type MaterialChoice, type StrengthBasis } from '../../input/material.js';
 import { SURGE_ENDS, type SurgeEnds } from '../../model/surge.js';
 import { checkMaterialChoice } from '../../input/materialChecks.js';

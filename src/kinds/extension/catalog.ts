@@ -7,7 +7,7 @@ import { parse as parseYaml } from 'yaml';
 import { CatalogError, catalogDirectory } from '../../catalogs/load.js';
 import { FAMILIES, type Family, type Material } from '../../catalogs/types.js';
 import type { FiniteLifeTable } from '../../model/fatigue.js';
-import { Fields, isRecord } from '../../input/fields.js';
+import { Fields, isRecord } from '../../units/fields.js';
 import { InputError } from '../../units/parse.js';
 
 export interface StaticAllowables {

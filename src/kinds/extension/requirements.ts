@@ -6,7 +6,7 @@ import { findSeries } from '../../catalogs/load.js';
 import { FAMILIES, type Catalog } from '../../catalogs/types.js';
 import { FATIGUE_CRITERIA, type FatigueCriterion } from '../../model/fatigue.js';
 import type { StressCorrection } from '../../model/stressFactor.js';
-import { Fields, isRecord } from '../../input/fields.js';
+import { Fields, isRecord } from '../../units/fields.js';
 import { LIMITS } from '../../input/limits.js';
 import { parseMaterialChoice, type MaterialChoice } from '../../input/material.js';
 import { DEFAULTS } from '../compression/requirements.js';

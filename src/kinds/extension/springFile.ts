@@ -3,7 +3,7 @@
 import type { Catalog } from '../../catalogs/types.js';
 import { FATIGUE_CRITERIA, type FatigueCriterion } from '../../model/fatigue.js';
 import type { StressCorrection } from '../../model/stressFactor.js';
-import { Fields } from '../../input/fields.js';
+import { Fields } from '../../units/fields.js';
 import { LIMITS } from '../../input/limits.js';
 import { parseMaterialChoice, strengthRangeNote, type MaterialChoice } from '../../input/material.js';
 import { parseCycles } from '../compression/springFile.js';

@@ -1,9 +1,11 @@
-// Reading fields of a parsed YAML/JSON object with one clear message per mistake: the message names
-// the field by its full path and says what was expected. Unknown keys are mistakes too (a misspelt
-// key silently ignored is how a spring ends up designed for the wrong load).
-import { InputError, parseFraction, parseNumber, parseQuantity, type QuantityRule } from '../units/parse.js';
-import type { Kind } from '../units/kinds.js';
-import type { UnitSystem } from '../units/systems.js';
+// Reading the fields of a parsed YAML/JSON document (requirements, spring files, catalogs, tables)
+// with one clear message per mistake: the message names the field by its full path and says what was
+// expected. Unknown keys are mistakes too (a misspelt key silently ignored is how a spring ends up
+// designed for the wrong load). It sits with the units, below the catalogs and the input readers that
+// both use it: a field is read as a quantity in the document's unit system.
+import { InputError, parseFraction, parseNumber, parseQuantity, type QuantityRule } from './parse.js';
+import type { Kind } from './kinds.js';
+import type { UnitSystem } from './systems.js';
 
 export type Raw = Record<string, unknown>;
 
