@@ -36,7 +36,6 @@ const UPWARD_DEBTS: Record<string, string> = {
 
 /** Imports from one kind into another that exist today, and the way out. */
 const ACROSS_DEBTS: Record<string, string> = {
-  'kinds/extension -> kinds/compression': 'extension requirements take the compression DEFAULTS and parseCycles: the shared defaults and the cycles reader move below the kinds (src/input/)',
 };
 
 /** File cycles that exist today (sorted members joined by ' | '), and the way out of each. */

@@ -16,7 +16,8 @@ import { applyStrengthBasis, parseMaterialChoice, STRENGTH_BASES, type MaterialC
 import { SURGE_ENDS, type SurgeEnds } from '../../model/surge.js';
 import { checkMaterialChoice } from '../../input/materialChecks.js';
 import { LIMITS } from '../../input/limits.js';
-import { parseCycles } from './springFile.js';
+import { parseCycles } from '../../input/cycles.js';
+import { DEFAULTS } from '../../input/defaults.js';
 import { readToleranceRequirements } from '../../tolerance/request.js';
 import type { ToleranceRequest } from '../../tolerance/model.js';
 
@@ -80,19 +81,15 @@ export interface Requirements {
   minYield?: number;
 }
 
-export const DEFAULTS = {
+/** The shared defaults (src/input/defaults.ts) and those of compression springs. */
+export const COMPRESSION_DEFAULTS = {
+  ...DEFAULTS,
   ends: 'squared-ground' as EndType,
   seating: 'fixed-fixed' as Seating,
-  loadTolerance: 0,
   activeCoils: [3, 30] as [number, number],
   coilStep: 0.25,
-  index: [4, 12] as [number, number],
-  safety: { static: 1.2, fatigue: 1.5, surge: 15 },
   clashAllowance: 0.15,
-  rank: 'mass' as RankKey,
-  top: 10,
-  seed: 1,
-  diameterResolution: 0.01,
+  rank: DEFAULTS.rank as RankKey,
 };
 
 
@@ -171,7 +168,7 @@ export function readRequirements(raw: unknown, catalog: Catalog): Requirements {
 
   const endsRaw = f.get('ends');
   if (Array.isArray(endsRaw) && endsRaw.length === 0) throw new InputError('ends', `one end type or a non-empty list of them (${END_TYPES.join(' | ')})`, endsRaw);
-  const ends: EndType[] = endsRaw === undefined ? [DEFAULTS.ends]
+  const ends: EndType[] = endsRaw === undefined ? [COMPRESSION_DEFAULTS.ends]
     : (Array.isArray(endsRaw) ? endsRaw : [endsRaw]).map((e, i) => {
       if (typeof e !== 'string' || !(END_TYPES as readonly string[]).includes(e)) throw new InputError(Array.isArray(endsRaw) ? `ends[${i}]` : 'ends', `one of ${END_TYPES.join(' | ')}`, e);
       return END_TYPES[(END_TYPES as readonly string[]).indexOf(e)];
@@ -220,13 +217,13 @@ export function readRequirements(raw: unknown, catalog: Catalog): Requirements {
 
   checkWireSizes(materials, wireSizes, wsRaw, system);
 
-  const activeCoils = pair(f, 'active_coils', DEFAULTS.activeCoils, { min: LIMITS.activeCoils[0], max: LIMITS.activeCoils[1] });
-  const coilStep = f.number('coil_step', { min: LIMITS.coilStep[0], max: LIMITS.coilStep[1] }) ?? DEFAULTS.coilStep;
-  const index = pair(f, 'index', DEFAULTS.index, { positive: true, max: LIMITS.indexMax });
+  const activeCoils = pair(f, 'active_coils', COMPRESSION_DEFAULTS.activeCoils, { min: LIMITS.activeCoils[0], max: LIMITS.activeCoils[1] });
+  const coilStep = f.number('coil_step', { min: LIMITS.coilStep[0], max: LIMITS.coilStep[1] }) ?? COMPRESSION_DEFAULTS.coilStep;
+  const index = pair(f, 'index', COMPRESSION_DEFAULTS.index, { positive: true, max: LIMITS.indexMax });
   if (index[0] <= 1) throw new InputError('index[0]', 'a spring index above 1', index[0]);
 
   const safetyRaw = f.get('safety');
-  const safety = { ...DEFAULTS.safety };
+  const safety = { ...COMPRESSION_DEFAULTS.safety };
   if (safetyRaw !== undefined && safetyRaw !== null) {
     const sf = Fields.of(safetyRaw, 'safety', system);
     safety.static = sf.number('static', { min: LIMITS.safetyMin, max: LIMITS.safetyMax }) ?? safety.static;
@@ -236,10 +233,10 @@ export function readRequirements(raw: unknown, catalog: Catalog): Requirements {
   }
   const req: Requirements = {
     system, materials, strengthBasis, ends,
-    seating: (f.choice('seating', SEATINGS) ?? DEFAULTS.seating) as Seating,
+    seating: (f.choice('seating', SEATINGS) ?? COMPRESSION_DEFAULTS.seating) as Seating,
     surgeEnds: (f.choice('surge_ends', SURGE_ENDS) ?? 'plates') as SurgeEnds,
     workingForce, workingLength,
-    loadTolerance: f.fraction('load_tolerance') ?? DEFAULTS.loadTolerance,
+    loadTolerance: f.fraction('load_tolerance') ?? COMPRESSION_DEFAULTS.loadTolerance,
     workingTolerance: f.fraction('working_tolerance'),
     operatingLength, operatingForce,
     maxOuterDiameter, minInnerDiameter, maxFreeLength, maxSolidLength,
@@ -255,7 +252,7 @@ export function readRequirements(raw: unknown, catalog: Catalog): Requirements {
     activeCoils, coilStep, index,
     allowableStress: f.quantity('allowable_stress', 'stress', { positive: true }),
     safety,
-    clashAllowance: f.fraction('clash_allowance', LIMITS.clashAllowanceMax) ?? DEFAULTS.clashAllowance,
+    clashAllowance: f.fraction('clash_allowance', LIMITS.clashAllowanceMax) ?? COMPRESSION_DEFAULTS.clashAllowance,
     gapRule: f.bool('coil_gap_rule') ?? false,
     solidSafe: f.bool('solid_safe') ?? false,
     guided: f.bool('guided') ?? false,
@@ -263,10 +260,10 @@ export function readRequirements(raw: unknown, catalog: Catalog): Requirements {
     // asks for every feasible spring (best_per_wire: false, the older spelling, means the same).
     bestPerWire: !(f.bool('variants') ?? (f.bool('best_per_wire') === false)),
     bestPerWireAsked: f.bool('best_per_wire') === true && f.bool('variants') !== true,
-    rank: (f.choice('rank', RANK_KEYS) ?? DEFAULTS.rank) as RankKey,
-    top: f.number('top', { integer: true, positive: true, max: 1000 }) ?? DEFAULTS.top,
-    seed: f.number('seed', { integer: true, min: -Number.MAX_SAFE_INTEGER, max: Number.MAX_SAFE_INTEGER }) ?? DEFAULTS.seed,
-    diameterResolution: f.quantity('diameter_resolution', 'length', { positive: true }) ?? DEFAULTS.diameterResolution,
+    rank: (f.choice('rank', RANK_KEYS) ?? COMPRESSION_DEFAULTS.rank) as RankKey,
+    top: f.number('top', { integer: true, positive: true, max: 1000 }) ?? COMPRESSION_DEFAULTS.top,
+    seed: f.number('seed', { integer: true, min: -Number.MAX_SAFE_INTEGER, max: Number.MAX_SAFE_INTEGER }) ?? COMPRESSION_DEFAULTS.seed,
+    diameterResolution: f.quantity('diameter_resolution', 'length', { positive: true }) ?? COMPRESSION_DEFAULTS.diameterResolution,
     ...readToleranceRequirements(f),
   };
   if (req.diameterResolution < LIMITS.diameterResolution[0] || req.diameterResolution > LIMITS.diameterResolution[1]) {

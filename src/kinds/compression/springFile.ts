@@ -7,13 +7,14 @@ import { END_TYPES, inactiveCoils, solidLength, type EndType } from './geometry.
 import { springRate } from '../../model/rate.js';
 import type { StressCorrection } from '../../model/stressFactor.js';
 import { formatQuantity } from '../../units/format.js';
-import { InputError, parseNumber, parseQuantity } from '../../units/parse.js';
+import { InputError, parseQuantity } from '../../units/parse.js';
 import type { UnitSystem } from '../../units/systems.js';
 import { Fields } from '../../units/fields.js';
 import { applyStrengthBasis, materialFigures, parseMaterialChoice, STRENGTH_BASES, strengthRangeNote, type MaterialChoice, type StrengthBasis } from '../../input/material.js';
 import { SURGE_ENDS, type SurgeEnds } from '../../model/surge.js';
 import { checkMaterialChoice } from '../../input/materialChecks.js';
 import { LIMITS } from '../../input/limits.js';
+import { parseCycles } from '../../input/cycles.js';
 
 export interface SpringCase {
   system: UnitSystem;
@@ -23,15 +24,6 @@ export interface SpringCase {
   service: ServiceConditions;
   setRemoved: boolean;
   notes: string[];
-}
-
-export function parseCycles(raw: unknown, field: string): number | undefined {
-  if (raw === undefined || raw === null) return undefined;
-  if (raw === 'infinite' || raw === 'inf') return Infinity;
-  const n = parseNumber(raw, field, { positive: true });
-  // Beyond 1e15 a count is a slip of the exponent; a life without end is written "infinite".
-  if (n > 1e15) throw new InputError(field, 'a cycle count of at most 1e15, or "infinite"', raw);
-  return n;
 }
 
 export function readSpringCase(raw: unknown, catalog: Catalog): SpringCase {

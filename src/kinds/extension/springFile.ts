@@ -6,7 +6,7 @@ import type { StressCorrection } from '../../model/stressFactor.js';
 import { Fields } from '../../units/fields.js';
 import { LIMITS } from '../../input/limits.js';
 import { parseMaterialChoice, strengthRangeNote, type MaterialChoice } from '../../input/material.js';
-import { parseCycles } from '../compression/springFile.js';
+import { parseCycles } from '../../input/cycles.js';
 import { formatQuantity } from '../../units/format.js';
 import { InputError, parseQuantity } from '../../units/parse.js';
 import type { UnitSystem } from '../../units/systems.js';
