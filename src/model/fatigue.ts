@@ -125,6 +125,18 @@ export function fullyReversedEndurance(point: EndurancePoint, ultimateShear: num
 }
 
 /**
+ * The criterion line itself: the alternating stress it allows at mean stress `mean`, given the fully
+ * reversed endurance Sse (Shigley eqs. 10-28 to 10-30): Goodman Sse (1 - tau_m / Ssu), Gerber
+ * Sse (1 - (tau_m / Ssu)^2), Sines the endurance point's alternating stress whatever the mean. Negative
+ * past Ssu: the caller clips where it draws.
+ */
+export function criterionLimit(mean: number, point: EndurancePoint, ultimateShear: number, sse: number, criterion: FatigueCriterion): number {
+  if (criterion === 'sines') return point.alternating;
+  if (criterion === 'goodman') return sse * (1 - mean / ultimateShear);
+  return sse * (1 - (mean / ultimateShear) ** 2);
+}
+
+/**
  * Alternating-stress strength on the load line of slope r = tau_a / tau_m from the origin.
  * r = Infinity (no mean stress) gives the fully reversed endurance.
  */

@@ -7,8 +7,12 @@ export function springRate(shearModulus: number, wireDiameter: number, meanDiame
   const d2 = wireDiameter * wireDiameter;
   const k = (shearModulus * d2 * d2) / (8 * meanDiameter * meanDiameter * meanDiameter * activeCoils);
   if (!directShear) return k;
-  const c = meanDiameter / wireDiameter;
-  return k / (1 + 1 / (2 * c * c));
+  return k / directShearFactor(meanDiameter / wireDiameter);
+}
+
+/** The factor (1 + 1/(2C^2)) by which the direct-shear energy divides the rate at spring index C. */
+export function directShearFactor(index: number): number {
+  return 1 + 1 / (2 * index * index);
 }
 
 /** Active coils that give rate k: the inverse of springRate without the direct-shear term. */

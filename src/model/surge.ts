@@ -21,3 +21,10 @@ export function surgeFrequency(rate: number, activeMass: number, oneEndFree: boo
   const f = Math.sqrt((rate * 1000) / activeMass);
   return oneEndFree ? f / 4 : f / 2;
 }
+
+/** The surge frequency written as c d / (D^2 Na) (without the direct-shear term): surgeFrequency of
+ * springRate over activeCoilMass with G and rho factored out, for bounds that need it as a monomial.
+ * G in MPa, density in kg/m^3, lengths in mm, c in Hz mm. */
+export function surgeConstant(shearModulus: number, density: number, oneEndFree: boolean): number {
+  return (oneEndFree ? 0.25 : 0.5) * Math.sqrt((4000 * shearModulus) / (8 * Math.PI * Math.PI * density * 1e-9));
+}

@@ -4,7 +4,7 @@ import { loadCatalog } from '../../src/catalogs/load.js';
 import { materialFigures } from '../../src/input/material.js';
 import { analyzeSpring } from '../../src/kinds/compression/analysis.js';
 import {
-  alternatingStrength, endurancePoint, FATIGUE_CRITERIA, fatigueSafetyFactor, fullyReversedEndurance, lifeCurve, repeatedStressEquivalent,
+  alternatingStrength, criterionLimit, endurancePoint, FATIGUE_CRITERIA, fatigueSafetyFactor, fullyReversedEndurance, lifeCurve, repeatedStressEquivalent,
   repeatedStressFraction, ZIMMERLI_PEENED, ZIMMERLI_UNPEENED,
 } from '../../src/model/fatigue.js';
 import { END_TYPES, inactiveCoils, solidLength } from '../../src/kinds/compression/geometry.js';
@@ -42,6 +42,18 @@ describe('fatigue criteria', () => {
 
   it('with no mean stress the limit is the fully reversed endurance (property)', () => {
     for (const c of ['gerber', 'goodman'] as const) expect(alternatingStrength(Infinity, point, ssu, c)).toBeCloseTo(fullyReversedEndurance(point, ssu, c), 9);
+  });
+
+  it('the criterion line the plots draw meets every load line at its alternating strength, passes through the endurance point and starts at Sse (property of the construction)', () => {
+    for (const c of FATIGUE_CRITERIA) {
+      const sse = fullyReversedEndurance(point, ssu, c);
+      expect(criterionLimit(point.mean, point, ssu, sse, c)).toBeCloseTo(point.alternating, 9);
+      expect(criterionLimit(0, point, ssu, sse, c)).toBe(c === 'sines' ? point.alternating : sse);
+      fc.assert(fc.property(fc.double({ min: 0.01, max: 100, noNaN: true }), (r) => {
+        const a = alternatingStrength(r, point, ssu, c);
+        expect(criterionLimit(a / r, point, ssu, sse, c) / a).toBeCloseTo(1, 9);
+      }));
+    }
   });
 });
 

@@ -1,6 +1,6 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import { activeCoilsForRate, springRate } from '../../src/model/rate.js';
+import { activeCoilsForRate, directShearFactor, springRate } from '../../src/model/rate.js';
 
 describe('spring rate k = G d^4 / (8 D^3 Na) (Castigliano; Shigley eq. 10-9)', () => {
   it('music wire 0.092 in, D 0.4705 in, 21 coils, G 11.75 Mpsi gives 48.1 lbf/in (source: Budynas and Nisbett, Shigley 9th ed., Example 10-4, from memory)', () => {
@@ -16,6 +16,13 @@ describe('spring rate k = G d^4 / (8 D^3 Na) (Castigliano; Shigley eq. 10-9)', (
     expect(drop(4)).toBeGreaterThan(0.028);
     expect(drop(4)).toBeLessThan(0.032);
     for (let c = 4.5; c <= 16; c += 0.5) expect(drop(c)).toBeLessThan(drop(c - 0.5));
+  });
+
+  it('the direct-shear rate is the plain rate over directShearFactor(C) = 1 + 1/(2C^2) (Shigley eq. 10-8 derivation; property)', () => {
+    expect(directShearFactor(4)).toBe(1 + 1 / 32);
+    fc.assert(fc.property(fc.double({ min: 0.2, max: 10, noNaN: true }), fc.double({ min: 3, max: 20, noNaN: true }), fc.double({ min: 2, max: 40, noNaN: true }), (d, c, n) => {
+      expect(springRate(79000, d, c * d, n, true) * directShearFactor(c) / springRate(79000, d, c * d, n)).toBeCloseTo(1, 12);
+    }));
   });
 
   it('scales as d^4 / (D^3 Na) (property)', () => {

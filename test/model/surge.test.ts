@@ -2,7 +2,9 @@
 import { describe, expect, it } from 'vitest';
 import { analyzeSpring, type MaterialFigures, type ServiceConditions } from '../../src/kinds/compression/analysis.js';
 import { SEATINGS } from '../../src/kinds/compression/buckling.js';
-import { activeCoilMass, surgeFrequency } from '../../src/model/surge.js';
+import fc from 'fast-check';
+import { springRate } from '../../src/model/rate.js';
+import { activeCoilMass, surgeConstant, surgeFrequency } from '../../src/model/surge.js';
 
 const steel: MaterialFigures = {
   tensileStrength: 1800, allowableStress: 810, shearModulus: 81500, elasticModulus: 206000, density: 7850,
@@ -21,6 +23,14 @@ describe('surge frequency', () => {
     const m = activeCoilMass(1.6, 12, 8, 7850);
     expect(surgeFrequency(k, m, false) / closed).toBeCloseTo(1, 12);
     expect(surgeFrequency(k, m, true) / closed).toBeCloseTo(0.5, 12);
+  });
+
+  it('surgeConstant(G, rho) d / (D^2 Na) is the surge frequency of the same spring, both boundaries (same equations; property)', () => {
+    fc.assert(fc.property(fc.double({ min: 0.2, max: 10, noNaN: true }), fc.double({ min: 3, max: 20, noNaN: true }), fc.double({ min: 2, max: 40, noNaN: true }), fc.boolean(), (d, c, n, oneFree) => {
+      const D = c * d;
+      const f = surgeFrequency(springRate(81500, d, D, n), activeCoilMass(d, D, n, 7850), oneFree);
+      expect((surgeConstant(81500, 7850, oneFree) * d) / (D * D * n) / f).toBeCloseTo(1, 12);
+    }));
   });
 
   it('the boundary is surge_ends (default both ends on plates), whatever the buckling seating', () => {

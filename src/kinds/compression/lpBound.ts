@@ -10,6 +10,8 @@ import { strengthPiece, tensileStrength } from '../../catalogs/properties.js';
 import type { Requirements } from './requirements.js';
 import { inactiveCoils } from './geometry.js';
 import { stressFactor } from '../../model/stressFactor.js';
+import { directShearFactor } from '../../model/rate.js';
+import { surgeConstant } from '../../model/surge.js';
 import { minimiseLinear, type LinearRow } from '../../search/lp.js';
 import { forceBand, shortestLength } from './verify.js';
 import type { SpringProblem, StockItem } from './problem.js';
@@ -104,7 +106,7 @@ export function lpLowerBound(problem: SpringProblem): LpBound {
     }
     // Rate: k = G d^4 / (8 D^3 Na), in [k_lo, k_hi] when the operating force is given; the free-length
     // limit asks k >= F1 / (L0max - L1).
-    const shear = req.directShear ? 1 + 1 / (2 * req.index[0] * req.index[0]) : 1;
+    const shear = req.directShear ? directShearFactor(req.index[0]) : 1;
     let kLo = 0;
     if (req.operatingForce !== undefined && req.operatingLength !== undefined) {
       const travel = req.workingLength - req.operatingLength;
@@ -127,7 +129,7 @@ export function lpLowerBound(problem: SpringProblem): LpBound {
     }
     // Surge: f = c d / (D^2 Na) >= margin * forcing.
     if (req.forcingFrequency) {
-      const c = (req.surgeEnds === 'one-free' ? 0.25 : 0.5) * Math.sqrt((4000 * Gmax) / (8 * Math.PI * Math.PI * rhoMin * 1e-9));
+      const c = surgeConstant(Gmax, rhoMin, req.surgeEnds === 'one-free');
       rows.push({ coefficients: { u: 1, v: -2, w: -1 }, min: Math.log((req.safety.surge * req.forcingFrequency) / c) });
     }
     models++;

@@ -1,6 +1,6 @@
 // The report's plots as SVG strings, drawn from the same figures the CLI prints.
 import type { SpringAnalysis } from '../../kinds/compression/analysis.js';
-import { alternatingStrength, fullyReversedEndurance } from '../../model/fatigue.js';
+import { alternatingStrength, criterionLimit, fullyReversedEndurance } from '../../model/fatigue.js';
 import { inUnit, unitSymbol } from '../../units/format.js';
 import type { UnitSystem } from '../../units/systems.js';
 import { springDrawing } from './springDrawing.js';
@@ -66,12 +66,7 @@ export function fatiguePlot(a: SpringAnalysis, system: UnitSystem): string {
   const line: [number, number][] = [];
   for (let i = 0; i <= 60; i++) {
     const m = (fa.ultimateShear * i) / 60;
-    // The criterion's limit at mean stress m: its alternating strength on the ray through (m, that limit).
-    let lim: number;
-    if (fa.criterion === 'sines') lim = fa.endurance.alternating;
-    else if (fa.criterion === 'goodman') lim = sse * (1 - m / fa.ultimateShear);
-    else lim = sse * (1 - (m / fa.ultimateShear) ** 2);
-    line.push([ax.x(S(m)), ax.y(S(Math.max(0, lim)))]);
+    line.push([ax.x(S(m)), ax.y(S(Math.max(0, criterionLimit(m, fa.endurance, fa.ultimateShear, sse, fa.criterion))))]);
   }
   out.push(polyline(line, 'criterion'));
   out.push(`<circle class="endurance" cx="${r2(ax.x(S(fa.endurance.mean)))}" cy="${r2(ax.y(S(fa.endurance.alternating)))}" r="4"/>`);
