@@ -8,6 +8,7 @@
 // first; then settings (guided, seating, end types, peening, another material); and only when none of
 // those works alone, the best pair of them and, as a last resort, margins (safety factors, never
 // below 1; clash allowance, never below 10%). A safety factor is never advised below 1.
+// Which checks a change eases is the checks registry's to say (relaxedBy in checks.ts).
 import type { Catalog } from '../../catalogs/types.js';
 import { FAMILIES } from '../../catalogs/types.js';
 import { loadCatalog } from '../../catalogs/load.js';
@@ -19,6 +20,7 @@ import { INFINITE_LIFE_CYCLES, STATIC_SERVICE_CYCLES } from '../../model/fatigue
 import { END_TYPES } from './geometry.js';
 import { CHECKS, activeChecks, type CheckName } from './verify.js';
 import { admitsSpring, type DesignRun } from './design.js';
+import { easedBy } from './checks.js';
 import { requirementsDocument } from './requirementsDoc.js';
 
 /** limit: an envelope or duty value; setting: a choice (guided, seating, ends, peening, material);
@@ -117,51 +119,51 @@ function knobs(req: Requirements, doc: Record<string, unknown>, catalog: Catalog
   const active = (c: CheckName) => on[CHECKS.indexOf(c)];
   const out: (Knob | null)[] = [];
   const env = 'envelope.';
-  if (req.maxOuterDiameter !== undefined) out.push(linear(`${env}max_outer_diameter`, 'limit', ['outer_diameter', 'outer_diameter_at_solid'], req.maxOuterDiameter, 1, 2 * req.maxOuterDiameter, 'mm'));
-  if (req.minInnerDiameter !== undefined) out.push(linear(`${env}min_inner_diameter`, 'limit', ['inner_diameter'], req.minInnerDiameter, -1, 0.1 * req.minInnerDiameter, 'mm'));
-  if (req.maxFreeLength !== undefined) out.push(linear(`${env}max_free_length`, 'limit', ['free_length'], req.maxFreeLength, 1, 2 * req.maxFreeLength, 'mm'));
-  if (req.maxSolidLength !== undefined) out.push(linear(`${env}max_solid_length`, 'limit', ['solid_length'], req.maxSolidLength, 1, 2 * req.maxSolidLength, 'mm'));
+  if (req.maxOuterDiameter !== undefined) out.push(linear(`${env}max_outer_diameter`, 'limit', easedBy(`${env}max_outer_diameter`), req.maxOuterDiameter, 1, 2 * req.maxOuterDiameter, 'mm'));
+  if (req.minInnerDiameter !== undefined) out.push(linear(`${env}min_inner_diameter`, 'limit', easedBy(`${env}min_inner_diameter`), req.minInnerDiameter, -1, 0.1 * req.minInnerDiameter, 'mm'));
+  if (req.maxFreeLength !== undefined) out.push(linear(`${env}max_free_length`, 'limit', easedBy(`${env}max_free_length`), req.maxFreeLength, 1, 2 * req.maxFreeLength, 'mm'));
+  if (req.maxSolidLength !== undefined) out.push(linear(`${env}max_solid_length`, 'limit', easedBy(`${env}max_solid_length`), req.maxSolidLength, 1, 2 * req.maxSolidLength, 'mm'));
   if (req.operatingLength !== undefined) {
     // A shorter stroke: the operating length moves toward the working length (it must stay below it).
-    out.push(linear('operating_length', 'limit', ['static_stress', 'fatigue', 'clash', 'buckling'], req.operatingLength, 1, req.operatingLength + 0.9 * (req.workingLength - req.operatingLength), 'mm'));
+    out.push(linear('operating_length', 'limit', easedBy('operating_length'), req.operatingLength, 1, req.operatingLength + 0.9 * (req.workingLength - req.operatingLength), 'mm'));
   }
   if (req.operatingForce !== undefined) {
     const of = req.operatingForce;
-    out.push(linear('operating_force', 'limit', ['static_stress', 'fatigue', 'operating_force_min', 'operating_force_max'], of, -1, req.workingForce + 0.1 * (of - req.workingForce), 'N'));
-    out.push(linear('operating_force', 'limit', ['operating_force_max', 'clash'], of, 1, 2 * of, 'N'));
-    out.push(linear('load_tolerance', 'limit', ['operating_force_min', 'operating_force_max'], req.loadTolerance, 1, 0.5, null, { absolute: true }));
+    out.push(linear('operating_force', 'limit', easedBy('operating_force (lower)'), of, -1, req.workingForce + 0.1 * (of - req.workingForce), 'N'));
+    out.push(linear('operating_force', 'limit', easedBy('operating_force (higher)'), of, 1, 2 * of, 'N'));
+    out.push(linear('load_tolerance', 'limit', easedBy('load_tolerance'), req.loadTolerance, 1, 0.5, null, { absolute: true }));
   }
   if (active('fatigue') && req.cycles !== undefined) {
     // Fewer cycles: log-spaced toward static service; r is the share of the life given up.
     const from = Number.isFinite(req.cycles) ? req.cycles : INFINITE_LIFE_CYCLES;
     if (from > STATIC_SERVICE_CYCLES) {
-      const k = linear('cycles', 'limit', ['fatigue'], from, -1, STATIC_SERVICE_CYCLES, null, { fromRaw: Number.isFinite(req.cycles) ? req.cycles : 'infinite' });
+      const k = linear('cycles', 'limit', easedBy('cycles'), from, -1, STATIC_SERVICE_CYCLES, null, { fromRaw: Number.isFinite(req.cycles) ? req.cycles : 'infinite' });
       if (k) out.push({ ...k, at: (r) => outward(from * (1 - r), -1, 3) });
     }
   }
   const [lo, hi] = req.index;
-  if (lo > 3) out.push(linear('index', 'limit', ['index_min'], lo, -1, 3, null, { raw: (v) => [v, hi], fromRaw: [lo, hi] }));
-  if (hi < 20) out.push(linear('index', 'limit', ['index_max'], hi, 1, 20, null, { raw: (v) => [lo, v], fromRaw: [lo, hi] }));
+  if (lo > 3) out.push(linear('index', 'limit', easedBy('index (lower)'), lo, -1, 3, null, { raw: (v) => [v, hi], fromRaw: [lo, hi] }));
+  if (hi < 20) out.push(linear('index', 'limit', easedBy('index (higher)'), hi, 1, 20, null, { raw: (v) => [lo, v], fromRaw: [lo, hi] }));
   const [nLo, nHi] = req.activeCoils;
-  if (nLo > 2) out.push(linear('active_coils', 'limit', ['solid_length', 'clash'], nLo, -1, 2, null, { raw: (v) => [v, nHi], fromRaw: [nLo, nHi] }));
-  out.push(linear('active_coils', 'limit', ['static_stress', 'fatigue', 'operating_force_min', 'operating_force_max'], nHi, 1, Math.max(3 * nHi, nLo + 1), null, { raw: (v) => [nLo, v], fromRaw: [nLo, nHi] }));
+  if (nLo > 2) out.push(linear('active_coils', 'limit', easedBy('active_coils (lower)'), nLo, -1, 2, null, { raw: (v) => [v, nHi], fromRaw: [nLo, nHi] }));
+  out.push(linear('active_coils', 'limit', easedBy('active_coils (higher)'), nHi, 1, Math.max(3 * nHi, nLo + 1), null, { raw: (v) => [nLo, v], fromRaw: [nLo, nHi] }));
 
   // Settings.
   if (active('buckling')) {
-    out.push({ kind: 'choice', path: 'guided', group: 'setting', eases: ['buckling'], fromRaw: false, toRaw: true });
+    out.push({ kind: 'choice', path: 'guided', group: 'setting', eases: easedBy('guided'), fromRaw: false, toRaw: true });
     const alpha = endConditionConstant(req.seating);
-    for (const s of SEATINGS) if (endConditionConstant(s) < alpha) out.push({ kind: 'choice', path: 'seating', group: 'setting', eases: ['buckling'], fromRaw: req.seating, toRaw: s });
+    for (const s of SEATINGS) if (endConditionConstant(s) < alpha) out.push({ kind: 'choice', path: 'seating', group: 'setting', eases: easedBy('seating'), fromRaw: req.seating, toRaw: s });
   }
   // Any other end type (the run's springs show which one).
   const moreEnds = END_TYPES.filter((e) => !req.ends.includes(e));
-  if (moreEnds.length) out.push({ kind: 'choice', path: 'ends', group: 'setting', eases: ['solid_length', 'clash', 'free_length'], fromRaw: [...req.ends], toRaw: [...req.ends, ...moreEnds] });
-  if (active('fatigue') && !req.peened) out.push({ kind: 'choice', path: 'peened', group: 'setting', eases: ['fatigue'], fromRaw: false, toRaw: true });
+  if (moreEnds.length) out.push({ kind: 'choice', path: 'ends', group: 'setting', eases: easedBy('ends'), fromRaw: [...req.ends], toRaw: [...req.ends, ...moreEnds] });
+  if (active('fatigue') && !req.peened) out.push({ kind: 'choice', path: 'peened', group: 'setting', eases: easedBy('peened'), fromRaw: false, toRaw: true });
   // Another material: the other members of the families chosen, one by one (the closest
   // substitutes), then each other family as a whole.
   const materialNow = doc.material;
   const ids = new Set(req.materials.map((m) => m.material.id));
   const families = new Set(req.materials.map((m) => m.material.family));
-  const eases: CheckName[] = ['static_stress', 'fatigue', 'temperature'];
+  const eases = easedBy('material');
   for (const m of catalog.materials) {
     if (families.has(m.family) && !ids.has(m.id)) out.push({ kind: 'choice', path: 'material', group: 'setting', eases, fromRaw: materialNow, toRaw: m.id });
   }
@@ -171,13 +173,13 @@ function knobs(req: Requirements, doc: Record<string, unknown>, catalog: Catalog
   }
 
   // Margins: last, and never below their floors.
-  if (req.allowableStress === undefined && req.safety.static > 1) out.push(linear('safety.static', 'margin', ['static_stress'], req.safety.static, -1, 1, null));
-  if (active('fatigue') && req.safety.fatigue > 1) out.push(linear('safety.fatigue', 'margin', ['fatigue'], req.safety.fatigue, -1, 1, null));
+  if (req.allowableStress === undefined && req.safety.static > 1) out.push(linear('safety.static', 'margin', easedBy('safety.static'), req.safety.static, -1, 1, null));
+  if (active('fatigue') && req.safety.fatigue > 1) out.push(linear('safety.fatigue', 'margin', easedBy('safety.fatigue'), req.safety.fatigue, -1, 1, null));
   // A surge margin of 1 is resonance; 10 is already below the usual 13 to 20 (common practice).
-  if (active('surge') && req.safety.surge > 10) out.push(linear('safety.surge', 'margin', ['surge'], req.safety.surge, -1, 10, null));
-  if (req.clashAllowance > 0.1) out.push(linear('clash_allowance', 'margin', ['clash'], req.clashAllowance, -1, 0.1, null, { absolute: true }));
-  if (req.solidSafe) out.push({ kind: 'choice', path: 'solid_safe', group: 'margin', eases: ['solid_stress'], fromRaw: true, toRaw: false });
-  if (req.gapRule) out.push({ kind: 'choice', path: 'coil_gap_rule', group: 'margin', eases: ['coil_gaps'], fromRaw: true, toRaw: false });
+  if (active('surge') && req.safety.surge > 10) out.push(linear('safety.surge', 'margin', easedBy('safety.surge'), req.safety.surge, -1, 10, null));
+  if (req.clashAllowance > 0.1) out.push(linear('clash_allowance', 'margin', easedBy('clash_allowance'), req.clashAllowance, -1, 0.1, null, { absolute: true }));
+  if (req.solidSafe) out.push({ kind: 'choice', path: 'solid_safe', group: 'margin', eases: easedBy('solid_safe'), fromRaw: true, toRaw: false });
+  if (req.gapRule) out.push({ kind: 'choice', path: 'coil_gap_rule', group: 'margin', eases: easedBy('coil_gap_rule'), fromRaw: true, toRaw: false });
   return out.filter((k): k is Knob => k !== null);
 }
 

@@ -12,6 +12,7 @@ import { readRequirements, type Requirements } from '../../../src/kinds/compress
 import { requirementsRecord } from '../../../src/report/designReport.js';
 import { admitsSpring, runDesign } from '../../../src/kinds/compression/design.js';
 import { RELAX_LIMITS, limitingCheck, outward, relaxAdvice } from '../../../src/kinds/compression/relax.js';
+import { ADVICE_ORDER, COMPRESSION_CHECKS, easedBy } from '../../../src/kinds/compression/checks.js';
 import { requirementsDocument } from '../../../src/kinds/compression/requirementsDoc.js';
 import { readFileSync } from 'node:fs';
 import { cli, inputFile, tempPath } from '../../helpers.js';
@@ -127,6 +128,37 @@ describe('relax advice', () => {
       expect(inf.relax_runs).toBeLessThanOrEqual(RELAX_LIMITS.maxRuns);
     });
   }
+
+  it('each change eases the checks the checks registry ties to it (relaxedBy), in the advice\'s order', async () => {
+    // A change of operating_force, index or active_coils is named with its way, as relaxedBy names it.
+    const changeOf = (e: Entry): string => {
+      if (!['operating_force', 'index', 'active_coils'].includes(e.path)) return e.path;
+      const first = (v: unknown) => Number(Array.isArray(v) ? v[0] : v);
+      return `${e.path} (${first(e.to) < first(e.from) ? 'lower' : 'higher'})`;
+    };
+    let n = 0;
+    for (const c of cases) {
+      const inf = await infeasible(c.args);
+      for (const e of [...inf.relax, ...(inf.relax_pair ?? [])]) {
+        expect(e.eases, `${c.name}: ${e.set}`).toEqual(easedBy(changeOf(e)));
+        expect(e.eases.length).toBeGreaterThan(0);
+        n++;
+      }
+    }
+    expect(n).toBeGreaterThan(5);
+  });
+
+  it('the advice\'s order of checks names every check once, and relaxedBy names --set paths, with a way where a value eases different checks down and up', () => {
+    expect([...ADVICE_ORDER].sort()).toEqual(COMPRESSION_CHECKS.map((c) => c.name).sort());
+    for (const c of COMPRESSION_CHECKS) {
+      for (const r of c.relaxedBy) {
+        expect(r).toMatch(/^[a-z_]+(\.[a-z_]+)?( \((lower|higher)\))?$/);
+        expect(easedBy(r)).toContain(c.name);
+      }
+    }
+    expect(easedBy('operating_force (lower)')).toContain('static_stress');
+    expect(easedBy('operating_force (higher)')).toEqual(['operating_force_max', 'clash']);
+  });
 
   it('never advises a safety factor below 1, and a margin only when no limit or setting works alone', async () => {
     for (const c of cases) {
