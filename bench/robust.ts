@@ -6,12 +6,12 @@ import { parse } from 'yaml';
 import { loadCatalog } from '../src/catalogs/load.js';
 import { readRequirements } from '../src/kinds/compression/requirements.js';
 import { runDesign } from '../src/kinds/compression/design.js';
-import { loadToleranceCatalog } from '../src/tolerance/catalog.js';
-import { designedSpring } from '../src/tolerance/confirm.js';
-import { yieldChecks } from '../src/tolerance/madeSpring.js';
-import { standardDeviations } from '../src/tolerance/model.js';
-import { monteCarloYield } from '../src/tolerance/monteCarlo.js';
-import { analysisEvaluator, designedTolerances, fastEvaluator, nominalQuantities } from '../src/tolerance/springYield.js';
+import { loadToleranceCatalog } from '../src/kinds/compression/tolerance/catalog.js';
+import { designedSpring } from '../src/kinds/compression/tolerance/confirm.js';
+import { yieldChecks } from '../src/kinds/compression/tolerance/madeSpring.js';
+import { standardDeviations } from '../src/kinds/compression/tolerance/model.js';
+import { monteCarloYield } from '../src/kinds/compression/tolerance/monteCarlo.js';
+import { analysisEvaluator, designedTolerances, fastEvaluator, nominalQuantities } from '../src/kinds/compression/tolerance/springYield.js';
 
 const catalog = loadCatalog();
 const tc = loadToleranceCatalog();

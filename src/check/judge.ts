@@ -9,7 +9,7 @@ import { springServiceConditions } from '../kinds/compression/problem.js';
 import { CHECK, CHECKS, CHECK_LABELS, activeChecks, checkAnalysis, figuresUnder, forceBand, staticLimit, type CheckName } from '../kinds/compression/verify.js';
 import type { EndType } from '../kinds/compression/geometry.js';
 import type { Kind } from '../units/kinds.js';
-import { springYieldFigures, yieldShortfall } from '../tolerance/confirm.js';
+import { springYieldFigures, yieldShortfall } from '../kinds/compression/tolerance/confirm.js';
 import type { WorkingBand } from './band.js';
 import { givenService, type GivenSpring } from './given.js';
 

@@ -12,8 +12,8 @@ import { cautionText } from './cautions.js';
 import { SI_UNITS } from './json.js';
 import { strengthBasisOf, strengthBasisSummary } from '../input/material.js';
 import { table } from './table.js';
-import { tolerancesJson } from '../tolerance/model.js';
-import type { CandidateYield } from '../tolerance/confirm.js';
+import { tolerancesJson } from '../kinds/compression/tolerance/model.js';
+import type { CandidateYield } from '../kinds/compression/tolerance/springYield.js';
 
 /** The yield fields of one candidate in the JSON (SI): the Monte Carlo yield, its samples and standard
  * error, the in-search estimate, the check that limits it, and the +- half-widths it was made to. */

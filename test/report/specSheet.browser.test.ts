@@ -12,8 +12,8 @@ import { loadCatalog } from '../../src/catalogs/load.js';
 import { readRequirements } from '../../src/kinds/compression/requirements.js';
 import { specSheetHtml } from '../../src/report/html/specSheet.js';
 import { runDesign } from '../../src/kinds/compression/design.js';
-import { loadToleranceCatalog } from '../../src/tolerance/catalog.js';
-import { specifySpring } from '../../src/tolerance/specify.js';
+import { loadToleranceCatalog } from '../../src/kinds/compression/tolerance/catalog.js';
+import { specifySpring } from '../../src/kinds/compression/tolerance/specify.js';
 
 const OUT = resolve('test-output');
 const CHROMIUM = '/usr/bin/chromium';

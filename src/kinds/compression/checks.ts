@@ -44,7 +44,7 @@ export const COMPRESSION_CHECKS = [
   { name: 'temperature', label: 'service temperature above the material\'s maximum', trend: always(inc), active: (r) => r.temperature !== undefined, relaxedBy: ['material'] },
   // The share of made springs that pass every other check (min_yield): farther from a limit is better,
   // but a wider coil nears some limits while it leaves others, so the trend is unknown. Judged by the
-  // estimate in the search, confirmed by the Monte Carlo for the reported springs (src/tolerance/confirm.ts).
+  // estimate in the search, confirmed by the Monte Carlo for the reported springs (src/kinds/compression/tolerance/confirm.ts).
   { name: 'yield', label: 'too few made springs pass (yield below min_yield at the tolerances)', trend: always(unk), active: (r) => r.minYield !== undefined, relaxedBy: ['min_yield', 'tolerance_grade'] },
 ] as const satisfies readonly CheckDefinition<Requirements>[];
 

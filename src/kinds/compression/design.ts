@@ -12,7 +12,7 @@ import { CHECKS, activeChecks, checkAnalysis } from './verify.js';
 import { Objective } from './objectives.js';
 import { lpLowerBound, type LpBound } from './lpBound.js';
 import { buildSpringProblem, type SpringProblem, type StockItem } from './problem.js';
-import type { CandidateYield } from '../../tolerance/confirm.js';
+import type { CandidateYield } from './tolerance/springYield.js';
 
 export type StrategyChoice = 'auto' | 'grid' | 'genetic';
 

@@ -8,7 +8,7 @@ import { analysisJson, analysisText } from '../../report/analysisReport.js';
 import { designJson, designText } from '../../report/designReport.js';
 import { candidateAt, runDesign, type Candidate, type DesignRun } from './design.js';
 import { buildSpringProblem } from './problem.js';
-import { confirmRun } from '../../tolerance/confirm.js';
+import { confirmRun } from './tolerance/confirm.js';
 import { springFileText } from './springDoc.js';
 import type { SpringKind } from '../kind.js';
 import { reportFrontier } from './frontier.js';

@@ -20,8 +20,8 @@ import { TREND, type Problem } from '../../search/problem.js';
 import { COMPRESSION_CHECKS, Check } from './checks.js';
 import { OBJECTIVE_SLOTS, Objective, objectiveByKey } from './objectives.js';
 import { CHECKS, activeChecks, figuresUnder, forceBand, shortestLength, staticLimit } from './verify.js';
-import { loadToleranceCatalog, type ToleranceCatalog } from '../../tolerance/catalog.js';
-import { inSearchYield } from '../../tolerance/inSearch.js';
+import { loadToleranceCatalog, type ToleranceCatalog } from './tolerance/catalog.js';
+import { inSearchYield } from './tolerance/inSearch.js';
 
 
 export interface StockItem { choice: MaterialChoice; wireDiameter: number; figures: MaterialFigures }

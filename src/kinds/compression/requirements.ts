@@ -18,8 +18,8 @@ import { checkMaterialChoice } from '../../input/materialChecks.js';
 import { LIMITS } from '../../input/limits.js';
 import { parseCycles } from '../../input/cycles.js';
 import { DEFAULTS } from '../../input/defaults.js';
-import { readToleranceRequirements } from '../../tolerance/request.js';
-import type { ToleranceRequest } from '../../tolerance/model.js';
+import { readToleranceRequirements } from './tolerance/request.js';
+import type { ToleranceRequest } from './tolerance/model.js';
 
 // What may rank the springs is the objectives registry's to say.
 export { RANK_KEYS, type RankKey };

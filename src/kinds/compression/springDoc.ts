@@ -2,7 +2,7 @@
 // so that any spring the search reports can be checked again, independently, by the single-spring path.
 import type { Requirements } from './requirements.js';
 import type { Candidate } from './design.js';
-import { drawnSpring, type DrawnSpring } from '../../tolerance/precision.js';
+import { drawnSpring, type DrawnSpring } from './tolerance/precision.js';
 import { INCH_MM } from '../../units/kinds.js';
 import type { UnitSystem } from '../../units/systems.js';
 import { stringify as stringifyYaml } from 'yaml';
@@ -56,7 +56,7 @@ export interface ExportedSpring {
 }
 
 /**
- * The spring file of a reported spring at drawing precision (src/tolerance/precision.ts): the wire as
+ * The spring file of a reported spring at drawing precision (src/kinds/compression/tolerance/precision.ts): the wire as
  * listed, the controlled diameter (outer in a bore, inner over a rod) to 0.01 mm or 0.001 in, the free
  * length to 0.1 mm or 0.01 in, the coils to the coil step, with the requirement's service conditions.
  * Lengths of the spring are written in the requirement's unit system.

@@ -74,7 +74,7 @@ export function checkAnalysis(a: SpringAnalysis, req: Requirements): Float64Arra
   }
   if (req.temperature !== undefined) set('temperature', (req.temperature - a.material.maxTemperature) / Math.max(Math.abs(a.material.maxTemperature), 1));
   // The yield is a property of the made population, not of this one spring: the search judges it by
-  // its estimate and the reported springs are confirmed by the Monte Carlo (src/tolerance/confirm.ts).
+  // its estimate and the reported springs are confirmed by the Monte Carlo (src/kinds/compression/tolerance/confirm.ts).
   // Here it stays -1 (not judged), so this re-verification is of the nominal spring's checks.
   return g;
 }

@@ -2,7 +2,7 @@
 // cannot hold exactly, read from the tolerance catalog or the user's overrides, and the free-length
 // spread that follows when the maker adjusts the free length to meet the working force at the
 // working length (EN 15800 practice when one force is toleranced). SI inside: mm, MPa, N, coils.
-import type { Material } from '../catalogs/types.js';
+import type { Material } from '../../../catalogs/types.js';
 import type { CoilDiameterTable, ToleranceCatalog, ToleranceGrade, WireToleranceTable } from './catalog.js';
 
 /** The quantities a made spring varies in, in the order of the yield model's vectors. */

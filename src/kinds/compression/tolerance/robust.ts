@@ -2,9 +2,9 @@
 // min_yield, confirmed by the Monte Carlo. The search proper will apply the same test per candidate in
 // its hot loop; this exhaustive pass over every feasible point of the grid is the reference it must
 // agree with, and what the figures of robustness (mass against yield) are measured with.
-import type { Requirements } from '../kinds/compression/requirements.js';
-import { candidateAt, runDesign, type Candidate, type DesignRun } from '../kinds/compression/design.js';
-import { Objective } from '../kinds/compression/objectives.js';
+import type { Requirements } from '../requirements.js';
+import { candidateAt, runDesign, type Candidate, type DesignRun } from '../design.js';
+import { Objective } from '../objectives.js';
 import type { ToleranceCatalog } from './catalog.js';
 import { estimateYield, yieldScratch } from './estimate.js';
 import { madeSpringChecks, madeSpringContext, yieldChecks, type MadeSpringContext } from './madeSpring.js';

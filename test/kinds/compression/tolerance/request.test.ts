@@ -1,7 +1,7 @@
 // The tolerance fields of a requirements file: tolerance_grade, tolerances { ... }, min_yield.
 import { describe, expect, it } from 'vitest';
-import { Fields } from '../../src/units/fields.js';
-import { readToleranceRequirements } from '../../src/tolerance/request.js';
+import { Fields } from '../../../../src/units/fields.js';
+import { readToleranceRequirements } from '../../../../src/kinds/compression/tolerance/request.js';
 
 const read = (doc: Record<string, unknown>) => {
   const f = Fields.document(doc);

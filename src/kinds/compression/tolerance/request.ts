@@ -2,9 +2,9 @@
 // `tolerances: { wire_diameter, mean_diameter, shear_modulus, active_coils, working_force }` (each a
 // +- half-width in its unit, or a percentage of the nominal value such as "3%") and `min_yield`.
 // Read from the requirement document's Fields, so that its unknown-key check sees these keys as known.
-import { Fields } from '../units/fields.js';
-import type { Kind } from '../units/kinds.js';
-import { InputError, parseFraction, parseNumber, parseQuantity } from '../units/parse.js';
+import { Fields } from '../../../units/fields.js';
+import type { Kind } from '../../../units/kinds.js';
+import { InputError, parseFraction, parseNumber, parseQuantity } from '../../../units/parse.js';
 import { GRADES, type ToleranceGrade } from './catalog.js';
 import type { ToleranceOverride, ToleranceRequest, TolerancedQuantity } from './model.js';
 

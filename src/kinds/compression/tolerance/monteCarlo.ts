@@ -2,7 +2,7 @@
 // independent, its half-width three standard deviations), each judged by the requirement checks.
 // Every draw flows from the seed (seedrandom): same seed, same springs, same figures.
 import seedrandom from 'seedrandom';
-import { CHECKS, type CheckName } from '../kinds/compression/verify.js';
+import { CHECKS, type CheckName } from '../verify.js';
 import type { CheckEvaluator } from './estimate.js';
 
 export const DEFAULT_SAMPLES = 5_000;

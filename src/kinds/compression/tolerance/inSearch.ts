@@ -3,10 +3,10 @@
 // half-widths, per stock item and end type the made-spring context and its check evaluator), so one
 // call allocates nothing. It gives the same figure as cloudYields / springYield for the same spring:
 // the half-widths are those of springTolerances, looked up without their notes and sources.
-import type { Requirements } from '../kinds/compression/requirements.js';
-import type { MaterialFigures } from '../kinds/compression/analysis.js';
-import type { EndType } from '../kinds/compression/geometry.js';
-import type { MaterialChoice } from '../input/material.js';
+import type { Requirements } from '../requirements.js';
+import type { MaterialFigures } from '../analysis.js';
+import type { EndType } from '../geometry.js';
+import type { MaterialChoice } from '../../../input/material.js';
 import type { ToleranceCatalog } from './catalog.js';
 import { estimateYield, yieldScratch, type CheckEvaluator, type YieldScratch } from './estimate.js';
 import { madeSpringChecks, madeSpringContext, yieldChecks } from './madeSpring.js';

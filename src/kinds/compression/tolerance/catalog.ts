@@ -4,10 +4,10 @@
 import { readFileSync } from 'node:fs';
 import { join } from 'node:path';
 import { parse as parseYaml } from 'yaml';
-import { CatalogError, catalogDirectory } from '../catalogs/load.js';
-import { FAMILIES, type Family } from '../catalogs/types.js';
-import { Fields } from '../units/fields.js';
-import { InputError, parseQuantity } from '../units/parse.js';
+import { CatalogError, catalogDirectory } from '../../../catalogs/load.js';
+import { FAMILIES, type Family } from '../../../catalogs/types.js';
+import { Fields } from '../../../units/fields.js';
+import { InputError, parseQuantity } from '../../../units/parse.js';
 
 export const GRADES = [1, 2, 3] as const;
 export type ToleranceGrade = (typeof GRADES)[number];

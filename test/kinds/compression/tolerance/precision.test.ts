@@ -3,9 +3,9 @@ import fc from 'fast-check';
 import { readFileSync } from 'node:fs';
 import { describe, expect, it } from 'vitest';
 import { parse } from 'yaml';
-import { readRequirements } from '../../src/kinds/compression/requirements.js';
-import { runDesign } from '../../src/kinds/compression/design.js';
-import { drawingPrecision, drawnSpring, roundToStep } from '../../src/tolerance/precision.js';
+import { readRequirements } from '../../../../src/kinds/compression/requirements.js';
+import { runDesign } from '../../../../src/kinds/compression/design.js';
+import { drawingPrecision, drawnSpring, roundToStep } from '../../../../src/kinds/compression/tolerance/precision.js';
 import { catalog, designed, requirements } from './specs.js';
 
 const demo = readRequirements(parse(readFileSync('examples/washer-trigger.yaml', 'utf8')), catalog);

@@ -10,7 +10,7 @@
 // correlations a_i . a_j / (|a_i| |a_j|), evaluated by the product of conditional margins (Pandey,
 // "An effective approximation to evaluate multinormal integrals", Structural Safety 20, 1998).
 // Nothing is allocated per call: the caller holds a scratch.
-import { CHECKS } from '../kinds/compression/verify.js';
+import { CHECKS } from '../verify.js';
 
 /** Writes the check values of the made spring q into g. */
 export type CheckEvaluator = (q: ArrayLike<number>, g: Float64Array) => void;

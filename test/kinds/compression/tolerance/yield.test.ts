@@ -2,15 +2,15 @@
 import fc from 'fast-check';
 import seedrandom from 'seedrandom';
 import { describe, expect, it } from 'vitest';
-import { analyzeSpring } from '../../src/kinds/compression/analysis.js';
-import { CHECK, CHECKS, checkAnalysis } from '../../src/kinds/compression/verify.js';
-import { springServiceConditions } from '../../src/kinds/compression/problem.js';
-import { loadToleranceCatalog } from '../../src/tolerance/catalog.js';
-import { estimateYield, normalCdf, yieldScratch } from '../../src/tolerance/estimate.js';
-import { madeSpringChecks, madeSpringContext, yieldChecks } from '../../src/tolerance/madeSpring.js';
-import { Q, TOLERANCED, standardDeviations } from '../../src/tolerance/model.js';
-import { monteCarloYield } from '../../src/tolerance/monteCarlo.js';
-import { analysisEvaluator, designedTolerances, fastEvaluator, madeSpring, nominalQuantities, springYield } from '../../src/tolerance/springYield.js';
+import { analyzeSpring } from '../../../../src/kinds/compression/analysis.js';
+import { CHECK, CHECKS, checkAnalysis } from '../../../../src/kinds/compression/verify.js';
+import { springServiceConditions } from '../../../../src/kinds/compression/problem.js';
+import { loadToleranceCatalog } from '../../../../src/kinds/compression/tolerance/catalog.js';
+import { estimateYield, normalCdf, yieldScratch } from '../../../../src/kinds/compression/tolerance/estimate.js';
+import { madeSpringChecks, madeSpringContext, yieldChecks } from '../../../../src/kinds/compression/tolerance/madeSpring.js';
+import { Q, TOLERANCED, standardDeviations } from '../../../../src/kinds/compression/tolerance/model.js';
+import { monteCarloYield } from '../../../../src/kinds/compression/tolerance/monteCarlo.js';
+import { analysisEvaluator, designedTolerances, fastEvaluator, madeSpring, nominalQuantities, springYield } from '../../../../src/kinds/compression/tolerance/springYield.js';
 import { STAINLESS, buildSpec, designed, requirements, specArb, uniformSpec } from './specs.js';
 
 const tc = loadToleranceCatalog();

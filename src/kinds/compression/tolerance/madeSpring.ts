@@ -3,18 +3,18 @@
 // out of the coiler, and the free length is where the maker set it to meet that working force at the
 // working length. Same normalised values as checkAnalysis (g <= 0 passes), written into a caller's
 // array: nothing is allocated, so the search can call it many times per candidate.
-import type { Requirements } from '../kinds/compression/requirements.js';
-import type { MaterialFigures } from '../kinds/compression/analysis.js';
-import { bucklingConstant1, bucklingConstant2, criticalDeflectionFrom, endConditionConstant } from '../kinds/compression/buckling.js';
-import { minimumGapSum, solidOuterDiameter } from '../kinds/compression/clash.js';
-import { INFINITE_LIFE_CYCLES, endurancePoint, fullyReversedEndurance, fatigueSafetyFactorFrom, type EndurancePoint } from '../model/fatigue.js';
-import { inactiveCoils, pitch, solidLength, type EndType } from '../kinds/compression/geometry.js';
-import { springRate } from '../model/rate.js';
-import { shearStress } from '../model/stress.js';
-import { stressFactor, type StressCorrection } from '../model/stressFactor.js';
-import { ultimateShearStrength } from '../model/strength.js';
-import { activeCoilMass, surgeFrequency } from '../model/surge.js';
-import { CHECK, CHECKS, activeChecks, forceBand, shortestLength, staticLimit } from '../kinds/compression/verify.js';
+import type { Requirements } from '../requirements.js';
+import type { MaterialFigures } from '../analysis.js';
+import { bucklingConstant1, bucklingConstant2, criticalDeflectionFrom, endConditionConstant } from '../buckling.js';
+import { minimumGapSum, solidOuterDiameter } from '../clash.js';
+import { INFINITE_LIFE_CYCLES, endurancePoint, fullyReversedEndurance, fatigueSafetyFactorFrom, type EndurancePoint } from '../../../model/fatigue.js';
+import { inactiveCoils, pitch, solidLength, type EndType } from '../geometry.js';
+import { springRate } from '../../../model/rate.js';
+import { shearStress } from '../../../model/stress.js';
+import { stressFactor, type StressCorrection } from '../../../model/stressFactor.js';
+import { ultimateShearStrength } from '../../../model/strength.js';
+import { activeCoilMass, surgeFrequency } from '../../../model/surge.js';
+import { CHECK, CHECKS, activeChecks, forceBand, shortestLength, staticLimit } from '../verify.js';
 import { Q } from './model.js';
 
 /** Everything about one stock item, end type and requirement set that a made spring does not change. */

@@ -1,23 +1,23 @@
 // min_yield inside the search: the yield check of the compression problem, judged by the first-order
 // estimate for candidates that pass every other check. Properties of our own model (no outside values):
-// the search agrees with the exhaustive reference over the whole feasible cloud (src/tolerance/robust.ts),
+// the search agrees with the exhaustive reference over the whole feasible cloud (src/kinds/compression/tolerance/robust.ts),
 // a higher min_yield never buys a lighter spring, and the Monte Carlo that confirms the reported
 // springs gives the same verdicts by the fast checks as by the full analysis.
 import { readFileSync } from 'node:fs';
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { parse } from 'yaml';
-import { readRequirements, type Requirements } from '../../src/kinds/compression/requirements.js';
-import { CHECK, activeChecks } from '../../src/kinds/compression/verify.js';
-import { runDesign } from '../../src/kinds/compression/design.js';
-import { Objective } from '../../src/kinds/compression/objectives.js';
-import { loadToleranceCatalog } from '../../src/tolerance/catalog.js';
-import { candidateYield, confirmRun, designedSpring } from '../../src/tolerance/confirm.js';
-import { yieldChecks } from '../../src/tolerance/madeSpring.js';
-import { standardDeviations } from '../../src/tolerance/model.js';
-import { monteCarloYield } from '../../src/tolerance/monteCarlo.js';
-import { bestReaching, cloudYields, collectingRun } from '../../src/tolerance/robust.js';
-import { analysisEvaluator, designedTolerances, fastEvaluator, nominalQuantities } from '../../src/tolerance/springYield.js';
+import { readRequirements, type Requirements } from '../../../../src/kinds/compression/requirements.js';
+import { CHECK, activeChecks } from '../../../../src/kinds/compression/verify.js';
+import { runDesign } from '../../../../src/kinds/compression/design.js';
+import { Objective } from '../../../../src/kinds/compression/objectives.js';
+import { loadToleranceCatalog } from '../../../../src/kinds/compression/tolerance/catalog.js';
+import { candidateYield, confirmRun, designedSpring } from '../../../../src/kinds/compression/tolerance/confirm.js';
+import { yieldChecks } from '../../../../src/kinds/compression/tolerance/madeSpring.js';
+import { standardDeviations } from '../../../../src/kinds/compression/tolerance/model.js';
+import { monteCarloYield } from '../../../../src/kinds/compression/tolerance/monteCarlo.js';
+import { bestReaching, cloudYields, collectingRun } from '../../../../src/kinds/compression/tolerance/robust.js';
+import { analysisEvaluator, designedTolerances, fastEvaluator, nominalQuantities } from '../../../../src/kinds/compression/tolerance/springYield.js';
 import { catalog } from './specs.js';
 
 const tc = loadToleranceCatalog();

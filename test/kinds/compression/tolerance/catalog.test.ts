@@ -4,9 +4,9 @@ import { describe, expect, it } from 'vitest';
 import { parse } from 'yaml';
 import { readFileSync } from 'node:fs';
 import { join } from 'node:path';
-import { catalogDirectory, findMaterial, loadCatalog } from '../../src/catalogs/load.js';
-import { loadToleranceCatalog, parseToleranceCatalog } from '../../src/tolerance/catalog.js';
-import { meanDiameterTolerance, wireDiameterTolerance } from '../../src/tolerance/model.js';
+import { catalogDirectory, findMaterial, loadCatalog } from '../../../../src/catalogs/load.js';
+import { loadToleranceCatalog, parseToleranceCatalog } from '../../../../src/kinds/compression/tolerance/catalog.js';
+import { meanDiameterTolerance, wireDiameterTolerance } from '../../../../src/kinds/compression/tolerance/model.js';
 
 const tc = loadToleranceCatalog();
 const materials = loadCatalog();

@@ -3,31 +3,18 @@
 // tolerance figures) and one whose sampled yield falls below min_yield by more than its standard
 // error is refused, and said so. Without min_yield the yield at the requirement's grade (2 unless
 // given) is reported beside each spring and nothing is refused.
-import type { Requirements } from '../kinds/compression/requirements.js';
-import type { Candidate, DesignRun } from '../kinds/compression/design.js';
-import { CHECKS, type CheckName } from '../kinds/compression/verify.js';
+import type { Requirements } from '../requirements.js';
+import type { Candidate, DesignRun } from '../design.js';
+import { CHECKS } from '../verify.js';
 import { loadToleranceCatalog, type ToleranceCatalog } from './catalog.js';
 import { estimateYield, yieldScratch } from './estimate.js';
 import { yieldChecks } from './madeSpring.js';
-import { TOLERANCED, standardDeviations, type SpringTolerances } from './model.js';
+import { TOLERANCED, standardDeviations } from './model.js';
 import { monteCarloYield, type YieldResult } from './monteCarlo.js';
-import { designedTolerances, fastEvaluator, nominalQuantities, type DesignedSpring } from './springYield.js';
+import { designedTolerances, fastEvaluator, nominalQuantities, type CandidateYield, type DesignedSpring } from './springYield.js';
 
 /** Samples per reported spring: the standard error at a yield of 0.99 is then 0.0007. */
 export const CONFIRM_SAMPLES = 20_000;
-
-export interface CandidateYield {
-  tolerances: SpringTolerances;
-  /** The in-search estimate (first-order reliability). */
-  estimate: number;
-  /** The check the estimate finds most likely to fail, or null. */
-  estimateLimiting: CheckName | null;
-  monteCarlo: YieldResult;
-  /** The check that limits the yield: the one the sampled springs failed most often (else the estimate's). */
-  limiting: CheckName | null;
-  /** min_yield is set and the Monte Carlo yield is below it by more than its standard error. */
-  refused: boolean;
-}
 
 export function designedSpring(c: Candidate): DesignedSpring {
   return { geometry: c.geometry, figures: c.item.figures, material: c.item.choice.material };
@@ -35,7 +22,7 @@ export function designedSpring(c: Candidate): DesignedSpring {
 
 /** Yield of one reported spring: estimate and Monte Carlo at the requirement's tolerances. The sampled
  * springs are judged by the allocation-free made-spring checks (the same verdicts as the full analysis:
- * test/tolerance/confirm.test.ts), so twenty thousand samples cost a few tens of milliseconds. */
+ * test/kinds/compression/tolerance/confirm.test.ts), so twenty thousand samples cost a few tens of milliseconds. */
 export function candidateYield(c: Candidate, req: Requirements, catalog: ToleranceCatalog = loadToleranceCatalog(), samples = CONFIRM_SAMPLES): CandidateYield {
   return springYieldFigures(designedSpring(c), req, catalog, samples);
 }

@@ -3,12 +3,12 @@
 import { readFileSync } from 'node:fs';
 import { describe, expect, it } from 'vitest';
 import { parse } from 'yaml';
-import { readRequirements } from '../../src/kinds/compression/requirements.js';
-import { candidateAt } from '../../src/kinds/compression/design.js';
-import { Objective } from '../../src/kinds/compression/objectives.js';
-import { loadToleranceCatalog } from '../../src/tolerance/catalog.js';
-import { bestReaching, cloudYields, collectingRun } from '../../src/tolerance/robust.js';
-import { springYield } from '../../src/tolerance/springYield.js';
+import { readRequirements } from '../../../../src/kinds/compression/requirements.js';
+import { candidateAt } from '../../../../src/kinds/compression/design.js';
+import { Objective } from '../../../../src/kinds/compression/objectives.js';
+import { loadToleranceCatalog } from '../../../../src/kinds/compression/tolerance/catalog.js';
+import { bestReaching, cloudYields, collectingRun } from '../../../../src/kinds/compression/tolerance/robust.js';
+import { springYield } from '../../../../src/kinds/compression/tolerance/springYield.js';
 import { catalog } from './specs.js';
 
 const tc = loadToleranceCatalog();

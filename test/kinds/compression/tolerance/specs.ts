@@ -1,14 +1,14 @@
 // No outside values here (helpers only). Random springs and requirement sets for the yield tests:
 // scenarios of our own, built around a spring so that its checks sit near their limits.
 import fc from 'fast-check';
-import { findMaterial, loadCatalog } from '../../src/catalogs/load.js';
-import { materialFigures } from '../../src/input/material.js';
-import { readRequirements, type Requirements } from '../../src/kinds/compression/requirements.js';
-import type { EndType } from '../../src/kinds/compression/geometry.js';
-import { inactiveCoils, pitch, solidLength } from '../../src/kinds/compression/geometry.js';
-import { solidOuterDiameter } from '../../src/kinds/compression/clash.js';
-import { springRate } from '../../src/model/rate.js';
-import type { DesignedSpring } from '../../src/tolerance/springYield.js';
+import { findMaterial, loadCatalog } from '../../../../src/catalogs/load.js';
+import { materialFigures } from '../../../../src/input/material.js';
+import { readRequirements, type Requirements } from '../../../../src/kinds/compression/requirements.js';
+import type { EndType } from '../../../../src/kinds/compression/geometry.js';
+import { inactiveCoils, pitch, solidLength } from '../../../../src/kinds/compression/geometry.js';
+import { solidOuterDiameter } from '../../../../src/kinds/compression/clash.js';
+import { springRate } from '../../../../src/model/rate.js';
+import type { DesignedSpring } from '../../../../src/kinds/compression/tolerance/springYield.js';
 
 export const catalog = loadCatalog();
 

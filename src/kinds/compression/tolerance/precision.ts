@@ -2,12 +2,12 @@
 // 0.01 mm or 0.001 in, the free length to 0.1 mm or 0.01 in, coils to the coil step), re-checked at
 // those values. A search result sits on its limits to many digits; the spring the maker builds is the
 // one on the drawing, so that is the one that must pass.
-import type { Requirements } from '../kinds/compression/requirements.js';
-import { analyzeSpring, type MaterialFigures, type SpringAnalysis, type SpringGeometry } from '../kinds/compression/analysis.js';
-import { CHECKS, checkAnalysis, type CheckName } from '../kinds/compression/verify.js';
-import { springServiceConditions } from '../kinds/compression/problem.js';
-import { INCH_MM } from '../units/kinds.js';
-import type { UnitSystem } from '../units/systems.js';
+import type { Requirements } from '../requirements.js';
+import { analyzeSpring, type MaterialFigures, type SpringAnalysis, type SpringGeometry } from '../analysis.js';
+import { CHECKS, checkAnalysis, type CheckName } from '../verify.js';
+import { springServiceConditions } from '../problem.js';
+import { INCH_MM } from '../../../units/kinds.js';
+import type { UnitSystem } from '../../../units/systems.js';
 
 export interface DrawingPrecision {
   system: UnitSystem;

@@ -1,9 +1,9 @@
 // The tolerance model of a made spring: catalog figures, the user's overrides, and the free-length
 // spread that the adjustment to the working force leaves.
 import { describe, expect, it } from 'vitest';
-import { findMaterial, loadCatalog } from '../../src/catalogs/load.js';
-import { loadToleranceCatalog } from '../../src/tolerance/catalog.js';
-import { rateSpread, springTolerances, tolerancesJson, type NominalSpring } from '../../src/tolerance/model.js';
+import { findMaterial, loadCatalog } from '../../../../src/catalogs/load.js';
+import { loadToleranceCatalog } from '../../../../src/kinds/compression/tolerance/catalog.js';
+import { rateSpread, springTolerances, tolerancesJson, type NominalSpring } from '../../../../src/kinds/compression/tolerance/model.js';
 
 const tc = loadToleranceCatalog();
 const cat = loadCatalog();

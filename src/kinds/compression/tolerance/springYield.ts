@@ -1,12 +1,12 @@
 // Yield of one designed compression spring: its tolerances, the first-order estimate the search can
 // afford, and the Monte Carlo that re-analyses every sampled spring through the single-spring analysis
 // and the requirement checks (the same path `analyze` and the re-verification take).
-import type { Material } from '../catalogs/types.js';
-import type { Requirements } from '../kinds/compression/requirements.js';
-import { analyzeSpring, type MaterialFigures, type SpringGeometry } from '../kinds/compression/analysis.js';
-import { springRate } from '../model/rate.js';
-import { CHECKS, checkAnalysis, type CheckName } from '../kinds/compression/verify.js';
-import { springServiceConditions } from '../kinds/compression/problem.js';
+import type { Material } from '../../../catalogs/types.js';
+import type { Requirements } from '../requirements.js';
+import { analyzeSpring, type MaterialFigures, type SpringGeometry } from '../analysis.js';
+import { springRate } from '../../../model/rate.js';
+import { CHECKS, checkAnalysis, type CheckName } from '../verify.js';
+import { springServiceConditions } from '../problem.js';
 import type { ToleranceCatalog } from './catalog.js';
 import { estimateYield, yieldScratch, type CheckEvaluator } from './estimate.js';
 import { madeSpringChecks, madeSpringContext, yieldChecks } from './madeSpring.js';
@@ -84,6 +84,22 @@ export interface SpringYield {
   /** The check the estimate finds most likely to fail, or null. */
   estimateLimiting: CheckName | null;
   monteCarlo: YieldResult;
+}
+
+
+/** A reported spring's yield as the design carries it: the estimate, the Monte Carlo confirmation and
+ * its verdict under min_yield (src/kinds/compression/tolerance/confirm.ts). */
+export interface CandidateYield {
+  tolerances: SpringTolerances;
+  /** The in-search estimate (first-order reliability). */
+  estimate: number;
+  /** The check the estimate finds most likely to fail, or null. */
+  estimateLimiting: CheckName | null;
+  monteCarlo: YieldResult;
+  /** The check that limits the yield: the one the sampled springs failed most often (else the estimate's). */
+  limiting: CheckName | null;
+  /** min_yield is set and the Monte Carlo yield is below it by more than its standard error. */
+  refused: boolean;
 }
 
 /** Tolerances, estimate and Monte Carlo of one designed spring. */

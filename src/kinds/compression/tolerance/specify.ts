@@ -1,8 +1,8 @@
 // One reported spring made ready for a specification: rounded to drawing precision and re-checked,
 // its tolerances, its yield by estimate and by Monte Carlo, gathered as the specification sheet's input.
-import type { Material } from '../catalogs/types.js';
-import type { Requirements } from '../kinds/compression/requirements.js';
-import type { MaterialFigures, SpringAnalysis, SpringGeometry } from '../kinds/compression/analysis.js';
+import type { Material } from '../../../catalogs/types.js';
+import type { Requirements } from '../requirements.js';
+import type { MaterialFigures, SpringAnalysis, SpringGeometry } from '../analysis.js';
 import type { ToleranceCatalog } from './catalog.js';
 import type { SpringTolerances, ToleranceRequest } from './model.js';
 import type { MonteCarloOptions, YieldResult } from './monteCarlo.js';
