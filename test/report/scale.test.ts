@@ -1,7 +1,7 @@
 // Plot scales and the spring drawing's geometry (properties of our own code; no outside values).
 import { describe, expect, it } from 'vitest';
 import { niceDomain, scaleLinear, tickStep, ticks } from '../../src/report/html/scale.js';
-import { springDrawing } from '../../src/report/html/springDrawing.js';
+import { springDrawing } from '../../src/kinds/compression/report/springDrawing.js';
 
 describe('linear scales (invariant: ticks are 1, 2 or 5 times a power of ten, inside the domain)', () => {
   it('picks round steps', () => {

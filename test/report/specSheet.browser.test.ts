@@ -10,7 +10,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { parse } from 'yaml';
 import { loadCatalog } from '../../src/catalogs/load.js';
 import { readRequirements } from '../../src/kinds/compression/requirements.js';
-import { specSheetHtml } from '../../src/report/html/specSheet.js';
+import { specSheetHtml } from '../../src/kinds/compression/report/specSheet.js';
 import { runDesign } from '../../src/kinds/compression/design.js';
 import { loadToleranceCatalog } from '../../src/kinds/compression/tolerance/catalog.js';
 import { specifySpring } from '../../src/kinds/compression/tolerance/specify.js';

@@ -4,7 +4,7 @@ import { analyzeSpring, type SpringAnalysis } from './analysis.js';
 import { STATIC_SERVICE_CYCLES } from '../../model/fatigue.js';
 import { readRequirements, type Requirements } from './requirements.js';
 import { readSpringCase, type SpringCase } from './springFile.js';
-import { analysisJson, analysisText } from '../../report/analysisReport.js';
+import { analysisJson, analysisText } from './report/analysisReport.js';
 import { designJson, designText } from '../../report/designReport.js';
 import { candidateAt, runDesign, type Candidate, type DesignRun } from './design.js';
 import { buildSpringProblem } from './problem.js';
@@ -38,7 +38,7 @@ export const compression: CompressionKind = {
     analysisText: (c, a, system) => analysisText(c, a, system, c.notes),
     analysisJson: (c, a) => analysisJson(c, a, c.notes),
     async analysisHtml(c, a, system) {
-      const { springHtml } = await import('../../report/html/springHtml.js');
+      const { springHtml } = await import('./report/springHtml.js');
       return springHtml(c, a, system);
     },
     designText: (run, system, showTiming) => designText(run, system, showTiming),
@@ -50,7 +50,7 @@ export const compression: CompressionKind = {
     async writeSpecSheet(path, run, system, force, pick = 1) {
       const c = run.candidates[pick - 1];
       if (!c) return false;
-      const { writeSpecSheet } = await import('../../report/html/specSheet.js');
+      const { writeSpecSheet } = await import('./report/specSheet.js');
       writeSpecSheet(path, c, run.req, system, force);
       return true;
     },

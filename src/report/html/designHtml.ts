@@ -11,7 +11,8 @@ import { formatQuantity, inUnit, quantityWriter, sig, unitSymbol } from '../../u
 import type { UnitSystem } from '../../units/systems.js';
 import { writeOutputFile } from '../writeFile.js';
 import { CONVENTIONS, figure, htmlTable, page } from './page.js';
-import { cloudPlot, fatiguePlot, forceLengthPlot, sideView, sweepPlot } from './plots.js';
+import { cloudPlot, sweepPlot } from './plots.js';
+import { fatiguePlot, forceLengthPlot, sideView } from '../../kinds/compression/report/plots.js';
 import { candidateGrid, relaxLines } from '../designReport.js';
 import { surgeEndsLabel } from '../../model/surge.js';
 import { strengthBasisSummary } from '../../input/material.js';

@@ -3,22 +3,22 @@
 // fonts or links. It states what is toleranced (one force at its length, the controlled diameter by
 // its EN 15800 grade, the wire by its standard), what is left to the maker (the free length, given as
 // a reference), the service the spring is made for, and the cautions.
-import type { Material } from '../../catalogs/types.js';
-import type { Requirements } from '../../kinds/compression/requirements.js';
-import type { MaterialFigures, SpringAnalysis, SpringGeometry } from '../../kinds/compression/analysis.js';
-import { CHECK_LABELS, shortestLength, type CheckName } from '../../kinds/compression/verify.js';
-import { loadToleranceCatalog, type ToleranceGrade } from '../../kinds/compression/tolerance/catalog.js';
-import { CONFIRM_SAMPLES } from '../../kinds/compression/tolerance/confirm.js';
-import type { SpringTolerances } from '../../kinds/compression/tolerance/model.js';
-import { controlledDiameter } from '../../kinds/compression/tolerance/precision.js';
-import { specifySpring, type SpecSheetInput, type SpecifiedSpring } from '../../kinds/compression/tolerance/specify.js';
-import { INCH_MM } from '../../units/kinds.js';
-import { formatQuantity, unitSymbol } from '../../units/format.js';
-import type { UnitSystem } from '../../units/systems.js';
-import { CAUTIONS } from '../cautions.js';
-import { writeOutputFile } from '../writeFile.js';
+import type { Material } from '../../../catalogs/types.js';
+import type { Requirements } from '../requirements.js';
+import type { MaterialFigures, SpringAnalysis, SpringGeometry } from '../analysis.js';
+import { CHECK_LABELS, shortestLength, type CheckName } from '../verify.js';
+import { loadToleranceCatalog, type ToleranceGrade } from '../tolerance/catalog.js';
+import { CONFIRM_SAMPLES } from '../tolerance/confirm.js';
+import type { SpringTolerances } from '../tolerance/model.js';
+import { controlledDiameter } from '../tolerance/precision.js';
+import { specifySpring, type SpecSheetInput, type SpecifiedSpring } from '../tolerance/specify.js';
+import { INCH_MM } from '../../../units/kinds.js';
+import { formatQuantity, unitSymbol } from '../../../units/format.js';
+import type { UnitSystem } from '../../../units/systems.js';
+import { CAUTIONS } from '../../../report/cautions.js';
+import { writeOutputFile } from '../../../report/writeFile.js';
 import { springDrawing } from './springDrawing.js';
-import { esc, r2 } from './svg.js';
+import { esc, r2 } from '../../../report/html/svg.js';
 
 /** The working force's band on the sheet: the requirement's load tolerance, 2% when that is zero, or
  * the residual given as the working-force tolerance when wider (the maker adjusts the free length to it). */

@@ -2,7 +2,7 @@
 // coils cross the top and bottom of the silhouette, and the straight runs between them. Geometry only
 // (mm); the SVG writer scales it. The closed end coils of squared ends sit at a pitch of one wire
 // diameter, the active coils at the spring's pitch.
-import { inactiveCoils, pitch as pitchOf, type EndType } from '../../kinds/compression/geometry.js';
+import { inactiveCoils, pitch as pitchOf, type EndType } from '../geometry.js';
 
 export interface DrawingInput { wireDiameter: number; meanDiameter: number; activeCoils: number; ends: EndType; freeLength: number }
 

@@ -1,10 +1,10 @@
 // The HTML report of one analysed spring.
-import type { SpringCase } from '../../kinds/compression/springFile.js';
-import type { SpringAnalysis } from '../../kinds/compression/analysis.js';
-import type { UnitSystem } from '../../units/systems.js';
-import { writeOutputFile } from '../writeFile.js';
-import { springSections } from './designHtml.js';
-import { CONVENTIONS, htmlTable, page } from './page.js';
+import type { SpringCase } from '../springFile.js';
+import type { SpringAnalysis } from '../analysis.js';
+import type { UnitSystem } from '../../../units/systems.js';
+import { writeOutputFile } from '../../../report/writeFile.js';
+import { springSections } from '../../../report/html/designHtml.js';
+import { CONVENTIONS, htmlTable, page } from '../../../report/html/page.js';
 
 export function springHtml(c: SpringCase, a: SpringAnalysis, system: UnitSystem): string {
   const m = c.materialChoice.material;

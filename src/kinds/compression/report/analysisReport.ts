@@ -1,14 +1,14 @@
 // The analysis of one spring for people (text) and for machines (JSON, SI).
-import { rulesOfThumb, type SpringAnalysis } from '../kinds/compression/analysis.js';
-import { enduranceSourceLabel } from '../model/fatigue.js';
-import { surgeEndsLabel } from '../model/surge.js';
-import { lawAboveMinimum, strengthBasisOf } from '../input/material.js';
-import type { SpringCase } from '../kinds/compression/springFile.js';
-import { formatQuantity as q, quantityWriter, sig } from '../units/format.js';
-import type { UnitSystem } from '../units/systems.js';
-import { cautionText } from './cautions.js';
-import { SI_UNITS } from './json.js';
-import { table } from './table.js';
+import { rulesOfThumb, type SpringAnalysis } from '../analysis.js';
+import { enduranceSourceLabel } from '../../../model/fatigue.js';
+import { surgeEndsLabel } from '../../../model/surge.js';
+import { lawAboveMinimum, strengthBasisOf } from '../../../input/material.js';
+import type { SpringCase } from '../springFile.js';
+import { formatQuantity as q, quantityWriter, sig } from '../../../units/format.js';
+import type { UnitSystem } from '../../../units/systems.js';
+import { cautionText } from '../../../report/cautions.js';
+import { SI_UNITS } from '../../../report/json.js';
+import { table } from '../../../report/table.js';
 
 export function analysisJson(c: SpringCase, a: SpringAnalysis, notes: string[]): Record<string, unknown> {
   const g = a.geometry;
