@@ -1,31 +1,16 @@
 // No outside values here: coilfront's own layering (issue 7, "Dependency direction"). Imports point
 // downwards only, and no file or folder of src/ imports itself back through others.
 //
-// Layers, lowest first (a unit may import its own layer or any lower one):
-//   0 units                 quantities, unit systems, and the field reader of input documents
-//   1 model, search         shared wire mechanics; the search engine (knows nothing of springs)
-//   2 catalogs              materials and wire series, validated
-//   3 input                 reading documents, materials, overrides, the defaults every kind shares
-//   4 report                the rendering every kind shares: text tables, JSON and CSV helpers, the
-//                           cautions, output files, the HTML page, SVG axes and the generic plots
-//   5 kinds, kinds/<kind>   the spring-kind seam and one folder per kind, each with its own reports,
-//                           drawing and (compression) tolerance model: kinds/compression/tolerance/
-//                           holds the made-spring scatter and yield of compression springs
-//   6 check, stock          one given spring or a stock table against requirements
-//   7 api, . (src/index.ts) the library API and the package's entry, which re-exports it
-//   8 cli                   the command line, thin over the rest
+// Layers: see ./layers.ts (a unit may import its own layer or any lower one).
 // The debts below are the edges that break this today, each with the way out; the test fails on any
 // new one, and on a listed one that has been paid (delete its line then), so the list only shrinks.
 import { describe, expect, it } from 'vitest';
 import { cycles, importGraph, sourceFiles, unitGraph, unitOf } from './imports.js';
-
-const LAYER: Record<string, number> = {
-  units: 0, model: 1, search: 1, catalogs: 2, input: 3, report: 4, kinds: 5, check: 6, stock: 6, api: 7, '.': 7, cli: 8,
-};
+import { LAYER } from './layers.js';
 
 function layerOf(unit: string): number {
   const top = unit.split('/')[0];
-  if (!(top in LAYER)) throw new Error(`src/${unit} has no layer: add it to LAYER in ${import.meta.url}`);
+  if (!(top in LAYER)) throw new Error(`src/${unit} has no layer: add it to LAYER in test/architecture/layers.ts`);
   return LAYER[top];
 }
 
