@@ -3,9 +3,12 @@
 // domination (feasible before infeasible, then less violation), the same integer-gene operators and
 // the same cell solve as the single-objective search, seeded through seedrandom.
 import seedrandom from 'seedrandom';
+import { PointBuffer } from './archive.js';
 import { CellMode, makeWorkspace, solveCell } from './cell.js';
+import { NearestMisses } from './misses.js';
 import { cellKey, decode, encoding, mutate as mutateGenes, randomGenes, resolveCell, tournament } from './operators.js';
 import type { Problem } from './problem.js';
+import { packResult, type SearchResult } from './result.js';
 import { termination, type StopReason, type Termination } from './termination.js';
 
 export interface FrontOptions {
@@ -18,8 +21,6 @@ export interface FrontOptions {
    * combination not seen before (default 15). */
   termination?: Termination;
 }
-
-export interface FrontPoint { x: Float64Array; f: Float64Array }
 
 interface Member { genes: Float64Array; feasible: boolean; violation: number; a: number; b: number; x: Float64Array; f: Float64Array; rank: number; crowd: number }
 
@@ -53,7 +54,11 @@ function better(p: Member, q: Member): boolean {
   return p.rank < q.rank || (p.rank === q.rank && p.crowd > q.crowd);
 }
 
-export function geneticFront(p: Problem, opts: FrontOptions): { points: FrontPoint[]; cloud: FrontPoint[]; evaluations: number; cells: number; stoppedBy: StopReason } {
+/** The search's result is the common SearchResult: `best` holds the non-dominated feasible points,
+ * solved again to full precision and sorted by the first objective; `cloud` every feasible cell it
+ * assessed (at the search's precision), in the order it met them; the counts, cuts and nearest misses
+ * as every strategy reports them. */
+export function geneticFront(p: Problem, opts: FrontOptions): SearchResult {
   const rng = seedrandom(String(opts.seed));
   const enc = encoding(p);
   const { s, n } = enc;
@@ -66,6 +71,8 @@ export function geneticFront(p: Problem, opts: FrontOptions): { points: FrontPoi
   const memo = new Map<number, Member>();
   const x = new Float64Array(n);
   let cells = 0;
+  let feasibleCells = 0;
+  const misses = new NearestMisses(5);
 
   const assess = (genes: Float64Array): Member => {
     const key = cellKey(enc, genes);
@@ -74,6 +81,8 @@ export function geneticFront(p: Problem, opts: FrontOptions): { points: FrontPoi
     decode(enc, genes, x);
     cells++;
     const r = solveCell(p, s, x, ws, CellMode.First, null, null);
+    if (r === true) feasibleCells++;
+    else misses.offer(ws.missX, ws.missG, ws.missF, ws.missViolation);
     const m: Member = r === true
       ? { genes, feasible: true, violation: 0, a: ws.f[ia], b: ws.f[ib], x: Float64Array.from(x), f: Float64Array.from(ws.f), rank: 0, crowd: 0 }
       : { genes, feasible: false, violation: ws.missViolation, a: Infinity, b: Infinity, x: Float64Array.from(ws.missX), f: Float64Array.from(ws.missF), rank: 0, crowd: 0 };
@@ -107,13 +116,15 @@ export function geneticFront(p: Problem, opts: FrontOptions): { points: FrontPoi
   const fine = makeWorkspace(p, undefined, ws.stats);
   const all = [...memo.values()].filter((m) => m.feasible);
   const nd = all.filter((m) => !all.some((q) => q !== m && dominatesMember(q, m)));
-  const points: FrontPoint[] = [];
+  const points: { x: Float64Array; f: Float64Array }[] = [];
   for (const m of nd) {
     x.set(m.x);
     resolveCell(p, s, x, fine, true, (px, f) => points.push({ x: Float64Array.from(px), f: Float64Array.from(f) }));
   }
   points.sort((u, v) => u.f[ia] - v.f[ia]);
-  const cloud = all.map((m) => ({ x: m.x, f: m.f }));
+  const nf = p.objectiveNames.length;
+  const cloud = new PointBuffer(n, nf, Math.max(1, all.length));
+  for (const m of all) cloud.push(m.x, m.f);
   const stoppedBy: StopReason = stale >= until.stallGenerations ? 'exhausted' : 'budget';
-  return { points, cloud, evaluations: ws.stats.evaluations, cells, stoppedBy };
+  return packResult('genetic', p, points, cloud, ws, { cells, feasible: feasibleCells, pruned: 0 }, misses, stoppedBy);
 }

@@ -13,6 +13,8 @@ export interface SearchResult {
   strategy: 'grid' | 'genetic';
   /** Why the run stopped (the grid always completes). */
   stoppedBy: StopReason;
+  /** The best points, best first; for a two-objective search, the non-dominated points in the order
+   * of the first objective. */
   best: Point[];
   cloud: PointBuffer | null;
   evaluations: number;
@@ -30,14 +32,16 @@ export interface SearchResult {
   nearestMisses: Miss[];
 }
 
-/** Gather a strategy's stores into its result, with counts keyed by constraint name. */
-export function packResult(strategy: SearchResult['strategy'], p: Problem, top: TopK, cloud: PointBuffer | null,
+/** Gather a strategy's stores into its result, with counts keyed by constraint name. `top` is the
+ * ranked store, or the points themselves in their order (a two-objective front). */
+export function packResult(strategy: SearchResult['strategy'], p: Problem, top: TopK | Point[], cloud: PointBuffer | null,
   ws: CellWorkspace, counts: { cells: number; feasible: number; pruned: number }, misses: NearestMisses, stoppedBy: StopReason = 'complete'): SearchResult {
   const cutBy: Record<string, number> = {};
   const sole: Record<string, number> = {};
   p.constraintNames.forEach((name, j) => { cutBy[name] = ws.stats.cutBy[j]; sole[name] = ws.stats.soleViolation[j]; });
-  const best = [];
-  for (let i = 0; i < top.size; i++) best.push({ x: Float64Array.from(top.x(i)), f: Float64Array.from(top.f(i)) });
+  const best: Point[] = [];
+  if (Array.isArray(top)) for (const q of top) best.push({ x: Float64Array.from(q.x), f: Float64Array.from(q.f) });
+  else for (let i = 0; i < top.size; i++) best.push({ x: Float64Array.from(top.x(i)), f: Float64Array.from(top.f(i)) });
   return {
     strategy, stoppedBy, best, cloud, evaluations: ws.stats.evaluations, boundCalls: ws.stats.boundCalls, cells: counts.cells, feasibleCells: counts.feasible,
     prunedCells: counts.pruned, cutBy, soleViolation: sole, nearestMisses: misses.items,

@@ -49,9 +49,10 @@ function geneticFrontier(req: Requirements, problem: SpringProblem, x: FrontierK
   const ox = FRONTIER_KEYS[x].objective;
   const oy = FRONTIER_KEYS[y].objective;
   const r = geneticFront(run.problem, { seed: req.seed, objectives: [ox, oy], maxEvaluations: 1_000_000 });
-  const front = paretoFront2(r.points.map((p) => p.f[ox]), r.points.map((p) => p.f[oy])).map((i) => candidateAt(run.problem, r.points[i].x, r.points[i].f));
+  const front = paretoFront2(r.best.map((p) => p.f[ox]), r.best.map((p) => p.f[oy])).map((i) => candidateAt(run.problem, r.best[i].x, r.best[i].f));
   front.forEach(assertVerified);
-  const cloud = r.cloud.map((p) => ({ x: FRONTIER_KEYS[x].sign * p.f[ox], y: FRONTIER_KEYS[y].sign * p.f[oy] }));
+  const all = r.cloud!;
+  const cloud = Array.from({ length: all.size }, (_, i) => ({ x: FRONTIER_KEYS[x].sign * all.f(i)[ox], y: FRONTIER_KEYS[y].sign * all.f(i)[oy] }));
   return { run, x, y, strategy: 'genetic', cloud, front };
 }
 
