@@ -71,6 +71,13 @@ export interface CellWorkspace {
   prunedAtLowest: boolean;
   /** Set by the scan when an increasing check fails: nothing further up can pass. */
   stop: boolean;
+  /** Set by the caller before each cell: the value of objective 0 that a point must beat to be kept
+   * (the k-th best so far), Infinity for none. With the problem's objectiveCeiling, a cell whose
+   * points cannot beat it is skipped, and a scan stops where they no longer can. */
+  cap: number;
+  /** Find the decreasing checks' coarse boundary by replaying bisection around a tight bracket of it
+   * (decBisection): the same point for fewer evaluations. Off, every midpoint is evaluated. */
+  replay: boolean;
 }
 
 export function makeWorkspace(p: Problem, relativeTolerance = 1e-10, stats: RunStats = makeRunStats(p)): CellWorkspace {
@@ -89,6 +96,7 @@ export function makeWorkspace(p: Problem, relativeTolerance = 1e-10, stats: RunS
     incMask, decMask, relativeTolerance, maxScanPoints: Infinity, scanCoarsening: 1, worstInc: -Infinity, worstDec: -Infinity,
     lower: new Float64Array(m), narrowing: true,
     badValue: NaN, badObjective: NaN, lastAtGood: false, lastTotal: NaN, pruneF: new Float64Array(p.objectiveNames.length), prunedAtLowest: false, stop: false,
+    cap: Infinity, replay: false,
   };
 }
 
@@ -153,6 +161,80 @@ function boundary(p: Problem, s: number, x: Float64Array, ws: CellWorkspace, a: 
   ws.badValue = badValue;
   ws.badObjective = badObjective;
   return badBelow ? b : a;
+}
+
+/**
+ * The point that boundary(.., decMask, badBelow = true, tol) returns, the very end that plain
+ * bisection of [a, b] stops at, for fewer evaluations. The decreasing checks fail at a (worst value
+ * fa > 0) and hold at b (fb <= 0), and only loosen upwards: a midpoint below a point where they fail
+ * fails them too, one above a point where they hold holds them. So the bisection is replayed,
+ * evaluating a midpoint only when it lies between the highest failing and the lowest holding point
+ * evaluated so far, and that gap is narrowed first by probes on either side of the regula falsi
+ * estimate (Illinois: Dowell and Jarratt, BIT 11 (1971) 168-174), nudged past it by a fraction of the
+ * last bisection step. A linear check (a rod) is settled by two probes: a cell costs about four
+ * evaluations here instead of a dozen. After a probe that fails to halve the gap, the next waits for
+ * two midpoints to be evaluated, then four, and so on, so a check the estimate serves badly costs
+ * bisection and a few probes. The failing end left in ws.bounds[0] is the highest failing point evaluated (a itself
+ * when none was), with its worst value and objective 0 in ws.badValue and ws.badObjective (NaN when
+ * it is a): every feasible point lies above it, as above a bisection's.
+ */
+function decBisection(p: Problem, s: number, x: Float64Array, ws: CellWorkspace, a: number, fa: number, b: number, fb: number, tol: number): number {
+  // The width that plain bisection stops at; the probes aim a quarter of it apart.
+  let width = b - a;
+  while (width > tol) width *= 0.5;
+  const delta = 0.125 * width;
+  const q = gap;
+  q.ra = a; q.va = fa; q.rb = b; q.vb = fb;
+  q.raValue = NaN; q.raObjective = NaN; q.lastAt = NaN; q.lastGood = false; q.lastTotal = NaN;
+  let side = 0;
+  let wait = 0;
+  let backoff = 2;
+  let lo = a;
+  let hi = b;
+  while (hi - lo > tol) {
+    const m = 0.5 * (lo + hi);
+    if (m <= q.ra) { lo = m; continue; }
+    if (m >= q.rb) { hi = m; continue; }
+    if (wait === 0 && q.rb - q.ra > 2 * delta) {
+      let r = q.va > 0 && q.vb <= 0 ? q.rb - (q.vb * (q.rb - q.ra)) / (q.vb - q.va) : m;
+      r -= side * delta;
+      if (r > q.ra && r < q.rb && Math.abs(r - m) > delta) {
+        const before = q.rb - q.ra;
+        probeGap(p, s, x, ws, r);
+        const now = q.lastGood ? 1 : -1;
+        // Illinois: an end that stays put twice has its value halved, so that the next estimate moves it.
+        if (now === side) { if (now === 1) q.va *= 0.5; else q.vb *= 0.5; }
+        side = now;
+        if (q.rb - q.ra > 0.5 * before) { wait = backoff; backoff *= 2; } else backoff = 2;
+        continue;
+      }
+    }
+    probeGap(p, s, x, ws, m);
+    if (q.lastGood) hi = m; else lo = m;
+    if (wait > 0) wait--;
+  }
+  ws.bounds[0] = q.ra;
+  ws.badValue = q.raValue;
+  ws.badObjective = q.raObjective;
+  ws.lastAtGood = q.lastGood && q.lastAt === hi;
+  ws.lastTotal = q.lastTotal;
+  return hi;
+}
+
+/** decBisection's gap between the highest failing (ra, worst value va as Illinois weighs it, raValue as
+ * evaluated) and the lowest holding point (rb, vb) evaluated, and its last evaluation; one object
+ * reused, so that a cell allocates nothing. */
+const gap = { ra: 0, va: 0, rb: 0, vb: 0, raValue: NaN, raObjective: NaN, lastAt: NaN, lastGood: false, lastTotal: NaN };
+
+/** Evaluate at m and narrow decBisection's gap by what the decreasing checks show there. */
+function probeGap(p: Problem, s: number, x: Float64Array, ws: CellWorkspace, m: number): void {
+  const q = gap;
+  x[s] = m;
+  q.lastTotal = evaluateAt(p, x, ws);
+  q.lastAt = m;
+  const v = ws.worstDec;
+  q.lastGood = !(v > 0);
+  if (q.lastGood) { q.rb = m; q.vb = v; } else { q.ra = m; q.va = v; q.raValue = v; q.raObjective = ws.f[0]; }
 }
 
 /**
@@ -265,6 +347,14 @@ class ScanGrid {
   at(k: number): number {
     return k >= this.last ? this.hi : this.lo + k * this.step;
   }
+  /** Index of the last point at or below v, -1 when there is none. */
+  lastAtOrBelow(v: number): number {
+    if (v >= this.hi) return this.last;
+    let k = Math.max(-1, Math.min(this.last - 1, Math.floor((v - this.lo) / this.step)));
+    while (k >= 0 && this.at(k) > v) k--;
+    while (k + 1 < this.last && this.at(k + 1) <= v) k++;
+    return k;
+  }
 }
 
 /** Index of the first feasible scan point in [ka, kb], or -1. `checked`: the caller has already
@@ -349,6 +439,20 @@ export function solveCell(
     evaluateAt(p, x, ws);
     return infeasibleCell(ws);
   }
+  const increasing = p.objectiveTrend !== undefined && p.objectiveTrend[0] === TREND.increasing;
+  // Past the ceiling no point can beat the k-th best kept: a cell that starts past it is skipped
+  // before any evaluation, as it would be after its first. (Eased outwards by a part in 1e9: the
+  // ceiling is worked out apart from evaluate(), and a point it leaves in is judged by its own value.)
+  let ceiling = Infinity;
+  if (prune !== null && increasing && ws.cap < Infinity && p.objectiveCeiling !== undefined) {
+    const c = p.objectiveCeiling(x, ws.cap);
+    if (c === c) ceiling = c + Math.abs(c) * 1e-9;
+    if (ceiling < lo) {
+      ws.pruneF[0] = ws.cap;
+      ws.prunedAtLowest = true;
+      return 'pruned';
+    }
+  }
   const tol = ws.relativeTolerance * Math.max(Math.abs(lo), Math.abs(hi), 1e-12);
   // Bracket first to a fraction of the scan step; only the end that turns out to be the answer is
   // then refined to full precision (most cells fail elsewhere, and this halves their cost).
@@ -360,7 +464,6 @@ export function solveCell(
   // Increasing constraints only get worse upwards: if violated at lo, the cell is lost.
   x[s] = lo;
   let total = evaluateAt(p, x, ws);
-  const increasing = p.objectiveTrend !== undefined && p.objectiveTrend[0] === TREND.increasing;
   if (prune !== null && increasing && prune(ws.f)) {
     ws.pruneF[0] = ws.f[0];
     ws.prunedAtLowest = true;
@@ -378,7 +481,7 @@ export function solveCell(
     x[s] = hi;
     evaluateAt(p, x, ws);
     if (ws.worstDec > 0) return infeasibleCell(ws);
-    lo = boundary(p, s, x, ws, lo, hi, ws.decMask, true, coarse);
+    lo = ws.replay ? decBisection(p, s, x, ws, lo, loDec, hi, ws.worstDec, coarse) : boundary(p, s, x, ws, lo, hi, ws.decMask, true, coarse);
     loBad = ws.bounds[0];
     loBadValue = ws.badValue === ws.badValue ? ws.badValue : loDec;
     // Every feasible point lies above loBad, so the objective there bounds the cell from below.
@@ -388,6 +491,11 @@ export function solveCell(
         ws.prunedAtLowest = false;
         return 'pruned';
       }
+    }
+    if (ceiling < lo) {
+      ws.pruneF[0] = ws.cap;
+      ws.prunedAtLowest = false;
+      return 'pruned';
     }
   }
   if (first) {
@@ -410,12 +518,20 @@ export function solveCell(
       }
       if (ws.worstInc > 0) return infeasibleCell(ws);
     }
-    // lo itself has been tried and fails a check of unknown trend.
+    // lo itself has been tried and fails a check of unknown trend. The scan stops at the ceiling: a
+    // cell whose feasible points all lie past it is pruned, not cut.
     const grid = scanGrid;
     grid.set(lo, hi, v.resolution * ws.scanCoarsening);
+    const end = ceiling < hi ? grid.lastAtOrBelow(ceiling) : grid.last;
     ws.stop = false;
-    const k = grid.last < 1 ? -1 : firstFeasible(p, s, x, ws, grid, 1, grid.last, false);
-    return k < 0 ? infeasibleCell(ws) : true;
+    const k = end < 1 ? -1 : firstFeasible(p, s, x, ws, grid, 1, end, false);
+    if (k >= 0) return true;
+    if (end < grid.last && !ws.stop) {
+      ws.pruneF[0] = ws.cap;
+      ws.prunedAtLowest = false;
+      return 'pruned';
+    }
+    return infeasibleCell(ws);
   }
   // And the largest value that still meets the increasing ones.
   x[s] = hi;

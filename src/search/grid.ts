@@ -88,6 +88,7 @@ function gridPass(p: Problem, vars: readonly Variable[], s: number, opts: GridOp
     if (!skip) {
     counts.cells++;
     cellBest = Infinity;
+    ws.cap = prune !== null ? sink().threshold() : Infinity;
     const r = s >= 0 ? solveCell(p, s, x, ws, mode, visit, prune) : evaluateFixed(p, x, ws);
     if (r === 'pruned') {
       counts.pruned++;
@@ -127,6 +128,7 @@ export function gridSearch(p: Problem, opts: GridOptions): SearchResult {
   const ws = makeWorkspace(p, opts.relativeTolerance);
   if (opts.everyFeasiblePoint && opts.maxScanPoints) ws.maxScanPoints = opts.maxScanPoints;
   ws.narrowing = opts.narrowing ?? true;
+  ws.replay = ws.narrowing;
   const nx = p.variables.length;
   const top = new TopK(Math.max(1, opts.top), nx, p.objectiveNames.length);
   const cloud = opts.collectAll ? new PointBuffer(nx, p.objectiveNames.length) : null;
@@ -143,6 +145,8 @@ export function gridSearch(p: Problem, opts: GridOptions): SearchResult {
     ws.stats.cutBy.fill(0);
     ws.stats.soleViolation.fill(Infinity);
     ws.narrowing = false;
+    ws.replay = false;
+    ws.cap = Infinity;
     counts.cells = 0; counts.feasible = 0; counts.pruned = 0; counts.branchCut = 0;
     result = new NearestMisses(5);
     gridPass(p, p.variables, s, opts, top, cloud, result, ws, counts, groups);

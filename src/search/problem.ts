@@ -40,6 +40,11 @@ export interface Problem {
    * constraint (each point fails that one, or another that this bound leaves aside), else -1. It
    * lets the grid drop a whole wire size, say, before enumerating its coil counts. */
   branchInfeasible?(x: Float64Array, depth: number): number;
+  /** Optionally, for objective 0 increasing in the solved variable: a value of the solved variable past
+   * which objective 0 is at least `bound` for the other values in x (-Infinity when it is everywhere;
+   * an upper estimate is fine, a lower one is not). It lets a cell stop short of the points that could
+   * not beat the k-th best kept, or be skipped before any evaluation. */
+  objectiveCeiling?(x: Float64Array, bound: number): number;
   /** Optionally narrow the solved variable's interval for the other values in x: write [lo, hi] into out. */
   solvedBounds?(x: Float64Array, out: Float64Array): void;
 }

@@ -4,6 +4,7 @@ import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { sandgrenProblem } from '../../bench/problems/sandgren.js';
 import { TopK } from '../../src/search/archive.js';
+import { CellMode, makeWorkspace, solveCell } from '../../src/search/cell.js';
 import { gridSearch } from '../../src/search/grid.js';
 import { dominates, paretoFront2 } from '../../src/search/pareto.js';
 import { TREND, type Problem } from '../../src/search/problem.js';
@@ -58,6 +59,35 @@ function banded(centre: number, half: number, lo: number, resolution: number, wi
   return p;
 }
 
+/** Minimise c (x + 1) over c in 1..5 and x in [0, 10]: x must reach lo c / 3 (a decreasing check of
+ * the given shape: linear, falling as 1 / x^3, or either held at -1 where it no longer binds, as an
+ * inactive check is), stay out of the band |x - centre| < half (unknown trend) and below 9.5. With
+ * `ceiling`, the problem says where c (x + 1) reaches a bound. */
+function shaped(lo: number, shape: 'linear' | 'cubic' | 'floored', centre: number, half: number, ceiling: boolean): Problem {
+  const p: Problem = {
+    name: 'shaped',
+    variables: [
+      { kind: 'range', name: 'c', min: 1, max: 5, step: 1 },
+      { kind: 'continuous', name: 'x', min: 0.1, max: 10, resolution: 0.01, solve: true },
+    ],
+    constraintNames: ['reach', 'inactive', 'room', 'band'],
+    objectiveNames: ['f'],
+    constraintTrend: Int8Array.from([TREND.decreasing, TREND.decreasing, TREND.increasing, TREND.unknown]),
+    objectiveTrend: Int8Array.from([TREND.increasing]),
+    evaluate(x, g, f) {
+      const need = (lo * x[0]) / 3;
+      const v = shape === 'cubic' ? (need / x[1]) ** 3 - 1 : (need - x[1]) / 10;
+      g[0] = shape === 'floored' ? Math.max(-0.05, v) : v;
+      g[1] = -1;
+      g[2] = (x[1] - 9.5) / 10;
+      g[3] = (half - Math.abs(x[1] - centre)) / half;
+      f[0] = x[0] * (x[1] + 1);
+    },
+  };
+  if (ceiling) p.objectiveCeiling = (x, bound) => bound / x[0] - 1;
+  return p;
+}
+
 describe('grid and cell solver', () => {
   it('brackets to the exact boundary of the monotone checks', () => {
     const r = gridSearch(toy(2.345678, 9), { top: 1 });
@@ -85,6 +115,43 @@ describe('grid and cell solver', () => {
         // Only points a plain scan would reach are evaluated.
         expect(withBounds.evaluations).toBeLessThanOrEqual(plain.evaluations);
       }), { numRuns: 200, seed: 7 });
+  });
+  it('the boundary of the decreasing checks, bracketed and then replayed, is the one plain bisection finds; the objective ceiling stops a cell where it can no longer win; neither changes anything but the work (property)', () => {
+    fc.assert(fc.property(fc.double({ min: 0.2, max: 9, noNaN: true }), fc.constantFrom('linear', 'cubic', 'floored') as fc.Arbitrary<'linear' | 'cubic' | 'floored'>,
+      fc.double({ min: 0.5, max: 9.5, noNaN: true }), fc.double({ min: 0.01, max: 3, noNaN: true }), fc.integer({ min: 1, max: 4 }), (lo, shape, centre, half, top) => {
+        const plain = gridSearch(shaped(lo, shape, centre, half, false), { top, narrowing: false });
+        const replayed = gridSearch(shaped(lo, shape, centre, half, false), { top });
+        const capped = gridSearch(shaped(lo, shape, centre, half, true), { top });
+        const points = (r: ReturnType<typeof gridSearch>) => r.best.map((b) => [...Array.from(b.x), ...Array.from(b.f)]);
+        expect(points(replayed)).toEqual(points(plain));
+        expect(points(capped)).toEqual(points(plain));
+        expect(capped.evaluations).toBeLessThanOrEqual(replayed.evaluations);
+      }), { numRuns: 300, seed: 12 });
+  });
+  it('the replayed bracket of the decreasing checks costs fewer evaluations than plain bisection over many cells, and never many more in one', () => {
+    let plainWork = 0;
+    let replayedWork = 0;
+    fc.assert(fc.property(fc.double({ min: 0.2, max: 9, noNaN: true }), fc.constantFrom('linear', 'cubic', 'floored') as fc.Arbitrary<'linear' | 'cubic' | 'floored'>, fc.integer({ min: 1, max: 5 }), (lo, shape, c) => {
+      // No band (half 0): the cell's answer is the boundary itself.
+      const p = shaped(lo, shape, 5, 1e-9, false);
+      const solve = (replay: boolean) => {
+        const ws = makeWorkspace(p);
+        ws.replay = replay;
+        const x = Float64Array.of(c, 0);
+        const r = solveCell(p, 1, x, ws, CellMode.First, null, null);
+        return { r, x: x[1], evaluations: ws.stats.evaluations };
+      };
+      const plain = solve(false);
+      const replayed = solve(true);
+      expect(replayed.r).toBe(plain.r);
+      expect(replayed.x).toBe(plain.x);
+      expect(replayed.evaluations).toBeLessThanOrEqual(plain.evaluations + 4);
+      plainWork += plain.evaluations;
+      replayedWork += replayed.evaluations;
+    }), { numRuns: 300, seed: 13 });
+    // A probe that misses can cost an evaluation more than bisection in a cell; over many, far fewer.
+    // (Each cell also refines its answer to full precision, the same work in both.)
+    expect(replayedWork).toBeLessThan(0.85 * plainWork);
   });
   it('with interval bounds, the work grows with the logarithm of the resolution, not linearly', () => {
     const work = (res: number) => { const r = gridSearch(banded(5, 2, 3.5, res), { top: 1 }); return r.evaluations + (r.boundCalls ?? 0); };

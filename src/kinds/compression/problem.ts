@@ -24,6 +24,16 @@ import { loadToleranceCatalog, type ToleranceCatalog } from './tolerance/catalog
 import { inSearchYield } from './tolerance/inSearch.js';
 
 
+/** See bracketBounds. */
+const BOUND_EASE = 1 - 1e-12;
+
+/** The least of D F1 + q / D^2 (the load arm of a stress under F1 + k y, with k D^3 at least q / y)
+ * over [lo, hi]: at D = (2 q / F1)^(1/3), or the nearer end. */
+function leastLoadArm(lo: number, hi: number, F1: number, q: number): number {
+  const D = Math.min(hi, Math.max(lo, Math.cbrt((2 * q) / F1)));
+  return D * F1 + q / (D * D);
+}
+
 export interface StockItem { choice: MaterialChoice; wireDiameter: number; figures: MaterialFigures }
 
 export interface SpringProblem extends Problem {
@@ -151,6 +161,23 @@ export function buildSpringProblem(req: Requirements, tolerances?: ToleranceCata
     // The ranked objective's trend comes from the registry; the others are only carried along.
     objectiveTrend: Int8Array.from(OBJECTIVE_SLOTS.map((_, i) => (i === 0 ? objectiveByKey(req.rank).trend : TREND.unknown))),
 
+    // The ranked quantity grows with the mean diameter; past the diameter where it reaches `bound`, no
+    // spring of the cell can be ranked above a spring already kept. Mass, volume and outer diameter
+    // are linear in D; the free length L1 + F1 / k grows at least as fast as with the plain rate
+    // (the direct-shear term only softens the spring), whose cube root bounds D from above.
+    objectiveCeiling(x, bound) {
+      const i = x[0];
+      const d = sd[i];
+      const Nt = x[2] + endQ[x[1]];
+      switch (req.rank) {
+        case 'mass': return bound / massOfVolume(wireVolume(d, 1, Nt), sRho[i]);
+        case 'wire_volume': return bound / wireVolume(d, 1, Nt);
+        case 'outer_diameter': return bound - d;
+        case 'free_length': return bound > L1 ? Math.cbrt(((bound - L1) * sG[i] * d * d * d * d) / (8 * F1 * x[2])) : -Infinity;
+        default: return Infinity;
+      }
+    },
+
     // The index bounds clip the diameter interval directly. The bore and rod limits are left to the
     // bisection so that the points just past them are evaluated: they tell what relaxing them would buy.
     solvedBounds(x, out) {
@@ -190,7 +217,12 @@ export function buildSpringProblem(req: Requirements, tolerances?: ToleranceCata
       const F2least = activeMask[Check.operating_force_min] === 1 ? Math.max(F2lo, F2req * (1 - tol)) : F2lo;
       const Kmin = stressFactor(Dhi / d, correction);
       const limit = sLimit[i];
-      if (shearStress(F2least, Dlo, d, Kmin) * staticFactor > limit) return Check.static_stress;
+      // The least stress, as bracketBounds bounds it over [Dlo, Dhi] at the softest coil count.
+      const d2 = d * d;
+      const KDleast = Dlo >= 1.9 * d ? stressFactor(Dlo / d, correction) * Dlo : Kmin * Dlo;
+      const q = (travel * sG[i] * d2 * d2) / (8 * NaMost * (directShear ? 1 + d2 / (2 * Dlo * Dlo) : 1));
+      const tauLeast = (8 / (Math.PI * d2 * d)) * Math.max(KDleast * F2least, Kmin * leastLoadArm(Dlo, Dhi, F1, travel >= 0 ? q : 0)) * BOUND_EASE;
+      if (tauLeast * staticFactor > limit) return Check.static_stress;
       if (activeMask[Check.fatigue] === 1 && F2least > F1) {
         const tauMin = shearStress(F1, Dlo, d, Kmin);
         const tauMax = shearStress(F2least, Dlo, d, Kmin);
@@ -202,31 +234,53 @@ export function buildSpringProblem(req: Requirements, tolerances?: ToleranceCata
     },
 
     // Over a bracket [lo, hi] of mean diameters the rate is at least k(hi), so every force is at least
-    // its value there, the lever arm at least lo and the curvature factor at least K(hi / d): the
-    // stresses cannot fall below that. One bound can rule out a whole bracket without scanning it.
+    // its value there. A stress is 8 K D F / (pi d^3) with F = F1 + k y. Two lower bounds, the larger
+    // kept: (1) its part under the constant force, K D F1, grows with D (K C rises with C above 1.9,
+    // for both corrections), so it is least at lo; its part under a deflection y, K D k y, falls as D
+    // grows (k D falls as 1 / D^2), so it is least at hi; each part at its own least bounds the sum
+    // (below C = 1.9, K(hi) lo stands in for the first part's least). (2) K is least at hi, and
+    // D F1 + D k y is at least D F1 + Q / D^2 (Q = y G d^4 / (8 Na), less the direct-shear softening
+    // at its largest, at lo), whose least over the bracket is at D = (2 Q / F1)^(1/3) or the nearer end.
+    // The first is tight on a narrow bracket, the second on a wide one. One bound can rule out a whole
+    // bracket without scanning it.
     bracketBounds(x, lo, hi, out) {
       const i = x[0];
       const e = x[1];
       const Na = x[2];
       const d = sd[i];
       const kMin = springRate(sG[i], d, hi, Na, directShear);
-      const Kmin = stressFactor(hi / d, correction);
+      const Khi = stressFactor(hi / d, correction);
+      const toStress = 8 / (Math.PI * d * d * d);
+      // Least of K D over the bracket, and least of K D k per unit deflection.
+      const KDleast = lo >= 1.9 * d ? stressFactor(lo / d, correction) * lo : Khi * lo;
+      const KDkLeast = Khi * hi * kMin;
+      // Eased by a part in 1e12: computed another way than evaluate() computes the check, the bound must
+      // not pass the check's own value by a rounding at a bracket's end.
+      const tauF1 = toStress * KDleast * F1 * BOUND_EASE;
+      const tauPerDeflection = toStress * KDkLeast * BOUND_EASE;
+      const d2 = d * d;
+      const qPerDeflection = (sG[i] * d2 * d2) / (8 * Na * (directShear ? 1 + d2 / (2 * lo * lo) : 1));
+      const KhiEased = toStress * Khi * BOUND_EASE;
       const limit = sLimit[i];
-      out[Check.static_stress] = (shearStress(F1 + kMin * travel, lo, d, Kmin) * staticFactor - limit) / limit;
+      const invLimit = sInvLimit[i];
+      if (travel >= 0) {
+        const least = Math.max(tauF1 + tauPerDeflection * travel, KhiEased * leastLoadArm(lo, hi, F1, qPerDeflection * travel));
+        out[Check.static_stress] = (least * staticFactor - limit) * invLimit;
+      }
       if (activeMask[Check.solid_stress] === 1) {
         // The solid force F1 + k (L1 - Ls) is least at the softest rate. (With L1 < Ls the coils would
         // be solid before the working length: no bound is offered, the clash check rules that out.)
         const room = L1 - solidLength(d, Na + endQ[e], ends[e]);
-        if (room >= 0) out[Check.solid_stress] = (shearStress(F1 + kMin * room, lo, d, Kmin) - limit) / limit;
+        if (room >= 0) out[Check.solid_stress] = (Math.max(tauF1 + tauPerDeflection * room, KhiEased * leastLoadArm(lo, hi, F1, qPerDeflection * room)) - limit) * invLimit;
       }
       if (activeMask[Check.fatigue] === 1 && travel > 0) {
         // Every criterion's safety factor falls as the alternating or the mean stress rises (the load
         // point moves outwards from the origin), so the least stresses over the bracket give the
         // largest safety factor it can reach.
-        const tauMin = shearStress(F1, lo, d, Kmin);
-        const tauMax = shearStress(F1 + kMin * travel, lo, d, Kmin);
-        const alt = 0.5 * shearStress(kMin * travel, lo, d, Kmin);
-        const nf = fatigueSafetyFactorFrom(alt, 0.5 * (tauMax + tauMin), sPoint[i], sSsu[i], sSse[i], criterion);
+        // The mean stress is the stress under F1 + k travel / 2.
+        const alt = 0.5 * tauPerDeflection * travel;
+        const mean = Math.max(tauF1 + alt, KhiEased * leastLoadArm(lo, hi, F1, qPerDeflection * 0.5 * travel));
+        const nf = fatigueSafetyFactorFrom(alt, mean, sPoint[i], sSsu[i], sSse[i], criterion);
         if (nf === nf) out[Check.fatigue] = (nfTarget - nf) * invNfTarget;
       }
       if (activeMask[Check.buckling] === 1) {

@@ -84,6 +84,28 @@ describe('spring problem', () => {
   });
 });
 
+describe('spring problem: the objective ceiling', () => {
+  it('past the ceiling of a bound, the ranked quantity is at least that bound, for every rank key (property)', () => {
+    fc.assert(fc.property(problemArb, fc.constantFrom('mass', 'wire_volume', 'outer_diameter', 'free_length', 'safety_factor'), fc.nat(), fc.nat(), fc.nat(),
+      fc.double({ min: 4, max: 12, noNaN: true }), fc.double({ min: 1e-9, max: 0.5, noNaN: true }), (doc, rank, a, e, b, c, over) => {
+        const p = build({ ...doc, rank, ends: ['plain', 'squared-ground', 'plain-ground'], direct_shear_rate: true });
+        const x = new Float64Array(4);
+        x[0] = valueAt(p.variables[0], a % valueCount(p.variables[0]));
+        x[1] = e % p.ends.length;
+        x[2] = valueAt(p.variables[2], b % valueCount(p.variables[2]));
+        x[3] = c * p.stock[x[0]].wireDiameter;
+        const g = new Float64Array(CHECKS.length);
+        const f = new Float64Array(p.objectiveNames.length);
+        p.evaluate(x, g, f);
+        // This point's value is below the bound f (1 + over): the ceiling must not fall short of it.
+        expect(p.objectiveCeiling!(x, f[0] * (1 + over))).toBeGreaterThanOrEqual(x[3]);
+        // And a bound at its value puts the ceiling at or below it, up to rounding (the ceiling is an
+        // upper estimate for the free length, whose rate here carries the direct-shear term).
+        if (rank === 'mass' || rank === 'wire_volume' || rank === 'outer_diameter') expect(p.objectiveCeiling!(x, f[0])).toBeLessThanOrEqual(x[3] * (1 + 1e-12));
+      }), { numRuns: 300, seed: 5 });
+  });
+});
+
 describe('spring problem in the search', () => {
   it('a wire size the branch hint rules out has no feasible point anywhere under it (property)', () => {
     let ruledOut = 0;
@@ -114,15 +136,17 @@ describe('spring problem in the search', () => {
   });
 
 
-  it('the interval bounds change nothing but the work: the same springs with and without them (property)', () => {
-    fc.assert(fc.property(problemArb, (doc) => {
-      const p = build({ ...doc, coil_step: 0.5 });
-      const on = gridSearch(p, { top: 5 });
-      const off = gridSearch(p, { top: 5, narrowing: false });
-      expect(on.best.map((b) => Array.from(b.x))).toEqual(off.best.map((b) => Array.from(b.x)));
+  it('the interval bounds, the replayed brackets and the objective ceiling change nothing but the work: the same springs with and without them, for every rank key and per wire (property)', () => {
+    fc.assert(fc.property(problemArb, fc.constantFrom('mass', 'wire_volume', 'outer_diameter', 'free_length'), fc.constantFrom(1, 5), fc.boolean(), (doc, rank, top, perWire) => {
+      const p = build({ ...doc, coil_step: 0.5, rank, ends: ['plain', 'squared-ground'] });
+      const opts = { top, bestPerValueOf: perWire ? 0 : undefined };
+      const on = gridSearch(p, opts);
+      const off = gridSearch(p, { ...opts, narrowing: false });
+      const points = (r: ReturnType<typeof gridSearch>) => r.best.map((b) => [...Array.from(b.x), ...Array.from(b.f)]);
+      expect(points(on)).toEqual(points(off));
       // (A search that finds nothing pays a second, full pass for its diagnostics.)
       if (on.best.length) expect(on.evaluations).toBeLessThanOrEqual(off.evaluations);
-    }), { numRuns: 25, seed: 11 });
+    }), { numRuns: 40, seed: 11 });
   });
 
   it('a reported spring never shows a positive check (the demo: its best springs sit exactly at the top of the load band)', () => {
