@@ -13,7 +13,7 @@ import { TREND, type Problem } from './problem.js';
 export interface RunStats {
   /** Evaluations spent, cumulative. */
   evaluations: number;
-  /** Calls of the problem's bracket bounds (each about the cost of one evaluation). */
+  /** Calls of the problem's bounds: bracket bounds, branch and range hints (each about the cost of one evaluation). */
   boundCalls: number;
   /** Cells proved infeasible by the bracket bounds, without a scan. */
   boundedOut: number;

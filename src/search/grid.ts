@@ -4,7 +4,7 @@
 // k-th best (valid when objective 0 grows with the solved variable). Optional refinement passes
 // polish the scanned continuous variables around the incumbent (patternSearch.ts).
 import { PointBuffer, TopK } from './archive.js';
-import { CellMode, evaluateFixed, makeWorkspace, solveCell } from './cell.js';
+import { CellMode, evaluateFixed, makeWorkspace, solveCell, type RunStats } from './cell.js';
 import { NearestMisses } from './misses.js';
 import { TREND, solvedIndex, valueAt, valueCount, type Problem, type Variable } from './problem.js';
 import { patternSearch } from './patternSearch.js';
@@ -68,11 +68,15 @@ function gridPass(p: Problem, vars: readonly Variable[], s: number, opts: GridOp
   const branchPrune = p.boundGrowsAlong !== undefined && p.boundGrowsAlong === innermost && innermost >= 0;
   // Whole branches (a wire size and everything under it, say) may be ruled out by the problem's hint.
   const branchHint = p.branchInfeasible !== undefined && ws.narrowing;
+  // And the ends of the innermost variable's run, by the range hint (see ruleOutEnds).
+  const rangeHint = p.rangeInfeasible !== undefined && ws.narrowing && innermost >= 0;
+  const ruled = new Int32Array(innermost >= 0 ? sizes[innermost] : 0);
   let changed = 0;
   for (let done = 0; done < total; done++) {
     let skip = false;
     if (branchHint) {
       for (let depth = Math.max(1, changed + 1); depth <= innermost; depth++) {
+        ws.stats.boundCalls++;
         const j = p.branchInfeasible!(x, depth);
         if (j < 0) continue;
         let size = 1;
@@ -83,6 +87,16 @@ function gridPass(p: Problem, vars: readonly Variable[], s: number, opts: GridOp
         done += size - 1;
         skip = true;
         break;
+      }
+    }
+    if (!skip && rangeHint) {
+      if (idx[innermost] === 0) ruleOutEnds(p, x, innermost, sizes[innermost], ruled, ws.stats);
+      const j = ruled[idx[innermost]];
+      if (j >= 0) {
+        ws.stats.cutBy[j]++;
+        counts.cells++;
+        counts.branchCut++;
+        skip = true;
       }
     }
     if (!skip) {
@@ -119,6 +133,46 @@ function gridPass(p: Problem, vars: readonly Variable[], s: number, opts: GridOp
     }
   }
   opts.onProgress?.(total, total);
+}
+
+/**
+ * Rule out, by the problem's range hint, the longest run of the innermost variable's first values and
+ * the longest run of its last values that no point can come from (the stiffest coil counts of a wire
+ * fail its stress, the softest its free length, say): ruled[k] = the check that rules value k out, or
+ * -1. Each run is found by bisection on its length (a run inside a ruled-out run is ruled out too, as
+ * its bounds are tighter), after one call on the end value alone: a run of the branch that nothing rules
+ * out costs two calls, one with runs costs about twice the logarithm of its length.
+ */
+function ruleOutEnds(p: Problem, x: Float64Array, v: number, size: number, ruled: Int32Array, stats: RunStats): void {
+  ruled.fill(-1);
+  const hint = (x: Float64Array, v: number, from: number, to: number): number => {
+    stats.boundCalls++;
+    return p.rangeInfeasible!(x, v, from, to);
+  };
+  let first = hint(x, v, 0, 0);
+  let head = -1;
+  if (first >= 0) {
+    // Values 0..head are ruled out (by `first`); 0..bad is not.
+    head = 0;
+    let bad = size - 1;
+    while (bad - head > 1) {
+      const mid = (head + bad) >>> 1;
+      const j = hint(x, v, 0, mid);
+      if (j >= 0) { head = mid; first = j; } else bad = mid;
+    }
+    ruled.fill(first, 0, head + 1);
+  }
+  if (head >= size - 1) return;
+  let last = hint(x, v, size - 1, size - 1);
+  if (last < 0) return;
+  let tail = size - 1;
+  let bad = head;
+  while (tail - bad > 1) {
+    const mid = (bad + tail + 1) >>> 1;
+    const j = hint(x, v, mid, size - 1);
+    if (j >= 0) { tail = mid; last = j; } else bad = mid;
+  }
+  ruled.fill(last, tail, size);
 }
 
 export interface GridCounts { cells: number; feasible: number; pruned: number; branchCut: number }

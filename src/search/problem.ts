@@ -40,6 +40,11 @@ export interface Problem {
    * constraint (each point fails that one, or another that this bound leaves aside), else -1. It
    * lets the grid drop a whole wire size, say, before enumerating its coil counts. */
   branchInfeasible?(x: Float64Array, depth: number): number;
+  /** Optionally, the same hint for a run of one variable's values: the variables before `variable`
+   * fixed at x, `variable` over its values from index `from` to `to` (both included), every later one
+   * over all its values. The grid rules out the stiffest and the softest coil counts of a wire by it
+   * (a prefix and a suffix of the innermost variable's values) before it visits the rest. */
+  rangeInfeasible?(x: Float64Array, variable: number, from: number, to: number): number;
   /** Optionally, for objective 0 increasing in the solved variable: a value of the solved variable past
    * which objective 0 is at least `bound` for the other values in x (-Infinity when it is everywhere;
    * an upper estimate is fine, a lower one is not). It lets a cell stop short of the points that could

@@ -20,7 +20,7 @@ export interface SearchResult {
   evaluations: number;
   /** Evaluations spent when the best objective value of the run was first met (genetic search). */
   evaluationsToBest?: number;
-  /** Calls of the problem's interval bounds (each costs about one evaluation). */
+  /** Calls of the problem's bounds: bracket bounds, branch and range hints (each costs about one evaluation). */
   boundCalls?: number;
   cells: number;
   feasibleCells: number;

@@ -143,6 +143,52 @@ export function buildSpringProblem(req: Requirements, tolerances?: ToleranceCata
   const dMin = sd.length ? Math.min(...sd) : 1;
   const dMax = sd.length ? Math.max(...sd) : 1;
 
+  // A whole wire size (ends eFrom..eTo, coil counts NaLo..NaHi) before any coil count is tried. Only
+  // the mean diameters that the index, bore and rod allow need be considered (every other point fails
+  // one of those); over them and those coil counts, the rate lies between its values at (Dhi, NaHi)
+  // and (Dlo, NaLo), and each check below is bounded from those.
+  function branchCut(i: number, eFrom: number, eTo: number, NaLo: number, NaHi: number): number {
+    const d = sd[i];
+    if (activeMask[Check.temperature] === 1 && temperature > sTmax[i]) return Check.temperature;
+    let Dlo = Cmin * d;
+    let Dhi = Cmax * d;
+    if (activeMask[Check.outer_diameter] === 1) Dhi = Math.min(Dhi, ODmax - d);
+    if (activeMask[Check.inner_diameter] === 1) Dlo = Math.max(Dlo, IDmin + d);
+    if (Dlo > Dhi * (1 + 1e-12)) return ODmax - d < Cmin * d || activeMask[Check.inner_diameter] === 0 ? Check.outer_diameter : IDmin + d > Cmax * d ? Check.inner_diameter : Check.outer_diameter;
+    const kMax = springRate(sG[i], d, Dlo, NaLo, directShear);
+    const kMin = springRate(sG[i], d, Dhi, NaHi, directShear);
+    let LsMin = Infinity;
+    for (let e = eFrom; e <= eTo; e++) LsMin = Math.min(LsMin, solidLength(d, NaLo + endQ[e], ends[e]));
+    const L0min = L1 + F1 / kMax;
+    if (activeMask[Check.free_length] === 1 && L0min > L0max) return Check.free_length;
+    if (activeMask[Check.solid_length] === 1 && LsMin > Lsmax) return Check.solid_length;
+    if (LsMin + xi * (L0min - Lmin) > Lmin) return Check.clash;
+    const F2lo = F1 + kMin * travel;
+    const F2hi = F1 + kMax * travel;
+    if (activeMask[Check.operating_force_min] === 1) {
+      if (F2hi < F2req * (1 - tol)) return Check.operating_force_min;
+      if (F2lo > F2req * (1 + tol)) return Check.operating_force_max;
+    }
+    // A feasible point carries at least the lower end of the operating band.
+    const F2least = activeMask[Check.operating_force_min] === 1 ? Math.max(F2lo, F2req * (1 - tol)) : F2lo;
+    const Kmin = stressFactor(Dhi / d, correction);
+    const limit = sLimit[i];
+    // The least stress, as bracketBounds bounds it over [Dlo, Dhi] at the softest coil count.
+    const d2 = d * d;
+    const KDleast = Dlo >= 1.9 * d ? stressFactor(Dlo / d, correction) * Dlo : Kmin * Dlo;
+    const q = (travel * sG[i] * d2 * d2) / (8 * NaHi * (directShear ? 1 + d2 / (2 * Dlo * Dlo) : 1));
+    const tauLeast = (8 / (Math.PI * d2 * d)) * Math.max(KDleast * F2least, Kmin * leastLoadArm(Dlo, Dhi, F1, travel >= 0 ? q : 0)) * BOUND_EASE;
+    if (tauLeast * staticFactor > limit) return Check.static_stress;
+    if (activeMask[Check.fatigue] === 1 && F2least > F1) {
+      const tauMin = shearStress(F1, Dlo, d, Kmin);
+      const tauMax = shearStress(F2least, Dlo, d, Kmin);
+      const nf = fatigueSafetyFactorFrom(0.5 * shearStress(F2least - F1, Dlo, d, Kmin), 0.5 * (tauMax + tauMin), sPoint[i], sSsu[i], sSse[i], criterion);
+      if (nf < nfTarget) return Check.fatigue;
+    }
+    if (surgeNeed > 0 && surgeFrequency(kMax, activeCoilMass(d, Dlo, NaLo, sRho[i]), oneEndFree) < surgeNeed) return Check.surge;
+    return -1;
+  }
+
   const problem: SpringProblem = {
     name: 'helical compression spring',
     req, stock, ends, active,
@@ -187,50 +233,14 @@ export function buildSpringProblem(req: Requirements, tolerances?: ToleranceCata
     },
 
     // A whole wire size (depth 1), or a wire size with one end type (depth 2), before any coil count
-    // is tried. Only the mean diameters that the index, bore and rod allow need be considered (every
-    // other point fails one of those); over them and every coil count, the rate lies between its
-    // values at (Dhi, most coils) and (Dlo, fewest coils), and each check below is bounded from those.
+    // is tried: branchCut over every coil count.
     branchInfeasible(x, depth) {
-      const i = x[0];
-      const d = sd[i];
-      if (activeMask[Check.temperature] === 1 && temperature > sTmax[i]) return Check.temperature;
-      let Dlo = Cmin * d;
-      let Dhi = Cmax * d;
-      if (activeMask[Check.outer_diameter] === 1) Dhi = Math.min(Dhi, ODmax - d);
-      if (activeMask[Check.inner_diameter] === 1) Dlo = Math.max(Dlo, IDmin + d);
-      if (Dlo > Dhi * (1 + 1e-12)) return ODmax - d < Cmin * d || activeMask[Check.inner_diameter] === 0 ? Check.outer_diameter : IDmin + d > Cmax * d ? Check.inner_diameter : Check.outer_diameter;
-      const kMax = springRate(sG[i], d, Dlo, NaFewest, directShear);
-      const kMin = springRate(sG[i], d, Dhi, NaMost, directShear);
-      let LsMin = Infinity;
-      for (let e = depth >= 2 ? x[1] : 0; e < (depth >= 2 ? x[1] + 1 : ends.length); e++) LsMin = Math.min(LsMin, solidLength(d, NaFewest + endQ[e], ends[e]));
-      const L0min = L1 + F1 / kMax;
-      if (activeMask[Check.free_length] === 1 && L0min > L0max) return Check.free_length;
-      if (activeMask[Check.solid_length] === 1 && LsMin > Lsmax) return Check.solid_length;
-      if (LsMin + xi * (L0min - Lmin) > Lmin) return Check.clash;
-      const F2lo = F1 + kMin * travel;
-      const F2hi = F1 + kMax * travel;
-      if (activeMask[Check.operating_force_min] === 1) {
-        if (F2hi < F2req * (1 - tol)) return Check.operating_force_min;
-        if (F2lo > F2req * (1 + tol)) return Check.operating_force_max;
-      }
-      // A feasible point carries at least the lower end of the operating band.
-      const F2least = activeMask[Check.operating_force_min] === 1 ? Math.max(F2lo, F2req * (1 - tol)) : F2lo;
-      const Kmin = stressFactor(Dhi / d, correction);
-      const limit = sLimit[i];
-      // The least stress, as bracketBounds bounds it over [Dlo, Dhi] at the softest coil count.
-      const d2 = d * d;
-      const KDleast = Dlo >= 1.9 * d ? stressFactor(Dlo / d, correction) * Dlo : Kmin * Dlo;
-      const q = (travel * sG[i] * d2 * d2) / (8 * NaMost * (directShear ? 1 + d2 / (2 * Dlo * Dlo) : 1));
-      const tauLeast = (8 / (Math.PI * d2 * d)) * Math.max(KDleast * F2least, Kmin * leastLoadArm(Dlo, Dhi, F1, travel >= 0 ? q : 0)) * BOUND_EASE;
-      if (tauLeast * staticFactor > limit) return Check.static_stress;
-      if (activeMask[Check.fatigue] === 1 && F2least > F1) {
-        const tauMin = shearStress(F1, Dlo, d, Kmin);
-        const tauMax = shearStress(F2least, Dlo, d, Kmin);
-        const nf = fatigueSafetyFactorFrom(0.5 * shearStress(F2least - F1, Dlo, d, Kmin), 0.5 * (tauMax + tauMin), sPoint[i], sSsu[i], sSse[i], criterion);
-        if (nf < nfTarget) return Check.fatigue;
-      }
-      if (surgeNeed > 0 && surgeFrequency(kMax, activeCoilMass(d, Dlo, NaFewest, sRho[i]), oneEndFree) < surgeNeed) return Check.surge;
-      return -1;
+      return depth >= 2 ? branchCut(x[0], x[1], x[1], NaFewest, NaMost) : branchCut(x[0], 0, ends.length - 1, NaFewest, NaMost);
+    },
+
+    // The coil counts from..to of one wire size and end type: the same bounds between their rates.
+    rangeInfeasible(x, variable, from, to) {
+      return variable === 2 ? branchCut(x[0], x[1], x[1], NaFewest + from * req.coilStep, NaFewest + to * req.coilStep) : -1;
     },
 
     // Over a bracket [lo, hi] of mean diameters the rate is at least k(hi), so every force is at least

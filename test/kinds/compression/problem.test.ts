@@ -136,6 +136,33 @@ describe('spring problem in the search', () => {
   });
 
 
+  it('a run of coil counts the range hint rules out has no feasible point anywhere in it (property)', () => {
+    let ruledOut = 0;
+    fc.assert(fc.property(problemArb, fc.nat(), fc.nat(), fc.nat(), fc.nat(), (doc, a, e0, n1, n2) => {
+      const p = build({ ...doc, ends: ['plain', 'squared-ground'] });
+      const x = new Float64Array(4);
+      x[0] = valueAt(p.variables[0], a % valueCount(p.variables[0]));
+      x[1] = e0 % p.ends.length;
+      const count = valueCount(p.variables[2]);
+      const from = Math.min(n1 % count, n2 % count);
+      const to = Math.max(n1 % count, n2 % count);
+      const j = p.rangeInfeasible!(x, 2, from, to);
+      if (j < 0) return;
+      ruledOut++;
+      const d = p.stock[x[0]].wireDiameter;
+      const g = new Float64Array(CHECKS.length);
+      const f = new Float64Array(p.objectiveNames.length);
+      const [cMin, cMax] = p.req.index;
+      for (let n = from; n <= to; n += Math.max(1, Math.floor((to - from) / 8))) {
+        for (let t = 0; t <= 40; t++) {
+          p.evaluate(Float64Array.of(x[0], x[1], valueAt(p.variables[2], n), d * (cMin + ((cMax - cMin) * t) / 40)), g, f);
+          expect(Math.max(...g)).toBeGreaterThan(0);
+        }
+      }
+    }), { numRuns: 200, seed: 10 });
+    expect(ruledOut).toBeGreaterThan(20);
+  });
+
   it('the interval bounds, the replayed brackets and the objective ceiling change nothing but the work: the same springs with and without them, for every rank key and per wire (property)', () => {
     fc.assert(fc.property(problemArb, fc.constantFrom('mass', 'wire_volume', 'outer_diameter', 'free_length'), fc.constantFrom(1, 5), fc.boolean(), (doc, rank, top, perWire) => {
       const p = build({ ...doc, coil_step: 0.5, rank, ends: ['plain', 'squared-ground'] });
