@@ -106,6 +106,19 @@ describe('spring problem: the objective ceiling', () => {
   });
 });
 
+/** Every mean diameter of the index range (41 points) fails some check for this stock item, end type
+ * and coil-count index. */
+function expectNoFeasibleDiameter(p: ReturnType<typeof build>, item: number, e: number, n: number): void {
+  const d = p.stock[item].wireDiameter;
+  const g = new Float64Array(CHECKS.length);
+  const f = new Float64Array(p.objectiveNames.length);
+  const [cMin, cMax] = p.req.index;
+  for (let t = 0; t <= 40; t++) {
+    p.evaluate(Float64Array.of(item, e, valueAt(p.variables[2], n), d * (cMin + ((cMax - cMin) * t) / 40)), g, f);
+    expect(Math.max(...g)).toBeGreaterThan(0);
+  }
+}
+
 describe('spring problem in the search', () => {
   it('a wire size the branch hint rules out has no feasible point anywhere under it (property)', () => {
     let ruledOut = 0;
@@ -117,19 +130,9 @@ describe('spring problem in the search', () => {
       const j = p.branchInfeasible!(x, depth);
       if (j < 0) return;
       ruledOut++;
-      const d = p.stock[x[0]].wireDiameter;
-      const g = new Float64Array(CHECKS.length);
-      const f = new Float64Array(p.objectiveNames.length);
-      const [cMin, cMax] = p.req.index;
       for (let e = 0; e < p.ends.length; e++) {
         if (depth >= 2 && e !== x[1]) continue;
-        for (let n = 0; n < valueCount(p.variables[2]); n += 3) {
-          for (let t = 0; t <= 40; t++) {
-            const y = Float64Array.of(x[0], e, valueAt(p.variables[2], n), d * (cMin + ((cMax - cMin) * t) / 40));
-            p.evaluate(y, g, f);
-            expect(Math.max(...g)).toBeGreaterThan(0);
-          }
-        }
+        for (let n = 0; n < valueCount(p.variables[2]); n += 3) expectNoFeasibleDiameter(p, x[0], e, n);
       }
     }), { numRuns: 150, seed: 9 });
     expect(ruledOut).toBeGreaterThan(10);
@@ -149,16 +152,7 @@ describe('spring problem in the search', () => {
       const j = p.rangeInfeasible!(x, 2, from, to);
       if (j < 0) return;
       ruledOut++;
-      const d = p.stock[x[0]].wireDiameter;
-      const g = new Float64Array(CHECKS.length);
-      const f = new Float64Array(p.objectiveNames.length);
-      const [cMin, cMax] = p.req.index;
-      for (let n = from; n <= to; n += Math.max(1, Math.floor((to - from) / 8))) {
-        for (let t = 0; t <= 40; t++) {
-          p.evaluate(Float64Array.of(x[0], x[1], valueAt(p.variables[2], n), d * (cMin + ((cMax - cMin) * t) / 40)), g, f);
-          expect(Math.max(...g)).toBeGreaterThan(0);
-        }
-      }
+      for (let n = from; n <= to; n += Math.max(1, Math.floor((to - from) / 8))) expectNoFeasibleDiameter(p, x[0], x[1], n);
     }), { numRuns: 200, seed: 10 });
     expect(ruledOut).toBeGreaterThan(20);
   });
