@@ -1,12 +1,14 @@
 // source: none needed; nothing here is checked against a value from outside the project.
 // No outside values here: the expected outputs are coilfront's own, recorded before the seam
 // restructuring (issue 7) so that every later commit can prove it changed no output byte.
-export interface GoldenCase { name: string; args: string[] }
+/** `output`: the case writes a file (its path is '{out}' in args) and the file is what is recorded. */
+export interface GoldenCase { name: string; args: string[]; output?: boolean }
 
 const demo = 'examples/washer-trigger.yaml';
 const dispenser = 'examples/stock-dispenser.yaml';
 const shutter = 'test/golden/inputs/shutter-lift.yaml';
 const clip = 'test/golden/inputs/cramped-clip.yaml';
+const pedalBin = 'examples/extension-pedal-bin.yaml';
 
 export const GOLDEN_CASES: GoldenCase[] = [
   { name: 'design-washer-trigger.txt', args: ['design', demo] },
@@ -23,4 +25,8 @@ export const GOLDEN_CASES: GoldenCase[] = [
   { name: 'frontier-washer-trigger.csv', args: ['frontier', demo] },
   { name: 'frontier-washer-trigger-cost.json', args: ['frontier', demo, '--x', 'relative_cost', '--y', 'free_length', '--json'] },
   { name: 'sweep-washer-trigger.csv', args: ['sweep', demo, '--vary', 'envelope.max_outer_diameter=12:16:2'] },
+  { name: 'design-washer-trigger.html', args: ['design', demo, '--report', '{out}'], output: true },
+  { name: 'design-washer-trigger-us.html', args: ['design', demo, '--units', 'us', '--report', '{out}'], output: true },
+  { name: 'design-extension-pedal-bin.txt', args: ['design', pedalBin] },
+  { name: 'design-extension-pedal-bin.json', args: ['design', pedalBin, '--json'] },
 ];

@@ -4,7 +4,7 @@
 import { existsSync, mkdirSync, readFileSync, writeFileSync } from 'node:fs';
 import { join } from 'node:path';
 import { describe, expect, it } from 'vitest';
-import { cli } from '../helpers.js';
+import { cli, tempPath } from '../helpers.js';
 import { GOLDEN_CASES } from './cases.js';
 
 const dir = 'test/golden/expected';
@@ -13,8 +13,10 @@ const update = process.env.GOLDEN_UPDATE === '1';
 describe('outputs stay byte-identical', () => {
   for (const c of GOLDEN_CASES) {
     it(`coilfront ${c.args.join(' ')}`, async () => {
-      const r = await cli(...c.args);
-      const recorded = `exit ${r.code}\n--- stderr\n${r.stderr}--- stdout\n${r.stdout}`;
+      const out = c.output ? tempPath(c.name) : '';
+      const r = await cli(...c.args.map((a) => (a === '{out}' ? out : a)));
+      // A written file is recorded instead of the streams (stderr names the temporary path).
+      const recorded = c.output ? `exit ${r.code}\n--- ${c.args[c.args.indexOf('{out}') - 1]}\n${readFileSync(out, 'utf8')}` : `exit ${r.code}\n--- stderr\n${r.stderr}--- stdout\n${r.stdout}`;
       const path = join(dir, c.name);
       if (update) {
         mkdirSync(dir, { recursive: true });
