@@ -63,6 +63,22 @@ export interface FieldDefinition<Cand> {
   /** Significant digits in CSV (tables round for reading, CSV keeps precision). */
   readonly digits: number;
   read(c: Cand): FieldValue;
+  /** The JSON value where it is not read(c): a list or a record (points, checks), a flag. */
+  json?(c: Cand): unknown;
+  /** Whether this candidate carries the field at all (a yield only where the run was confirmed): when
+   * not, JSON leaves the key out and a table shows '-' (the column only where some row carries it). */
+  present?(c: Cand): boolean;
+  /** Its column in the ranked text and HTML tables. */
+  readonly column?: FieldColumn<Cand>;
+}
+
+export interface FieldColumn<Cand> {
+  /** The heading; the unit symbol follows it for a field with a unit ("d mm"). */
+  readonly head: string;
+  /** Significant digits shown (0: written as it is). */
+  readonly digits: number;
+  /** The cell where it is not the rounded figure ("20.0 / 33.6", a percentage). */
+  cell?(c: Cand, system: UnitSystem): string;
 }
 
 /** The search problem of a kind: a general Problem (the engine knows nothing of springs) plus the

@@ -4,7 +4,7 @@ import type { Requirements } from '../kinds/compression/requirements.js';
 import { CHECK_LABELS, CHECKS, type CheckName } from '../kinds/compression/verify.js';
 import { candidateAt, reportedChecks, type Candidate, type DesignRun } from '../kinds/compression/design.js';
 import { limitingCheck, outward, relaxAdvice, type RelaxAdvice, type RelaxChange } from '../kinds/compression/relax.js';
-import { formatQuantity, inUnit, quantityWriter, sig, unitSymbol } from '../units/format.js';
+import { formatQuantity, inUnit, quantityWriter, sig, unitSymbol, yieldPercent } from '../units/format.js';
 import { rulesOfThumb } from '../kinds/compression/analysis.js';
 import type { Kind } from '../units/kinds.js';
 import type { UnitSystem } from '../units/systems.js';
@@ -12,64 +12,14 @@ import { cautionText } from './cautions.js';
 import { SI_UNITS } from './json.js';
 import { strengthBasisOf, strengthBasisSummary } from '../input/material.js';
 import { table } from './table.js';
-import { tolerancesJson } from '../kinds/compression/tolerance/model.js';
+import { fieldGrid, fieldRecord } from './fields.js';
+import { COMPRESSION_JSON_FIELDS, COMPRESSION_TABLE_FIELDS } from '../kinds/compression/fields.js';
 import type { CandidateYield } from '../kinds/compression/tolerance/springYield.js';
 
-/** The yield fields of one candidate in the JSON (SI): the Monte Carlo yield, its samples and standard
- * error, the in-search estimate, the check that limits it, and the +- half-widths it was made to. */
-export function yieldRecord(y: CandidateYield): Record<string, unknown> {
-  return {
-    yield: y.monteCarlo.yield,
-    yield_samples: y.monteCarlo.samples,
-    yield_standard_error: y.monteCarlo.standardError,
-    yield_estimate: y.estimate,
-    yield_limited_by: y.limiting,
-    tolerance_grade: y.tolerances.grade,
-    tolerances: tolerancesJson(y.tolerances),
-  };
-}
-
+/** One candidate as JSON (SI), rendered from the compression fields registry; with its yield at the
+ * tolerances where the run was confirmed. */
 export function candidateRecord(c: Candidate, y?: CandidateYield): Record<string, unknown> {
-  const a = c.analysis;
-  const g = a.geometry;
-  const checks: Record<string, number> = {};
-  CHECKS.forEach((name, i) => { if (c.checks[i] !== -1) checks[name] = c.checks[i]; });
-  return {
-    material: c.item.choice.material.id,
-    material_name: c.item.choice.material.name,
-    ends: g.ends,
-    wire_diameter: g.wireDiameter,
-    mean_diameter: g.meanDiameter,
-    outer_diameter: g.outerDiameter,
-    inner_diameter: g.innerDiameter,
-    spring_index: g.springIndex,
-    active_coils: g.activeCoils,
-    total_coils: g.totalCoils,
-    free_length: g.freeLength,
-    solid_length: g.solidLength,
-    pitch: g.pitch,
-    rate: a.rate,
-    mass: g.mass,
-    wire_volume: g.wireVolume,
-    relative_cost: g.mass * c.item.choice.material.relativeCost.value,
-    points: a.points.map((p) => ({ length: p.length, force: p.force, stress: p.stress })),
-    solid_force: a.solid.force,
-    solid_stress: a.solid.stress,
-    solid_outer_diameter: a.solid.outerDiameter,
-    tensile_strength: a.material.tensileStrength,
-    strength_source: strengthBasisOf(c.item.choice).source,
-    allowable_stress: a.material.allowableStress,
-    static_safety_factor: a.staticSafetyFactor,
-    fatigue_safety_factor: a.fatigue ? a.fatigue.safetyFactor : null,
-    natural_frequency: a.surge.relevant,
-    surge_ends: a.surge.ends,
-    absolutely_stable: a.buckling.absolutelyStable,
-    critical_deflection: a.buckling.absolutelyStable ? null : a.buckling.criticalDeflection,
-    checks,
-    ...(y ? yieldRecord(y) : {}),
-    ...(c.variants !== undefined ? { variants: c.variants } : {}),
-    warnings: a.warnings.map((w) => w.message),
-  };
+  return fieldRecord(COMPRESSION_JSON_FIELDS, y ? { ...c, yield: y } : c);
 }
 
 export function requirementsRecord(req: Requirements): Record<string, unknown> {
@@ -220,41 +170,13 @@ function failing(c: Candidate): Record<string, number> {
   return out;
 }
 
-const num = (v: number, kind: Kind, system: UnitSystem, digits = 4) => sig(inUnit(v, kind, system), digits);
-
-/** The ranked-candidate columns, shared by the terminal table and the HTML report. */
+/** The ranked-candidate columns, shared by the terminal table and the HTML report: rendered from the
+ * compression fields registry; the yield columns where the yields are given. */
 export function candidateGrid(cands: Candidate[], system: UnitSystem, yields?: CandidateYield[]): { header: string[]; rows: string[][] } {
-  const u = (k: Kind) => unitSymbol(k, system);
-  const grouped = cands.some((c) => c.variants !== undefined);
-  const header = [
-    '#', 'material', `d ${u('length')}`, `D ${u('length')}`, `OD ${u('length')}`, `ID ${u('length')}`, 'Na', 'Nt', 'ends',
-    `L0 ${u('length')}`, `Ls ${u('length')}`, `k ${u('rate')}`, `forces ${u('force')}`, `tau max ${u('stress')}`, 'SF static', 'SF fatigue', `mass ${u('mass')}`,
-    ...(yields ? ['yield', 'yield limited by'] : []),
-    ...(grouped ? ['of'] : []),
-  ];
-  const rows = cands.map((c, i) => {
-    const a = c.analysis;
-    const g = a.geometry;
-    const tauMax = Math.max(...a.points.map((p) => p.stress));
-    return [
-      String(i + 1), c.item.choice.material.id, num(g.wireDiameter, 'length', system), num(g.meanDiameter, 'length', system),
-      num(g.outerDiameter, 'length', system), num(g.innerDiameter, 'length', system), sig(g.activeCoils, 4), sig(g.totalCoils, 4), g.ends,
-      num(g.freeLength, 'length', system), num(g.solidLength, 'length', system), num(a.rate, 'rate', system),
-      a.points.map((p) => num(p.force, 'force', system, 3)).join(' / '), num(tauMax, 'stress', system),
-      sig(a.staticSafetyFactor, 3), a.fatigue ? sig(a.fatigue.safetyFactor, 3) : '-', num(g.mass, 'mass', system, 3),
-      ...(yields ? [yieldPercent(yields[i].monteCarlo.yield), yields[i].limiting ?? '-'] : []),
-      ...(grouped ? [c.variants !== undefined ? String(c.variants) : '-'] : []),
-    ];
-  });
-  return { header, rows };
+  return fieldGrid(COMPRESSION_TABLE_FIELDS, yields ? cands.map((c, i) => ({ ...c, yield: yields[i] })) : cands, system);
 }
 
-/** A yield as a percentage: one decimal, never rounded up to 100% while any sampled spring failed. */
-export function yieldPercent(y: number): string {
-  if (y >= 1) return '100%';
-  const t = Math.floor(y * 1000) / 10;
-  return `${t.toFixed(1)}%`;
-}
+export { yieldPercent };
 
 /** What the yield column means, under the table. */
 export function yieldNote(run: DesignRun): string[] {

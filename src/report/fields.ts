@@ -1,6 +1,7 @@
-// Output fields rendered for a unit system: the CSV columns of any spring kind, from its fields
-// registry (src/kinds/kind.ts). Names carry their unit symbol (`wire_diameter_mm`); values are
-// rounded to the field's significant digits (0: written as they are).
+// Output fields rendered for people and machines, from a spring kind's fields registry
+// (src/kinds/kind.ts): CSV columns (names carry their unit symbol, `wire_diameter_mm`; values rounded
+// to the field's significant digits, 0: written as they are), the JSON record (SI, full precision)
+// and the ranked table's header and cells (text and HTML) in a unit system.
 import type { FieldDefinition, FieldValue } from '../kinds/kind.js';
 import { inUnit, sig, unitSymbol } from '../units/format.js';
 import type { UnitSystem } from '../units/systems.js';
@@ -13,7 +14,38 @@ export function fieldRow<C>(fields: readonly FieldDefinition<C>[], c: C, system:
   return fields.map((f) => {
     const v = f.read(c);
     if (typeof v !== 'number') return v;
+    if (!Number.isFinite(v)) return null;
     const shown = f.unit && f.unit !== 'volume' ? inUnit(v, f.unit, system) : v;
     return f.digits > 0 ? Number(sig(shown, f.digits)) : shown;
   });
+}
+
+/** The JSON record of one candidate (SI): every field it carries, in the list's order. */
+export function fieldRecord<C>(fields: readonly FieldDefinition<C>[], c: C): Record<string, unknown> {
+  const out: Record<string, unknown> = {};
+  for (const f of fields) {
+    if (f.present && !f.present(c)) continue;
+    out[f.name] = f.json ? f.json(c) : f.read(c);
+  }
+  return out;
+}
+
+/** The ranked table (text and HTML): a rank column, then each field with a column that some row
+ * carries; '-' where a figure does not apply. */
+export function fieldGrid<C>(fields: readonly FieldDefinition<C>[], cands: readonly C[], system: UnitSystem): { header: string[]; rows: string[][] } {
+  const shown = fields.filter((f) => f.column && (!f.present || cands.some((c) => f.present!(c))));
+  const header = ['#', ...shown.map((f) => (f.unit ? `${f.column!.head} ${unitSymbol(f.unit, system)}` : f.column!.head))];
+  const rows = cands.map((c, i) => [String(i + 1), ...shown.map((f) => fieldCell(f, c, system))]);
+  return { header, rows };
+}
+
+function fieldCell<C>(f: FieldDefinition<C>, c: C, system: UnitSystem): string {
+  const col = f.column!;
+  if (f.present && !f.present(c)) return '-';
+  if (col.cell) return col.cell(c, system);
+  const v = f.read(c);
+  if (v === null) return '-';
+  if (typeof v === 'string') return v;
+  if (col.digits === 0) return String(v);
+  return sig(f.unit ? inUnit(v, f.unit, system) : v, col.digits);
 }

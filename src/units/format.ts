@@ -15,6 +15,13 @@ export function sig(v: number, digits = 4): string {
   return r.toFixed(Math.min(decimals, 8));
 }
 
+/** A yield as a percentage: one decimal, never rounded up to 100% while any sampled spring failed. */
+export function yieldPercent(y: number): string {
+  if (y >= 1) return '100%';
+  const t = Math.floor(y * 1000) / 10;
+  return `${t.toFixed(1)}%`;
+}
+
 export function formatQuantity(core: number, kind: Kind, system: UnitSystem, digits = 4): string {
   const u = displayUnit(system, kind);
   return `${sig(u.fromCore(core), digits)} ${u.symbol}`;

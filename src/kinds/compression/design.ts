@@ -39,6 +39,8 @@ export interface DesignOptions {
 export interface Candidate {
   /** In the grouped list: how many feasible springs (coil counts) of its material, wire size and end type this one stands for. */
   variants?: number;
+  /** Its yield at the tolerances, attached for output where the run was confirmed (run.yields). */
+  yield?: CandidateYield;
   item: StockItem;
   geometry: SpringGeometry;
   analysis: SpringAnalysis;

@@ -1,64 +1,78 @@
-// The output fields of a designed extension spring, one definition each: the CSV of `frontier` and
-// `sweep` is rendered from this list (the same shape as the seam's field registry: name, unit kind,
-// significant digits, how to read it). Values are SI; null where a figure does not apply.
-import { inUnit, sig, unitSymbol } from '../../units/format.js';
-import type { Kind } from '../../units/kinds.js';
+// The output fields of a designed extension spring, one definition each: name, unit kind, significant
+// digits, how to read it, and its column in the ranked tables. The CSV of `frontier` and `sweep` and the
+// ranked text and HTML tables are rendered from these definitions (src/report/fields.ts). Values are
+// SI; null where a figure does not apply.
+import type { FieldDefinition, FieldValue } from '../kind.js';
+import { fieldColumns, fieldRow } from '../../report/fields.js';
+import { inUnit, sig } from '../../units/format.js';
 import type { UnitSystem } from '../../units/systems.js';
+import type { ExtensionSite } from './analysis.js';
 import type { ExtensionCandidate } from './design.js';
-import { bandFraction, fatigueSafety } from './report.js';
+import { bandFraction, fatigueSafety } from './figures.js';
 
-export type ExtensionFieldValue = number | string | null;
-
-export interface ExtensionField {
-  readonly name: string;
-  readonly unit: Kind | null;
-  readonly digits: number;
-  read(c: ExtensionCandidate): ExtensionFieldValue;
-}
+export type ExtensionFieldValue = FieldValue;
+export type ExtensionField = FieldDefinition<ExtensionCandidate>;
 
 const finite = (v: number): number | null => (Number.isFinite(v) ? v : null);
 const longest = (c: ExtensionCandidate) => c.analysis.points.reduce((m, p) => (p.force > m.force ? p : m), c.analysis.points[0]);
+const shortSite = (s: ExtensionSite) => (s === 'body' ? 'body' : s === 'loopBending' ? 'A' : 'B');
 
-export const EXTENSION_FIELDS: readonly ExtensionField[] = [
-  { name: 'material', unit: null, digits: 0, read: (c) => c.item.choice.material.id },
+const ALL: readonly ExtensionField[] = [
+  { name: 'material', unit: null, digits: 0, read: (c) => c.item.choice.material.id, column: { head: 'material', digits: 0 } },
   { name: 'loop', unit: null, digits: 0, read: (c) => c.analysis.geometry.loop },
-  { name: 'wire_diameter', unit: 'length', digits: 6, read: (c) => c.analysis.geometry.wireDiameter },
-  { name: 'mean_diameter', unit: 'length', digits: 6, read: (c) => c.analysis.geometry.meanDiameter },
-  { name: 'outer_diameter', unit: 'length', digits: 6, read: (c) => c.analysis.geometry.outerDiameter },
+  { name: 'wire_diameter', unit: 'length', digits: 6, read: (c) => c.analysis.geometry.wireDiameter, column: { head: 'd', digits: 4 } },
+  { name: 'mean_diameter', unit: 'length', digits: 6, read: (c) => c.analysis.geometry.meanDiameter, column: { head: 'D', digits: 4 } },
+  { name: 'outer_diameter', unit: 'length', digits: 6, read: (c) => c.analysis.geometry.outerDiameter, column: { head: 'OD', digits: 4 } },
   { name: 'spring_index', unit: null, digits: 6, read: (c) => c.analysis.geometry.springIndex },
-  { name: 'body_coils', unit: null, digits: 0, read: (c) => c.analysis.geometry.bodyCoils },
-  { name: 'active_coils', unit: null, digits: 6, read: (c) => c.analysis.geometry.activeCoils },
-  { name: 'free_length', unit: 'length', digits: 6, read: (c) => c.analysis.geometry.freeLength },
-  { name: 'initial_tension', unit: 'force', digits: 6, read: (c) => c.analysis.initialTension.force },
+  { name: 'body_coils', unit: null, digits: 0, read: (c) => c.analysis.geometry.bodyCoils, column: { head: 'Nb', digits: 4 } },
+  { name: 'active_coils', unit: null, digits: 6, read: (c) => c.analysis.geometry.activeCoils, column: { head: 'Na', digits: 4 } },
+  { name: 'free_length', unit: 'length', digits: 6, read: (c) => c.analysis.geometry.freeLength, column: { head: 'L0', digits: 4 } },
+  { name: 'initial_tension', unit: 'force', digits: 6, read: (c) => c.analysis.initialTension.force, column: { head: 'Fi', digits: 3 } },
   { name: 'initial_tension_stress', unit: 'stress', digits: 6, read: (c) => c.analysis.initialTension.stress },
   { name: 'initial_tension_band_position', unit: null, digits: 0, read: (c) => c.analysis.initialTension.position },
-  { name: 'initial_tension_band_fraction', unit: null, digits: 4, read: (c) => finite(bandFraction(c.analysis)) },
-  { name: 'rate', unit: 'rate', digits: 6, read: (c) => c.analysis.rate },
+  { name: 'initial_tension_band_fraction', unit: null, digits: 4, read: (c) => finite(bandFraction(c.analysis)), column: { head: 'Fi band', digits: 2, cell: (c) => { const f = bandFraction(c.analysis); return Number.isFinite(f) ? `${sig(f * 100, 2)}%` : '-'; } } },
+  { name: 'rate', unit: 'rate', digits: 6, read: (c) => c.analysis.rate, column: { head: 'k', digits: 4 } },
+  // The forces at every point the requirement names, in one cell (tables only).
+  { name: 'forces', unit: 'force', digits: 0, read: () => null, column: { head: 'forces', digits: 3, cell: (c, system) => c.analysis.points.map((p) => sig(inUnit(p.force, 'force', system), 3)).join(' / ') } },
   { name: 'working_force', unit: 'force', digits: 6, read: (c) => c.analysis.points[0]?.force ?? null },
   { name: 'operating_force', unit: 'force', digits: 6, read: (c) => (c.analysis.points.length > 1 ? c.analysis.points[c.analysis.points.length - 1].force : null) },
-  { name: 'body_stress', unit: 'stress', digits: 6, read: (c) => longest(c)?.bodyStress ?? null },
-  { name: 'loop_bending_stress', unit: 'stress', digits: 6, read: (c) => longest(c)?.loopBendingStress ?? null },
-  { name: 'loop_torsion_stress', unit: 'stress', digits: 6, read: (c) => longest(c)?.loopTorsionStress ?? null },
+  { name: 'body_stress', unit: 'stress', digits: 6, read: (c) => longest(c)?.bodyStress ?? null, column: { head: 'body', digits: 4 } },
+  { name: 'loop_bending_stress', unit: 'stress', digits: 6, read: (c) => longest(c)?.loopBendingStress ?? null, column: { head: 'loop A', digits: 4 } },
+  { name: 'loop_torsion_stress', unit: 'stress', digits: 6, read: (c) => longest(c)?.loopTorsionStress ?? null, column: { head: 'loop B', digits: 4 } },
+  // The three static safety factors in one cell (tables only).
+  { name: 'static_safety_factors', unit: null, digits: 0, read: () => null, column: { head: 'SF body/A/B', digits: 3, cell: (c) => { const s = c.analysis.staticSafety; return `${sig(s.body, 3)}/${sig(s.loopBending, 3)}/${sig(s.loopTorsion, 3)}`; } } },
   { name: 'body_safety_factor', unit: null, digits: 5, read: (c) => finite(c.analysis.staticSafety.body) },
   { name: 'loop_bending_safety_factor', unit: null, digits: 5, read: (c) => finite(c.analysis.staticSafety.loopBending) },
   { name: 'loop_torsion_safety_factor', unit: null, digits: 5, read: (c) => finite(c.analysis.staticSafety.loopTorsion) },
-  { name: 'fatigue_safety_factor', unit: null, digits: 5, read: (c) => fatigueSafety(c.analysis) },
+  { name: 'fatigue_safety_factor', unit: null, digits: 5, read: (c) => fatigueSafety(c.analysis), column: { head: 'SF fatigue', digits: 3, cell: (c) => { const nf = fatigueSafety(c.analysis); return nf === null ? '-' : `${sig(nf, 3)} ${c.analysis.fatigue ? shortSite(c.analysis.fatigue.governing) : ''}`.trim(); } } },
   { name: 'natural_frequency_Hz', unit: null, digits: 5, read: (c) => c.analysis.surge.frequency },
-  { name: 'mass', unit: 'mass', digits: 6, read: (c) => c.analysis.geometry.mass },
+  { name: 'mass', unit: 'mass', digits: 6, read: (c) => c.analysis.geometry.mass, column: { head: 'mass', digits: 3 } },
   { name: 'relative_cost', unit: null, digits: 6, read: (c) => c.analysis.geometry.mass * c.item.choice.material.relativeCost.value },
 ];
 
+function pick(names: readonly string[]): readonly ExtensionField[] {
+  return names.map((n) => {
+    const f = ALL.find((x) => x.name === n);
+    if (!f) throw new Error(`no output field '${n}' in the extension fields registry`);
+    return f;
+  });
+}
+
+/** CSV columns (frontier, sweep), in their order. */
+export const EXTENSION_FIELDS = ALL.filter((f) => f.name !== 'forces' && f.name !== 'static_safety_factors');
+
+/** The columns of the ranked text and HTML tables. */
+export const EXTENSION_TABLE_FIELDS = pick([
+  'material', 'wire_diameter', 'mean_diameter', 'outer_diameter', 'body_coils', 'active_coils', 'free_length', 'initial_tension',
+  'initial_tension_band_fraction', 'rate', 'forces', 'body_stress', 'loop_bending_stress', 'loop_torsion_stress', 'static_safety_factors',
+  'fatigue_safety_factor', 'mass',
+]);
+
 /** CSV column names in a unit system (the unit symbol in each name). */
 export function extensionColumns(system: UnitSystem): string[] {
-  return EXTENSION_FIELDS.map((f) => (f.unit ? `${f.name}_${unitSymbol(f.unit, system)}` : f.name));
+  return fieldColumns(EXTENSION_FIELDS, system);
 }
 
 export function extensionRow(c: ExtensionCandidate, system: UnitSystem): ExtensionFieldValue[] {
-  return EXTENSION_FIELDS.map((f) => {
-    const v = f.read(c);
-    if (typeof v !== 'number') return v;
-    if (!Number.isFinite(v)) return null;
-    const shown = f.unit ? inUnit(v, f.unit, system) : v;
-    return f.digits > 0 ? Number(sig(shown, f.digits)) : shown;
-  });
+  return fieldRow(EXTENSION_FIELDS, c, system);
 }

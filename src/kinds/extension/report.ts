@@ -6,8 +6,7 @@ import { enduranceSourceLabel } from '../../model/fatigue.js';
 import { cautionText } from '../../report/cautions.js';
 import { SI_UNITS } from '../../report/json.js';
 import { table } from '../../report/table.js';
-import { formatQuantity, inUnit, quantityWriter, sig, unitSymbol } from '../../units/format.js';
-import type { Kind } from '../../units/kinds.js';
+import { formatQuantity, quantityWriter, sig, unitSymbol } from '../../units/format.js';
 import type { UnitSystem } from '../../units/systems.js';
 import { EXTENSION_CAUTION, EXTENSION_SITES, extensionWarnings, siteWords, stressPerNewton, type ExtensionAnalysis, type ExtensionService, type ExtensionSite, type SiteFatigue } from './analysis.js';
 import { EXTENSION_CHECKS, EXTENSION_CHECK_LABELS, activeExtensionChecks } from './checks.js';
@@ -16,6 +15,9 @@ import type { ExtensionRequirements } from './requirements.js';
 import { loadExtensionCatalog } from './catalog.js';
 import { extensionRelaxAdvice, type ExtensionRelaxChange } from './relax.js';
 import type { ExtensionCase } from './springFile.js';
+import { bandFraction, fatigueSafety, staticSafety } from './figures.js';
+import { EXTENSION_TABLE_FIELDS } from './fields.js';
+import { fieldGrid } from '../../report/fields.js';
 
 /** Site names as JSON and CSV write them. */
 export const SITE_KEYS: Record<ExtensionSite, string> = { body: 'body', loopBending: 'loop_bending', loopTorsion: 'loop_torsion' };
@@ -24,24 +26,7 @@ const SITE_SHORT: Record<ExtensionSite, string> = { body: 'body', loopBending: '
 const orNull = (v: number | undefined): number | null => (v === undefined || !Number.isFinite(v) ? null : v);
 const cyclesValue = (c: number | undefined): number | string | null => (c === undefined ? null : Number.isFinite(c) ? c : 'infinite');
 
-/** Where the initial-tension stress sits in its preferred band: 0 at the bottom, 1 at the top (below 0
- * or above 1 outside it). */
-export function bandFraction(a: ExtensionAnalysis): number {
-  const b = a.initialTension.band;
-  return b.high > b.low ? (a.initialTension.stress - b.low) / (b.high - b.low) : NaN;
-}
-
-/** The lowest fatigue safety factor of the three sites (null in static service or with no alternation). */
-export function fatigueSafety(a: ExtensionAnalysis): number | null {
-  if (!a.fatigue) return null;
-  const v = Math.min(...EXTENSION_SITES.map((s) => (Number.isNaN(a.fatigue![s].safetyFactor) ? Infinity : a.fatigue![s].safetyFactor)));
-  return Number.isFinite(v) ? v : null;
-}
-
-/** The lowest static safety factor of the three sites. */
-export function staticSafety(a: ExtensionAnalysis): number {
-  return Math.min(a.staticSafety.body, a.staticSafety.loopBending, a.staticSafety.loopTorsion);
-}
+export { bandFraction, fatigueSafety, staticSafety };
 
 function siteFatigueJson(s: SiteFatigue): Record<string, unknown> {
   return {
@@ -336,37 +321,11 @@ export function extensionDesignJson(run: ExtensionDesignRun, showTiming = false)
   };
 }
 
-const num = (v: number, kind: Kind, system: UnitSystem, digits = 4) => sig(inUnit(v, kind, system), digits);
-
-/** The ranked-candidate columns, shared by the terminal table and the HTML report. */
+/** The ranked-candidate columns, shared by the terminal table and the HTML report: rendered from the
+ * extension fields registry. */
 export function extensionCandidateGrid(cands: ExtensionCandidate[], system: UnitSystem): { header: string[]; rows: string[][] } {
-  const u = (k: Kind) => unitSymbol(k, system);
-  const header = [
-    '#', 'material', `d ${u('length')}`, `D ${u('length')}`, `OD ${u('length')}`, 'Nb', 'Na', `L0 ${u('length')}`,
-    `Fi ${u('force')}`, 'Fi band', `k ${u('rate')}`, `forces ${u('force')}`,
-    `body ${u('stress')}`, `loop A ${u('stress')}`, `loop B ${u('stress')}`, 'SF body/A/B', 'SF fatigue', `mass ${u('mass')}`,
-  ];
-  const rows = cands.map((c, i) => {
-    const a = c.analysis;
-    const g = a.geometry;
-    const last = a.points.reduce((m, p) => (p.force > m.force ? p : m), a.points[0]);
-    const s = a.staticSafety;
-    const nf = fatigueSafety(a);
-    const frac = bandFraction(a);
-    return [
-      String(i + 1), c.item.choice.material.id, num(g.wireDiameter, 'length', system), num(g.meanDiameter, 'length', system),
-      num(g.outerDiameter, 'length', system), sig(g.bodyCoils, 4), sig(g.activeCoils, 4), num(g.freeLength, 'length', system),
-      num(a.initialTension.force, 'force', system, 3), Number.isFinite(frac) ? `${sig(frac * 100, 2)}%` : '-', num(a.rate, 'rate', system),
-      a.points.map((p) => num(p.force, 'force', system, 3)).join(' / '),
-      last ? num(last.bodyStress, 'stress', system) : '-', last ? num(last.loopBendingStress, 'stress', system) : '-', last ? num(last.loopTorsionStress, 'stress', system) : '-',
-      `${sig(s.body, 3)}/${sig(s.loopBending, 3)}/${sig(s.loopTorsion, 3)}`, nf === null ? '-' : `${sig(nf, 3)} ${a.fatigue ? shortSite(a.fatigue.governing) : ''}`.trim(),
-      num(g.mass, 'mass', system, 3),
-    ];
-  });
-  return { header, rows };
+  return fieldGrid(EXTENSION_TABLE_FIELDS, cands, system);
 }
-
-const shortSite = (s: ExtensionSite) => (s === 'body' ? 'body' : s === 'loopBending' ? 'A' : 'B');
 
 export function extensionCountsText(run: ExtensionDesignRun, showTiming = false): string {
   const r = run.result;
