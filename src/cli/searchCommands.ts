@@ -19,7 +19,7 @@ import { planSweep, runSweepPlan, sweepResult, type SweepRow } from '../api/swee
 // The HTML report and CSV writers load only when a command writes them (start-up time: issue 10).
 const htmlReport = () => import('../report/html/designHtml.js');
 const csv = () => import('../report/csv.js');
-import { fieldColumns, fieldRow } from '../report/fields.js';
+import { fieldColumns, fieldNotes, fieldRow } from '../report/fields.js';
 import { compression } from '../kinds/compression/index.js';
 import { InputError } from '../units/parse.js';
 import type { UnitSystem } from '../units/systems.js';
@@ -176,6 +176,11 @@ export function springColumns(system: UnitSystem): string[] {
   return fieldColumns(compression.fields, system);
 }
 
+/** What the CSV's less obvious columns mean (relative_cost), for stderr beside the cautions. */
+function csvNotes(): string {
+  return fieldNotes(compression.fields).map((n) => `coilfront: ${n}\n`).join('');
+}
+
 export function springRow(c: Candidate, system: UnitSystem): (string | number | null)[] {
   return fieldRow(compression.fields, c, system);
 }
@@ -208,7 +213,7 @@ async function frontierCommand(file: string, opts: FrontierOptions, io: Io): Pro
     (await htmlReport()).writeDesignReport(opts.report, fr.run, system, !!opts.force, fr);
     io.stderr(`coilfront: report written to ${opts.report}\n`);
   }
-  if (!opts.json) io.stderr(cautionText() + '\n');
+  if (!opts.json) io.stderr(csvNotes() + cautionText() + '\n');
   return fr.front.length ? EXIT.ok : EXIT.infeasible;
 }
 
@@ -254,7 +259,7 @@ async function sweepCommand(file: string, opts: SweepOptions, io: Io): Promise<n
     (await htmlReport()).writeDesignReport(opts.report, shown, system, !!opts.force, reportFrontier(shown), { name, rows });
     io.stderr(`coilfront: report written to ${opts.report}\n`);
   }
-  if (!opts.json) io.stderr(cautionText() + '\n');
+  if (!opts.json) io.stderr(csvNotes() + cautionText() + '\n');
   return rows.some((r) => r.best) ? EXIT.ok : EXIT.infeasible;
 }
 

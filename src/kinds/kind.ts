@@ -70,6 +70,8 @@ export interface FieldDefinition<Cand> {
   present?(c: Cand): boolean;
   /** Its column in the ranked text and HTML tables. */
   readonly column?: FieldColumn<Cand>;
+  /** What the figure means where its name does not say (relative_cost): printed where it appears. */
+  readonly note?: string;
 }
 
 export interface FieldColumn<Cand> {

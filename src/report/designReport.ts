@@ -13,7 +13,7 @@ import { SI_UNITS } from './json.js';
 import { strengthBasisOf, strengthBasisSummary } from '../input/material.js';
 import { table } from './table.js';
 import { fieldGrid, fieldRecord } from './fields.js';
-import { COMPRESSION_JSON_FIELDS, COMPRESSION_TABLE_FIELDS } from '../kinds/compression/fields.js';
+import { COMPRESSION_JSON_FIELDS, COMPRESSION_TABLE_FIELDS, TABLE_NOTE } from '../kinds/compression/fields.js';
 import type { CandidateYield } from '../kinds/compression/tolerance/springYield.js';
 
 /** One candidate as JSON (SI), rendered from the compression fields registry; with its yield at the
@@ -233,6 +233,7 @@ export function designText(run: DesignRun, system: UnitSystem, showTiming = fals
   out.push('');
   if (run.candidates.length) {
     out.push(candidateTable(run.candidates, system, run.yields));
+    out.push(TABLE_NOTE);
     out.push(...yieldNote(run));
     out.push('');
     out.push(countsText(run, system, showTiming));

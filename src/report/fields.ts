@@ -4,7 +4,7 @@
 // and the ranked table's header and cells (text and HTML) in a unit system.
 import type { FieldDefinition, FieldValue } from '../kinds/kind.js';
 import { inUnit, sig, unitSymbol } from '../units/format.js';
-import type { UnitSystem } from '../units/systems.js';
+import { readableUnit, type DisplayUnit, type UnitSystem } from '../units/systems.js';
 
 export function fieldColumns<C>(fields: readonly FieldDefinition<C>[], system: UnitSystem): string[] {
   return fields.map((f) => (f.unit && f.unit !== 'volume' ? `${f.name}_${unitSymbol(f.unit, system)}` : f.name));
@@ -18,6 +18,11 @@ export function fieldRow<C>(fields: readonly FieldDefinition<C>[], c: C, system:
     const shown = f.unit && f.unit !== 'volume' ? inUnit(v, f.unit, system) : v;
     return f.digits > 0 ? Number(sig(shown, f.digits)) : shown;
   });
+}
+
+/** The notes of the fields that carry one (`name: what it means`), for a footer beside the output. */
+export function fieldNotes<C>(fields: readonly FieldDefinition<C>[]): string[] {
+  return fields.filter((f) => f.note).map((f) => `${f.name}: ${f.note}`);
 }
 
 /** The JSON record of one candidate (SI): every field it carries, in the list's order. */
@@ -34,12 +39,23 @@ export function fieldRecord<C>(fields: readonly FieldDefinition<C>[], c: C): Rec
  * carries; '-' where a figure does not apply. */
 export function fieldGrid<C>(fields: readonly FieldDefinition<C>[], cands: readonly C[], system: UnitSystem): { header: string[]; rows: string[][] } {
   const shown = fields.filter((f) => f.column && (!f.present || cands.some((c) => f.present!(c))));
-  const header = ['#', ...shown.map((f) => (f.unit ? `${f.column!.head} ${unitSymbol(f.unit, system)}` : f.column!.head))];
-  const rows = cands.map((c, i) => [String(i + 1), ...shown.map((f) => fieldCell(f, c, system))]);
+  // A column's unit follows its largest figure (grams for springs under 1 kg).
+  const units = shown.map((f) => (f.unit ? readableUnit(system, f.unit, largest(f, cands)) : null));
+  const header = ['#', ...shown.map((f, j) => (units[j] ? `${f.column!.head} ${units[j]!.symbol}` : f.column!.head))];
+  const rows = cands.map((c, i) => [String(i + 1), ...shown.map((f, j) => fieldCell(f, c, system, units[j]))]);
   return { header, rows };
 }
 
-function fieldCell<C>(f: FieldDefinition<C>, c: C, system: UnitSystem): string {
+function largest<C>(f: FieldDefinition<C>, cands: readonly C[]): number {
+  let m = 0;
+  for (const c of cands) {
+    const v = f.read(c);
+    if (typeof v === 'number' && Number.isFinite(v)) m = Math.max(m, Math.abs(v));
+  }
+  return m;
+}
+
+function fieldCell<C>(f: FieldDefinition<C>, c: C, system: UnitSystem, unit: DisplayUnit | null): string {
   const col = f.column!;
   if (f.present && !f.present(c)) return '-';
   if (col.cell) return col.cell(c, system);
@@ -47,5 +63,5 @@ function fieldCell<C>(f: FieldDefinition<C>, c: C, system: UnitSystem): string {
   if (v === null) return '-';
   if (typeof v === 'string') return v;
   if (col.digits === 0) return String(v);
-  return sig(f.unit ? inUnit(v, f.unit, system) : v, col.digits);
+  return sig(unit ? unit.fromCore(v) : v, col.digits);
 }

@@ -13,7 +13,7 @@ import { table } from '../report/table.js';
 import { CHECK_LABELS, type CheckName } from '../kinds/compression/verify.js';
 import { formatQuantity, inUnit, sig, unitSymbol } from '../units/format.js';
 import type { Kind } from '../units/kinds.js';
-import type { UnitSystem } from '../units/systems.js';
+import { readableUnit, type UnitSystem } from '../units/systems.js';
 import type { RowResult, StockRun } from './run.js';
 
 export const STOCK_NOTE = 'Stock rows are judged as not shot-peened and without set removal (a stock table has no column for either).';
@@ -84,8 +84,10 @@ const num = (v: number, kind: Kind, system: UnitSystem, digits = 4) => sig(inUni
 /** The columns shared by the text table and the HTML report. */
 export function stockGrid(rows: RowResult[], system: UnitSystem, ranked: boolean): { header: string[]; cells: string[][] } {
   const u = (k: Kind) => unitSymbol(k, system);
+  // Masses in grams when every spring listed is under 1 kg (SI).
+  const mass = readableUnit(system, 'mass', Math.max(0, ...rows.map((r) => r.verdict.analysis.geometry.mass)));
   const header = [ranked ? '#' : 'line', 'part', 'material', `d ${u('length')}`, `OD ${u('length')}`, `ID ${u('length')}`, `L0 ${u('length')}`, `Ls ${u('length')}`,
-    'Na', 'ends', `k ${u('rate')}`, `forces ${u('force')}`, 'SF static', 'SF fatigue', `mass ${u('mass')}`, 'price', 'smallest margin'];
+    'Na', 'ends', `k ${u('rate')}`, `forces ${u('force')}`, 'SF static', 'SF fatigue', `mass ${mass.symbol}`, 'price', 'smallest margin'];
   const cells = rows.map((r, i) => {
     const a = r.verdict.analysis;
     const g = a.geometry;
@@ -93,7 +95,7 @@ export function stockGrid(rows: RowResult[], system: UnitSystem, ranked: boolean
     return [ranked ? String(i + 1) : String(r.row.line), r.row.partNumber + flag, r.verdict.spring.choice.material.id, num(g.wireDiameter, 'length', system), num(g.outerDiameter, 'length', system),
       num(g.innerDiameter, 'length', system), num(g.freeLength, 'length', system), num(g.solidLength, 'length', system), sig(g.activeCoils, 4), g.ends,
       num(a.rate, 'rate', system), a.points.map((p) => num(p.force, 'force', system, 3)).join(' / '), sig(a.staticSafetyFactor, 3),
-      a.fatigue ? sig(a.fatigue.safetyFactor, 3) : '-', num(g.mass, 'mass', system, 3), r.row.price !== undefined ? sig(r.row.price, 4) : '-',
+      a.fatigue ? sig(a.fatigue.safetyFactor, 3) : '-', sig(mass.fromCore(g.mass), 3), r.row.price !== undefined ? sig(r.row.price, 4) : '-',
       r.verdict.limiting ? `${r.verdict.limiting.name} ${writeMargin(r.verdict.limiting.margin)}` : '-'];
   });
   return { header, cells };

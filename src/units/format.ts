@@ -1,7 +1,7 @@
 // Writing quantities for people: core (SI) values into the chosen system with a sensible number
 // of significant figures. Non-finite values never reach output: they are written as a dash.
 import type { Kind } from './kinds.js';
-import { displayUnit, type UnitSystem } from './systems.js';
+import { outputUnit, readableUnit, type UnitSystem } from './systems.js';
 
 export function sig(v: number, digits = 4): string {
   if (!Number.isFinite(v)) return '-';
@@ -22,17 +22,18 @@ export function yieldPercent(y: number): string {
   return `${t.toFixed(1)}%`;
 }
 
+/** A figure for people, in the unit its size reads best in (5.63 g, 73.4 kpsi, 11.5 Mpsi). */
 export function formatQuantity(core: number, kind: Kind, system: UnitSystem, digits = 4): string {
-  const u = displayUnit(system, kind);
+  const u = readableUnit(system, kind, core);
   return `${sig(u.fromCore(core), digits)} ${u.symbol}`;
 }
 
 export function inUnit(core: number, kind: Kind, system: UnitSystem): number {
-  return displayUnit(system, kind).fromCore(core);
+  return outputUnit(system, kind).fromCore(core);
 }
 
 export function unitSymbol(kind: Kind, system: UnitSystem): string {
-  return displayUnit(system, kind).symbol;
+  return outputUnit(system, kind).symbol;
 }
 
 /** Writers for warnings in the chosen system. */

@@ -39,3 +39,24 @@ const US: Record<Kind, DisplayUnit> = {
 export function displayUnit(system: UnitSystem, kind: Kind): DisplayUnit {
   return (system === 'us' ? US : SI)[kind];
 }
+
+// What people read differs from what a plain number in a file means in one place: a spring's stresses
+// run to six figures in psi, so US output writes them in kpsi (a US file's plain numbers stay psi).
+const US_OUTPUT: Partial<Record<Kind, DisplayUnit>> = { stress: scale('kpsi', 1e3 * PSI_MPA) };
+
+/** The unit output is written in (text, HTML, CSV; JSON is always SI). */
+export function outputUnit(system: UnitSystem, kind: Kind): DisplayUnit {
+  return (system === 'us' ? US_OUTPUT[kind] : undefined) ?? displayUnit(system, kind);
+}
+
+const GRAM = scale('g', 1e-3);
+const MPSI = scale('Mpsi', 1e6 * PSI_MPA);
+
+/** The unit a figure of this size reads best in: SI masses under 1 kg in grams, US stresses of a
+ * thousand kpsi and more (moduli: no spring is stressed that far) in Mpsi; else outputUnit. */
+export function readableUnit(system: UnitSystem, kind: Kind, magnitude: number): DisplayUnit {
+  const m = Math.abs(magnitude);
+  if (kind === 'mass' && system === 'si' && m < 1) return GRAM;
+  if (kind === 'stress' && system === 'us' && m >= MPSI.toCore(1)) return MPSI;
+  return outputUnit(system, kind);
+}

@@ -54,12 +54,12 @@ describe('coilfront program', () => {
     expect(s.stdout).not.toMatch(/NaN|Infinity/);
   });
 
-  it('US output writes inches, pounds-force and psi', async () => {
+  it('US output writes inches, pounds-force and kpsi (stresses)', async () => {
     const r = await cli('design', 'examples/washer-trigger.yaml', '--units', 'us', '--top', '3');
     expect(r.code).toBe(0);
     expect(r.stdout).toMatch(/d in\s+D in\s+OD in/);
     expect(r.stdout).toMatch(/forces lbf/);
-    expect(r.stdout).toMatch(/tau max psi/);
+    expect(r.stdout).toMatch(/tau max kpsi/);
   });
 
   it('materials lists every catalog material and series with its source; JSON carries every source', async () => {

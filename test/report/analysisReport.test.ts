@@ -56,7 +56,7 @@ ${extra}`);
     expect(j.material.law_above_minimum).toBeCloseTo(0.034, 3);
     expect(j.material.tabulated_minimum_source).toMatch(/ASTM A228/);
     const text = (await cli('analyze', musicWire(''))).stdout;
-    expect(text).toMatch(/tensile strength: published law \(strength_basis: law\), Shigley Table 10-4.*runs 3\.4% above the tabulated minimum 271000 psi/);
+    expect(text).toMatch(/tensile strength: published law \(strength_basis: law\), Shigley Table 10-4.*runs 3\.4% above the tabulated minimum 271\.0 kpsi/);
   });
 
   it('strength_basis: minimum uses 271 kpsi at 0.100 in and 261 kpsi at 0.125 in, and says so (source: ASTM A228 tensile requirements, as printed in music-wire distributors\' data sheets)', async () => {

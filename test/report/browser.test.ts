@@ -122,3 +122,42 @@ describe('spring report in headless Chromium', () => {
     await page.close();
   });
 });
+
+describe('design report printed', () => {
+  // The page less the report's print margins (@page margin 14 mm each side, src/report/html/page.ts), in
+  // CSS pixels (96 to the inch): the width a printed table has. A4 210 mm (ISO 216), Letter 8.5 in.
+  const printable = { A4: ((210 - 28) / 25.4) * 96, Letter: ((8.5 * 25.4 - 28) / 25.4) * 96 };
+
+  /** The ranked table's right edge and its width against the page's content width, at that width. */
+  async function ranked(file: string, width: number, media: 'print' | 'screen') {
+    const { page } = await openReport(file);
+    await page.setViewportSize({ width: Math.floor(width), height: 1000 });
+    await page.emulateMedia({ media });
+    const box = await page.$eval('table.ranked', (t) => ({ width: t.scrollWidth, right: t.getBoundingClientRect().right, page: document.documentElement.clientWidth, cells: t.querySelectorAll('tbody td').length }));
+    return { page, box };
+  }
+
+  for (const [units, extra] of [['si', []], ['us', ['--units', 'us']], ['si, every variant', ['--variants']]] as const) {
+    it(`(${units}) the ranked table fits the printed width of A4 and of Letter, every column on the page`, async () => {
+      const file = join(OUT, `design-report-print-${units.replace(/\W+/g, '-')}.html`);
+      rmSync(file, { force: true });
+      const r = await cli('design', 'examples/washer-trigger.yaml', ...extra, '--report', file);
+      expect(r.code).toBe(0);
+      for (const [format, width] of Object.entries(printable)) {
+        const { page, box } = await ranked(file, width, 'print');
+        expect(box.cells).toBeGreaterThan(10);
+        expect(box.width, `${format}: table ${box.width} px on a ${box.page} px page`).toBeLessThanOrEqual(box.page);
+        expect(box.right, format).toBeLessThanOrEqual(box.page);
+        await page.pdf({ path: join(OUT, `design-report-${units.replace(/\W+/g, '-')}-${format}.pdf`), format: format as 'A4' | 'Letter', printBackground: true });
+        await page.close();
+      }
+    });
+  }
+
+  it('the check can fail: on screen at the A4 width the same table does not fit (it scrolls there)', async () => {
+    const file = join(OUT, 'design-report-print-si.html');
+    const { page, box } = await ranked(file, printable.A4, 'screen');
+    expect(box.width).toBeGreaterThan(box.page);
+    await page.close();
+  });
+});

@@ -5,16 +5,34 @@
 // that show it.
 import type { Candidate } from './design.js';
 import type { FieldDefinition } from '../kind.js';
-import { CHECKS } from './verify.js';
+import { CHECK, CHECKS } from './verify.js';
 import { strengthBasisOf } from '../../input/material.js';
 import { tolerancesJson } from './tolerance/model.js';
 import { inUnit, sig, yieldPercent } from '../../units/format.js';
+import { RELATIVE_COST_NOTE } from './objectives.js';
 
 type Field = FieldDefinition<Candidate>;
 
 const last = (c: Candidate) => c.analysis.points[c.analysis.points.length - 1];
 const maxStress = (c: Candidate) => Math.max(...c.analysis.points.map((p) => p.stress));
 const hasYield = (c: Candidate) => c.yield !== undefined;
+
+/** How much further the spring may deflect past its largest working deflection before it buckles, as a
+ * fraction of that deflection: the buckling check's own figure with its sign turned (the check is
+ * (largest - critical) / largest). Null where the check does not apply: an absolutely stable spring, or
+ * one guided on a rod or in a bore (the check is off). */
+export function bucklingMargin(c: Candidate): number | null {
+  const b = c.analysis.buckling;
+  if (b.absolutelyStable) return null;
+  const v = (b.maxDeflection - b.criticalDeflection) / b.maxDeflection;
+  return c.checks[CHECK.buckling] === v && Number.isFinite(v) ? -v : null;
+}
+
+function bucklingCell(c: Candidate): string {
+  const m = bucklingMargin(c);
+  if (m !== null) return `${sig(m * 100, 3)}%`;
+  return c.analysis.buckling.absolutelyStable ? 'stable' : c.checks[CHECK.buckling] === -1 ? 'guided' : '-';
+}
 // Structured figures (a list, a record, a flag) have no single CSV value: JSON only.
 const structured = () => null;
 
@@ -52,9 +70,10 @@ const ALL: readonly Field[] = [
   { name: 'surge_ends', unit: null, digits: 0, read: (c) => c.analysis.surge.ends },
   { name: 'absolutely_stable', unit: null, digits: 0, read: structured, json: (c) => c.analysis.buckling.absolutelyStable },
   { name: 'critical_deflection', unit: 'length', digits: 6, read: (c) => (c.analysis.buckling.absolutelyStable ? null : c.analysis.buckling.criticalDeflection) },
+  { name: 'buckling_margin', unit: null, digits: 5, read: bucklingMargin, column: { head: 'buckling', digits: 3, cell: bucklingCell } },
   { name: 'mass', unit: 'mass', digits: 6, read: (c) => c.analysis.geometry.mass, column: { head: 'mass', digits: 3 } },
   { name: 'wire_volume', unit: 'volume', digits: 6, read: (c) => c.analysis.geometry.wireVolume },
-  { name: 'relative_cost', unit: null, digits: 6, read: (c) => c.analysis.geometry.mass * c.item.choice.material.relativeCost.value },
+  { name: 'relative_cost', unit: null, digits: 6, read: (c) => c.analysis.geometry.mass * c.item.choice.material.relativeCost.value, note: RELATIVE_COST_NOTE },
   { name: 'checks', unit: null, digits: 0, read: structured, json: checksRecord },
   // The yield at the tolerances, where the run was confirmed (the design command and API).
   { name: 'yield', unit: null, digits: 6, present: hasYield, read: (c) => c.yield?.monteCarlo.yield ?? null, column: { head: 'yield', digits: 0, cell: (c) => yieldPercent(c.yield!.monteCarlo.yield) } },
@@ -88,7 +107,7 @@ function pick(names: readonly string[]): readonly Field[] {
 export const COMPRESSION_FIELDS = pick([
   'material', 'ends', 'wire_diameter', 'mean_diameter', 'outer_diameter', 'inner_diameter', 'spring_index', 'active_coils', 'total_coils',
   'free_length', 'solid_length', 'rate', 'working_force', 'operating_force', 'max_stress', 'solid_stress', 'static_safety_factor',
-  'fatigue_safety_factor', 'natural_frequency', 'mass', 'relative_cost',
+  'fatigue_safety_factor', 'buckling_margin', 'natural_frequency', 'mass', 'relative_cost',
 ]);
 
 /** The JSON record of a candidate (SI), in its key order. */
@@ -96,12 +115,16 @@ export const COMPRESSION_JSON_FIELDS = pick([
   'material', 'material_name', 'ends', 'wire_diameter', 'mean_diameter', 'outer_diameter', 'inner_diameter', 'spring_index', 'active_coils',
   'total_coils', 'free_length', 'solid_length', 'pitch', 'rate', 'mass', 'wire_volume', 'relative_cost', 'points', 'solid_force', 'solid_stress',
   'solid_outer_diameter', 'tensile_strength', 'strength_source', 'allowable_stress', 'static_safety_factor', 'fatigue_safety_factor',
-  'natural_frequency', 'surge_ends', 'absolutely_stable', 'critical_deflection', 'checks',
+  'natural_frequency', 'surge_ends', 'absolutely_stable', 'critical_deflection', 'buckling_margin', 'checks',
   'yield', 'yield_samples', 'yield_standard_error', 'yield_estimate', 'yield_limited_by', 'tolerance_grade', 'tolerances', 'variants', 'warnings',
 ]);
 
 /** The columns of the ranked text and HTML tables. */
 export const COMPRESSION_TABLE_FIELDS = pick([
-  'material', 'wire_diameter', 'mean_diameter', 'outer_diameter', 'inner_diameter', 'active_coils', 'total_coils', 'ends', 'free_length',
-  'solid_length', 'rate', 'forces', 'max_stress', 'static_safety_factor', 'fatigue_safety_factor', 'mass', 'yield', 'yield_limited_by', 'variants',
+  'material', 'wire_diameter', 'mean_diameter', 'outer_diameter', 'inner_diameter', 'spring_index', 'active_coils', 'total_coils', 'ends',
+  'free_length', 'solid_length', 'rate', 'forces', 'max_stress', 'static_safety_factor', 'fatigue_safety_factor', 'buckling_margin', 'mass',
+  'yield', 'yield_limited_by', 'variants',
 ]);
+
+/** What the columns of the ranked table that are not plain figures mean, under the table. */
+export const TABLE_NOTE = 'C: spring index D/d. buckling: how much further than its largest working deflection the spring may deflect before it buckles (the buckling check\'s margin); stable: absolutely stable at any deflection; guided: on a rod or in a bore (not checked).';

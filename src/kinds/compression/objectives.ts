@@ -4,6 +4,10 @@
 // f[Objective.mass] and so on. A quantity better larger (a safety factor) is stored negated (sign -1).
 import { indexOf, type ObjectiveDefinition } from '../kind.js';
 
+/** What relative_cost is, wherever it appears (CSV, JSON, the frontier's axis): the objective the
+ * search computes, f[Objective.relative_cost] = mass * the material's relativeCost (problem.ts). */
+export const RELATIVE_COST_NOTE = "the spring's mass in kg times its material's relative wire cost (hard-drawn carbon steel = 1.0; music wire 2.6, stainless 302 7.6; each material's factor and its source are in catalogs/materials.yaml, after Shigley Table 10-4, and `coilfront materials` lists them): the mass of hard-drawn wire that would cost as much. It compares materials and sizes; coiling, finishing and quantity are left out.";
+
 export const COMPRESSION_OBJECTIVES = [
   { key: 'mass', label: 'mass', unit: 'mass', sign: 1, trend: 1, rankable: true, frontierAxis: true, lpBound: true },
   { key: 'wire_volume', label: 'wire volume', unit: 'volume', sign: 1, trend: 1, rankable: true, frontierAxis: true, lpBound: true },

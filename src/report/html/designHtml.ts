@@ -14,6 +14,8 @@ import { CONVENTIONS, figure, htmlTable, page } from './page.js';
 import { cloudPlot, sweepPlot } from './plots.js';
 import { fatiguePlot, forceLengthPlot, sideView } from '../../kinds/compression/report/plots.js';
 import { candidateGrid, relaxLines } from '../designReport.js';
+import { fieldNotes } from '../fields.js';
+import { COMPRESSION_FIELDS, TABLE_NOTE } from '../../kinds/compression/fields.js';
 import { surgeEndsLabel } from '../../model/surge.js';
 import { strengthBasisSummary } from '../../input/material.js';
 import { esc } from './svg.js';
@@ -75,7 +77,8 @@ export function springSections(a: SpringAnalysis, system: UnitSystem, service: S
 }
 
 function conventionsSection(): string {
-  return `<h2>Conventions</h2>${htmlTable(['item', 'method and source'], CONVENTIONS.map(([a, b]) => [a, b]), { cls: 'kv' })}`;
+  const notes = fieldNotes(COMPRESSION_FIELDS).map((n) => [n.slice(0, n.indexOf(':')), n.slice(n.indexOf(':') + 2)]);
+  return `<h2>Conventions</h2>${htmlTable(['item', 'method and source'], [...CONVENTIONS.map(([a, b]) => [a, b]), ...notes], { cls: 'kv' })}`;
 }
 
 /** `extra`: sections of another command placed before the conventions (the stock section of `stock --compare`). */
@@ -117,7 +120,9 @@ export function designHtml(run: DesignRun, system: UnitSystem, frontier: Frontie
     }), `${cloud.length} feasible springs (each combination of material, wire, ends and coils at its smallest feasible mean diameter); the line joins the ${fr.front.length} non-dominated ones; the ring marks the chosen spring, first in the table below.`));
     sections.push('<h2>Ranked candidates</h2>');
     const t = candidateGrid(run.candidates, system);
-    sections.push(htmlTable(t.header, t.rows, { bestFirst: true }));
+    // class ranked: set tighter when printed, so that every column fits an A4 or Letter page.
+    sections.push(htmlTable(t.header, t.rows, { bestFirst: true, cls: 'ranked' }));
+    sections.push(`<p class="note">${esc(TABLE_NOTE)}</p>`);
     sections.push(...springSections(best.analysis, system, run.problem.service(), 'The chosen spring'));
   }
   if (sweep) {

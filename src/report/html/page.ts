@@ -27,6 +27,7 @@ tr.best td { background: color-mix(in srgb, var(--accent) 12%, transparent); }
 .kv td:first-child { width: 32%; }
 .scroll { overflow-x: auto; }
 .warn { color: var(--warn); }
+p.note { color: var(--muted); font-size: 0.86rem; margin: 4px 0 0; }
 .cautions { border-left: 4px solid var(--warn); padding: 8px 14px; background: var(--panel); }
 svg.plot { width: 100%; height: auto; display: block; }
 #plot-drawing { max-width: 760px; margin: 0 auto; }
@@ -55,6 +56,9 @@ svg text.none { fill: var(--warn); }
   main { max-width: none; padding: 0; }
   .grid2 { grid-template-columns: 1fr 1fr; }
   figure, table, .cautions { break-inside: avoid; }
+  .scroll { overflow: visible; }
+  table.ranked { font-size: 6.5pt; }
+  table.ranked th, table.ranked td { padding: 1px 2px; white-space: normal; }
   h2 { break-after: avoid; }
 }
 `;
