@@ -146,6 +146,8 @@ describe('design report printed', () => {
       for (const [format, width] of Object.entries(printable)) {
         const { page, box } = await ranked(file, width, 'print');
         expect(box.cells).toBeGreaterThan(10);
+        // The yield columns as the text table has them (the widest cells: a check's name).
+        expect(await page.textContent('table.ranked thead')).toContain('yield limited by');
         expect(box.width, `${format}: table ${box.width} px on a ${box.page} px page`).toBeLessThanOrEqual(box.page);
         expect(box.right, format).toBeLessThanOrEqual(box.page);
         await page.pdf({ path: join(OUT, `design-report-${units.replace(/\W+/g, '-')}-${format}.pdf`), format: format as 'A4' | 'Letter', printBackground: true });

@@ -13,7 +13,7 @@ import { writeOutputFile } from '../writeFile.js';
 import { CONVENTIONS, figure, htmlTable, page } from './page.js';
 import { cloudPlot, sweepPlot } from './plots.js';
 import { fatiguePlot, forceLengthPlot, sideView } from '../../kinds/compression/report/plots.js';
-import { candidateGrid, relaxLines } from '../designReport.js';
+import { candidateGrid, relaxLines, yieldNote } from '../designReport.js';
 import { fieldNotes } from '../fields.js';
 import { COMPRESSION_FIELDS, TABLE_NOTE } from '../../kinds/compression/fields.js';
 import { surgeEndsLabel } from '../../model/surge.js';
@@ -119,10 +119,14 @@ export function designHtml(run: DesignRun, system: UnitSystem, frontier: Frontie
       material: best.item.choice.material.id, wire: String(best.geometry.wireDiameter), 'mean-diameter': String(best.geometry.meanDiameter), 'active-coils': String(best.geometry.activeCoils), ends: best.geometry.ends,
     }), `${cloud.length} feasible springs (each combination of material, wire, ends and coils at its smallest feasible mean diameter); the line joins the ${fr.front.length} non-dominated ones; the ring marks the chosen spring, first in the table below.`));
     sections.push('<h2>Ranked candidates</h2>');
-    const t = candidateGrid(run.candidates, system);
+    // With the yield at the tolerances where the run was confirmed (design and its API), as the text has it.
+    const t = candidateGrid(run.candidates, system, run.yields);
     // class ranked: set tighter when printed, so that every column fits an A4 or Letter page.
-    sections.push(htmlTable(t.header, t.rows, { bestFirst: true, cls: 'ranked' }));
-    sections.push(`<p class="note">${esc(TABLE_NOTE)}</p>`);
+    // A check's name may break after its underscores (a zero-width space), so that the column of the
+    // check that limits the yield narrows on a printed page.
+    const rows = t.rows.map((r) => r.map((cell) => cell.replace(/_/g, '_\u200b')));
+    sections.push(htmlTable(t.header, rows, { bestFirst: true, cls: 'ranked' }));
+    sections.push(...[TABLE_NOTE, ...yieldNote(run)].map((line) => `<p class="note">${esc(line)}</p>`));
     sections.push(...springSections(best.analysis, system, run.problem.service(), 'The chosen spring'));
   }
   if (sweep) {

@@ -57,7 +57,7 @@ svg text.none { fill: var(--warn); }
   .grid2 { grid-template-columns: 1fr 1fr; }
   figure, table, .cautions { break-inside: avoid; }
   .scroll { overflow: visible; }
-  table.ranked { font-size: 6.5pt; }
+  table.ranked { font-size: 6pt; }
   table.ranked th, table.ranked td { padding: 1px 2px; white-space: normal; }
   h2 { break-after: avoid; }
 }
