@@ -43,7 +43,8 @@ export function materialsCommand(opts: { json?: boolean; units?: UnitSystem }, i
   }
   const series = [['series', 'sizes', 'range', 'source']];
   for (const s of catalog.series) series.push([s.id, String(s.diameters.length), `${L(s.diameters[0])} - ${L(s.diameters[s.diameters.length - 1])}`, s.source]);
-  io.stdout(['Materials (catalogs/materials.yaml; every figure has its source there, "from memory" where it could not be checked)', table(rows), '',
+  io.stdout(['Materials (catalogs/materials.yaml; every figure has its source there, "from memory" where it could not be checked)', table(rows),
+    'cost: the relative cost of the wire per unit mass, hard-drawn carbon steel = 1.0; relative_cost in design outputs is the spring\'s mass in kg times it.', '',
     ...catalog.materials.filter((m) => minimumAt(m).length).map((m) => `${m.id}: the published law runs ${minimumAt(m).map((p) => `${sig(p.law_above_minimum * 100, 2)}% at ${L(p.diameter)}`).join(', ')} above the tabulated minimum (${m.minimumStrength!.law.source}); strength_basis: minimum uses the minimum`),
     '', 'Wire-size series (catalogs/wire-series.yaml)', table(series), ''].join('\n'));
   return EXIT.ok;

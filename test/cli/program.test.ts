@@ -66,6 +66,7 @@ describe('coilfront program', () => {
     const r = await cli('materials');
     expect(r.code).toBe(0);
     for (const id of ['music-wire', 'stainless-302', 'en10270-1-dm', 'steel-wire-gauge']) expect(r.stdout).toContain(id);
+    expect(r.stdout).toMatch(/cost: the relative cost of the wire per unit mass, hard-drawn carbon steel = 1\.0/);
     const j = JSON.parse((await cli('materials', '--json')).stdout);
     expect(j.materials.length).toBeGreaterThanOrEqual(10);
     for (const m of j.materials) for (const src of Object.values(m.sources)) expect(String(src).length).toBeGreaterThan(3);
