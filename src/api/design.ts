@@ -4,8 +4,6 @@
 // this function's reading and running steps with a file, options and a renderer around them.
 import { loadCatalog } from '../catalogs/load.js';
 import type { Catalog } from '../catalogs/types.js';
-import { readRequirements, type Requirements } from '../kinds/compression/requirements.js';
-import { compression } from '../kinds/compression/index.js';
 import { kindOf } from '../kinds/index.js';
 import type { AnySpringKind, InUnits } from '../kinds/kind.js';
 import { sanitize } from '../report/json.js';
@@ -31,12 +29,6 @@ export interface DesignPlan<Req extends InUnits = InUnits> {
 export function planDesign(document: unknown, catalog: Catalog = loadCatalog()): DesignPlan {
   const kind = kindOf(document);
   return { kind, req: kind.readRequirements(document, catalog), document, catalog };
-}
-
-/** The same for the commands that cover compression springs only so far (frontier, sweep): another
- * kind is refused naming the `kind` field. */
-export function planCompression(document: unknown, catalog: Catalog = loadCatalog()): DesignPlan<Requirements> {
-  return { kind: compression, req: readRequirements(document, catalog), document, catalog };
 }
 
 /** The search of a plan: requirements -> candidates -> evaluation -> filters -> ranking. */

@@ -1,14 +1,15 @@
 // `sweep` in the library: the design re-run for each value of one requirement (what a tighter
 // envelope costs). Takes the plain object a requirements file holds and returns exactly what
-// `coilfront sweep --json` prints.
+// `coilfront sweep --json` prints. The document's `kind` picks the spring kind (src/kinds/index.ts):
+// it reads each value's requirements, sizes the search and runs the design.
 import { loadCatalog } from '../catalogs/load.js';
 import type { Catalog } from '../catalogs/types.js';
 import { LIMITS } from '../input/limits.js';
 import { blameOverride, parsePath, sweepValues, withValue } from '../input/overrides.js';
-import { readRequirements, searchSize, type Requirements } from '../kinds/compression/requirements.js';
-import { candidateRecord, limitingText } from '../report/designReport.js';
+import { kindOf } from '../kinds/index.js';
+import type { AnySpringKind, InUnits, KindRun } from '../kinds/kind.js';
 import { SI_UNITS, sanitize } from '../report/json.js';
-import { runDesign, type Candidate, type DesignRun, type StrategyChoice } from '../kinds/compression/design.js';
+import type { StrategyChoice } from '../kinds/compression/design.js';
 import { InputError } from '../units/parse.js';
 import type { UnitSystem } from '../units/systems.js';
 import { withRequirementOptions, type Override, type RankedOptions } from './options.js';
@@ -21,18 +22,20 @@ export interface SweepOptions extends RankedOptions {
   vary: SweepVary;
 }
 
-export interface SweepRow {
+export interface SweepRow<Run extends KindRun = KindRun> {
   value: number;
-  run: DesignRun;
-  best: Candidate | null;
+  run: Run;
+  best: Run['candidates'][number] | null;
   limiting: string | null;
 }
 
-/** Every value's requirements, read (and checked) before any search runs. */
+/** Every value's requirements, read (and checked) by the document's kind before any search runs. */
 export interface SweepPlan {
+  kind: AnySpringKind;
+  catalog: Catalog;
   path: string[];
   values: number[];
-  reqs: Requirements[];
+  reqs: InUnits[];
   system: UnitSystem;
 }
 
@@ -72,9 +75,10 @@ export function planSweep(
   catalog: Catalog = loadCatalog(),
 ): SweepPlan {
   const { path, values } = parseVary(vary, option);
-  const reqs = values.map((value) => {
+  const kind = kindOf(document);
+  const reqs: InUnits[] = values.map((value) => {
     try {
-      return readRequirements(withValue(document, path, value), catalog);
+      return kind.readRequirements(withValue(document, path, value), catalog);
     } catch (e) {
       const byVary = blameOverride(e, [{ path, option }]);
       if (byVary !== e && e instanceof InputError) throw new InputError(`${option} ${e.field}=${value}`, e.expected);
@@ -82,7 +86,7 @@ export function planSweep(
     }
   });
   // The whole sweep is bounded like one search: a thousand values of a large search would run for hours.
-  const total = reqs.reduce((n, r) => n + searchSize(r).combinations, 0);
+  const total = reqs.reduce((n: number, r) => n + kind.searchSize(r, catalog), 0);
   if (total > LIMITS.combinations) {
     throw new InputError(
       option,
@@ -90,31 +94,33 @@ export function planSweep(
       vary,
     );
   }
-  return { path, values, reqs, system: reqs.length ? reqs[reqs.length - 1].system : 'si' };
+  return { kind, catalog, path, values, reqs, system: reqs.length ? reqs[reqs.length - 1].system : 'si' };
 }
 
 /** One design per value, in order; onStep after each. */
 export function runSweepPlan(plan: SweepPlan, options: { strategy?: StrategyChoice; onStep?: (done: number, total: number) => void } = {}): SweepRow[] {
   return plan.reqs.map((req, i) => {
-    const run = runDesign(req, { strategy: options.strategy });
+    const run = plan.kind.search(req, plan.catalog, { strategy: options.strategy }) as KindRun;
     options.onStep?.(i + 1, plan.reqs.length);
-    return { value: plan.values[i], run, best: run.candidates[0] ?? null, limiting: run.candidates.length ? null : limitingText(run) };
+    return { value: plan.values[i], run, best: run.candidates[0] ?? null, limiting: run.candidates.length ? null : plan.kind.report.limitingText(run) };
   });
 }
 
-/** The JSON record of a sweep, as `sweep --json` prints it. */
-export function sweepResult(path: readonly string[], rows: readonly SweepRow[]): SweepResult {
+/** The JSON record of a sweep, as `sweep --json` prints it: framed by the kind (jsonFrame). */
+export function sweepResult(kind: AnySpringKind, path: readonly string[], rows: readonly SweepRow[]): SweepResult {
   const name = path.join('.');
   return sanitize({
     units: SI_UNITS,
+    ...kind.report.jsonFrame.head,
     vary: name,
     note: `${name} values are as given on the command line, in the file's unit system`,
     rows: rows.map((r) => ({
       value: r.value,
       feasible: r.run.result.feasibleCells,
-      best: r.best ? candidateRecord(r.best) : null,
+      best: r.best ? kind.report.candidateJson(r.best) : null,
       limiting_check: r.limiting,
     })),
+    ...kind.report.jsonFrame.tail,
   }) as SweepResult;
 }
 
@@ -122,5 +128,5 @@ export function sweep(requirements: unknown, options: SweepOptions): SweepResult
   const o: Partial<SweepOptions> = options ?? {};
   const { document, overrides } = withRequirementOptions(requirements, o);
   const plan = planSweep(document, o.vary as SweepVary, overrides, 'options.vary', o.catalog);
-  return sweepResult(plan.path, runSweepPlan(plan, { strategy: o.strategy, onStep: o.onProgress }));
+  return sweepResult(plan.kind, plan.path, runSweepPlan(plan, { strategy: o.strategy, onStep: o.onProgress }));
 }

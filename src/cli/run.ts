@@ -10,6 +10,8 @@ import { analyzeCommand } from './analyze.js';
 import { materialsCommand } from './materials.js';
 import { CliExit, EXIT, type Io } from './io.js';
 import { registerSearchCommands } from './searchCommands.js';
+import { registerFrontierCommand } from './frontier.js';
+import { registerSweepCommand } from './sweep.js';
 import { registerCheckCommand } from './check.js';
 import { registerStockCommand } from './stock.js';
 
@@ -53,6 +55,8 @@ export function buildProgram(io: Io, setCode: (c: number) => void): Command {
     .action((opts) => setCode(materialsCommand(opts, io)));
 
   registerSearchCommands(program, io, setCode);
+  registerFrontierCommand(program, io, setCode);
+  registerSweepCommand(program, io, setCode);
   registerCheckCommand(program, io, setCode);
   registerStockCommand(program, io, setCode);
   return program;

@@ -10,6 +10,7 @@
 // strength, fatigue criteria, surge) stay in src/model/ and are imported, never re-derived.
 import type { Catalog } from '../catalogs/types.js';
 import type { Problem } from '../search/problem.js';
+import type { SearchResult } from '../search/result.js';
 import type { Kind as UnitKind } from '../units/kinds.js';
 import type { UnitSystem } from '../units/systems.js';
 
@@ -32,7 +33,9 @@ export interface CheckDefinition<Req> {
   readonly relaxedBy: readonly string[];
 }
 
-/** One objective: what the search minimises, a rank key, a frontier axis, or several of those. */
+/** One objective: what the search minimises, a rank key, a frontier axis, or several of those. The
+ * search writes objective i of the registry into f[1 + i] (f[0] is the one ranked by), multiplied by
+ * its sign: every kind's candidates carry that vector, and objectiveValue() reads it back. */
 export interface ObjectiveDefinition {
   /** The key users give (`rank: mass`, `--x relative_cost`). */
   readonly key: string;
@@ -91,16 +94,56 @@ export interface KindProblem<Req, Cand> extends Problem {
   candidateAt(x: ArrayLike<number>, objectives: Float64Array): Cand;
 }
 
+/** What every designed spring carries: its objective vector, f[1 + i] for objective i (times its sign). */
+export interface KindCandidate { readonly objectives: Float64Array }
+
+/** What every design run holds, whatever the kind: its requirements, the engine's result (counts, cuts)
+ * and the springs it lists, best first. */
+export interface KindRun<Req = unknown, Cand = unknown> {
+  readonly req: Req;
+  readonly result: SearchResult;
+  readonly candidates: readonly Cand[];
+}
+
+/** The trade-off frontier of a kind on two of its frontier axes. */
+export interface KindFrontier<Run = unknown, Cand = unknown> {
+  /** The design run the frontier came from (its counts are the frontier's). */
+  readonly run: Run;
+  readonly x: string;
+  readonly y: string;
+  /** Every combination (grid) or the two-objective genetic search. */
+  readonly strategy: 'grid' | 'genetic';
+  /** Every feasible spring found, as (x, y) the way users read them (a safety factor as itself). */
+  readonly cloud: readonly { x: number; y: number }[];
+  /** The non-dominated springs, in order of x, each re-verified by the single-spring analysis. */
+  readonly front: readonly Cand[];
+}
+
+/** A sweep as its report draws it: the varied requirement and the best spring at each value. */
+export interface SweepSummary<Cand = unknown> { name: string; rows: { value: number; best: Cand | null }[] }
+
 /** How a kind's results are shown. HTML renderers may be loaded lazily (start-up time). */
-export interface KindReport<Case, Analysis, Req, Run> {
+export interface KindReport<Case, Analysis, Req, Run, Cand = unknown, Front = KindFrontier<Run, Cand>> {
   analysisText(c: Case, a: Analysis, system: UnitSystem): string;
   analysisJson(c: Case, a: Analysis): Record<string, unknown>;
   /** The single-spring HTML report, or undefined when the kind has none yet. */
   analysisHtml?(c: Case, a: Analysis, system: UnitSystem): Promise<string>;
   designText(run: Run, system: UnitSystem, showTiming: boolean): string;
   designJson(run: Run, showTiming: boolean): Record<string, unknown>;
-  /** The design HTML report, or undefined when the kind has none yet. */
-  designHtml?(run: Run, system: UnitSystem): Promise<string>;
+  /** The design HTML report, or undefined when the kind has none yet. It draws the frontier it is
+   * given (the mass / outer diameter one of the run when none is), never searching on its own account
+   * beyond that, and the sweep when there is one. */
+  designHtml?(run: Run, system: UnitSystem, shown?: { frontier?: Front; sweep?: SweepSummary<Cand> }): Promise<string>;
+  /** One designed spring as JSON (SI): a row of `design --json`, `frontier --json` and `sweep --json`. */
+  candidateJson(c: Cand): Record<string, unknown>;
+  /** How a search went, as JSON (strategy, evaluations, cuts per check...). */
+  countsJson(run: Run): Record<string, unknown>;
+  /** The check that cut most in a run with no spring, in a few words (no further runs). */
+  limitingText(run: Run): string;
+  /** What every JSON record of the kind carries before its body (its kind, for any kind but the
+   * default) and after it (its own caution): frontier and sweep records are framed by it, as the
+   * kind's own design and analysis records are. */
+  readonly jsonFrame: { readonly head: Readonly<Record<string, unknown>>; readonly tail: Readonly<Record<string, unknown>> };
   /** Write the specification sheet of the spring ranked `pick` (1 = best); false (nothing written) when there is none. */
   writeSpecSheet?(path: string, run: Run, system: UnitSystem, force: boolean, pick?: number): Promise<boolean>;
   /** The spring file (as `analyze` and `check` read it) of the spring ranked `pick`, at drawing
@@ -112,9 +155,12 @@ export interface KindReport<Case, Analysis, Req, Run> {
   requirementNotes(req: Req): string[];
 }
 
-export interface DesignRequest {
+export interface SearchRequest {
   strategy?: 'auto' | 'grid' | 'genetic';
   onProgress?: (done: number, total: number) => void;
+}
+
+export interface DesignRequest extends SearchRequest {
   /** The document the requirements were read from (overrides applied): the advice changes it by path. */
   document?: unknown;
 }
@@ -122,7 +168,14 @@ export interface DesignRequest {
 /** Spring cases and requirements say which unit system their file was written in (the default of output). */
 export interface InUnits { readonly system: UnitSystem }
 
-export interface SpringKind<Case extends InUnits = InUnits, Analysis = unknown, Req extends InUnits = InUnits, Run = unknown, Cand = unknown> {
+export interface SpringKind<
+  Case extends InUnits = InUnits,
+  Analysis = unknown,
+  Req extends InUnits = InUnits,
+  Run extends KindRun<Req, Cand> = KindRun<Req, never>,
+  Cand extends KindCandidate = KindCandidate,
+  Front extends KindFrontier<Run, Cand> = KindFrontier<Run, Cand>,
+> {
   /** The value of the `kind` field ('compression', 'extension'). */
   readonly id: string;
   /** In words, for headings ("helical compression spring"). */
@@ -137,19 +190,41 @@ export interface SpringKind<Case extends InUnits = InUnits, Analysis = unknown, 
   buildProblem(req: Req, catalog: Catalog): KindProblem<Req, Cand>;
   /** Requirements -> candidates -> evaluation -> filters -> ranking, every reported spring re-verified. */
   design(req: Req, catalog: Catalog, request?: DesignRequest): Run;
+  /** The search alone, each spring re-verified, without what only a listed design adds (the advice,
+   * compression's per-spring yield confirmation, which costs some 25 searches): a sweep's run per value. */
+  search(req: Req, catalog: Catalog, request?: SearchRequest): Run;
   /** Whether a design run found any spring (the exit code of `design`). */
   found(run: Run): boolean;
+  /** The trade-off frontier on two of the kind's frontier axes (x and y are keys of its objectives
+   * marked frontierAxis, checked by the caller: frontierAxis()), every spring on it re-verified. */
+  frontier(req: Req, catalog: Catalog, x: string, y: string, request?: SearchRequest): Front;
+  /** The combinations a design of these requirements would visit: a sweep's runs together are
+   * bounded like one search. */
+  searchSize(req: Req, catalog: Catalog): number;
   readonly checks: readonly CheckDefinition<Req>[];
   readonly objectives: readonly ObjectiveDefinition[];
   readonly fields: readonly FieldDefinition<Cand>[];
-  readonly report: KindReport<Case, Analysis, Req, Run>;
+  readonly report: KindReport<Case, Analysis, Req, Run, Cand, Front>;
   /** The kind's own cautions, printed after the general ones (src/report/cautions.ts). */
   readonly cautions: readonly string[];
 }
 
 /** A kind with its types erased, as the registry holds it. */
 // eslint-disable-next-line @typescript-eslint/no-explicit-any
-export type AnySpringKind = SpringKind<any, any, any, any, any>;
+export type AnySpringKind = SpringKind<any, any, any, any, any, any>;
+
+/** The value of objective `key` of a designed spring as users read it (a safety factor as itself, not
+ * negated): f[1 + i] times the sign of objective i. */
+export function objectiveValue(objectives: readonly ObjectiveDefinition[], c: KindCandidate, key: string): number {
+  const i = objectives.findIndex((o) => o.key === key);
+  if (i < 0) throw new Error(`objectiveValue: no objective ${key}; please report this`);
+  return objectives[i].sign * c.objectives[1 + i];
+}
+
+/** The keys a kind offers as frontier axes, in registry order. */
+export function frontierAxes(kind: Pick<AnySpringKind, 'objectives'>): string[] {
+  return kind.objectives.filter((o) => o.frontierAxis).map((o) => o.key);
+}
 
 /** Index constants of a registry, `{ clash: 6, ... }`, for the hot loop: a frozen object of numbers
  * (a property load V8 folds to a constant), never a Map lookup. */

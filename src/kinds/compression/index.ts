@@ -2,21 +2,21 @@
 // when a document says `kind: compression` or says no kind at all.
 import { analyzeSpring, type SpringAnalysis } from './analysis.js';
 import { STATIC_SERVICE_CYCLES } from '../../model/fatigue.js';
-import { readRequirements, type Requirements } from './requirements.js';
+import { readRequirements, searchSize, type Requirements } from './requirements.js';
 import { readSpringCase, type SpringCase } from './springFile.js';
 import { analysisJson, analysisText } from './report/analysisReport.js';
-import { designJson, designText } from '../../report/designReport.js';
+import { candidateRecord, countsRecord, designJson, designText, limitingText } from '../../report/designReport.js';
 import { candidateAt, runDesign, type Candidate, type DesignRun } from './design.js';
 import { buildSpringProblem } from './problem.js';
 import { confirmRun } from './tolerance/confirm.js';
 import { springFileText } from './springDoc.js';
 import type { SpringKind } from '../kind.js';
-import { reportFrontier } from './frontier.js';
+import { computeFrontier, reportFrontier, type Frontier, type FrontierKey } from './frontier.js';
 import { COMPRESSION_CHECKS } from './checks.js';
 import { COMPRESSION_FIELDS } from './fields.js';
 import { COMPRESSION_OBJECTIVES } from './objectives.js';
 
-export type CompressionKind = SpringKind<SpringCase, SpringAnalysis, Requirements, DesignRun, Candidate>;
+export type CompressionKind = SpringKind<SpringCase, SpringAnalysis, Requirements, DesignRun, Candidate, Frontier>;
 
 export const compression: CompressionKind = {
   id: 'compression',
@@ -30,7 +30,11 @@ export const compression: CompressionKind = {
   },
   // Every reported spring's yield by the seeded Monte Carlo; under min_yield, the ones it refutes leave the list.
   design: (req, _catalog, request = {}) => confirmRun(runDesign(req, { strategy: request.strategy, onProgress: request.onProgress, document: request.document })),
+  search: (req, _catalog, request = {}) => runDesign(req, { strategy: request.strategy, onProgress: request.onProgress }),
   found: (run) => run.candidates.length > 0,
+  // The axes are checked against the objectives registry before this is called (frontierAxis()).
+  frontier: (req, _catalog, x, y, request = {}) => computeFrontier(req, x as FrontierKey, y as FrontierKey, request.onProgress, request.strategy),
+  searchSize: (req) => searchSize(req).combinations,
   checks: COMPRESSION_CHECKS,
   objectives: COMPRESSION_OBJECTIVES,
   fields: COMPRESSION_FIELDS,
@@ -43,10 +47,14 @@ export const compression: CompressionKind = {
     },
     designText: (run, system, showTiming) => designText(run, system, showTiming),
     designJson: (run, showTiming) => designJson(run, showTiming),
-    async designHtml(run, system) {
+    async designHtml(run, system, shown = {}) {
       const { designHtml } = await import('../../report/html/designHtml.js');
-      return designHtml(run, system, reportFrontier(run));
+      return designHtml(run, system, shown.frontier ?? reportFrontier(run), shown.sweep);
     },
+    candidateJson: (c) => candidateRecord(c),
+    countsJson: (run) => countsRecord(run),
+    limitingText: (run) => limitingText(run),
+    jsonFrame: { head: {}, tail: {} },
     async writeSpecSheet(path, run, system, force, pick = 1) {
       const c = run.candidates[pick - 1];
       if (!c) return false;

@@ -5,7 +5,6 @@ import type { Catalog } from '../../catalogs/types.js';
 import { gridSearch } from '../../search/grid.js';
 import { paretoFront2 } from '../../search/pareto.js';
 import type { Kind } from '../../units/kinds.js';
-import { InputError } from '../../units/parse.js';
 import { loadExtensionCatalog, type ExtensionCatalog } from './catalog.js';
 import { assertExtensionVerified, extensionCandidateAt, type ExtensionCandidate, type ExtensionDesignRun } from './design.js';
 import { XO, buildExtensionProblem, type ExtensionProblem } from './problem.js';
@@ -25,16 +24,10 @@ export interface ExtensionFrontier {
   run: ExtensionDesignRun;
   x: ExtensionFrontierKey;
   y: ExtensionFrontierKey;
+  /** The grid visits every combination of an extension space. */
+  strategy: 'grid';
   cloud: { x: number; y: number }[];
   front: ExtensionCandidate[];
-}
-
-/** A frontier key of extension springs, or one clear refusal naming the option. */
-export function extensionFrontierKey(key: string, option: string): ExtensionFrontierKey {
-  if (!Object.hasOwn(EXTENSION_FRONTIER_KEYS, key)) {
-    throw new InputError(option, `an objective of extension springs: ${Object.keys(EXTENSION_FRONTIER_KEYS).join(' | ')}`, key);
-  }
-  return key as ExtensionFrontierKey;
 }
 
 /** The value of a frontier key of a designed spring (a safety factor as itself, not negated). */
@@ -68,5 +61,11 @@ export function computeExtensionFrontier(req: ExtensionRequirements, catalog: Ca
   const front = paretoFront2(xs, ys).map((i) => extensionCandidateAt(problem, buf.x(i), Float64Array.from(buf.f(i))));
   front.forEach(assertExtensionVerified);
   const cloud = Array.from(xs, (v, i) => ({ x: EXTENSION_FRONTIER_KEYS[x].sign * v, y: EXTENSION_FRONTIER_KEYS[y].sign * ys[i] }));
-  return { run, x, y, cloud, front };
+  return { run, x, y, strategy: 'grid', cloud, front };
+}
+
+/** The frontier a design report draws beside a run: mass against outer diameter over the run's own
+ * problem; null when the run found no spring. The caller computes it, so the report never searches. */
+export function extensionReportFrontier(run: ExtensionDesignRun, catalog: Catalog): ExtensionFrontier | null {
+  return run.candidates.length ? computeExtensionFrontier(run.req, catalog, 'mass', 'outer_diameter', undefined, run.problem) : null;
 }

@@ -10,12 +10,12 @@ import { formatQuantity, inUnit, quantityWriter, sig, unitSymbol } from '../../u
 import type { UnitSystem } from '../../units/systems.js';
 import { EXTENSION_CAUTION, extensionWarnings, siteWords, stressPerNewton, type ExtensionAnalysis, type ExtensionService } from './analysis.js';
 import type { ExtensionCandidate, ExtensionDesignRun } from './design.js';
-import { EXTENSION_FRONTIER_KEYS, computeExtensionFrontier, frontierValue, type ExtensionFrontier } from './frontier.js';
+import { EXTENSION_FRONTIER_KEYS, frontierValue, type ExtensionFrontier } from './frontier.js';
 import { EXTENSION_CHECK_LABELS } from './checks.js';
 import { bandFraction, extensionCandidateGrid, extensionRelaxLines, reportedExtensionChecks } from './report.js';
 import type { ExtensionRequirements } from './requirements.js';
 import type { ExtensionCase } from './springFile.js';
-import type { Catalog } from '../../catalogs/types.js';
+import type { SweepSummary } from '../kind.js';
 
 /** Methods and sources particular to extension springs (the README's conventions table repeats them). */
 export const EXTENSION_CONVENTIONS: [string, string][] = [
@@ -207,9 +207,11 @@ function requirementRows(req: ExtensionRequirements, system: UnitSystem): string
   ];
 }
 
-export interface ExtensionSweepSummary { name: string; rows: { value: number; best: ExtensionCandidate | null }[] }
+export type ExtensionSweepSummary = SweepSummary<ExtensionCandidate>;
 
-export function extensionDesignHtml(run: ExtensionDesignRun, system: UnitSystem, catalog: Catalog, frontier?: ExtensionFrontier, sweep?: ExtensionSweepSummary): string {
+/** The report draws the frontier it is given (extensionReportFrontier(run) for a design run), never
+ * searching again itself; a run with no spring has none. */
+export function extensionDesignHtml(run: ExtensionDesignRun, system: UnitSystem, frontier: ExtensionFrontier | null, sweep?: ExtensionSweepSummary): string {
   const req = run.req;
   const r = run.result;
   const sections: string[] = ['<h2>Requirements</h2>', htmlTable(['requirement', 'value'], requirementRows(req, system), { cls: 'kv' })];
@@ -225,7 +227,8 @@ export function extensionDesignHtml(run: ExtensionDesignRun, system: UnitSystem,
     const lines = extensionRelaxLines(run);
     sections.push(`<p>${esc(lines[0])}</p>${lines.length > 1 ? `<ul>${lines.slice(1).map((l) => `<li>${esc(l.slice(4))}</li>`).join('')}</ul>` : ''}`);
   } else {
-    const fr = frontier ?? computeExtensionFrontier(req, catalog, 'mass', 'outer_diameter', undefined, run.problem);
+    const fr = frontier;
+    if (!fr) throw new Error('extensionDesignHtml: a run with springs is drawn with its frontier (extensionReportFrontier); please report this');
     const kx = EXTENSION_FRONTIER_KEYS[fr.x];
     const ky = EXTENSION_FRONTIER_KEYS[fr.y];
     const label = (k: typeof kx) => (k.kind ? `${k.label} (${unitSymbol(k.kind, system)})` : k.label);

@@ -10,8 +10,11 @@ import { loadExtensionCatalog } from './catalog.js';
 import { EXTENSION_CHECKS, EXTENSION_CHECK_LABELS, activeExtensionChecks, type ExtensionCheck } from './checks.js';
 import { designExtension, extensionCandidateAt, type ExtensionCandidate, type ExtensionDesignRun } from './design.js';
 import { EXTENSION_FIELDS } from './fields.js';
-import { buildExtensionProblem } from './problem.js';
-import { extensionAnalysisJson, extensionAnalysisText, extensionDesignJson, extensionDesignText } from './report.js';
+import { computeExtensionFrontier, extensionReportFrontier, type ExtensionFrontier, type ExtensionFrontierKey } from './frontier.js';
+import { buildExtensionProblem, combinations } from './problem.js';
+import {
+  extensionAnalysisJson, extensionAnalysisText, extensionCandidateRecord, extensionCountsRecord, extensionDesignJson, extensionDesignText, extensionLimitingText,
+} from './report.js';
 import { readExtensionRequirements, type ExtensionRequirements } from './requirements.js';
 import { readExtensionSpring, type ExtensionCase } from './springFile.js';
 
@@ -55,7 +58,12 @@ export const EXTENSION_OBJECTIVE_DEFINITIONS = [
   { key: 'relative_cost', label: 'relative cost (mass x cost factor)', unit: null, sign: 1, trend: 1, rankable: false, frontierAxis: true, lpBound: false },
 ] as const satisfies readonly ObjectiveDefinition[];
 
-export type ExtensionKind = SpringKind<ExtensionCase, ExtensionAnalysis, ExtensionRequirements, ExtensionDesignRun, ExtensionCandidate>;
+export type ExtensionKind = SpringKind<ExtensionCase, ExtensionAnalysis, ExtensionRequirements, ExtensionDesignRun, ExtensionCandidate, ExtensionFrontier>;
+
+/** The grid visits every extension space the readers admit; there is no genetic search for them yet. */
+function refuseGenetic(strategy: string | undefined): void {
+  if (strategy === 'genetic') throw new InputError('--strategy', 'grid or auto (extension springs are searched by the exhaustive grid)', 'genetic');
+}
 
 export const extension: ExtensionKind = {
   id: 'extension',
@@ -68,11 +76,20 @@ export const extension: ExtensionKind = {
     return Object.assign(p, { candidateAt: (x: ArrayLike<number>, f: Float64Array) => extensionCandidateAt(p, x, f) });
   },
   design(req, catalog, request = {}) {
-    // The grid visits every extension space the readers admit; there is no genetic search for them yet.
-    if (request.strategy === 'genetic') throw new InputError('--strategy', 'grid or auto (extension springs are searched by the exhaustive grid)', 'genetic');
+    refuseGenetic(request.strategy);
     return designExtension(req, catalog, { onProgress: request.onProgress, document: request.document }, loadExtensionCatalog(catalog.materials));
   },
+  search(req, catalog, request = {}) {
+    refuseGenetic(request.strategy);
+    return designExtension(req, catalog, { onProgress: request.onProgress }, loadExtensionCatalog(catalog.materials));
+  },
   found: (run) => run.candidates.length > 0,
+  // The axes are checked against the objectives registry before this is called (frontierAxis()).
+  frontier(req, catalog, x, y, request = {}) {
+    refuseGenetic(request.strategy);
+    return computeExtensionFrontier(req, catalog, x as ExtensionFrontierKey, y as ExtensionFrontierKey, request.onProgress);
+  },
+  searchSize: (req, catalog) => combinations(buildExtensionProblem(req, catalog, loadExtensionCatalog(catalog.materials))),
   checks: EXTENSION_CHECK_DEFINITIONS,
   objectives: EXTENSION_OBJECTIVE_DEFINITIONS,
   fields: EXTENSION_FIELDS,
@@ -85,10 +102,14 @@ export const extension: ExtensionKind = {
     },
     designText: (run, system, showTiming) => extensionDesignText(run, system, showTiming),
     designJson: (run, showTiming) => extensionDesignJson(run, showTiming),
-    async designHtml(run, system) {
+    async designHtml(run, system, shown = {}) {
       const { extensionDesignHtml } = await import('./html.js');
-      return extensionDesignHtml(run, system, loadCatalog());
+      return extensionDesignHtml(run, system, shown.frontier ?? extensionReportFrontier(run, loadCatalog()), shown.sweep);
     },
+    candidateJson: (c) => extensionCandidateRecord(c),
+    countsJson: (run) => extensionCountsRecord(run),
+    limitingText: (run) => extensionLimitingText(run),
+    jsonFrame: { head: { kind: 'extension' }, tail: { caution: EXTENSION_CAUTION } },
     requirementNotes(req) {
       const notes: string[] = [];
       if (req.cycles !== undefined && req.cycles < STATIC_SERVICE_CYCLES) notes.push(`cycles ${req.cycles} is below ${STATIC_SERVICE_CYCLES.toExponential(0).replace('+', '')}: judged as static service (no fatigue check)`);

@@ -12,7 +12,7 @@ import { stressFactor } from '../../model/stressFactor.js';
 import { ultimateShearStrength } from '../../model/strength.js';
 import { activeCoilMass, surgeFrequency } from '../../model/surge.js';
 import type { MaterialChoice } from '../../input/material.js';
-import { TREND, type Problem } from '../../search/problem.js';
+import { TREND, valueCount, type Problem } from '../../search/problem.js';
 import type { ExtensionGeometry, ExtensionService } from './analysis.js';
 import { loadExtensionCatalog, type ExtensionCatalog } from './catalog.js';
 import { EXTENSION_CHECKS, XC, activeExtensionChecks, extensionFatigueApplies, extensionService } from './checks.js';
@@ -35,6 +35,11 @@ export interface ExtensionProblem extends Problem {
   /** The spring a point stands for, as the single-spring analysis takes it. */
   decode(x: ArrayLike<number>): { item: ExtensionStock; geometry: ExtensionGeometry };
   service(): ExtensionService;
+}
+
+/** The combinations the grid visits: stock items (material and wire size) x body-coil counts. */
+export function combinations(p: ExtensionProblem): number {
+  return p.variables.reduce((n, v) => (v.kind === 'continuous' ? n : n * valueCount(v)), 1);
 }
 
 export function buildExtensionProblem(req: ExtensionRequirements, catalog: Catalog, ext: ExtensionCatalog = loadExtensionCatalog(catalog.materials)): ExtensionProblem {

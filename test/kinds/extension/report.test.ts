@@ -8,7 +8,7 @@ import { loadCatalog } from '../../../src/catalogs/load.js';
 import { analyzeExtension } from '../../../src/kinds/extension/analysis.js';
 import { designExtension } from '../../../src/kinds/extension/design.js';
 import { EXTENSION_FIELDS, extensionColumns, extensionRow } from '../../../src/kinds/extension/fields.js';
-import { computeExtensionFrontier } from '../../../src/kinds/extension/frontier.js';
+import { computeExtensionFrontier, extensionReportFrontier } from '../../../src/kinds/extension/frontier.js';
 import { extensionAnalysisHtml, extensionDesignHtml, extensionForcePlot } from '../../../src/kinds/extension/html.js';
 import { extensionAnalysisJson, extensionAnalysisText, extensionDesignJson, extensionDesignText } from '../../../src/kinds/extension/report.js';
 import { readExtensionRequirements } from '../../../src/kinds/extension/requirements.js';
@@ -87,7 +87,7 @@ describe('extension outputs', () => {
   });
 
   it('the HTML pages hold the loop stresses, both loops and the caution', () => {
-    for (const html of [extensionAnalysisHtml(spring, analysis, 'si'), extensionDesignHtml(run, 'us', catalog)]) {
+    for (const html of [extensionAnalysisHtml(spring, analysis, 'si'), extensionDesignHtml(run, 'us', extensionReportFrontier(run, catalog))]) {
       expect(html).toMatch(/id="loop-stresses"/);
       expect(html).toMatch(/id="loop-left"/);
       expect(html).toMatch(/id="loop-right"/);
