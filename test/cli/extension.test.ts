@@ -129,13 +129,18 @@ describe('coilfront design, kind: extension', () => {
     expect((await cli('design', file, '--set', `envelope.max_outer_diameter=${5 + 0.9 * (od.to - 5)}`)).code).toBe(1);
   });
 
-  it('--per-wire lists one spring per wire size; --strategy genetic is refused by name', async () => {
+  it('--per-wire lists one spring per wire size; --strategy genetic finds the grid\'s best spring', async () => {
     const j = JSON.parse((await cli('design', DEMO, '--json', '--per-wire')).stdout);
     const wires = j.candidates.map((c: any) => `${c.material}/${c.wire_diameter}`);
     expect(new Set(wires).size).toBe(wires.length);
-    const g = await cli('design', DEMO, '--strategy', 'genetic');
-    expect(g.code).toBe(2);
-    expect(g.stderr).toMatch(/^coilfront: error: --strategy: /);
+    const grid = JSON.parse((await cli('design', DEMO, '--json')).stdout);
+    const g = await cli('design', DEMO, '--strategy', 'genetic', '--json');
+    expect(g.code).toBe(0);
+    const gen = JSON.parse(g.stdout);
+    expect(gen.strategy).toBe('genetic');
+    expect(gen.candidates[0].wire_diameter).toBe(grid.candidates[0].wire_diameter);
+    expect(gen.candidates[0].body_coils).toBe(grid.candidates[0].body_coils);
+    expect(relClose(gen.candidates[0].mass, grid.candidates[0].mass, 1e-9)).toBe(true);
   });
 });
 

@@ -65,7 +65,7 @@ const CASES: Case[] = [
   req('frontier: a bad loop type', { loop: 'crochet' }, 'loop', 'frontier'),
   req('sweep: a bad bend index', { bend_index: 0 }, 'bend_index', 'sweep'),
   { name: 'option: --min-id is a compression limit', command: 'design', args: ['--min-id', '5'], field: '--min-id' },
-  { name: 'option: --strategy genetic', command: 'design', args: ['--strategy', 'genetic'], field: '--strategy' },
+  { name: 'option: --strategy grid on a space too large for the grid', command: 'design', change: { material: 'any', body_coils: [3, 80], coil_step: 0.005 }, args: ['--strategy', 'grid'], field: 'coil_step' },
   { name: 'option: --spec (no extension sheet yet)', command: 'design', args: ['--spec', '{dir}/spec.html'], field: '--spec' },
   { name: 'option: frontier --x of compression springs only', command: 'frontier', args: ['--x', 'fatigue_safety'], field: '--x' },
   { name: 'option: frontier --y of compression springs only', command: 'frontier', args: ['--y', 'static_safety'], field: '--y' },

@@ -3,7 +3,6 @@
 // (checks, objectives, fields) are the lists the search and the reports already use.
 import { loadCatalog } from '../../catalogs/load.js';
 import { STATIC_SERVICE_CYCLES } from '../../model/fatigue.js';
-import { InputError } from '../../units/parse.js';
 import type { CheckDefinition, ObjectiveDefinition, SpringKind, Trend } from '../kind.js';
 import { EXTENSION_CAUTION, analyzeExtension, type ExtensionAnalysis } from './analysis.js';
 import { loadExtensionCatalog } from './catalog.js';
@@ -60,10 +59,6 @@ export const EXTENSION_OBJECTIVE_DEFINITIONS = [
 
 export type ExtensionKind = SpringKind<ExtensionCase, ExtensionAnalysis, ExtensionRequirements, ExtensionDesignRun, ExtensionCandidate, ExtensionFrontier>;
 
-/** The grid visits every extension space the readers admit; there is no genetic search for them yet. */
-function refuseGenetic(strategy: string | undefined): void {
-  if (strategy === 'genetic') throw new InputError('--strategy', 'grid or auto (extension springs are searched by the exhaustive grid)', 'genetic');
-}
 
 export const extension: ExtensionKind = {
   id: 'extension',
@@ -75,20 +70,13 @@ export const extension: ExtensionKind = {
     const p = buildExtensionProblem(req, catalog, loadExtensionCatalog(catalog.materials));
     return Object.assign(p, { candidateAt: (x: ArrayLike<number>, f: Float64Array) => extensionCandidateAt(p, x, f) });
   },
-  design(req, catalog, request = {}) {
-    refuseGenetic(request.strategy);
-    return designExtension(req, catalog, { onProgress: request.onProgress, document: request.document }, loadExtensionCatalog(catalog.materials));
-  },
-  search(req, catalog, request = {}) {
-    refuseGenetic(request.strategy);
-    return designExtension(req, catalog, { onProgress: request.onProgress }, loadExtensionCatalog(catalog.materials));
-  },
+  design: (req, catalog, request = {}) =>
+    designExtension(req, catalog, { strategy: request.strategy, onProgress: request.onProgress, document: request.document }, loadExtensionCatalog(catalog.materials)),
+  search: (req, catalog, request = {}) => designExtension(req, catalog, { strategy: request.strategy, onProgress: request.onProgress }, loadExtensionCatalog(catalog.materials)),
   found: (run) => run.candidates.length > 0,
   // The axes are checked against the objectives registry before this is called (frontierAxis()).
-  frontier(req, catalog, x, y, request = {}) {
-    refuseGenetic(request.strategy);
-    return computeExtensionFrontier(req, catalog, x as ExtensionFrontierKey, y as ExtensionFrontierKey, request.onProgress);
-  },
+  frontier: (req, catalog, x, y, request = {}) =>
+    computeExtensionFrontier(req, catalog, x as ExtensionFrontierKey, y as ExtensionFrontierKey, request.onProgress, undefined, loadExtensionCatalog(catalog.materials), request.strategy),
   searchSize: (req, catalog) => combinations(buildExtensionProblem(req, catalog, loadExtensionCatalog(catalog.materials))),
   checks: EXTENSION_CHECK_DEFINITIONS,
   objectives: EXTENSION_OBJECTIVE_DEFINITIONS,
