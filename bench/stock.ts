@@ -9,7 +9,7 @@ import { analyzeSpring } from '../src/kinds/compression/analysis.js';
 import { checkAnalysis } from '../src/kinds/compression/verify.js';
 import { springServiceConditions } from '../src/kinds/compression/problem.js';
 import { readMaterialMap } from '../src/stock/materialMap.js';
-import { runStock } from '../src/stock/run.js';
+import { runCompressionStock as runStock } from '../src/stock/run.js';
 import { readStockTable } from '../src/stock/table.js';
 
 const REQUIREMENTS = 'examples/stock-dispenser.yaml';

@@ -41,19 +41,19 @@ export const DIAMETER_FIELDS = ['outer_diameter', 'mean_diameter', 'inner_diamet
 export const COIL_FIELDS = ['active_coils', 'total_coils'] as const;
 const REQUIRED: (StockField | readonly StockField[])[] = ['part_number', 'material', 'wire_diameter', DIAMETER_FIELDS, 'free_length', COIL_FIELDS, 'ends'];
 
-export interface Column {
+export interface Column<F extends string = StockField> {
   /** The header as written. */
   name: string;
   index: number;
-  field: StockField;
+  field: F;
   /** The unit its name carries (a unit symbol), or null: the table's system. */
   unit: string | null;
   /** Factor from the column's unit to SI (mm, N, N/mm): set by readHeader from the suffix or the table's system. */
   toSI: number;
 }
 
-export interface Layout {
-  columns: Partial<Record<StockField, Column>>;
+export interface Layout<F extends string = StockField> {
+  columns: Partial<Record<F, Column<F>>>;
   /** Headers that are not stock fields: read past, and said so once. */
   ignored: string[];
 }
@@ -62,27 +62,29 @@ export function normaliseHeader(h: string): string {
   return h.trim().toLowerCase().replace(/[\s-]+/g, '_');
 }
 
-/** Map a header row to the stock fields; a table without a required column is bad input as a whole. */
-export function readHeader(header: string[], label: string, system: UnitSystem): Layout {
-  const columns: Partial<Record<StockField, Column>> = {};
+/** Map a header row to the stock fields (of compression springs unless given); a table without a
+ * required column is bad input as a whole. */
+export function readHeader<F extends string = StockField>(header: string[], label: string, system: UnitSystem,
+  fields: Record<F, FieldType> = STOCK_FIELDS as unknown as Record<F, FieldType>, required: readonly (F | readonly F[])[] = REQUIRED as unknown as readonly (F | readonly F[])[]): Layout<F> {
+  const columns: Partial<Record<F, Column<F>>> = {};
   const ignored: string[] = [];
   header.forEach((name, index) => {
     const h = normaliseHeader(name);
     let field: string = h;
     let unit: string | null = null;
-    if (!(h in STOCK_FIELDS)) {
-      const suffix = SUFFIXES.find(([s]) => h.endsWith(s) && h.slice(0, -s.length) in STOCK_FIELDS);
+    if (!(h in fields)) {
+      const suffix = SUFFIXES.find(([s]) => h.endsWith(s) && h.slice(0, -s.length) in fields);
       if (suffix) {
         field = h.slice(0, -suffix[0].length);
         unit = suffix[1];
       }
     }
-    if (!(field in STOCK_FIELDS)) {
+    if (!(field in fields)) {
       if (h !== '') ignored.push(name.trim());
       return;
     }
-    const f = field as StockField;
-    const type = STOCK_FIELDS[f];
+    const f = field as F;
+    const type = fields[f];
     if (unit !== null && lookupUnit(unit)?.kind !== type) {
       throw new InputError(`${label}: column "${name.trim()}"`, `a unit that fits ${f} (${type === 'count' || type === 'number' || type === 'text' ? 'no unit' : `a ${type}`}), not ${unit}`);
     }
@@ -90,8 +92,8 @@ export function readHeader(header: string[], label: string, system: UnitSystem):
     const toSI = type === 'length' || type === 'force' || type === 'rate' ? (unit !== null ? toCore(1, lookupUnit(unit)!) : displayUnit(system, type).toCore(1)) : 1;
     columns[f] = { name: name.trim(), index, field: f, unit, toSI };
   });
-  for (const need of REQUIRED) {
-    const options = typeof need === 'string' ? [need] : need;
+  for (const need of required) {
+    const options: readonly F[] = typeof need === 'string' ? [need as F] : (need as readonly F[]);
     if (!options.some((o) => columns[o])) {
       throw new InputError(`${label}: header`, `a column ${options.join(' or ')} (with an optional unit suffix such as _mm or _in); the header has: ${header.map((h) => h.trim()).join(', ')}`);
     }

@@ -4,7 +4,11 @@
 import { bandText } from '../check/band.js';
 import { givenService } from '../check/given.js';
 import { compareRows, compareSummary, missText, stockGrid, STOCK_NOTE } from './report.js';
-import type { StockRun } from './run.js';
+import type { AnyStockRun, StockRun } from './run.js';
+import { extensionStockGrid, EXTENSION_STOCK_NOTE, type ExtensionStockRun } from './extension.js';
+import { extensionCautionSection, extensionConventionsSection, extensionSpringSections } from '../kinds/extension/html.js';
+import { extensionService } from '../kinds/extension/checks.js';
+import { failureText } from '../check/report.js';
 import { sig } from '../units/format.js';
 import type { UnitSystem } from '../units/systems.js';
 import { writeOutputFile } from '../report/writeFile.js';
@@ -52,7 +56,8 @@ export function stockSection(run: StockRun, system: UnitSystem, tableLabel: stri
 }
 
 /** A report of its own when no design was run: the stock section and the best stock spring in full. */
-export function stockHtml(run: StockRun, system: UnitSystem, tableLabel: string): string {
+export function stockHtml(run: AnyStockRun, system: UnitSystem, tableLabel: string): string {
+  if (run.kind === 'extension') return extensionStockHtml(run, system, tableLabel);
   const sections = stockSection(run, system, tableLabel);
   const best = run.passing[0];
   if (best) sections.push(...springSections(best.verdict.analysis, system, givenService(run.req, best.verdict.spring), `The best stock spring: ${best.row.partNumber}`));
@@ -62,4 +67,36 @@ export function stockHtml(run: StockRun, system: UnitSystem, tableLabel: string)
 
 export function writeStockReport(path: string, html: string, force: boolean): void {
   writeOutputFile(path, html, force, '--report');
+}
+
+/** The same for a table of extension springs: the rows against the extension requirement, the best
+ * one in full (force line from its initial tension, loop stresses, side view), the caution. */
+export function extensionStockHtml(run: ExtensionStockRun, system: UnitSystem, tableLabel: string): string {
+  const out: string[] = ['<h2>Stock extension springs</h2>', htmlTable(['item', 'value'], [
+    ['table', tableLabel],
+    ['rows', `${run.table.total} (${run.results.length} checked, ${run.bad.length} bad)`],
+    ['working force band', bandText(run.band, system)],
+    ['pass every check', `${run.passing.length}${run.passing.length ? `, ranked by ${run.rank.replace('_', ' ')}` : ''}`],
+  ], { cls: 'kv' })];
+  if (run.passing.length) {
+    const t = extensionStockGrid(run.passing.slice(0, run.top), system, true);
+    out.push(htmlTable(t.header, t.cells, { bestFirst: true }));
+  } else out.push('<p>No row passes every check.</p>');
+  if (run.misses.length) {
+    out.push('<h2>Best near misses</h2>');
+    const t = extensionStockGrid(run.misses, system, false);
+    out.push(htmlTable(t.header, t.cells));
+    out.push(`<ul>${run.misses.map((r) => `<li>${esc(`${r.row.partNumber} (line ${r.row.line}) fails ${r.verdict.failing.map((l) => failureText(l, system)).join('; ')}`)}</li>`).join('')}</ul>`);
+  }
+  const cut = Object.entries(run.failedBy).sort((a, b) => b[1] - a[1] || a[0].localeCompare(b[0]));
+  if (cut.length) out.push(htmlTable(['check', 'rows failing it'], cut.map(([n, c]) => [n, String(c)]), { cls: 'kv' }));
+  if (run.bad.length) {
+    out.push('<h2>Bad rows (skipped)</h2>');
+    out.push(htmlTable(['line', 'part', 'column', 'what was expected'], run.bad.slice(0, 50).map((b) => [String(b.line), b.partNumber ?? '-', b.field, b.message])));
+  }
+  out.push(`<p>${esc(EXTENSION_STOCK_NOTE)}</p>`);
+  const best = run.passing[0];
+  if (best) out.push(...extensionSpringSections(best.verdict.analysis, { ...extensionService(run.req), peened: false }, system, `The best stock spring: ${best.row.partNumber}`));
+  out.push(extensionConventionsSection(), extensionCautionSection());
+  return page('coilfront extension stock report', `Stock table ${tableLabel} against the extension requirements. Written by coilfront.`, out);
 }

@@ -14,7 +14,9 @@ import { CHECK_LABELS, type CheckName } from '../kinds/compression/verify.js';
 import { formatQuantity, inUnit, sig, unitSymbol } from '../units/format.js';
 import type { Kind } from '../units/kinds.js';
 import { readableUnit, type UnitSystem } from '../units/systems.js';
-import type { RowResult, StockRun } from './run.js';
+import type { AnyStockRun, RowResult, StockRun } from './run.js';
+import { extensionStockCsv, extensionStockJson, extensionStockText } from './extension.js';
+import { failedByLines } from './shared.js';
 
 export const STOCK_NOTE = 'Stock rows are judged as not shot-peened and without set removal (a stock table has no column for either).';
 
@@ -58,7 +60,8 @@ export function compareRecord(run: StockRun): Record<string, unknown> | null {
   };
 }
 
-export function stockJson(run: StockRun): Record<string, unknown> {
+export function stockJson(run: AnyStockRun): Record<string, unknown> {
+  if (run.kind === 'extension') return extensionStockJson(run);
   return {
     units: SI_UNITS,
     requirements: requirementsRecord(run.req),
@@ -135,7 +138,8 @@ export function compareSummary(run: StockRun): string {
   return `The best stock spring (${best.row.partNumber}) is ${sig(Math.abs(ratio - 1) * 100, 3)}% ${ratio >= 1 ? 'heavier' : 'lighter'} than the best custom spring; it ships from stock with no tooling.${why}`;
 }
 
-export function stockText(run: StockRun, system: UnitSystem, tableLabel: string): string {
+export function stockText(run: AnyStockRun, system: UnitSystem, tableLabel: string): string {
+  if (run.kind === 'extension') return extensionStockText(run, system, tableLabel);
   const req = run.req;
   const out: string[] = [];
   out.push(`Stock springs for ${formatQuantity(req.workingForce, 'force', system)} at ${formatQuantity(req.workingLength, 'length', system)}` +
@@ -162,12 +166,7 @@ export function stockText(run: StockRun, system: UnitSystem, tableLabel: string)
   if ([...run.passing.slice(0, run.top), ...run.misses].some((r) => r.beyondMakerLimits.length)) {
     out.push('  ! marks a part that the stroke takes beyond the table\'s own max_deflection or max_load: ask the maker before using it there');
   }
-  const cut = Object.entries(run.failedBy).sort((a, b) => b[1] - a[1] || a[0].localeCompare(b[0]));
-  if (cut.length) {
-    out.push('');
-    out.push('Rows failing each check (a row may fail several):');
-    out.push(table(cut.map(([name, n]) => [name, String(n), label(name)])));
-  }
+  out.push(...failedByLines(run.failedBy, label));
   const rates = rateNotes(run);
   if (rates.length) {
     out.push('');
@@ -195,7 +194,8 @@ export function stockText(run: StockRun, system: UnitSystem, tableLabel: string)
 }
 
 /** Every checked row for a spreadsheet: passing rows in rank order, then the rest by how close they came. */
-export function stockCsv(run: StockRun, system: UnitSystem): string {
+export function stockCsv(run: AnyStockRun, system: UnitSystem): string {
+  if (run.kind === 'extension') return extensionStockCsv(run, system);
   const s = (k: Kind) => {
     const sym = unitSymbol(k, system);
     return sym.replace('/', '_per_').replace('^', '');

@@ -10,36 +10,19 @@ import { materialFigures, strengthRangeNote, type MaterialChoice } from '../inpu
 import type { MaterialFigures } from '../kinds/compression/analysis.js';
 import { inactiveCoils, solidLength } from '../kinds/compression/geometry.js';
 import { judge, makeJudge, type Judge, type Verdict } from '../check/judge.js';
-import { readRequirements, type RankKey, type Requirements } from '../kinds/compression/requirements.js';
+import { readRequirements, type Requirements } from '../kinds/compression/requirements.js';
 import { shortestLength } from '../kinds/compression/verify.js';
-import { runDesign, type Candidate, type DesignRun, type StrategyChoice } from '../kinds/compression/design.js';
-import { InputError } from '../units/parse.js';
-import type { UnitSystem } from '../units/systems.js';
+import { runDesign, type Candidate, type DesignRun } from '../kinds/compression/design.js';
 import { readMaterialMap } from './materialMap.js';
 import { RowError, readStockTable, type BadRow, type StockRow, type StockTable } from './table.js';
+import { runExtensionStock, type ExtensionStockRun } from './extension.js';
+import { DEFAULT_RATE_DEVIATION, settleRows, type StockOptions, type StockRankKey } from './shared.js';
+import { kindOf } from '../kinds/index.js';
 
-export const STOCK_RANK_KEYS = ['mass', 'wire_volume', 'outer_diameter', 'free_length', 'safety_factor', 'price'] as const;
-export type StockRankKey = RankKey | 'price';
+export { STOCK_RANK_KEYS, DEFAULT_RATE_DEVIATION, type StockRankKey, type StockOptions } from './shared.js';
 
-/** A table's rate is a nominal with its own tolerance: beyond this fraction from coilfront's rate, say so. */
-export const DEFAULT_RATE_DEVIATION = 0.1;
 /** A table's solid length this much above coilfront's makes the clash check optimistic: say so. */
 export const SOLID_LENGTH_DEVIATION = 0.02;
-
-export interface StockOptions {
-  /** Unit system of the table's plain numbers (SI by default). */
-  units?: UnitSystem;
-  rank?: StockRankKey;
-  /** Passing rows to list (default: the requirement's `top`). */
-  top?: number;
-  /** Near misses to list. */
-  misses?: number;
-  rateDeviation?: number;
-  compare?: boolean;
-  strategy?: StrategyChoice;
-  /** Name of the table in messages. */
-  label?: string;
-}
 
 /** One checked row. A table may hold many thousands: each keeps the few numbers that rank and count it,
  * and its full verdict is judged again when first read (for the rows shown, or every row of the CSV). */
@@ -85,6 +68,7 @@ export class RowResult {
 export interface Comparison { run: DesignRun; custom: Candidate | null; verdict: Verdict | null }
 
 export interface StockRun {
+  kind: 'compression';
   req: Requirements;
   band: WorkingBand;
   table: StockTable;
@@ -147,7 +131,14 @@ export function givenCustom(c: Candidate, req: Requirements): GivenSpring {
   return { choice: c.item.choice, geometry: c.geometry, figures: c.item.figures, peened: req.peened, setRemoved: req.setRemoved };
 }
 
-export function runStock(rawRequirements: unknown, input: string | Record<string, unknown>[], catalog: Catalog, o: StockOptions = {}): StockRun {
+/** A stock run of either kind: the requirements' kind says which springs the table holds. */
+export type AnyStockRun = StockRun | ExtensionStockRun;
+
+export function runStock(rawRequirements: unknown, input: string | Record<string, unknown>[], catalog: Catalog, o: StockOptions = {}): AnyStockRun {
+  return kindOf(rawRequirements).id === 'extension' ? runExtensionStock(rawRequirements, input, catalog, o) : runCompressionStock(rawRequirements, input, catalog, o);
+}
+
+export function runCompressionStock(rawRequirements: unknown, input: string | Record<string, unknown>[], catalog: Catalog, o: StockOptions = {}): StockRun {
   const req = readRequirements(rawRequirements, catalog);
   const label = o.label ?? 'stock table';
   const table = readStockTable(input, { system: o.units ?? 'si', materialMap: readMaterialMap(rawRequirements, catalog), catalog, label });
@@ -166,20 +157,12 @@ export function runStock(rawRequirements: unknown, input: string | Record<string
       bad.push({ line: row.line, partNumber: row.partNumber, field: e.field, message: `expected ${e.message}` });
     }
   }
-  bad.sort((a, b) => a.line - b.line);
-  if (results.length === 0) {
-    const first = bad.slice(0, 3).map((b) => `line ${b.line}, ${b.field}: ${b.message}`).join('; ');
-    throw new InputError(label, `at least one usable row; all ${bad.length} data rows are bad (${first}${bad.length > 3 ? '; ...' : ''})`);
-  }
-  const passing = results.filter((r) => r.pass).sort((a, b) => a.rankValue - b.rankValue || a.row.line - b.row.line);
-  const misses = results.filter((r) => !r.pass).sort((a, b) => a.violation - b.violation || a.row.line - b.row.line).slice(0, o.misses ?? 5);
-  const failedBy: Record<string, number> = {};
-  for (const r of results) for (const name of r.failingNames) failedBy[name] = (failedBy[name] ?? 0) + 1;
+  const { passing, misses, failedBy } = settleRows(results, bad, label, o.misses);
   let compare: Comparison | null = null;
   if (o.compare) {
     const run = runDesign(req, { strategy: o.strategy });
     const custom = run.candidates[0] ?? null;
     compare = { run, custom, verdict: custom ? judge(givenCustom(custom, req), j) : null };
   }
-  return { req, band, table, bad, rank, rateDeviationLimit: rateLimit, results, passing, misses, top: o.top ?? req.top, failedBy, compare };
+  return { kind: 'compression', req, band, table, bad, rank, rateDeviationLimit: rateLimit, results, passing, misses, top: o.top ?? req.top, failedBy, compare };
 }

@@ -74,8 +74,8 @@ function normaliseEndWord(word: string): string {
 
 const PLAIN_NUMBER = /^[-+]?(?:\d+\.?\d*|\.\d+)(?:[eE][-+]?\d+)?$/;
 
-function quantityCell(cell: string, col: Column, system: UnitSystem): number {
-  const kind = STOCK_FIELDS[col.field] as 'length' | 'force' | 'rate';
+/** A quantity cell in SI: a plain number in the column's unit, or a number with its own unit. */
+export function quantityCell(cell: string, col: Column<string>, system: UnitSystem, kind: 'length' | 'force' | 'rate' = STOCK_FIELDS[col.field as StockField] as 'length' | 'force' | 'rate'): number {
   let v: number;
   if (PLAIN_NUMBER.test(cell)) v = Number(cell) * col.toSI;
   else {
@@ -89,7 +89,7 @@ function quantityCell(cell: string, col: Column, system: UnitSystem): number {
   return v;
 }
 
-function numberCell(cell: string, col: Column, rule: { positive?: boolean; nonNegative?: boolean }): number {
+export function numberCell(cell: string, col: Column<string>, rule: { positive?: boolean; nonNegative?: boolean }): number {
   try {
     return parseNumber(cell, col.name, rule);
   } catch (e) {
@@ -115,7 +115,7 @@ function readRow(cells: string[], line: number, layout: Layout, o: TableOptions)
   const kind = cell('kind');
   if (kind !== undefined) {
     const k = kind.toLowerCase();
-    if (k === 'extension') throw new RowError(cols.kind!.name, 'compression (stock tables hold compression springs only: write an extension row as a spring file with kind: extension and run coilfront check SPRING_FILE REQ_FILE on it against an extension requirements file)');
+    if (k === 'extension') throw new RowError(cols.kind!.name, 'compression (the requirements are for compression springs: run the extension rows against an extension requirements file, kind: extension)');
     if (k !== 'compression') throw new RowError(cols.kind!.name, `compression or extension, got ${JSON.stringify(kind)}`);
   }
   const materialWord = need('material', 'a material');
@@ -155,7 +155,7 @@ export function rowSpringFile(row: StockRow): Record<string, unknown> {
 }
 
 /** Header and data rows with their line numbers, from CSV text or from plain records. */
-function rawRows(input: string | Record<string, unknown>[], label: string, bad: BadRow[]): { header: string[]; rows: { cells: string[]; line: number }[] } {
+export function rawRows(input: string | Record<string, unknown>[], label: string, bad: BadRow[]): { header: string[]; rows: { cells: string[]; line: number }[] } {
   if (typeof input !== 'string') {
     const header: string[] = [];
     for (const r of input) for (const k of Object.keys(r)) if (!header.includes(k)) header.push(k);

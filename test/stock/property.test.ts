@@ -8,7 +8,7 @@ import { parse, stringify } from 'yaml';
 import { loadCatalog } from '../../src/catalogs/load.js';
 import { check } from '../../src/check/index.js';
 import { materialFigures } from '../../src/input/material.js';
-import { runStock, type StockRun } from '../../src/stock/run.js';
+import { runCompressionStock as runStock, type StockRun } from '../../src/stock/run.js';
 import { rowSpringFile } from '../../src/stock/table.js';
 
 const catalog = loadCatalog();

@@ -37,7 +37,7 @@ describe('the stock demo', () => {
 
   it('reports each bad row on stderr with its line and column, counts it, and goes on', async () => {
     const r = await cli('stock', REQ, TABLE);
-    expect(r.stderr).toMatch(/examples\/stock-springs\.csv line 129 \(SS-100-090-040\), kind: expected compression \(stock tables hold compression springs only: write an extension row as a spring file with kind: extension and run coilfront check/);
+    expect(r.stderr).toMatch(/examples\/stock-springs\.csv line 129 \(SS-100-090-040\), kind: expected compression \(the requirements are for compression springs: run the extension rows against an extension requirements file/);
     expect(r.stderr).toMatch(/line 130 \(MW-120-120-060\), kind:/);
     expect(r.stdout).toMatch(/Table: 125 rows, 123 checked, 2 bad/);
   });
@@ -183,11 +183,11 @@ envelope: {}
     expect(missing.stderr).toMatch(/no-such-table\.csv: expected an existing file/);
   });
 
-  it('accepts a kind column with compression, refuses extension rows by row', async () => {
+  it('accepts a kind column with compression, refuses extension rows by row (they run against an extension requirement)', async () => {
     const t = inputFile('part_number,material,wire_diameter_mm,outer_diameter_mm,free_length_mm,total_coils,ends,kind\nA,music-wire,1,10,47.05,12,closed & ground,compression\nB,music-wire,1,10,47.05,12,closed & ground,extension\nC,music-wire,1,10,47.05,12,closed & ground,torsion\n', 'csv');
     const j = JSON.parse((await cli('stock', REQS, t, '--json')).stdout);
     expect(j.table.checked).toBe(1);
-    expect(j.bad_rows[0].message).toMatch(/stock tables hold compression springs only: .*coilfront check SPRING_FILE REQ_FILE/);
+    expect(j.bad_rows[0].message).toMatch(/the requirements are for compression springs: run the extension rows against an extension requirements file, kind: extension/);
     expect(j.bad_rows[1].message).toMatch(/compression or extension, got "torsion"/);
   });
 

@@ -32,12 +32,14 @@ export const EXTENSION_CONVENTIONS: [string, string][] = [
 
 const SHARED = new Set(['stress correction', 'tensile strength', 'fatigue', 'surge']);
 
-function conventionsSection(): string {
+/** The conventions of an extension-spring page, shared methods first. */
+export function extensionConventionsSection(): string {
   const rows = [...CONVENTIONS.filter(([k]) => SHARED.has(k)), ...EXTENSION_CONVENTIONS];
   return `<h2>Conventions</h2>${htmlTable(['item', 'method and source'], rows.map(([a, b]) => [a, b]), { cls: 'kv' })}`;
 }
 
-function cautionSection(): string {
+/** The caution every extension-spring page carries. */
+export function extensionCautionSection(): string {
   return `<h2>Extension springs let go of their load</h2><div class="cautions"><p id="extension-caution">${esc(EXTENSION_CAUTION)}</p></div>`;
 }
 
@@ -182,7 +184,7 @@ export function extensionAnalysisHtml(c: ExtensionCase, a: ExtensionAnalysis, sy
   const m = c.materialChoice.material;
   const sections = extensionSpringSections(a, c.service, system, `${m.name} (${m.standard})`);
   if (c.notes.length) sections.push(`<h2>Notes</h2><ul>${c.notes.map((n) => `<li>${esc(n)}</li>`).join('')}</ul>`);
-  sections.push(conventionsSection(), cautionSection());
+  sections.push(extensionConventionsSection(), extensionCautionSection());
   return page('coilfront extension spring analysis', `${m.name}, ${a.geometry.loop} loops. Written by coilfront.`, sections);
 }
 
@@ -256,7 +258,7 @@ export function extensionDesignHtml(run: ExtensionDesignRun, system: UnitSystem,
       sections.push(figure(svg, 'The lightest feasible spring for each value; "none" where nothing fits.'));
     } else sections.push('<p>No value of the sweep admits a spring.</p>');
   }
-  sections.push(conventionsSection(), cautionSection());
+  sections.push(extensionConventionsSection(), extensionCautionSection());
   const F = (v: number) => formatQuantity(v, 'force', system);
   const L = (v: number) => formatQuantity(v, 'length', system);
   const subtitle = `Extension spring: ${F(req.workingForce)} at ${L(req.workingLength)} inside the loops${req.operatingLength !== undefined ? `, stretched to ${L(req.operatingLength)}` : ''}. Written by coilfront.`;

@@ -183,6 +183,7 @@ export function readExtensionRequirements(raw: unknown, catalog: Catalog, ext: E
   if (req.loadTolerance >= 1) throw new InputError('load_tolerance', 'a fraction below 1 (such as 0.1 or "10%")', f.get('load_tolerance'));
   if (req.workingTolerance !== undefined && req.workingTolerance >= 1) throw new InputError('working_tolerance', 'a fraction below 1 (such as 0.02 or "2%")', f.get('working_tolerance'));
   if (req.diameterResolution < 1e-4) throw new InputError('diameter_resolution', 'a scan step of at least 0.0001 mm', f.get('diameter_resolution'));
+  f.get('material_map'); // a stock table's material words; read and checked by src/stock/materialMap.ts
   f.rejectUnknown();
   return req;
 }

@@ -1,0 +1,360 @@
+// `stock` against extension requirements (`kind: extension`): every row of a table of extension
+// springs through the same path as `check` (the row as a spring file read by the extension reader,
+// then judgeExtension: the full analysis under the requirement's service, every extension check, the
+// working-force band, the material and the loop type the requirement names), the passing rows ranked
+// like design, the rows that fail closest, and the counts per check. A table of compression springs
+// runs against a compression requirement (./run.ts); a row of the other kind is a bad row, named.
+import type { Catalog } from '../catalogs/types.js';
+import { bandText, workingBand, type WorkingBand } from '../check/band.js';
+import { judgeExtension, type ExtensionVerdict, type GivenLine } from '../check/extension.js';
+import { bandRecord, checkLineRecord, failureText, writeMargin } from '../check/report.js';
+import { isRecord } from '../units/fields.js';
+import { EXTENSION_CAUTION } from '../kinds/extension/analysis.js';
+import { loadExtensionCatalog } from '../kinds/extension/catalog.js';
+import { EXTENSION_CHECK_LABELS } from '../kinds/extension/checks.js';
+import { extensionRequirementsRecord, fatigueSafety, staticSafety } from '../kinds/extension/report.js';
+import { readExtensionRequirements, type ExtensionRequirements } from '../kinds/extension/requirements.js';
+import { readExtensionSpring } from '../kinds/extension/springFile.js';
+import { cautionText } from '../report/cautions.js';
+import { toCsv } from '../report/csv.js';
+import { SI_UNITS } from '../report/json.js';
+import { table } from '../report/table.js';
+import { formatQuantity, inUnit, sig, unitSymbol } from '../units/format.js';
+import type { Kind } from '../units/kinds.js';
+import { InputError } from '../units/parse.js';
+import { readableUnit, type UnitSystem } from '../units/systems.js';
+import { DIAMETER_FIELDS, readHeader, type FieldType, type Layout } from './columns.js';
+import { readMaterialMap, resolveMaterial, type MaterialMap } from './materialMap.js';
+import { DEFAULT_RATE_DEVIATION, failedByLines, settleRows, type StockOptions, type StockRankKey } from './shared.js';
+import { RowError, numberCell, quantityCell, rawRows, type BadRow } from './table.js';
+
+/** The columns of a table of extension springs (a unit suffix as for compression tables). Lengths are
+ * inside the loops, as in an extension spring file. */
+export const EXTENSION_STOCK_FIELDS = {
+  part_number: 'text',
+  material: 'text',
+  wire_diameter: 'length',
+  outer_diameter: 'length',
+  mean_diameter: 'length',
+  inner_diameter: 'length',
+  body_coils: 'count',
+  initial_tension: 'force',
+  loop: 'text',
+  loop_length: 'length',
+  free_length: 'length',
+  rate: 'rate',
+  max_load: 'force',
+  max_extended_length: 'length',
+  price: 'number',
+  kind: 'text',
+} as const satisfies Record<string, FieldType>;
+export type ExtensionStockField = keyof typeof EXTENSION_STOCK_FIELDS;
+
+const REQUIRED: readonly (ExtensionStockField | readonly ExtensionStockField[])[] = ['part_number', 'material', 'wire_diameter', DIAMETER_FIELDS, 'body_coils', 'initial_tension'];
+
+export const EXTENSION_STOCK_NOTE = 'Stock rows are judged as not shot-peened (a stock table has no column for it); lengths are inside the loops.';
+
+export interface ExtensionStockRow {
+  line: number;
+  partNumber: string;
+  materialWord: string;
+  /** The row as an extension spring file (SI), as `check` and `analyze` read it. */
+  springFile: Record<string, unknown>;
+  /** The column each spring-file field came from, to name it in a message. */
+  columnOf: Record<string, string>;
+  tableRate?: number;
+  maxLoad?: number;
+  maxExtendedLength?: number;
+  price?: number;
+}
+
+export interface ExtensionRowResult {
+  row: ExtensionStockRow;
+  verdict: ExtensionVerdict;
+  pass: boolean;
+  /** Sum of the positive check values (text checks count 1): how far the row is from passing. */
+  violation: number;
+  rankValue: number;
+  rateDeviation: number | null;
+  /** The table's own limits (max_load, max_extended_length) that the requirement goes beyond. */
+  beyondMakerLimits: string[];
+  notes: string[];
+  failingNames: string[];
+}
+
+export interface ExtensionStockRun {
+  kind: 'extension';
+  req: ExtensionRequirements;
+  band: WorkingBand;
+  table: { system: UnitSystem; total: number; layout: Layout<ExtensionStockField> };
+  bad: BadRow[];
+  rank: StockRankKey;
+  rateDeviationLimit: number;
+  results: ExtensionRowResult[];
+  passing: ExtensionRowResult[];
+  misses: ExtensionRowResult[];
+  top: number;
+  failedBy: Record<string, number>;
+  /** --compare is for compression tables only so far. */
+  compare: null;
+}
+
+interface RowContext { system: UnitSystem; materialMap: MaterialMap; catalog: Catalog }
+
+function readRow(cells: string[], line: number, layout: Layout<ExtensionStockField>, o: RowContext): ExtensionStockRow {
+  const cols = layout.columns;
+  const cell = (f: ExtensionStockField): string | undefined => {
+    const c = cols[f];
+    const v = c ? (cells[c.index] ?? '').trim() : '';
+    return v === '' ? undefined : v;
+  };
+  const need = (f: ExtensionStockField, what: string): string => {
+    const v = cell(f);
+    if (v === undefined) throw new RowError(cols[f]?.name ?? f, `${what} (the cell is empty)`);
+    return v;
+  };
+  const partNumber = need('part_number', 'a part number');
+  const kind = cell('kind');
+  if (kind !== undefined && kind.toLowerCase() !== 'extension') {
+    throw new RowError(cols.kind!.name, `extension (the requirements are for extension springs: check ${kind.toLowerCase() === 'compression' ? 'compression rows' : 'other rows'} against requirements of their own kind), got ${JSON.stringify(kind)}`);
+  }
+  const materialWord = need('material', 'a material');
+  const material = resolveMaterial(materialWord, o.materialMap, o.catalog);
+  if (!material) throw new RowError(cols.material!.name, `a catalog material id or a word that the requirements' material_map maps to one, got ${JSON.stringify(materialWord)}`);
+  const q = (f: ExtensionStockField) => quantityCell(cell(f)!, cols[f]!, o.system, EXTENSION_STOCK_FIELDS[f] as 'length' | 'force' | 'rate');
+  const diameter = DIAMETER_FIELDS.find((f) => cell(f) !== undefined);
+  if (!diameter) throw new RowError(DIAMETER_FIELDS.filter((f) => cols[f]).map((f) => cols[f]!.name).join(' | '), 'a coil diameter (the cells are empty)');
+  need('wire_diameter', 'a wire diameter');
+  need('body_coils', 'a body-coil count');
+  const fi = need('initial_tension', 'an initial tension');
+  const springFile: Record<string, unknown> = {
+    kind: 'extension', units: 'si', material, wire_diameter: q('wire_diameter'), [diameter]: q(diameter),
+    body_coils: numberCell(cell('body_coils')!, cols.body_coils!, { positive: true }),
+    // A spring may be wound without initial tension: zero is a value, not an empty cell.
+    initial_tension: Number(fi) === 0 ? 0 : q('initial_tension'),
+    peened: false,
+  };
+  const columnOf: Record<string, string> = {};
+  for (const f of ['material', 'wire_diameter', diameter, 'body_coils', 'initial_tension'] as ExtensionStockField[]) columnOf[f] = cols[f]!.name;
+  for (const f of ['loop', 'loop_length', 'free_length'] as const) {
+    if (cell(f) === undefined) continue;
+    springFile[f] = f === 'loop' ? cell(f) : q(f);
+    columnOf[f] = cols[f]!.name;
+  }
+  const row: ExtensionStockRow = { line, partNumber, materialWord, springFile, columnOf };
+  if (cell('rate') !== undefined) row.tableRate = q('rate');
+  if (cell('max_load') !== undefined) row.maxLoad = q('max_load');
+  if (cell('max_extended_length') !== undefined) row.maxExtendedLength = q('max_extended_length');
+  if (cell('price') !== undefined) row.price = numberCell(cell('price')!, cols.price!, { nonNegative: true });
+  return row;
+}
+
+function rankValue(v: ExtensionVerdict, row: ExtensionStockRow, key: StockRankKey): number {
+  const a = v.analysis;
+  const g = a.geometry;
+  switch (key) {
+    case 'mass': return g.mass;
+    case 'wire_volume': return g.wireVolume;
+    case 'outer_diameter': return g.outerDiameter;
+    case 'free_length': return g.freeLength;
+    case 'safety_factor': return -Math.min(staticSafety(a), fatigueSafety(a) ?? Infinity);
+    case 'price': return row.price ?? Infinity;
+  }
+}
+
+function judgeRow(row: ExtensionStockRow, req: ExtensionRequirements, band: WorkingBand, loopStated: boolean, catalog: Catalog, rank: StockRankKey, rateLimit: number): ExtensionRowResult {
+  let spring;
+  try {
+    spring = readExtensionSpring(row.springFile, catalog, loadExtensionCatalog(catalog.materials));
+  } catch (e) {
+    if (!(e instanceof InputError)) throw e;
+    throw new RowError(row.columnOf[e.field] ?? e.field, e.expected);
+  }
+  const verdict = judgeExtension(spring, row.springFile, req, band, loopStated);
+  const a = verdict.analysis;
+  const notes = [...spring.notes];
+  const rateDeviation = row.tableRate !== undefined ? (row.tableRate - a.rate) / a.rate : null;
+  if (rateDeviation !== null && Math.abs(rateDeviation) > rateLimit) notes.push(`the table's rate differs from coilfront's by ${(rateDeviation * 100).toFixed(1)}% (more than ${(rateLimit * 100).toFixed(0)}%)`);
+  const beyondMakerLimits: string[] = [];
+  const longest = Math.max(req.operatingLength ?? req.workingLength, req.maxExtendedLength ?? 0);
+  if (row.maxExtendedLength !== undefined && longest > row.maxExtendedLength) beyondMakerLimits.push('max_extended_length');
+  if (row.maxLoad !== undefined && a.points.reduce((m, p) => Math.max(m, p.force), 0) > row.maxLoad) beyondMakerLimits.push('max_load');
+  const violation = verdict.lines.reduce((s, l) => s + (Number.isFinite(l.g) && l.g > 0 ? l.g : 0), 0);
+  return { row, verdict, pass: verdict.pass, violation, rankValue: rankValue(verdict, row, rank), rateDeviation, beyondMakerLimits, notes, failingNames: verdict.failing.map((l) => l.name) };
+}
+
+export function runExtensionStock(rawRequirements: unknown, input: string | Record<string, unknown>[], catalog: Catalog, o: StockOptions = {}): ExtensionStockRun {
+  if (o.compare) throw new InputError('--compare', 'a table of compression springs (the stock-against-custom comparison of extension springs is not built yet)');
+  const ext = loadExtensionCatalog(catalog.materials);
+  const req = readExtensionRequirements(rawRequirements, catalog, ext);
+  const label = o.label ?? 'stock table';
+  const system = o.units ?? 'si';
+  const bad: BadRow[] = [];
+  const { header, rows: raw } = rawRows(input, label, bad);
+  const layout = readHeader<ExtensionStockField>(header, label, system, EXTENSION_STOCK_FIELDS, REQUIRED);
+  const context: RowContext = { system, materialMap: readMaterialMap(rawRequirements, catalog), catalog };
+  const band = workingBand(req);
+  const loopStated = isRecord(rawRequirements) && rawRequirements.loop !== undefined && rawRequirements.loop !== null;
+  const rank = o.rank ?? req.rank;
+  const rateLimit = o.rateDeviation ?? DEFAULT_RATE_DEVIATION;
+  const results: ExtensionRowResult[] = [];
+  for (const { cells, line } of raw) {
+    try {
+      results.push(judgeRow(readRow(cells, line, layout, context), req, band, loopStated, catalog, rank, rateLimit));
+    } catch (e) {
+      if (!(e instanceof RowError)) throw e;
+      const pc = layout.columns.part_number;
+      bad.push({ line, partNumber: pc ? (cells[pc.index] ?? '').trim() || null : null, field: e.field, message: `expected ${e.message}` });
+    }
+  }
+  const { passing, misses, failedBy } = settleRows(results, bad, label, o.misses);
+  return {
+    kind: 'extension', req, band, table: { system, total: raw.length + bad.filter((b) => b.field === 'row').length, layout }, bad, rank,
+    rateDeviationLimit: rateLimit, results, passing, misses, top: o.top ?? req.top, failedBy, compare: null,
+  };
+}
+
+// ---- output ----
+
+const limitingRecord = (v: ExtensionVerdict) => (v.limiting ? { name: v.limiting.name, margin: v.limiting.margin } : null);
+
+function springRecord(v: ExtensionVerdict): Record<string, unknown> {
+  const a = v.analysis;
+  const g = a.geometry;
+  const m = v.spring.materialChoice.material;
+  return {
+    material: m.id, material_name: m.name, loop: g.loop, wire_diameter: g.wireDiameter, mean_diameter: g.meanDiameter, outer_diameter: g.outerDiameter,
+    spring_index: g.springIndex, body_coils: g.bodyCoils, active_coils: g.activeCoils, free_length: g.freeLength, initial_tension: a.initialTension.force,
+    initial_tension_stress: a.initialTension.stress, initial_tension_band: a.initialTension.position, rate: a.rate, mass: g.mass,
+    static_safety_factor: staticSafety(a), fatigue_safety_factor: fatigueSafety(a),
+    points: a.points.map((p) => ({ length: p.length, force: p.force, body_stress: p.bodyStress, loop_bending_stress: p.loopBendingStress, loop_torsion_stress: p.loopTorsionStress })),
+  };
+}
+
+function rowRecord(r: ExtensionRowResult): Record<string, unknown> {
+  const v = r.verdict;
+  return {
+    line: r.row.line, part_number: r.row.partNumber, material_word: r.row.materialWord, price: r.row.price ?? null, table_rate: r.row.tableRate ?? null,
+    rate_deviation: r.rateDeviation, beyond_maker_limits: r.beyondMakerLimits, pass: v.pass,
+    failing: v.failing.map((l) => ({ name: l.name, by: l.margin === null ? null : -l.margin })), limiting_check: limitingRecord(v),
+    spring: springRecord(v), checks: v.lines.map(checkLineRecord), notes: r.notes,
+  };
+}
+
+const rateNotes = (run: ExtensionStockRun) => run.results.filter((r) => r.rateDeviation !== null && Math.abs(r.rateDeviation) > run.rateDeviationLimit);
+
+export function extensionStockJson(run: ExtensionStockRun): Record<string, unknown> {
+  return {
+    units: SI_UNITS,
+    kind: 'extension',
+    requirements: extensionRequirementsRecord(run.req),
+    working_band: bandRecord(run.band),
+    table: {
+      units: run.table.system, rows: run.table.total, checked: run.results.length, bad: run.bad.length,
+      passing: run.passing.length, failing: run.results.length - run.passing.length, ignored_columns: run.table.layout.ignored,
+    },
+    rank: run.rank,
+    passing: run.passing.slice(0, run.top).map(rowRecord),
+    near_misses: run.misses.map(rowRecord),
+    failed_by: run.failedBy,
+    rate_deviation_limit: run.rateDeviationLimit,
+    rate_notes: rateNotes(run).map((r) => ({ line: r.row.line, part_number: r.row.partNumber, table_rate: r.row.tableRate, rate: r.verdict.analysis.rate, deviation: r.rateDeviation })),
+    bad_rows: run.bad.map((b) => ({ line: b.line, part_number: b.partNumber, field: b.field, message: b.message })),
+    compare: null,
+    notes: [EXTENSION_STOCK_NOTE],
+    caution: EXTENSION_CAUTION,
+  };
+}
+
+const num = (v: number, kind: Kind, system: UnitSystem, digits = 4) => sig(inUnit(v, kind, system), digits);
+const smallest = (v: ExtensionVerdict) => (v.limiting ? `${v.limiting.name} ${writeMargin(v.limiting.margin)}` : '-');
+
+/** The columns of the text table (and of the HTML report's). */
+export function extensionStockGrid(rows: ExtensionRowResult[], system: UnitSystem, ranked: boolean): { header: string[]; cells: string[][] } {
+  const u = (k: Kind) => unitSymbol(k, system);
+  // Masses in grams when every spring listed is under 1 kg (SI), as in the compression table.
+  const mass = readableUnit(system, 'mass', Math.max(0, ...rows.map((r) => r.verdict.analysis.geometry.mass)));
+  const header = [ranked ? '#' : 'line', 'part', 'material', `d ${u('length')}`, `OD ${u('length')}`, 'Nb', 'loop', `L0 ${u('length')}`, `Fi ${u('force')}`, 'Fi band',
+    `k ${u('rate')}`, `forces ${u('force')}`, 'SF static', 'SF fatigue', `mass ${mass.symbol}`, 'price', 'smallest margin'];
+  const cells = rows.map((r, i) => {
+    const a = r.verdict.analysis;
+    const g = a.geometry;
+    const fatigue = fatigueSafety(a);
+    return [ranked ? String(i + 1) : String(r.row.line), r.row.partNumber + (r.beyondMakerLimits.length ? ' !' : ''), r.verdict.spring.materialChoice.material.id,
+      num(g.wireDiameter, 'length', system), num(g.outerDiameter, 'length', system), sig(g.bodyCoils, 4), g.loop, num(g.freeLength, 'length', system),
+      num(a.initialTension.force, 'force', system, 3), a.initialTension.position, num(a.rate, 'rate', system), a.points.map((p) => num(p.force, 'force', system, 3)).join(' / '),
+      sig(staticSafety(a), 3), fatigue === null ? '-' : sig(fatigue, 3), sig(mass.fromCore(g.mass), 3), r.row.price !== undefined ? sig(r.row.price, 4) : '-', smallest(r.verdict)];
+  });
+  return { header, cells };
+}
+
+const label = (name: string) => EXTENSION_CHECK_LABELS[name as keyof typeof EXTENSION_CHECK_LABELS] ?? (name.startsWith('working_force') ? `working force ${name.endsWith('min') ? 'below' : 'above'} its band` : name);
+
+export function extensionStockText(run: ExtensionStockRun, system: UnitSystem, tableLabel: string): string {
+  const req = run.req;
+  const F = (v: number) => formatQuantity(v, 'force', system);
+  const L = (v: number) => formatQuantity(v, 'length', system);
+  const out: string[] = [];
+  out.push(`Stock extension springs for ${F(req.workingForce)} at ${L(req.workingLength)} inside the loops` +
+    (req.operatingLength !== undefined ? `, stretched to ${L(req.operatingLength)}${req.operatingForce !== undefined ? ` at ${F(req.operatingForce)}` : ''}` : '') +
+    `; table ${tableLabel} (plain numbers in ${run.table.system === 'us' ? 'in, lbf' : 'mm, N'})`);
+  out.push(`Working force band: ${bandText(run.band, system)}`);
+  out.push(`Table: ${run.table.total} rows, ${run.results.length} checked, ${run.bad.length} bad${run.bad.length ? ' (each on stderr with its line and column)' : ''}; ${run.passing.length} pass every check${run.passing.length ? `, ranked by ${run.rank.replace('_', ' ')}` : ''}.`);
+  out.push('');
+  if (run.passing.length) {
+    const shown = run.passing.slice(0, run.top);
+    const t = extensionStockGrid(shown, system, true);
+    out.push(table([t.header, ...t.cells]));
+    if (run.passing.length > shown.length) out.push(`  ... and ${run.passing.length - shown.length} more (--top)`);
+  } else out.push('No row passes every check.');
+  if (run.misses.length) {
+    out.push('');
+    out.push('Best near misses (least total violation) and what they fail, by how much:');
+    const t = extensionStockGrid(run.misses, system, false);
+    out.push(table([t.header, ...t.cells]));
+    for (const r of run.misses) out.push(`  - ${r.row.partNumber} (line ${r.row.line}) fails ${r.verdict.failing.map((l: GivenLine) => failureText(l, system)).join('; ')}`);
+  }
+  if ([...run.passing.slice(0, run.top), ...run.misses].some((r) => r.beyondMakerLimits.length)) {
+    out.push('  ! marks a part that the requirement takes beyond the table\'s own max_extended_length or max_load: ask the maker before using it there');
+  }
+  out.push(...failedByLines(run.failedBy, label));
+  const rates = rateNotes(run);
+  if (rates.length) {
+    out.push('');
+    out.push(`The table's rate differs from coilfront's k = G d^4 / (8 D^3 Na) by more than ${sig(run.rateDeviationLimit * 100, 3)}% on ${rates.length} row${rates.length === 1 ? '' : 's'} (the checks use coilfront's):`);
+    for (const r of rates.slice(0, 20)) out.push(`  - ${r.row.partNumber} (line ${r.row.line}): table ${num(r.row.tableRate!, 'rate', system)}, coilfront ${num(r.verdict.analysis.rate, 'rate', system)} ${unitSymbol('rate', system)}`);
+  }
+  out.push('');
+  out.push('Notes:');
+  out.push(`  ! ${EXTENSION_STOCK_NOTE}`);
+  if (run.table.layout.ignored.length) out.push(`  ! columns read past (not stock fields): ${run.table.layout.ignored.join(', ')}`);
+  for (const r of run.passing.slice(0, run.top)) for (const n of r.notes.filter((x) => !/table's rate/.test(x))) out.push(`  ! ${r.row.partNumber}: ${n}`);
+  out.push('');
+  out.push(cautionText());
+  out.push(`  - ${EXTENSION_CAUTION}`);
+  return out.join('\n') + '\n';
+}
+
+/** Every checked row for a spreadsheet: passing rows in rank order, then the rest by how close they came. */
+export function extensionStockCsv(run: ExtensionStockRun, system: UnitSystem): string {
+  const s = (k: Kind) => unitSymbol(k, system).replace('/', '_per_').replace('^', '');
+  const header = ['rank', 'verdict', 'line', 'part_number', 'material', 'loop', `wire_diameter_${s('length')}`, `mean_diameter_${s('length')}`, `outer_diameter_${s('length')}`,
+    'body_coils', 'active_coils', `free_length_${s('length')}`, `initial_tension_${s('force')}`, 'initial_tension_band', `rate_${s('rate')}`, `table_rate_${s('rate')}`,
+    `working_force_${s('force')}`, `operating_force_${s('force')}`, 'static_safety_factor', 'fatigue_safety_factor', `mass_${s('mass')}`, 'price',
+    'limiting_check', 'smallest_margin', 'failing_checks'];
+  const failing = run.results.filter((r) => !r.pass).sort((a, b) => a.violation - b.violation || a.row.line - b.row.line);
+  const six = (v: number, k: Kind) => Number(sig(inUnit(v, k, system), 6));
+  const rows = [...run.passing, ...failing].map((r, i) => {
+    const a = r.verdict.analysis;
+    const g = a.geometry;
+    const fatigue = fatigueSafety(a);
+    return [r.pass ? i + 1 : null, r.pass ? 'pass' : 'fail', r.row.line, r.row.partNumber, r.verdict.spring.materialChoice.material.id, g.loop,
+      six(g.wireDiameter, 'length'), six(g.meanDiameter, 'length'), six(g.outerDiameter, 'length'), g.bodyCoils, g.activeCoils, six(g.freeLength, 'length'),
+      six(a.initialTension.force, 'force'), a.initialTension.position, six(a.rate, 'rate'), r.row.tableRate !== undefined ? six(r.row.tableRate, 'rate') : null,
+      six(a.points[0].force, 'force'), a.points.length > 1 ? six(a.points[a.points.length - 1].force, 'force') : null, Number(sig(staticSafety(a), 5)),
+      fatigue === null ? null : Number(sig(fatigue, 5)), six(g.mass, 'mass'), r.row.price ?? null, r.verdict.limiting?.name ?? null,
+      r.verdict.limiting?.margin !== undefined && r.verdict.limiting.margin !== null ? Number(sig(r.verdict.limiting.margin, 5)) : null,
+      r.verdict.failing.map((l) => (l.margin === null ? l.name : `${l.name} ${sig(-l.margin * 100, 3)}%`)).join('; ')];
+  });
+  return toCsv(header, rows);
+}
