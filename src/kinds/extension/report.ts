@@ -13,7 +13,7 @@ import { EXTENSION_CHECKS, EXTENSION_CHECK_LABELS, activeExtensionChecks } from 
 import { extensionCandidateAt, type ExtensionCandidate, type ExtensionDesignRun } from './design.js';
 import type { ExtensionRequirements } from './requirements.js';
 import { loadExtensionCatalog } from './catalog.js';
-import { extensionRelaxAdvice, type ExtensionRelaxChange } from './relax.js';
+import { extensionRelaxAdvice, type ExtensionRelaxAdvice, type ExtensionRelaxChange } from './relax.js';
 import type { ExtensionCase } from './springFile.js';
 import { bandFraction, fatigueSafety, staticSafety } from './figures.js';
 import { EXTENSION_TABLE_FIELDS } from './fields.js';
@@ -270,9 +270,9 @@ function nearestMisses(run: ExtensionDesignRun): ExtensionCandidate[] {
 
 // The advice is worked out once per run (it re-runs the design a few dozen times) and shared by the
 // text, the JSON and the HTML report of that run.
-const adviceCache = new WeakMap<ExtensionDesignRun, { changes: ExtensionRelaxChange[]; runs: number }>();
+const adviceCache = new WeakMap<ExtensionDesignRun, ExtensionRelaxAdvice>();
 
-export function extensionAdviceFor(run: ExtensionDesignRun): { changes: ExtensionRelaxChange[]; runs: number } {
+export function extensionAdviceFor(run: ExtensionDesignRun): ExtensionRelaxAdvice {
   let a = adviceCache.get(run);
   if (!a) {
     const catalog = loadCatalog();
@@ -295,10 +295,16 @@ export function describeExtensionChange(c: ExtensionRelaxChange, fileSystem: Uni
 export function extensionRelaxLines(run: ExtensionDesignRun): string[] {
   if (run.document === undefined) return [`Limiting check: ${extensionLimitingText(run)}.`];
   const a = extensionAdviceFor(run);
-  if (!a.changes.length) return [`Limiting check: ${extensionLimitingText(run)}. No single change of a limit or setting tried (${a.runs} runs) admits a spring: reconsider the loads, the stroke or the space.`];
+  if (!a.changes.length && a.pair) {
+    return [`Limiting check: ${extensionLimitingText(run)}. No single change of a limit or setting admits a spring; these two together do (run together; neither alone does; values in the file's units):`,
+      ...a.pair.map((c) => `  - ${describeExtensionChange(c, run.req.system)}`)];
+  }
+  if (!a.changes.length) return [`Limiting check: ${extensionLimitingText(run)}. No single change of a limit or setting tried, and no pair of them (${a.runs} runs), admits a spring: reconsider the loads, the stroke or the space.`];
   return [`Limiting check: ${extensionLimitingText(run)}. The smallest single changes that admit a spring (each was run; values in the file's units):`,
     ...a.changes.map((c) => `  - ${describeExtensionChange(c, run.req.system)}`)];
 }
+
+const adviceRecord = (c: ExtensionRelaxChange, system: UnitSystem) => ({ path: c.path, from: c.from, to: c.to, set: c.set, suggestion: describeExtensionChange(c, system) });
 
 // Wall-clock figures break byte-for-byte reproducibility, so they appear only when asked for (--timing).
 export function extensionDesignJson(run: ExtensionDesignRun, showTiming = false): Record<string, unknown> {
@@ -313,7 +319,9 @@ export function extensionDesignJson(run: ExtensionDesignRun, showTiming = false)
     ...(run.candidates.length === 0 ? {
       infeasible: {
         limiting_check: extensionLimitingText(run),
-        relax: run.document === undefined ? null : extensionAdviceFor(run).changes.map((c) => ({ path: c.path, from: c.from, to: c.to, set: c.set, suggestion: describeExtensionChange(c, run.req.system) })),
+        relax: run.document === undefined ? null : extensionAdviceFor(run).changes.map((c) => adviceRecord(c, run.req.system)),
+        relax_pair: run.document === undefined ? null : extensionAdviceFor(run).pair?.map((c) => adviceRecord(c, run.req.system)) ?? null,
+        relax_runs: run.document === undefined ? 0 : extensionAdviceFor(run).runs,
         nearest_misses: misses.map((c, i) => ({ ...extensionCandidateRecord(c), violation: run.result.nearestMisses[i].violation, failing_checks: failingChecks(c) })),
       },
     } : {}),
