@@ -10,10 +10,11 @@ import { sanitize } from '../report/json.js';
 import { workingBand, type WorkingBand } from './band.js';
 import { givenFromCase } from './given.js';
 import { judge, makeJudge, type Verdict } from './judge.js';
-import { checkJson } from './report.js';
+import { checkJson, checkText } from './report.js';
 import { kindOf } from '../kinds/index.js';
 import { InputError } from '../units/parse.js';
-import { checkExtensionDocuments, extensionCheckJson, type ExtensionCheckOutcome } from './extension.js';
+import { checkExtensionDocuments, extensionCheckJson, extensionCheckText, type ExtensionCheckOutcome } from './extension.js';
+import type { UnitSystem } from '../units/systems.js';
 
 export interface CheckOutcome { req: Requirements; band: WorkingBand; verdict: Verdict; notes: string[] }
 
@@ -45,10 +46,21 @@ export function checkDocuments(spring: unknown, requirements: unknown, catalog: 
   return { req, band, verdict, notes };
 }
 
+export type AnyCheckOutcome = ReturnType<typeof checkAnyDocuments>;
+
+/** The record `check --json` prints for an outcome of either kind (before sanitising). */
+export function checkOutcomeJson(o: AnyCheckOutcome): Record<string, unknown> {
+  return o.kind === 'extension' ? extensionCheckJson(o.verdict, o.band, o.notes) : checkJson(o.verdict, o.band, o.notes);
+}
+
+/** The text `check` prints for an outcome of either kind. */
+export function checkOutcomeText(o: AnyCheckOutcome, system: UnitSystem): string {
+  return o.kind === 'extension' ? extensionCheckText(o, system) : checkText(o.verdict, o.req, o.band, o.notes, system);
+}
+
 /** The JSON record of `check` (SI units; no NaN or Infinity: a figure that does not apply is null). */
 export function check(spring: unknown, requirements: unknown, options: { catalog?: Catalog } = {}): Record<string, unknown> {
-  const o = checkAnyDocuments(spring, requirements, options.catalog);
-  return sanitize(o.kind === 'extension' ? extensionCheckJson(o.verdict, o.band, o.notes) : checkJson(o.verdict, o.band, o.notes)) as Record<string, unknown>;
+  return sanitize(checkOutcomeJson(checkAnyDocuments(spring, requirements, options.catalog))) as Record<string, unknown>;
 }
 
 export { workingBand, type WorkingBand } from './band.js';

@@ -1,9 +1,7 @@
 // `coilfront check SPRING_FILE REQ_FILE`: every requirement check on one given spring, with margins.
 import type { Command } from 'commander';
 import { loadCatalog } from '../catalogs/load.js';
-import { checkAnyDocuments } from '../check/index.js';
-import { extensionCheckJson, extensionCheckText } from '../check/extension.js';
-import { checkJson, checkText } from '../check/report.js';
+import { checkAnyDocuments, checkOutcomeJson, checkOutcomeText } from '../check/index.js';
 import { readInputFile } from '../input/document.js';
 import { toJson } from '../report/json.js';
 import type { UnitSystem } from '../units/systems.js';
@@ -18,11 +16,7 @@ export function checkCommand(springFile: string, reqFile: string, opts: CheckOpt
   const requirements = rawWithOverrides(reqFile, opts);
   const o = checkAnyDocuments(spring, requirements, loadCatalog());
   const system = opts.units ?? o.req.system;
-  if (o.kind === 'extension') {
-    if (opts.json) io.stdout(toJson(extensionCheckJson(o.verdict, o.band, o.notes)) + '\n');
-    else io.stdout(extensionCheckText(o, system));
-  } else if (opts.json) io.stdout(toJson(checkJson(o.verdict, o.band, o.notes)) + '\n');
-  else io.stdout(checkText(o.verdict, o.req, o.band, o.notes, system));
+  io.stdout(opts.json ? toJson(checkOutcomeJson(o)) + '\n' : checkOutcomeText(o, system));
   if (!o.verdict.pass) {
     io.stderr(`coilfront: the spring fails ${o.verdict.failing.map((l) => l.name).join(', ')}\n`);
     return EXIT.infeasible;
