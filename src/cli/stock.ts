@@ -5,7 +5,7 @@ import { Option } from 'commander';
 import { loadCatalog } from '../catalogs/load.js';
 import { toJson } from '../report/json.js';
 import { writeOutputFile } from '../report/writeFile.js';
-import { designHtml } from '../report/html/designHtml.js';
+import { designHtml } from '../kinds/compression/report/designHtml.js';
 import { stockHtml, stockSection, writeStockReport } from '../stock/html.js';
 import { stockCsv, stockJson, stockText } from '../stock/report.js';
 import { runStock, STOCK_RANK_KEYS, type StockRankKey } from '../stock/run.js';

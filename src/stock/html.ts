@@ -12,7 +12,7 @@ import { failureText } from '../check/report.js';
 import { sig } from '../units/format.js';
 import type { UnitSystem } from '../units/systems.js';
 import { writeOutputFile } from '../report/writeFile.js';
-import { springSections } from '../report/html/designHtml.js';
+import { springSections } from '../kinds/compression/report/designHtml.js';
 import { CONVENTIONS, htmlTable, page } from '../report/html/page.js';
 import { esc } from '../report/html/svg.js';
 

@@ -7,7 +7,7 @@ import { bandRecord, checkLineRecord, failingRecord, failureText, givenSpringRec
 import { GIVEN_CHECK_LABELS, type Verdict } from '../check/judge.js';
 import { cautionText } from '../report/cautions.js';
 import { toCsv } from '../report/csv.js';
-import { requirementsRecord } from '../report/designReport.js';
+import { requirementsRecord } from '../kinds/compression/report/designReport.js';
 import { SI_UNITS } from '../report/json.js';
 import { table } from '../report/table.js';
 import { CHECK_LABELS, type CheckName } from '../kinds/compression/verify.js';

@@ -16,7 +16,6 @@ function layerOf(unit: string): number {
 
 /** Upward imports that exist today, unit -> unit, and the way out of each. */
 const UPWARD_DEBTS: Record<string, string> = {
-  'report -> kinds/compression': 'report/designReport.ts and report/html/designHtml.ts are the compression design report (text, JSON, HTML): they move into src/kinds/compression/report/ beside the analysis report, the spec sheet and the plots (held back while the ranked table is reworked to be rendered from the fields registry)',
   'report -> kinds': 'report/fields.ts renders a kind\'s fields with the FieldDefinition type of kinds/kind.ts: the type belongs with its renderer in report/fields.ts, which kind.ts re-exports (held back for the same rework)',
 };
 

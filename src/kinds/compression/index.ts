@@ -5,7 +5,7 @@ import { STATIC_SERVICE_CYCLES } from '../../model/fatigue.js';
 import { readRequirements, searchSize, type Requirements } from './requirements.js';
 import { readSpringCase, type SpringCase } from './springFile.js';
 import { analysisJson, analysisText } from './report/analysisReport.js';
-import { candidateRecord, countsRecord, designJson, designText, limitingText } from '../../report/designReport.js';
+import { candidateRecord, countsRecord, designJson, designText, limitingText } from './report/designReport.js';
 import { candidateAt, runDesign, type Candidate, type DesignRun } from './design.js';
 import { buildSpringProblem } from './problem.js';
 import { confirmRun } from './tolerance/confirm.js';
@@ -48,7 +48,7 @@ export const compression: CompressionKind = {
     designText: (run, system, showTiming) => designText(run, system, showTiming),
     designJson: (run, showTiming) => designJson(run, showTiming),
     async designHtml(run, system, shown = {}) {
-      const { designHtml } = await import('../../report/html/designHtml.js');
+      const { designHtml } = await import('./report/designHtml.js');
       return designHtml(run, system, shown.frontier ?? reportFrontier(run), shown.sweep);
     },
     candidateJson: (c) => candidateRecord(c),

@@ -9,7 +9,7 @@ import { readRequirements } from '../../../src/kinds/compression/requirements.js
 import { runDesign } from '../../../src/kinds/compression/design.js';
 import { CHECK } from '../../../src/kinds/compression/verify.js';
 import { bucklingMargin, COMPRESSION_TABLE_FIELDS } from '../../../src/kinds/compression/fields.js';
-import { candidateGrid, candidateRecord } from '../../../src/report/designReport.js';
+import { candidateGrid, candidateRecord } from '../../../src/kinds/compression/report/designReport.js';
 import { fieldGrid } from '../../../src/report/fields.js';
 import { formatQuantity, sig } from '../../../src/units/format.js';
 

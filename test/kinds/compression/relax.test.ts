@@ -9,7 +9,7 @@ import { describe, expect, it } from 'vitest';
 import { loadCatalog } from '../../../src/catalogs/load.js';
 import { readInputFile } from '../../../src/input/document.js';
 import { readRequirements, type Requirements } from '../../../src/kinds/compression/requirements.js';
-import { requirementsRecord } from '../../../src/report/designReport.js';
+import { requirementsRecord } from '../../../src/kinds/compression/report/designReport.js';
 import { admitsSpring, runDesign } from '../../../src/kinds/compression/design.js';
 import { RELAX_LIMITS, limitingCheck, outward, relaxAdvice } from '../../../src/kinds/compression/relax.js';
 import { ADVICE_ORDER, COMPRESSION_CHECKS, easedBy } from '../../../src/kinds/compression/checks.js';

@@ -3,7 +3,7 @@ import type { SpringCase } from '../springFile.js';
 import type { SpringAnalysis } from '../analysis.js';
 import type { UnitSystem } from '../../../units/systems.js';
 import { writeOutputFile } from '../../../report/writeFile.js';
-import { springSections } from '../../../report/html/designHtml.js';
+import { springSections } from './designHtml.js';
 import { CONVENTIONS, htmlTable, page } from '../../../report/html/page.js';
 
 export function springHtml(c: SpringCase, a: SpringAnalysis, system: UnitSystem): string {

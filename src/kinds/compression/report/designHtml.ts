@@ -1,24 +1,24 @@
 // The HTML design report: requirements and counts, the feasible cloud and its front with the chosen
 // spring marked, the ranked table, the chosen spring's force-length and fatigue diagrams and its
 // drawing to scale, the sweep when one was run, conventions and cautions.
-import type { Requirements } from '../../kinds/compression/requirements.js';
-import { rulesOfThumb, type ServiceConditions, type SpringAnalysis } from '../../kinds/compression/analysis.js';
-import type { Candidate, DesignRun } from '../../kinds/compression/design.js';
-import { reportedChecks } from '../../kinds/compression/design.js';
-import { CHECK_LABELS, type CheckName } from '../../kinds/compression/verify.js';
-import { FRONTIER_KEYS, type Frontier } from '../../kinds/compression/frontier.js';
-import { formatQuantity, inUnit, quantityWriter, sig, unitSymbol } from '../../units/format.js';
-import type { UnitSystem } from '../../units/systems.js';
-import { writeOutputFile } from '../writeFile.js';
-import { CONVENTIONS, figure, htmlTable, page } from './page.js';
-import { cloudPlot, sweepPlot } from './plots.js';
-import { fatiguePlot, forceLengthPlot, sideView } from '../../kinds/compression/report/plots.js';
-import { candidateGrid, relaxLines, yieldNote } from '../designReport.js';
-import { fieldNotes } from '../fields.js';
-import { COMPRESSION_FIELDS, TABLE_NOTE } from '../../kinds/compression/fields.js';
-import { surgeEndsLabel } from '../../model/surge.js';
-import { strengthBasisSummary } from '../../input/material.js';
-import { esc } from './svg.js';
+import type { Requirements } from '../requirements.js';
+import { rulesOfThumb, type ServiceConditions, type SpringAnalysis } from '../analysis.js';
+import type { Candidate, DesignRun } from '../design.js';
+import { reportedChecks } from '../design.js';
+import { CHECK_LABELS, type CheckName } from '../verify.js';
+import { FRONTIER_KEYS, type Frontier } from '../frontier.js';
+import { formatQuantity, inUnit, quantityWriter, sig, unitSymbol } from '../../../units/format.js';
+import type { UnitSystem } from '../../../units/systems.js';
+import { writeOutputFile } from '../../../report/writeFile.js';
+import { CONVENTIONS, figure, htmlTable, page } from '../../../report/html/page.js';
+import { cloudPlot, sweepPlot } from '../../../report/html/plots.js';
+import { fatiguePlot, forceLengthPlot, sideView } from './plots.js';
+import { candidateGrid, relaxLines, yieldNote } from './designReport.js';
+import { fieldNotes } from '../../../report/fields.js';
+import { COMPRESSION_FIELDS, TABLE_NOTE } from '../fields.js';
+import { surgeEndsLabel } from '../../../model/surge.js';
+import { strengthBasisSummary } from '../../../input/material.js';
+import { esc } from '../../../report/html/svg.js';
 
 export interface SweepSummary { name: string; rows: { value: number; best: Candidate | null }[] }
 

@@ -1,20 +1,20 @@
 // The outcome of a design run, for people (text) and machines (JSON, SI), including the honest
 // account of an infeasible run: what cut the candidates, the nearest misses, and what to relax.
-import type { Requirements } from '../kinds/compression/requirements.js';
-import { CHECK_LABELS, CHECKS, type CheckName } from '../kinds/compression/verify.js';
-import { candidateAt, reportedChecks, type Candidate, type DesignRun } from '../kinds/compression/design.js';
-import { limitingCheck, outward, relaxAdvice, type RelaxAdvice, type RelaxChange } from '../kinds/compression/relax.js';
-import { formatQuantity, inUnit, quantityWriter, sig, unitSymbol, yieldPercent } from '../units/format.js';
-import { rulesOfThumb } from '../kinds/compression/analysis.js';
-import type { Kind } from '../units/kinds.js';
-import type { UnitSystem } from '../units/systems.js';
-import { cautionText } from './cautions.js';
-import { SI_UNITS } from './json.js';
-import { strengthBasisOf, strengthBasisSummary } from '../input/material.js';
-import { table } from './table.js';
-import { fieldGrid, fieldRecord } from './fields.js';
-import { COMPRESSION_JSON_FIELDS, COMPRESSION_TABLE_FIELDS, TABLE_NOTE } from '../kinds/compression/fields.js';
-import type { CandidateYield } from '../kinds/compression/tolerance/springYield.js';
+import type { Requirements } from '../requirements.js';
+import { CHECK_LABELS, CHECKS, type CheckName } from '../verify.js';
+import { candidateAt, reportedChecks, type Candidate, type DesignRun } from '../design.js';
+import { limitingCheck, outward, relaxAdvice, type RelaxAdvice, type RelaxChange } from '../relax.js';
+import { formatQuantity, inUnit, quantityWriter, sig, unitSymbol, yieldPercent } from '../../../units/format.js';
+import { rulesOfThumb } from '../analysis.js';
+import type { Kind } from '../../../units/kinds.js';
+import type { UnitSystem } from '../../../units/systems.js';
+import { cautionText } from '../../../report/cautions.js';
+import { SI_UNITS } from '../../../report/json.js';
+import { strengthBasisOf, strengthBasisSummary } from '../../../input/material.js';
+import { table } from '../../../report/table.js';
+import { fieldGrid, fieldRecord } from '../../../report/fields.js';
+import { COMPRESSION_JSON_FIELDS, COMPRESSION_TABLE_FIELDS, TABLE_NOTE } from '../fields.js';
+import type { CandidateYield } from '../tolerance/springYield.js';
 
 /** One candidate as JSON (SI), rendered from the compression fields registry; with its yield at the
  * tolerances where the run was confirmed. */
