@@ -13,6 +13,10 @@ import type { Problem } from '../search/problem.js';
 import type { SearchResult } from '../search/result.js';
 import type { Kind as UnitKind } from '../units/kinds.js';
 import type { UnitSystem } from '../units/systems.js';
+import type { FieldDefinition } from '../report/fields.js';
+
+// An output field is defined by the renderer that reads it (src/report/fields.ts, below the kinds).
+export type { FieldColumn, FieldDefinition, FieldValue } from '../report/fields.js';
 
 /** How a check or objective moves when the solved variable grows (the values of TREND in
  * src/search/problem.ts): -1 decreasing, 0 unknown (scanned), 1 increasing. */
@@ -52,38 +56,6 @@ export interface ObjectiveDefinition {
   readonly frontierAxis: boolean;
   /** Has a lower bound by the LP relaxation. */
   readonly lpBound: boolean;
-}
-
-/** A value of an output field; null where it does not apply (never NaN or undefined in output). */
-export type FieldValue = number | string | null;
-
-/** One column of candidate output, from which JSON, CSV, the text table and the HTML table are
- * rendered. */
-export interface FieldDefinition<Cand> {
-  /** Name in JSON and (with its unit symbol) in CSV. */
-  readonly name: string;
-  readonly unit: UnitKind | 'volume' | null;
-  /** Significant digits in CSV (tables round for reading, CSV keeps precision). */
-  readonly digits: number;
-  read(c: Cand): FieldValue;
-  /** The JSON value where it is not read(c): a list or a record (points, checks), a flag. */
-  json?(c: Cand): unknown;
-  /** Whether this candidate carries the field at all (a yield only where the run was confirmed): when
-   * not, JSON leaves the key out and a table shows '-' (the column only where some row carries it). */
-  present?(c: Cand): boolean;
-  /** Its column in the ranked text and HTML tables. */
-  readonly column?: FieldColumn<Cand>;
-  /** What the figure means where its name does not say (relative_cost): printed where it appears. */
-  readonly note?: string;
-}
-
-export interface FieldColumn<Cand> {
-  /** The heading; the unit symbol follows it for a field with a unit ("d mm"). */
-  readonly head: string;
-  /** Significant digits shown (0: written as it is). */
-  readonly digits: number;
-  /** The cell where it is not the rounded figure ("20.0 / 33.6", a percentage). */
-  cell?(c: Cand, system: UnitSystem): string;
 }
 
 /** The search problem of a kind: a general Problem (the engine knows nothing of springs) plus the

@@ -1,10 +1,45 @@
 // Output fields rendered for people and machines, from a spring kind's fields registry
-// (src/kinds/kind.ts): CSV columns (names carry their unit symbol, `wire_diameter_mm`; values rounded
+// (src/kinds/<kind>/fields.ts): CSV columns (names carry their unit symbol, `wire_diameter_mm`; values rounded
 // to the field's significant digits, 0: written as they are), the JSON record (SI, full precision)
 // and the ranked table's header and cells (text and HTML) in a unit system.
-import type { FieldDefinition, FieldValue } from '../kinds/kind.js';
+import type { Kind as UnitKind } from '../units/kinds.js';
 import { inUnit, sig, unitSymbol } from '../units/format.js';
 import { readableUnit, type DisplayUnit, type UnitSystem } from '../units/systems.js';
+
+// What an output field is, defined beside its renderer and below the kinds (src/kinds/kind.ts
+// re-exports it for the kinds' registries).
+
+/** A value of an output field; null where it does not apply (never NaN or undefined in output). */
+export type FieldValue = number | string | null;
+
+/** One column of candidate output, from which JSON, CSV, the text table and the HTML table are
+ * rendered. */
+export interface FieldDefinition<Cand> {
+  /** Name in JSON and (with its unit symbol) in CSV. */
+  readonly name: string;
+  readonly unit: UnitKind | 'volume' | null;
+  /** Significant digits in CSV (tables round for reading, CSV keeps precision). */
+  readonly digits: number;
+  read(c: Cand): FieldValue;
+  /** The JSON value where it is not read(c): a list or a record (points, checks), a flag. */
+  json?(c: Cand): unknown;
+  /** Whether this candidate carries the field at all (a yield only where the run was confirmed): when
+   * not, JSON leaves the key out and a table shows '-' (the column only where some row carries it). */
+  present?(c: Cand): boolean;
+  /** Its column in the ranked text and HTML tables. */
+  readonly column?: FieldColumn<Cand>;
+  /** What the figure means where its name does not say (relative_cost): printed where it appears. */
+  readonly note?: string;
+}
+
+export interface FieldColumn<Cand> {
+  /** The heading; the unit symbol follows it for a field with a unit ("d mm"). */
+  readonly head: string;
+  /** Significant digits shown (0: written as it is). */
+  readonly digits: number;
+  /** The cell where it is not the rounded figure ("20.0 / 33.6", a percentage). */
+  cell?(c: Cand, system: UnitSystem): string;
+}
 
 export function fieldColumns<C>(fields: readonly FieldDefinition<C>[], system: UnitSystem): string[] {
   return fields.map((f) => (f.unit && f.unit !== 'volume' ? `${f.name}_${unitSymbol(f.unit, system)}` : f.name));
