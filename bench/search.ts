@@ -1,7 +1,7 @@
 // The search targets of coilfront's speed work, each as a ratio or a count measured in the same run
 // (called from bench/run.ts). "Before" figures are those of the engine before the interval methods
 // (commit 1f66dd6), measured on this machine with the same requirements; they are quoted, not re-run.
-import { execFileSync } from 'node:child_process';
+import { execFileSync, spawnSync } from 'node:child_process';
 import { existsSync, mkdtempSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
@@ -27,15 +27,29 @@ const median = (xs: number[]) => [...xs].sort((a, b) => a - b)[Math.floor(xs.len
 const fmt = (v: number, d = 3) => Number(v.toPrecision(d)).toLocaleString('en-US', { maximumSignificantDigits: d });
 const int = (v: number) => Math.round(v).toLocaleString('en-US');
 
-function timed<T>(fn: () => T, reps: number): { value: T; ms: number } {
+/** Median wall and CPU time (process.cpuUsage: the time this process ran, not the time other
+ * processes held the core) of reps runs after one warm-up. */
+function timed<T>(fn: () => T, reps: number): { value: T; ms: number; cpuMs: number } {
   let value = fn();
   const times: number[] = [];
+  const cpu: number[] = [];
   for (let i = 0; i < reps; i++) {
     const t = performance.now();
+    const u = process.cpuUsage();
     value = fn();
+    const du = process.cpuUsage(u);
     times.push(performance.now() - t);
+    cpu.push((du.user + du.system) / 1000);
   }
-  return { value, ms: median(times) };
+  return { value, ms: median(times), cpuMs: median(cpu) };
+}
+
+/** Instructions a command executes, counted by valgrind's callgrind (repeatable whatever the load),
+ * or null when valgrind is not there or the count is missing. */
+function instructions(dir: string, command: string, args: string[]): number | null {
+  const r = spawnSync('valgrind', ['--tool=callgrind', `--callgrind-out-file=${join(dir, 'callgrind.out')}`, command, ...args], { encoding: 'utf8', maxBuffer: 1 << 26 });
+  const m = /Collected : (\d+)/.exec(r.stderr ?? '');
+  return m ? Number(m[1]) : null;
 }
 
 /** The requirement read from a file, with the diameter resolution set past the input's own floor
@@ -46,7 +60,21 @@ function requirementAt(catalog: Catalog, file: string, resolution: number): Requ
   return req;
 }
 
-export function searchSections(catalog: Catalog, say: (s?: string) => void): void {
+/** The figures of the issue-10 targets that these sections measure (NaN where not measured), for the
+ * summary that bench/run.ts writes. */
+export interface SearchFigures {
+  coldMs: number; bruteMs: number; coldInstructions: number; bruteInstructions: number; sameOptimum: boolean;
+  /** Work ratios at 0.001 and 0.0001 mm against 0.01 mm, per requirement file. */
+  resolution: { file: string; at001: number; at0001: number }[];
+  everyMs: number; everyCpuMs: number; everyEvaluations: number;
+  gaHits: number; gaSeeds: number; gaMedianEvaluations: number; gaMostEvaluations: number;
+}
+
+export function searchSections(catalog: Catalog, say: (s?: string) => void): SearchFigures {
+  const figures: SearchFigures = {
+    coldMs: NaN, bruteMs: NaN, coldInstructions: NaN, bruteInstructions: NaN, sameOptimum: false, resolution: [],
+    everyMs: NaN, everyCpuMs: NaN, everyEvaluations: NaN, gaHits: NaN, gaSeeds: 50, gaMedianEvaluations: NaN, gaMostEvaluations: NaN,
+  };
   // 1. The cold search phase against one pass of the compiled brute force.
   say('## Cold search phase against a compiled brute force');
   let gcc = false;
@@ -73,9 +101,31 @@ export function searchSections(catalog: Catalog, say: (s?: string) => void): voi
     const m = /lightest ([0-9.]+) g at d=([0-9.]+) D=([0-9.]+) Na=([0-9.]+)/.exec(bruteLine)!;
     const [bMass, bd, bD, bNa] = m.slice(1).map(Number);
     const same = ourBest !== null && ourBest.d === bd && ourBest.Na === bNa && Math.abs(ourBest.D - bD) <= 0.01 + 1e-9;
+    figures.coldMs = median(ours);
+    figures.bruteMs = median(brute);
+    figures.sameOptimum = same;
     say(`- \`${MATCH}\` restates the brute force's requirement (\`brute-force ${BRUTE_FORCE_ARGS.slice(0, 10).join(' ')}\`: the metric series, 3 to 30 active coils by quarters, D from 4d to 12d at 0.01 mm, ${bruteLine.split(' ')[0]} candidates per pass), compiled here with \`gcc -O3 -march=native\`.`);
-    say(`- One pass of the brute force: **${fmt(median(brute))} ms** (median of 9). coilfront's search phase, cold in a fresh process (\`${CLI} design ${MATCH} --json --timing\`, interleaved with it): **${fmt(median(ours))} ms** (median of 9), ${int(ourBest?.evaluations ?? 0)} candidate evaluations. Ratio **${fmt(median(ours) / median(brute), 2)}** (target at most 1; before: about 2.3 on the demo-sized requirement of the issue, 157,363 evaluations on this one).`);
+    say(`- One pass of the brute force: **${fmt(median(brute))} ms** (median of 9). coilfront's search phase, cold in a fresh process (\`${CLI} design ${MATCH} --json --timing\`, interleaved with it; design's default grouped list, which looks at every feasible combination unpruned): **${fmt(median(ours))} ms** (median of 9), ${int(ourBest?.evaluations ?? 0)} candidate evaluations. Ratio **${fmt(median(ours) / median(brute), 2)}** (target at most 1; before the interval methods: about 2.3 on the demo-sized requirement of the issue, 157,363 evaluations on this one; at commit 8c2e70a, before this session: 1.3, 74.3 ms against 55.4 ms, 4,482 evaluations and 4,100 bound calls with the incumbent pruning of that day).`);
     say(`- Optimum: brute force ${bMass} g at d = ${bd}, D = ${bD}, Na = ${bNa}; coilfront ${fmt((ourBest?.mass ?? NaN) * 1000, 6)} g at d = ${ourBest?.d}, D = ${fmt(ourBest?.D ?? NaN, 6)}, Na = ${ourBest?.Na}: ${same ? 'the same spring to the diameter resolution' : 'DIFFERENT'} (the brute force steps D from 4d, coilfront from the boundary of the monotone checks).`);
+    // The same comparison in instructions, which the machine's load does not move.
+    let valgrind = false;
+    try { execFileSync('valgrind', ['--version'], { stdio: 'ignore' }); valgrind = true; } catch { /* no valgrind */ }
+    if (!valgrind) {
+      say('- valgrind is not on this machine: the instruction counts are not measured.');
+    } else {
+      // valgrind does not take every instruction -march=native may emit: the counted brute force is built -O3 for the baseline x86-64.
+      const plain = join(dir, 'brute-force-plain');
+      execFileSync('gcc', ['-O3', '-o', plain, BRUTE_FORCE_SOURCE, '-lm']);
+      const bruteCount = instructions(dir, plain, BRUTE_FORCE_ARGS);
+      const probe = ['dist/bench/coldProbe.js', MATCH];
+      const whole = instructions(dir, process.execPath, probe);
+      const stopped = instructions(dir, process.execPath, [...probe, '--stop-before-search']);
+      const search = whole !== null && stopped !== null ? whole - stopped : null;
+      figures.coldInstructions = search ?? NaN;
+      figures.bruteInstructions = bruteCount ?? NaN;
+      const m = (v: number | null) => (v === null ? 'not measured' : `${fmt(v / 1e6)} M`);
+      say(`- Instructions (valgrind callgrind): one pass of the brute force (built \`gcc -O3\`, which valgrind runs) **${m(bruteCount)}**; coilfront's cold search phase **${m(search)}** (\`node dist/bench/coldProbe.js ${MATCH}\`, ${m(whole)}, less the same process stopped before the search, ${m(stopped)}: the search's own work with its JIT warm-up). Ratio **${search !== null && bruteCount ? fmt(search / bruteCount, 2) : 'not measured'}** (before this session's engine work, commit 8c2e70a, the same count was 283 M).`);
+    }
   }
   say();
 
@@ -88,12 +138,16 @@ export function searchSections(catalog: Catalog, say: (s?: string) => void): voi
   for (const file of [DEMO, MATCH]) {
     let base = 0;
     let coarseBest = Infinity;
+    const row = { file, at001: NaN, at0001: NaN };
+    figures.resolution.push(row);
     [0.01, 0.001, 0.0001].forEach((res, i) => {
       const r = gridSearch(buildSpringProblem(requirementAt(catalog, file, res)), { top: 1 });
       const work = r.evaluations + (r.boundCalls ?? 0);
       if (i === 0) { base = work; coarseBest = r.best[0].f[1]; }
       const best = r.best[0].f[1];
       const b = before[file];
+      if (i === 1) row.at001 = work / base;
+      if (i === 2) row.at0001 = work / base;
       say(`| ${file} | ${res} | ${int(r.evaluations)} | ${int(r.boundCalls ?? 0)} | **${fmt(work / base, 3)}** | ${best.toPrecision(10)}${best <= coarseBest ? '' : ' WORSE'} | ${int(b[i])} (${fmt(b[i] / b[0], 3)}) |`);
     });
   }
@@ -106,8 +160,11 @@ export function searchSections(catalog: Catalog, say: (s?: string) => void): voi
   allReq.wireSizes = () => everyDiameter;
   const allProblem = buildSpringProblem(allReq);
   const all = timed(() => gridSearch(allProblem, { top: 1 }), 5);
+  figures.everyMs = all.ms;
+  figures.everyCpuMs = all.cpuMs;
+  figures.everyEvaluations = all.value.evaluations;
   say('## Every material x every end type x every wire series, quarter coils (the demo\'s loads)');
-  say(`- ${int(all.value.cells)} combinations (${allProblem.stock.length} material wire sizes from the union of every series x 4 end types x ${int(all.value.cells / allProblem.stock.length / 4)} coil counts): ${int(all.value.evaluations)} evaluations and ${int(all.value.boundCalls ?? 0)} bound calls; ${int(all.value.prunedCells)} combinations pruned by the incumbent; **${fmt(all.ms)} ms** median of 5 after a warm-up (target under 500 ms; before: 2,034,596 evaluations, 2,224 ms on this machine).`);
+  say(`- ${int(all.value.cells)} combinations (${allProblem.stock.length} material wire sizes from the union of every series x 4 end types x ${int(all.value.cells / allProblem.stock.length / 4)} coil counts): ${int(all.value.evaluations)} evaluations and ${int(all.value.boundCalls ?? 0)} bound calls (bracket bounds and branch and range hints); ${int(all.value.prunedCells)} combinations pruned by the incumbent; **${fmt(all.ms)} ms** wall, **${fmt(all.cpuMs)} ms** CPU, medians of 5 after a warm-up (target under 500 ms; before the interval methods: 2,034,596 evaluations, 2,224 ms on this machine; at commit 8c2e70a, before this session: 259,864 evaluations and 36,826 bound calls, 484 ms wall).`);
   say();
 
   // 4. The genetic search on the space too large for the grid.
@@ -135,9 +192,13 @@ export function searchSections(catalog: Catalog, say: (s?: string) => void): voi
     if (r.best.length && r.best[0].f[0] <= gaGrid.best[0].f[0] * 1.005) hits++;
   }
   const gaMs = (performance.now() - t1) / 50;
+  figures.gaHits = hits;
+  figures.gaMedianEvaluations = median(evals);
+  figures.gaMostEvaluations = Math.max(...evals);
   const mean = (xs: number[]) => xs.reduce((a, b) => a + b, 0) / xs.length;
   say('## Genetic search on every material x every end type at coil_step 0.01');
   say(`- ${int(gaGrid.cells)} combinations. The grid's optimum ${gaGrid.best[0].f[0].toPrecision(8)} kg (${int(gaGrid.evaluations)} evaluations, ${fmt(gridMs)} ms).`);
   say(`- Genetic search, 50 seeds at a budget of ${int(budget)} evaluations, stopped as \`design\` stops it (after ${int(until.stallEvaluations)} evaluations without a better incumbent, or at the LP bound ${lp === null ? 'none' : lp.toPrecision(5)} kg within 0.1%): **${hits}/50** within 0.5% of the grid's optimum (target at least 48/50); evaluations used per seed median **${int(median(evals))}**, mean ${int(mean(evals))}, most ${int(Math.max(...evals))} (before: the whole budget every time, median 499,740); the best met after median ${int(median(toBest))}, most ${int(Math.max(...toBest))} evaluations; stopped by ${Object.entries(stops).map(([k, v]) => `${k} ${v}`).join(', ')}; ${fmt(gaMs)} ms per seed. The LP bound is ${lp === null ? 'absent' : `${fmt((1 - lp / gaGrid.best[0].f[0]) * 100, 2)}% below the optimum`}, so on this space the stall, not the bound, ends the runs (the bound stop is tested on a problem whose bound is tight: test/search/termination.test.ts).`);
   say();
+  return figures;
 }
