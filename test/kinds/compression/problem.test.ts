@@ -167,7 +167,7 @@ describe('spring problem in the search', () => {
       expect(points(on)).toEqual(points(off));
       // (A search that finds nothing pays a second, full pass for its diagnostics.)
       if (on.best.length) expect(on.evaluations).toBeLessThanOrEqual(off.evaluations);
-    }), { numRuns: 40, seed: 11 });
+    }), { numRuns: 25, seed: 11 });
   });
 
   it('a reported spring never shows a positive check (the demo: its best springs sit exactly at the top of the load band)', () => {
