@@ -4,6 +4,7 @@ import { loadCatalog } from '../catalogs/load.js';
 import type { Catalog } from '../catalogs/types.js';
 import { kindOf } from '../kinds/index.js';
 import type { AnySpringKind, InUnits } from '../kinds/kind.js';
+import { withCautions } from '../report/cautions.js';
 import { sanitize } from '../report/json.js';
 import type { CatalogOption } from './options.js';
 import type { AnalysisResult } from './types.js';
@@ -26,7 +27,7 @@ export function analyzeDocument(spring: unknown, catalog: Catalog = loadCatalog(
 
 /** The JSON record of an analysis, as `analyze --json` prints it. */
 export function analysisResult(o: SpringAnalysisOf): AnalysisResult {
-  return sanitize(o.kind.report.analysisJson(o.spring, o.analysis)) as AnalysisResult;
+  return sanitize(withCautions(o.kind.report.analysisJson(o.spring, o.analysis), o.kind)) as AnalysisResult;
 }
 
 export function analyze(spring: unknown, options: AnalyzeOptions = {}): AnalysisResult {

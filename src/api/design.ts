@@ -6,6 +6,7 @@ import { loadCatalog } from '../catalogs/load.js';
 import type { Catalog } from '../catalogs/types.js';
 import { kindOf } from '../kinds/index.js';
 import type { AnySpringKind, InUnits } from '../kinds/kind.js';
+import { withCautions } from '../report/cautions.js';
 import { sanitize } from '../report/json.js';
 import type { StrategyChoice } from '../kinds/compression/design.js';
 import { blamed, withRequirementOptions, type RankedOptions } from './options.js';
@@ -38,7 +39,7 @@ export function runPlan(plan: DesignPlan, options: { strategy?: StrategyChoice; 
 
 /** The JSON record of a design run, as `design --json` prints it. */
 export function designResult(plan: DesignPlan, run: unknown, timing = false): DesignResult {
-  return sanitize(plan.kind.report.designJson(run, timing)) as DesignResult;
+  return sanitize(withCautions(plan.kind.report.designJson(run, timing), plan.kind)) as DesignResult;
 }
 
 export function design(requirements: unknown, options: DesignOptions = {}): DesignResult {

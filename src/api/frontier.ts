@@ -5,6 +5,7 @@
 import { frontierAxes, objectiveValue, type AnySpringKind, type KindFrontier } from '../kinds/kind.js';
 import { kindOf } from '../kinds/index.js';
 import { FRONTIER_KEYS, type FrontierKey } from '../kinds/compression/frontier.js';
+import { cautionsOf } from '../report/cautions.js';
 import { SI_UNITS, sanitize } from '../report/json.js';
 import { InputError } from '../units/parse.js';
 import { planDesign, type DesignPlan } from './design.js';
@@ -47,6 +48,7 @@ export function frontierResult(kind: AnySpringKind, fr: KindFrontier): FrontierR
     frontier_strategy: fr.strategy,
     frontier: fr.front.map((c) => ({ [fr.x]: value(c, fr.x), [fr.y]: value(c, fr.y), ...kind.report.candidateJson(c) })),
     ...kind.report.jsonFrame.tail,
+    cautions: cautionsOf(kind),
   }) as FrontierResult;
 }
 

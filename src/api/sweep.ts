@@ -8,6 +8,7 @@ import { LIMITS } from '../input/limits.js';
 import { blameOverride, parsePath, sweepValues, withValue } from '../input/overrides.js';
 import { kindOf } from '../kinds/index.js';
 import type { AnySpringKind, InUnits, KindRun } from '../kinds/kind.js';
+import { cautionsOf } from '../report/cautions.js';
 import { SI_UNITS, sanitize } from '../report/json.js';
 import type { StrategyChoice } from '../kinds/compression/design.js';
 import { InputError } from '../units/parse.js';
@@ -121,6 +122,7 @@ export function sweepResult(kind: AnySpringKind, path: readonly string[], rows: 
       limiting_check: r.limiting,
     })),
     ...kind.report.jsonFrame.tail,
+    cautions: cautionsOf(kind),
   }) as SweepResult;
 }
 

@@ -56,6 +56,8 @@ export interface SearchCounts {
 /** What `coilfront design --json` prints. */
 export interface DesignResult extends SearchCounts {
   units: Units;
+  /** The cautions of the spring's kind, in the words the text output ends with (general ones first). */
+  cautions: string[];
   requirements: Record<string, unknown>;
   /** Present with `timing: true` only (it makes the output differ from run to run). */
   search_ms?: number;
@@ -68,6 +70,8 @@ export interface DesignResult extends SearchCounts {
 /** What `coilfront analyze --json` prints. */
 export interface AnalysisResult {
   units: Units;
+  /** The cautions of the spring's kind, in the words the text output ends with (general ones first). */
+  cautions: string[];
   material: Record<string, unknown>;
   geometry: Record<string, unknown>;
   rate: number;
@@ -82,6 +86,8 @@ export interface AnalysisResult {
 /** What `coilfront frontier --json` prints: the Pareto set on the two objectives x and y. */
 export interface FrontierResult extends SearchCounts {
   units: Units;
+  /** The cautions of the spring's kind, in the words the text output ends with (general ones first). */
+  cautions: string[];
   x: string;
   y: string;
   frontier_strategy: 'grid' | 'genetic';
@@ -102,6 +108,8 @@ export interface SweepRowRecord {
 /** What `coilfront sweep --json` prints. */
 export interface SweepResult {
   units: Units;
+  /** The cautions of the spring's kind, in the words the text output ends with (general ones first). */
+  cautions: string[];
   vary: string;
   note: string;
   rows: SweepRowRecord[];

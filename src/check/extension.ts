@@ -7,13 +7,13 @@
 import type { Catalog } from '../catalogs/types.js';
 import { isRecord } from '../units/fields.js';
 import { analyzeExtension, extensionWarnings, type ExtensionAnalysis } from '../kinds/extension/analysis.js';
-import { EXTENSION_CAUTION } from '../kinds/extension/analysis.js';
+import { EXTENSION_CAUTIONS } from '../kinds/extension/analysis.js';
 import { EXTENSION_CHECKS, EXTENSION_CHECK_LABELS, activeExtensionChecks, checkExtension, extensionService, type ExtensionCheck } from '../kinds/extension/checks.js';
 import { loadExtensionCatalog } from '../kinds/extension/catalog.js';
 import { initialTensionHalfWidth, initialTensionMiddle } from '../kinds/extension/initialTension.js';
 import { readExtensionRequirements, type ExtensionRequirements } from '../kinds/extension/requirements.js';
 import { readExtensionSpring, type ExtensionCase } from '../kinds/extension/springFile.js';
-import { cautionText } from '../report/cautions.js';
+import { cautionText, cautionsOf } from '../report/cautions.js';
 import { SI_UNITS } from '../report/json.js';
 import { table } from '../report/table.js';
 import { formatQuantity, quantityWriter, sig } from '../units/format.js';
@@ -132,6 +132,7 @@ export function extensionCheckJson(v: ExtensionVerdict, band: WorkingBand, notes
     checks: v.lines.map((l) => checkLineRecord(l)),
     notes,
     warnings: a.warnings.map((w) => w.message),
+    cautions: cautionsOf(EXTENSION_CAUTIONS),
   };
 }
 
@@ -159,7 +160,6 @@ export function extensionCheckText(o: ExtensionCheckOutcome, system: UnitSystem)
     for (const n of [...o.notes, ...warnings]) out.push(`  ! ${n}`);
   }
   out.push('');
-  out.push(cautionText());
-  out.push(`  - ${EXTENSION_CAUTION}`);
+  out.push(cautionText(EXTENSION_CAUTIONS));
   return out.join('\n') + '\n';
 }

@@ -2,7 +2,7 @@
 // and the margin, which band the working force was held to, and what fails by how much.
 import { rulesOfThumb } from '../kinds/compression/analysis.js';
 import type { Requirements } from '../kinds/compression/requirements.js';
-import { cautionText } from '../report/cautions.js';
+import { cautionText, cautionsOf } from '../report/cautions.js';
 import { SI_UNITS } from '../report/json.js';
 import { table } from '../report/table.js';
 import { formatQuantity, quantityWriter, sig } from '../units/format.js';
@@ -52,6 +52,7 @@ export function checkJson(v: Verdict, band: WorkingBand, notes: string[]): Recor
     checks: v.lines.map(checkLineRecord),
     notes,
     warnings: v.analysis.warnings.map((w) => w.message),
+    cautions: cautionsOf(),
   };
 }
 

@@ -97,7 +97,7 @@ export function requirementNotes(kind: AnySpringKind, req: unknown, io: Io): voi
 /** What goes on stderr after a CSV of springs: what its less obvious columns mean (relative_cost),
  * then the cautions, the general ones and the kind's own. */
 export function cautionsOf(kind: AnySpringKind): string {
-  return fieldNotes(kind.fields).map((n) => `coilfront: ${n}\n`).join('') + cautionText() + kind.cautions.map((c) => `\n  - ${c}`).join('') + '\n';
+  return fieldNotes(kind.fields).map((n) => `coilfront: ${n}\n`).join('') + cautionText(kind) + '\n';
 }
 
 export function progress(io: Io, label: string): ((done: number, total: number) => void) | undefined {

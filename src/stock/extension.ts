@@ -9,13 +9,13 @@ import { bandText, workingBand, type WorkingBand } from '../check/band.js';
 import { judgeExtension, type ExtensionVerdict, type GivenLine } from '../check/extension.js';
 import { bandRecord, checkLineRecord, failureText, writeMargin } from '../check/report.js';
 import { isRecord } from '../units/fields.js';
-import { EXTENSION_CAUTION } from '../kinds/extension/analysis.js';
+import { EXTENSION_CAUTIONS } from '../kinds/extension/analysis.js';
 import { loadExtensionCatalog } from '../kinds/extension/catalog.js';
 import { EXTENSION_CHECK_LABELS } from '../kinds/extension/checks.js';
 import { extensionRequirementsRecord, fatigueSafety, staticSafety } from '../kinds/extension/report.js';
 import { readExtensionRequirements, type ExtensionRequirements } from '../kinds/extension/requirements.js';
 import { readExtensionSpring } from '../kinds/extension/springFile.js';
-import { cautionText } from '../report/cautions.js';
+import { cautionText, cautionsOf } from '../report/cautions.js';
 import { toCsv } from '../report/csv.js';
 import { SI_UNITS } from '../report/json.js';
 import { table } from '../report/table.js';
@@ -262,7 +262,7 @@ export function extensionStockJson(run: ExtensionStockRun): Record<string, unkno
     bad_rows: run.bad.map((b) => ({ line: b.line, part_number: b.partNumber, field: b.field, message: b.message })),
     compare: null,
     notes: [EXTENSION_STOCK_NOTE],
-    caution: EXTENSION_CAUTION,
+    cautions: cautionsOf(EXTENSION_CAUTIONS),
   };
 }
 
@@ -330,8 +330,7 @@ export function extensionStockText(run: ExtensionStockRun, system: UnitSystem, t
   if (run.table.layout.ignored.length) out.push(`  ! columns read past (not stock fields): ${run.table.layout.ignored.join(', ')}`);
   for (const r of run.passing.slice(0, run.top)) for (const n of r.notes.filter((x) => !/table's rate/.test(x))) out.push(`  ! ${r.row.partNumber}: ${n}`);
   out.push('');
-  out.push(cautionText());
-  out.push(`  - ${EXTENSION_CAUTION}`);
+  out.push(cautionText(EXTENSION_CAUTIONS));
   return out.join('\n') + '\n';
 }
 

@@ -5,7 +5,7 @@
 import { bandText } from '../check/band.js';
 import { bandRecord, checkLineRecord, failingRecord, failureText, givenSpringRecord, writeMargin } from '../check/report.js';
 import { GIVEN_CHECK_LABELS, type Verdict } from '../check/judge.js';
-import { cautionText } from '../report/cautions.js';
+import { cautionText, cautionsOf } from '../report/cautions.js';
 import { toCsv } from '../report/csv.js';
 import { requirementsRecord } from '../kinds/compression/report/designReport.js';
 import { SI_UNITS } from '../report/json.js';
@@ -79,6 +79,7 @@ export function stockJson(run: AnyStockRun): Record<string, unknown> {
     bad_rows: run.bad.map((b) => ({ line: b.line, part_number: b.partNumber, field: b.field, message: b.message })),
     compare: compareRecord(run),
     notes: [STOCK_NOTE],
+    cautions: cautionsOf(),
   };
 }
 

@@ -254,3 +254,6 @@ export function extensionWarnings(a: ExtensionAnalysis, s: ExtensionService, q: 
 
 /** The caution an extension spring needs wherever users see its results. */
 export const EXTENSION_CAUTION = 'An extension spring that breaks lets go of its load. Where a failure could hurt someone, use a compression spring in a draw-bar arrangement or fit a guard, follow the applicable codes and licensed engineering practice, verify the design with the spring maker and test prototypes.';
+
+/** The extension kind as the cautions see it (src/report/cautions.ts): its id and its own caution. */
+export const EXTENSION_CAUTIONS = { id: 'extension', cautions: [EXTENSION_CAUTION] } as const;

@@ -4,6 +4,7 @@
 // at the free length), the stresses of the body and both loop points, and a side view with the loops.
 // Self-contained pages (src/report/html/page.ts): inline CSS and SVG, no scripts.
 import { CONVENTIONS, figure, htmlTable, page } from '../../report/html/page.js';
+import { generalCautions } from '../../report/cautions.js';
 import { cloudPlot } from '../../report/html/plots.js';
 import { FRAME, axes, esc, polyline, r2, svgOpen } from '../../report/html/svg.js';
 import { formatQuantity, inUnit, quantityWriter, sig, unitSymbol } from '../../units/format.js';
@@ -185,7 +186,7 @@ export function extensionAnalysisHtml(c: ExtensionCase, a: ExtensionAnalysis, sy
   const sections = extensionSpringSections(a, c.service, system, `${m.name} (${m.standard})`);
   if (c.notes.length) sections.push(`<h2>Notes</h2><ul>${c.notes.map((n) => `<li>${esc(n)}</li>`).join('')}</ul>`);
   sections.push(extensionConventionsSection(), extensionCautionSection());
-  return page('coilfront extension spring analysis', `${m.name}, ${a.geometry.loop} loops. Written by coilfront.`, sections);
+  return page('coilfront extension spring analysis', `${m.name}, ${a.geometry.loop} loops. Written by coilfront.`, sections, generalCautions('extension'));
 }
 
 function requirementRows(req: ExtensionRequirements, system: UnitSystem): string[][] {
@@ -262,5 +263,5 @@ export function extensionDesignHtml(run: ExtensionDesignRun, system: UnitSystem,
   const F = (v: number) => formatQuantity(v, 'force', system);
   const L = (v: number) => formatQuantity(v, 'length', system);
   const subtitle = `Extension spring: ${F(req.workingForce)} at ${L(req.workingLength)} inside the loops${req.operatingLength !== undefined ? `, stretched to ${L(req.operatingLength)}` : ''}. Written by coilfront.`;
-  return page('coilfront extension spring design report', subtitle, sections);
+  return page('coilfront extension spring design report', subtitle, sections, generalCautions('extension'));
 }

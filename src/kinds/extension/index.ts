@@ -4,7 +4,7 @@
 import { loadCatalog } from '../../catalogs/load.js';
 import { STATIC_SERVICE_CYCLES } from '../../model/fatigue.js';
 import type { CheckDefinition, ObjectiveDefinition, SpringKind, Trend } from '../kind.js';
-import { EXTENSION_CAUTION, analyzeExtension, type ExtensionAnalysis } from './analysis.js';
+import { EXTENSION_CAUTIONS, analyzeExtension, type ExtensionAnalysis } from './analysis.js';
 import { loadExtensionCatalog } from './catalog.js';
 import { EXTENSION_CHECKS, EXTENSION_CHECK_LABELS, activeExtensionChecks, type ExtensionCheck } from './checks.js';
 import { designExtension, extensionCandidateAt, type ExtensionCandidate, type ExtensionDesignRun } from './design.js';
@@ -97,7 +97,7 @@ export const extension: ExtensionKind = {
     candidateJson: (c) => extensionCandidateRecord(c),
     countsJson: (run) => extensionCountsRecord(run),
     limitingText: (run) => extensionLimitingText(run),
-    jsonFrame: { head: { kind: 'extension' }, tail: { caution: EXTENSION_CAUTION } },
+    jsonFrame: { head: { kind: 'extension' }, tail: {} },
     requirementNotes(req) {
       const notes: string[] = [];
       if (req.cycles !== undefined && req.cycles < STATIC_SERVICE_CYCLES) notes.push(`cycles ${req.cycles} is below ${STATIC_SERVICE_CYCLES.toExponential(0).replace('+', '')}: judged as static service (no fatigue check)`);
@@ -105,5 +105,5 @@ export const extension: ExtensionKind = {
       return notes;
     },
   },
-  cautions: [EXTENSION_CAUTION],
+  cautions: EXTENSION_CAUTIONS.cautions,
 };

@@ -8,7 +8,7 @@ import { SI_UNITS } from '../../report/json.js';
 import { table } from '../../report/table.js';
 import { formatQuantity, quantityWriter, sig, unitSymbol } from '../../units/format.js';
 import type { UnitSystem } from '../../units/systems.js';
-import { EXTENSION_CAUTION, EXTENSION_SITES, extensionWarnings, siteWords, stressPerNewton, type ExtensionAnalysis, type ExtensionService, type ExtensionSite, type SiteFatigue } from './analysis.js';
+import { EXTENSION_CAUTIONS, EXTENSION_SITES, extensionWarnings, siteWords, stressPerNewton, type ExtensionAnalysis, type ExtensionService, type ExtensionSite, type SiteFatigue } from './analysis.js';
 import { EXTENSION_CHECKS, EXTENSION_CHECK_LABELS, activeExtensionChecks } from './checks.js';
 import { extensionCandidateAt, type ExtensionCandidate, type ExtensionDesignRun } from './design.js';
 import type { ExtensionRequirements } from './requirements.js';
@@ -90,7 +90,6 @@ export function extensionAnalysisJson(c: ExtensionCase, a: ExtensionAnalysis): R
     ...extensionAnalysisRecord(a, c.service.correction),
     warnings: extensionWarnings(a, c.service),
     notes: c.notes,
-    caution: EXTENSION_CAUTION,
   };
 }
 
@@ -163,7 +162,7 @@ export function extensionAnalysisLines(a: ExtensionAnalysis, service: ExtensionS
 }
 
 function cautionLines(): string[] {
-  return [cautionText(), `  - ${EXTENSION_CAUTION}`];
+  return [cautionText(EXTENSION_CAUTIONS)];
 }
 
 export function extensionAnalysisText(c: ExtensionCase, a: ExtensionAnalysis, system: UnitSystem): string {
@@ -325,7 +324,6 @@ export function extensionDesignJson(run: ExtensionDesignRun, showTiming = false)
         nearest_misses: misses.map((c, i) => ({ ...extensionCandidateRecord(c), violation: run.result.nearestMisses[i].violation, failing_checks: failingChecks(c) })),
       },
     } : {}),
-    caution: EXTENSION_CAUTION,
   };
 }
 

@@ -63,7 +63,8 @@ svg text.none { fill: var(--warn); }
 }
 `;
 
-export function page(title: string, subtitle: string, sections: string[]): string {
+/** A self-contained page; `cautions` are the general ones of its spring kind (compression unless given). */
+export function page(title: string, subtitle: string, sections: string[], cautions: readonly string[] = CAUTIONS): string {
   return `<!doctype html>
 <html lang="en">
 <head>
@@ -79,7 +80,7 @@ export function page(title: string, subtitle: string, sections: string[]): strin
 <p class="sub">${esc(subtitle)}</p>
 ${sections.join('\n')}
 <h2>Cautions</h2>
-<div class="cautions"><ul>${CAUTIONS.map((c) => `<li>${esc(c)}</li>`).join('')}</ul></div>
+<div class="cautions"><ul>${cautions.map((c) => `<li>${esc(c)}</li>`).join('')}</ul></div>
 </main>
 </body>
 </html>
