@@ -53,7 +53,7 @@ describe('every result carries the cautions of its kind', () => {
   }
 
   it('the library returns them as the command prints them, for both kinds', () => {
-    const both = (r: Record<string, unknown>, kind: typeof compression | typeof extension) => expect(r.cautions).toStrictEqual(cautionsOf(kind));
+    const both = (r: { cautions?: unknown }, kind: typeof compression | typeof extension) => expect(r.cautions).toStrictEqual(cautionsOf(kind));
     both(design(read(demo)), compression);
     both(analyze(read(valve)), compression);
     both(frontier(read(demo)), compression);
