@@ -63,6 +63,11 @@ const CASES: Case[] = [
   req('load force a stress', { 'load.force': '20 MPa' }, 'load.force'),
   req('load tolerance 100%', { load_tolerance: '100%' }, 'load_tolerance'),
   req('frontier: a bad loop type', { loop: 'crochet' }, 'loop', 'frontier'),
+  // The shared readers (src/input/readers.ts): the same rules as for compression requirements.
+  req('material override with E below 2G', { material: { like: 'music-wire', elastic_modulus: '100 GPa' } }, 'material.elastic_modulus'),
+  req('material override in a list, E above 3G', { material: ['music-wire', { like: 'music-wire', elastic_modulus: '300 GPa' }] }, 'material[1].elastic_modulus'),
+  req('safety.static below 1', { 'safety.static': 0.8 }, 'safety.static'),
+  req('safety.surge unknown key', { 'safety.sure': 2 }, 'safety.sure'),
   req('sweep: a bad bend index', { bend_index: 0 }, 'bend_index', 'sweep'),
   { name: 'option: --min-id is a compression limit', command: 'design', args: ['--min-id', '5'], field: '--min-id' },
   { name: 'option: --strategy grid on a space too large for the grid', command: 'design', change: { material: 'any', body_coils: [3, 80], coil_step: 0.005 }, args: ['--strategy', 'grid'], field: 'coil_step' },

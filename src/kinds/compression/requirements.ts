@@ -1,20 +1,19 @@
 // The requirements file of `coilfront design`, `frontier` and `sweep`: what the spring must do and
 // where it must fit. Every field but load, material and envelope has a default, documented in the README.
-import { FAMILIES, type Catalog } from '../../catalogs/types.js';
+import type { Catalog } from '../../catalogs/types.js';
 import { RANK_KEYS, type RankKey } from './objectives.js';
-import { findSeries } from '../../catalogs/load.js';
 import { inStrengthRange } from '../../catalogs/properties.js';
 import { formatQuantity } from '../../units/format.js';
 import { SEATINGS, type Seating } from './buckling.js';
 import { FATIGUE_CRITERIA, type FatigueCriterion } from '../../model/fatigue.js';
 import { END_TYPES, type EndType } from './geometry.js';
 import type { StressCorrection } from '../../model/stressFactor.js';
-import { InputError, parseNumber, parseQuantity } from '../../units/parse.js';
+import { InputError } from '../../units/parse.js';
 import type { UnitSystem } from '../../units/systems.js';
-import { Fields, isRecord } from '../../units/fields.js';
-import { applyStrengthBasis, parseMaterialChoice, STRENGTH_BASES, type MaterialChoice, type StrengthBasis } from '../../input/material.js';
+import { Fields } from '../../units/fields.js';
+import { applyStrengthBasis, STRENGTH_BASES, type MaterialChoice, type StrengthBasis } from '../../input/material.js';
 import { SURGE_ENDS, type SurgeEnds } from '../../model/surge.js';
-import { checkMaterialChoice } from '../../input/materialChecks.js';
+import { checkWireSizes, readMaterials, readRange, readSafety, readWireSizes } from '../../input/readers.js';
 import { LIMITS } from '../../input/limits.js';
 import { parseCycles } from '../../input/cycles.js';
 import { DEFAULTS } from '../../input/defaults.js';
@@ -93,28 +92,6 @@ export const COMPRESSION_DEFAULTS = {
 };
 
 
-/** Every listed wire size must be one some chosen material is made in (its sourced strength range), and
- * a series must hold at least one: otherwise the search would quietly try nothing. */
-function checkWireSizes(materials: MaterialChoice[], wireSizes: (m: MaterialChoice) => number[], wsRaw: unknown, system: UnitSystem): void {
-  const fits = (m: MaterialChoice, d: number) => m.tensileStrength !== undefined || inStrengthRange(m.material, d);
-  const ranges = () => materials.map((m) => `${m.material.id} ${formatQuantity(m.material.minDiameter, 'length', system, 3)} to ${formatQuantity(m.material.maxDiameter, 'length', system, 3)}`)
-    .filter((v, i, a) => a.indexOf(v) === i).slice(0, 6).join('; ');
-  if (Array.isArray(wsRaw)) {
-    const list = wireSizes(materials[0]);
-    const raws = [...wsRaw];
-    for (const d of list) {
-      if (!materials.some((m) => fits(m, d))) {
-        const i = raws.findIndex((v) => { try { return parseQuantity(v, 'length', system, 'x') === d; } catch { return false; } });
-        throw new InputError(`wire_sizes[${Math.max(0, i)}]`, `a diameter the chosen material is made in (${ranges()})`, raws[i]);
-      }
-    }
-    return;
-  }
-  if (!materials.some((m) => wireSizes(m).some((d) => fits(m, d)))) {
-    throw new InputError('wire_sizes', `a series with sizes the chosen material is made in (${ranges()})`, wsRaw ?? 'each material\'s own series');
-  }
-}
-
 /** The size of a search: material wire sizes x end types x coil counts, with its factors. */
 export function searchSize(req: Requirements): { sizes: number; coilCounts: number; combinations: number } {
   const coilCounts = Math.floor((req.activeCoils[1] - req.activeCoils[0]) / req.coilStep + 1e-9) + 1;
@@ -134,35 +111,13 @@ export function gridWorkError(req: Requirements, why: string, size = searchSize(
     + (why.includes('--strategy') ? ', or --strategy auto (the genetic search takes spaces this large)' : ''), req.coilStep);
 }
 
-function pair(f: Fields, key: string, fallback: [number, number], rule: { positive?: boolean; integer?: boolean; min?: number; max?: number }): [number, number] {
-  const list = f.list(key);
-  if (!list) return fallback;
-  if (list.length !== 2) throw new InputError(f.name(key), 'a list of two numbers [low, high]', f.get(key));
-  const a = parseNumber(list[0], `${f.name(key)}[0]`, rule);
-  const b = parseNumber(list[1], `${f.name(key)}[1]`, rule);
-  if (!(b >= a)) throw new InputError(f.name(key), '[low, high] with high at or above low', f.get(key));
-  return [a, b];
-}
-
 export function readRequirements(raw: unknown, catalog: Catalog): Requirements {
   const f = Fields.document(raw);
   f.expectKind('compression');
   const system = f.system;
 
   // Materials: an id, a list of ids, a family, any, or an override object.
-  const rawMaterial = f.require('material', `a material id, a list of ids, { family: ${FAMILIES.join(' | ')} }, "any", or { like: <id>, ... }`);
-  let materials: MaterialChoice[];
-  if (rawMaterial === 'any') materials = catalog.materials.map((material) => ({ material }));
-  else if (Array.isArray(rawMaterial)) {
-    if (rawMaterial.length === 0) throw new InputError('material', 'a non-empty list of material ids');
-    materials = rawMaterial.map((id, i) => parseMaterialChoice(id, system, catalog, `material[${i}]`));
-  } else if (isRecord(rawMaterial) && 'family' in rawMaterial) {
-    const g = Fields.of(rawMaterial, 'material', system);
-    const fam = g.choice('family', [...FAMILIES, 'any'] as const);
-    g.rejectUnknown();
-    materials = catalog.materials.filter((m) => fam === 'any' || m.family === fam).map((material) => ({ material }));
-  } else materials = [parseMaterialChoice(rawMaterial, system, catalog, 'material')];
-  materials.forEach((m, i) => checkMaterialChoice(m, Array.isArray(rawMaterial) ? `material[${i}]` : 'material', system));
+  let materials = readMaterials(f, catalog);
   const strengthBasis = (f.choice('strength_basis', STRENGTH_BASES) ?? 'law') as StrengthBasis;
   materials = applyStrengthBasis(materials, strengthBasis, 'strength_basis', catalog);
 
@@ -197,40 +152,16 @@ export function readRequirements(raw: unknown, catalog: Catalog): Requirements {
   if (maxFreeLength !== undefined && maxFreeLength <= workingLength) throw new InputError('envelope.max_free_length', 'a length above the working length', env.get('max_free_length'));
 
   // Wire sizes: a series id for every material, or an explicit list of diameters.
-  const wsRaw = f.get('wire_sizes');
-  let wireSizes: (m: MaterialChoice) => number[];
-  let wireSizesLabel: string;
-  if (wsRaw === undefined) {
-    wireSizes = (m) => findSeries(catalog, m.material.wireSeries)!.diameters;
-    wireSizesLabel = 'each material\'s own series';
-  } else if (typeof wsRaw === 'string') {
-    const series = findSeries(catalog, wsRaw);
-    if (!series) throw new InputError('wire_sizes', `a wire series (${catalog.series.map((s) => s.id).join(' | ')}) or a list of diameters`, wsRaw);
-    wireSizes = () => series.diameters;
-    wireSizesLabel = series.id;
-  } else if (Array.isArray(wsRaw)) {
-    if (wsRaw.length === 0) throw new InputError('wire_sizes', 'a non-empty list of diameters');
-    const list = wsRaw.map((v, i) => parseQuantity(v, 'length', system, `wire_sizes[${i}]`, { positive: true })).sort((a, b) => a - b);
-    wireSizes = () => list;
-    wireSizesLabel = 'the listed diameters';
-  } else throw new InputError('wire_sizes', 'a wire series id or a list of diameters', wsRaw);
+  const sizes = readWireSizes(f, catalog);
+  checkWireSizes(f, materials, sizes);
+  const { wireSizes, label: wireSizesLabel } = sizes;
 
-  checkWireSizes(materials, wireSizes, wsRaw, system);
-
-  const activeCoils = pair(f, 'active_coils', COMPRESSION_DEFAULTS.activeCoils, { min: LIMITS.activeCoils[0], max: LIMITS.activeCoils[1] });
+  const activeCoils = readRange(f, 'active_coils', COMPRESSION_DEFAULTS.activeCoils, { min: LIMITS.activeCoils[0], max: LIMITS.activeCoils[1] });
   const coilStep = f.number('coil_step', { min: LIMITS.coilStep[0], max: LIMITS.coilStep[1] }) ?? COMPRESSION_DEFAULTS.coilStep;
-  const index = pair(f, 'index', COMPRESSION_DEFAULTS.index, { positive: true, max: LIMITS.indexMax });
+  const index = readRange(f, 'index', COMPRESSION_DEFAULTS.index, { positive: true, max: LIMITS.indexMax });
   if (index[0] <= 1) throw new InputError('index[0]', 'a spring index above 1', index[0]);
 
-  const safetyRaw = f.get('safety');
-  const safety = { ...COMPRESSION_DEFAULTS.safety };
-  if (safetyRaw !== undefined && safetyRaw !== null) {
-    const sf = Fields.of(safetyRaw, 'safety', system);
-    safety.static = sf.number('static', { min: LIMITS.safetyMin, max: LIMITS.safetyMax }) ?? safety.static;
-    safety.fatigue = sf.number('fatigue', { min: LIMITS.safetyMin, max: LIMITS.safetyMax }) ?? safety.fatigue;
-    safety.surge = sf.number('surge', { min: LIMITS.safetyMin, max: LIMITS.surgeMarginMax }) ?? safety.surge;
-    sf.rejectUnknown();
-  }
+  const safety = readSafety(f, COMPRESSION_DEFAULTS.safety);
   const req: Requirements = {
     system, materials, strengthBasis, ends,
     seating: (f.choice('seating', SEATINGS) ?? COMPRESSION_DEFAULTS.seating) as Seating,

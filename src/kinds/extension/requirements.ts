@@ -2,17 +2,16 @@
 // working length, the stroke, where it must fit and how long it must live. Lengths are inside the loops.
 // The working force is met exactly through the initial tension: for a given wire, coil count and
 // diameter the free length and rate are fixed, so Fi = F1 - k (L1 - L0), and Fi must lie in its range.
-import { findSeries } from '../../catalogs/load.js';
-import { FAMILIES, type Catalog } from '../../catalogs/types.js';
+import type { Catalog } from '../../catalogs/types.js';
 import { FATIGUE_CRITERIA, type FatigueCriterion } from '../../model/fatigue.js';
 import type { StressCorrection } from '../../model/stressFactor.js';
-import { Fields, isRecord } from '../../units/fields.js';
-import { LIMITS } from '../../input/limits.js';
-import { parseMaterialChoice, type MaterialChoice } from '../../input/material.js';
+import { Fields } from '../../units/fields.js';
+import type { MaterialChoice } from '../../input/material.js';
+import { readMaterials, readRange, readSafety, readWireSizes } from '../../input/readers.js';
 import { DEFAULTS } from '../../input/defaults.js';
 import { parseCycles } from '../../input/cycles.js';
 import { formatQuantity } from '../../units/format.js';
-import { InputError, parseNumber, parseQuantity } from '../../units/parse.js';
+import { InputError } from '../../units/parse.js';
 import type { UnitSystem } from '../../units/systems.js';
 import { loadExtensionCatalog, loopRule, type ExtensionCatalog, type LoopRule } from './catalog.js';
 import { INITIAL_TENSION_RANGES, type InitialTensionRange } from './initialTension.js';
@@ -70,48 +69,6 @@ export const EXTENSION_DEFAULTS = {
   initialTensionRange: 'preferred' as InitialTensionRange,
 };
 
-function pair(f: Fields, key: string, fallback: [number, number]): [number, number] {
-  const list = f.list(key);
-  if (!list) return fallback;
-  if (list.length !== 2) throw new InputError(f.name(key), 'a list of two numbers [low, high]', f.get(key));
-  const a = parseNumber(list[0], `${f.name(key)}[0]`, { positive: true });
-  const b = parseNumber(list[1], `${f.name(key)}[1]`, { positive: true });
-  if (!(b >= a)) throw new InputError(f.name(key), '[low, high] with high at or above low', f.get(key));
-  return [a, b];
-}
-
-function readMaterials(f: Fields, catalog: Catalog): MaterialChoice[] {
-  const raw = f.require('material', `a material id, a list of ids, { family: ${FAMILIES.join(' | ')} }, "any", or { like: <id>, ... }`);
-  if (raw === 'any') return catalog.materials.map((material) => ({ material }));
-  if (Array.isArray(raw)) {
-    if (raw.length === 0) throw new InputError('material', 'a non-empty list of material ids');
-    return raw.map((id, i) => parseMaterialChoice(id, f.system, catalog, `material[${i}]`));
-  }
-  if (isRecord(raw) && 'family' in raw) {
-    const g = Fields.of(raw, 'material', f.system);
-    const fam = g.choice('family', [...FAMILIES, 'any'] as const);
-    g.rejectUnknown();
-    return catalog.materials.filter((m) => fam === 'any' || m.family === fam).map((material) => ({ material }));
-  }
-  return [parseMaterialChoice(raw, f.system, catalog, 'material')];
-}
-
-function readWireSizes(f: Fields, catalog: Catalog): { wireSizes: (m: MaterialChoice) => number[]; label: string } {
-  const raw = f.get('wire_sizes');
-  if (raw === undefined || raw === null) return { wireSizes: (m) => findSeries(catalog, m.material.wireSeries)!.diameters, label: 'each material\'s own series' };
-  if (typeof raw === 'string') {
-    const series = findSeries(catalog, raw);
-    if (!series) throw new InputError('wire_sizes', `a wire series (${catalog.series.map((s) => s.id).join(' | ')}) or a list of diameters`, raw);
-    return { wireSizes: () => series.diameters, label: series.id };
-  }
-  if (Array.isArray(raw)) {
-    if (raw.length === 0) throw new InputError('wire_sizes', 'a non-empty list of diameters');
-    const list = raw.map((v, i) => parseQuantity(v, 'length', f.system, `wire_sizes[${i}]`, { positive: true })).sort((a, b) => a - b);
-    return { wireSizes: () => list, label: 'the listed diameters' };
-  }
-  throw new InputError('wire_sizes', 'a wire series id or a list of diameters', raw);
-}
-
 export function readExtensionRequirements(raw: unknown, catalog: Catalog, ext: ExtensionCatalog = loadExtensionCatalog(catalog.materials)): ExtensionRequirements {
   const f = Fields.document(raw);
   readKind(f, 'extension');
@@ -145,21 +102,13 @@ export function readExtensionRequirements(raw: unknown, catalog: Catalog, ext: E
   const longest = operatingLength ?? workingLength;
   if (maxExtendedLength !== undefined && maxExtendedLength < longest) throw new InputError('envelope.max_extended_length', `a length at or beyond the longest working length ${formatQuantity(longest, 'length', system)}`, env.get('max_extended_length'));
 
-  const bodyCoils = pair(f, 'body_coils', EXTENSION_DEFAULTS.bodyCoils);
+  const bodyCoils = readRange(f, 'body_coils', EXTENSION_DEFAULTS.bodyCoils, { positive: true });
   const coilStep = f.number('coil_step', { positive: true }) ?? EXTENSION_DEFAULTS.coilStep;
   if ((bodyCoils[1] - bodyCoils[0]) / coilStep > 100000) throw new InputError('coil_step', 'a step that gives at most 100000 coil counts in body_coils');
-  const index = pair(f, 'index', DEFAULTS.index);
+  const index = readRange(f, 'index', DEFAULTS.index, { positive: true });
   if (index[0] <= 1.75) throw new InputError('index[0]', 'a spring index above 1.75 (the loop formulas need C1 = C above it)', index[0]);
 
-  const safety = { ...DEFAULTS.safety };
-  const safetyRaw = f.get('safety');
-  if (safetyRaw !== undefined && safetyRaw !== null) {
-    const sf = Fields.of(safetyRaw, 'safety', system);
-    safety.static = sf.number('static', { min: LIMITS.safetyMin, max: LIMITS.safetyMax }) ?? safety.static;
-    safety.fatigue = sf.number('fatigue', { min: LIMITS.safetyMin, max: LIMITS.safetyMax }) ?? safety.fatigue;
-    safety.surge = sf.number('surge', { min: LIMITS.safetyMin, max: LIMITS.surgeMarginMax }) ?? safety.surge;
-    sf.rejectUnknown();
-  }
+  const safety = readSafety(f, DEFAULTS.safety);
   const req: ExtensionRequirements = {
     kind: 'extension', system, materials, wireSizes, wireSizesLabel: label, loop, loopLength, bendIndex,
     workingForce, workingLength, operatingLength, operatingForce,
