@@ -25,9 +25,21 @@ import { bandRecord, checkLineRecord, failureText, writeMargin, writeValue } fro
 /** A check line of any kind (the compression lines name their checks by a closed list). */
 export type GivenLine = Omit<CheckLine, 'name'> & { name: string };
 
+/** A working length below the free length: the coils are closed there and the loops hang slack, so
+ * the spring pulls nothing (not the initial tension, and never a negative force). */
+export interface SlackPoint {
+  at: 'working' | 'operating';
+  length: number;
+}
+
+export const SLACK_LABEL = 'spring slack here: the length is below its free length, so it pulls nothing (0)';
+const SLACK_FATIGUE_LABEL = 'not judged: the spring goes slack every cycle and takes its load up with a jerk, which no fatigue criterion covers';
+
 export interface ExtensionVerdict {
   spring: ExtensionCase;
   analysis: ExtensionAnalysis;
+  /** The requirement's lengths at which the spring is slack (below its free length): force 0 there. */
+  slack: SlackPoint[];
   pass: boolean;
   lines: GivenLine[];
   failing: GivenLine[];
@@ -75,16 +87,28 @@ export function judgeExtension(spring: ExtensionCase, raw: unknown, req: Extensi
   const doc = isRecord(raw) ? raw : {};
   // The requirement's service conditions govern; the spring's own peening is a fact of the part.
   const service = { ...extensionService(req), peened: doc.peened !== undefined && doc.peened !== null ? spring.service.peened : req.peened };
-  const a = analyzeExtension(spring.geometry, spring.material, service);
+  // A length below the free length is analysed at the free length, then shown at its own length with no pull.
+  const L0 = analyzeExtension(spring.geometry, spring.material, { ...service, lengths: [] }).geometry.freeLength;
+  const slack: SlackPoint[] = [];
+  service.lengths.forEach((length, i) => { if (length < L0) slack.push({ at: i === 0 ? 'working' : 'operating', length }); });
+  const a = analyzeExtension(spring.geometry, spring.material, { ...service, lengths: service.lengths.map((L) => Math.max(L, L0)) });
+  if (slack.length) a.points = a.points.map((p, i) => (service.lengths[i] < L0 ? { length: service.lengths[i], extension: 0, force: 0, bodyStress: 0, loopBendingStress: 0, loopTorsionStress: 0 } : p));
   const g = checkExtension(a, req);
+  const slackAt = (at: SlackPoint['at']) => slack.some((p) => p.at === at);
+  const fatigueSites = new Set<string>(['body_fatigue', 'loop_bending_fatigue', 'loop_torsion_fatigue']);
   const active = activeExtensionChecks(req);
   const F1 = a.points[0].force;
   const lines: GivenLine[] = [];
   const numeric = (name: string, label: string, gv: number, fig: Figure): GivenLine =>
     ({ name, label, value: fig.value, limit: fig.limit, relation: fig.relation, kind: fig.kind, ...(fig.note ? { note: fig.note } : {}), g: gv, margin: Number.isNaN(gv) ? null : -gv, pass: passes(gv) });
-  lines.push(numeric('working_force_min', 'working force below its band', (band.low - F1) / band.force, { value: F1, limit: band.low, relation: '>=', kind: 'force' }));
+  lines.push(numeric('working_force_min', slackAt('working') ? SLACK_LABEL : 'working force below its band', (band.low - F1) / band.force, { value: F1, limit: band.low, relation: '>=', kind: 'force' }));
   lines.push(numeric('working_force_max', 'working force above its band', (F1 - band.high) / band.force, { value: F1, limit: band.high, relation: '<=', kind: 'force' }));
-  EXTENSION_CHECKS.forEach((name, i) => { if (active[i]) lines.push(numeric(name, EXTENSION_CHECK_LABELS[name], g[i], figureOf(name, a, req))); });
+  EXTENSION_CHECKS.forEach((name, i) => {
+    if (!active[i]) return;
+    // Slack in the cycle: the fatigue figures would assume a cycle the spring never runs; they fail, named.
+    if (slack.length && fatigueSites.has(name)) lines.push({ ...numeric(name, SLACK_FATIGUE_LABEL, NaN, figureOf(name, a, req)), value: null });
+    else lines.push(numeric(name, name === 'operating_force_min' && slackAt('operating') ? SLACK_LABEL : EXTENSION_CHECK_LABELS[name], g[i], figureOf(name, a, req)));
+  });
   const id = spring.materialChoice.material.id;
   const allowed = [...new Set(req.materials.map((m) => m.material.id))];
   const materialOk = allowed.includes(id);
@@ -96,7 +120,7 @@ export function judgeExtension(spring: ExtensionCase, raw: unknown, req: Extensi
   const failing = lines.filter((l) => !l.pass);
   let limiting: GivenLine | null = null;
   for (const l of lines) if (l.margin !== null && (limiting === null || l.margin < limiting.margin!)) limiting = l;
-  return { spring, analysis: a, pass: failing.length === 0, lines, failing, limiting };
+  return { spring, analysis: a, slack, pass: failing.length === 0, lines, failing, limiting };
 }
 
 export function checkExtensionDocuments(spring: unknown, requirements: unknown, catalog: Catalog): ExtensionCheckOutcome {
@@ -110,6 +134,13 @@ export function checkExtensionDocuments(spring: unknown, requirements: unknown, 
   const differ = ['lengths', 'forces', 'cycles', 'temperature', 'forcing_frequency', 'fatigue_criterion', 'stress_factor'].filter((k) => doc[k] !== undefined && doc[k] !== null);
   if (differ.length) notes.push(`the spring file's ${differ.join(', ')} ${differ.length === 1 ? 'is' : 'are'} not used: the requirement's service conditions are`);
   return { kind: 'extension', req, band, verdict: judgeExtension(c, spring, req, band, loopStated), notes };
+}
+
+/** What a slack spring means, in words. (No free length is suggested: an extension spring's is fixed by
+ * its body coils and loops, so the way out is another spring, which `design` finds.) */
+export function slackNotes(v: ExtensionVerdict, system: UnitSystem): string[] {
+  const L = (x: number) => formatQuantity(x, 'length', system);
+  return v.slack.map((p) => `the spring is slack at the ${p.at} length: ${L(p.length)} is below its free length ${L(v.analysis.geometry.freeLength)} inside the loops, so it pulls nothing there (taken as 0, never negative)`);
 }
 
 export function extensionCheckJson(v: ExtensionVerdict, band: WorkingBand, notes: string[]): Record<string, unknown> {
@@ -130,7 +161,8 @@ export function extensionCheckJson(v: ExtensionVerdict, band: WorkingBand, notes
       points: a.points.map((p) => ({ length: p.length, force: p.force, body_stress: p.bodyStress, loop_bending_stress: p.loopBendingStress, loop_torsion_stress: p.loopTorsionStress })),
     },
     checks: v.lines.map((l) => checkLineRecord(l)),
-    notes,
+    slack: v.slack,
+    notes: [...notes, ...slackNotes(v, 'si')],
     warnings: a.warnings.map((w) => w.message),
     cautions: cautionsOf(EXTENSION_CAUTIONS),
   };
@@ -154,10 +186,11 @@ export function extensionCheckText(o: ExtensionCheckOutcome, system: UnitSystem)
     ? `Result: all ${v.lines.length} checks pass${v.limiting ? `; the smallest margin is ${v.limiting.name} at ${writeMargin(v.limiting.margin)}` : ''}.`
     : `Result: FAILS ${v.failing.length} of ${v.lines.length} checks: ${v.failing.map((l) => failureText(l, system)).join('; ')}.`);
   const warnings = extensionWarnings(a, extensionService(o.req), quantityWriter(system)).map((w) => w.message);
-  if (o.notes.length || warnings.length) {
+  const all = [...slackNotes(v, system), ...o.notes, ...warnings];
+  if (all.length) {
     out.push('');
     out.push('Notes:');
-    for (const n of [...o.notes, ...warnings]) out.push(`  ! ${n}`);
+    for (const n of all) out.push(`  ! ${n}`);
   }
   out.push('');
   out.push(cautionText(EXTENSION_CAUTIONS));

@@ -44,9 +44,22 @@ export interface CheckLine {
   note?: string;
 }
 
+/** A working length at which a given compression spring is loose: beyond its free length nothing
+ * compresses it, so it carries no force there (it rattles between its seats). */
+export interface LoosePoint {
+  /** Which length of the requirement: the working (load) length or the operating length. */
+  at: 'working' | 'operating';
+  length: number;
+}
+
+/** The label of a force check that fails because the spring is loose at its length. */
+export const LOOSE_LABEL = 'spring loose here: the length is beyond its free length, so it carries no force (0)';
+
 export interface Verdict {
   spring: GivenSpring;
   analysis: SpringAnalysis;
+  /** The requirement's lengths at which the spring is loose (beyond its free length): force 0 there. */
+  loose: LoosePoint[];
   pass: boolean;
   /** The names of the failing checks, in report order. */
   failingNames: AnyCheckName[];
@@ -120,7 +133,8 @@ class JudgedSpring implements Verdict {
     /** checkAnalysis's values, then the working band's low and high sides. */
     private readonly g: Float64Array, private readonly materialOk: boolean, private readonly endsOk: boolean | null,
     /** The Monte Carlo yield of the made springs, when min_yield asks for it. */
-    readonly madeYield: number | null = null) {
+    readonly madeYield: number | null = null,
+    readonly loose: LoosePoint[] = []) {
     const fail = (name: AnyCheckName, by: number) => { this.pass = false; this.failingNames.push(name); this.violation += by; };
     const n = CHECKS.length;
     if (!passes(g[n])) fail('working_force_min', Number.isNaN(g[n]) ? 1 : g[n]);
@@ -139,9 +153,14 @@ class JudgedSpring implements Verdict {
     const lines: CheckLine[] = [];
     const numeric = (name: AnyCheckName, label: string, gv: number, fig: Figure): CheckLine =>
       ({ name, label, value: fig.value, limit: fig.limit, relation: fig.relation, kind: fig.kind, ...(fig.note ? { note: fig.note } : {}), g: gv, margin: Number.isNaN(gv) ? null : -gv, pass: passes(gv) });
-    lines.push(numeric('working_force_min', GIVEN_CHECK_LABELS.working_force_min, g[n], { value: F1, limit: j.band.low, relation: '>=', kind: 'force' }));
+    const looseAt = (at: LoosePoint['at']) => this.loose.some((p) => p.at === at);
+    lines.push(numeric('working_force_min', looseAt('working') ? LOOSE_LABEL : GIVEN_CHECK_LABELS.working_force_min, g[n], { value: F1, limit: j.band.low, relation: '>=', kind: 'force' }));
     lines.push(numeric('working_force_max', GIVEN_CHECK_LABELS.working_force_max, g[n + 1], { value: F1, limit: j.band.high, relation: '<=', kind: 'force' }));
-    CHECKS.forEach((name, i) => { if (j.active[i]) lines.push(numeric(name, CHECK_LABELS[name], g[CHECK[name]], figureOf(name, analysis, req, this.madeYield))); });
+    CHECKS.forEach((name, i) => {
+      if (!j.active[i]) return;
+      const label = name === 'operating_force_min' && looseAt('operating') ? LOOSE_LABEL : CHECK_LABELS[name];
+      lines.push(numeric(name, label, g[CHECK[name]], figureOf(name, analysis, req, this.madeYield)));
+    });
     const id = this.spring.choice.material.id;
     lines.push({ name: 'material', label: GIVEN_CHECK_LABELS.material, value: id, limit: [...j.allowedMaterials].join(', '), relation: 'in', kind: 'text', g: this.materialOk ? -1 : 1, margin: null, pass: this.materialOk });
     if (this.endsOk !== null) {
@@ -158,9 +177,23 @@ class JudgedSpring implements Verdict {
   get limiting(): CheckLine | null { return this.build().limiting; }
 }
 
+/** The service a given spring sees: the requirement's, with the spring's peening, and every length
+ * beyond its free length taken at the free length (the spring stands there unloaded: it is loose). */
+function servedAs(spring: GivenSpring, j: Judge): { service: ServiceConditions; loose: LoosePoint[] } {
+  const service = spring.peened === j.service.peened ? j.service : givenService(j.req, spring);
+  const L0 = spring.geometry.freeLength;
+  const loose: LoosePoint[] = [];
+  service.lengths.forEach((length, i) => { if (length > L0) loose.push({ at: i === 0 ? 'working' : 'operating', length }); });
+  if (loose.length === 0) return { service, loose };
+  return { service: { ...service, lengths: service.lengths.map((L) => Math.min(L, L0)) }, loose };
+}
+
 export function judge(spring: GivenSpring, j: Judge): Verdict {
   // A requirement-level allowable_stress is the allowable of every figure, as in design (figuresUnder).
-  const analysis = analyzeSpring(spring.geometry, figuresUnder(j.req, spring.figures), spring.peened === j.service.peened ? j.service : givenService(j.req, spring));
+  const { service, loose } = servedAs(spring, j);
+  const analysis = analyzeSpring(spring.geometry, figuresUnder(j.req, spring.figures), service);
+  // A loose point stands at the requirement's length with no deflection and no force (the analysis took it at the free length).
+  if (loose.length) analysis.points = analysis.points.map((p, i) => (j.service.lengths[i] > spring.geometry.freeLength ? { ...p, length: j.service.lengths[i], deflection: 0 } : p));
   const design = checkAnalysis(analysis, j.req);
   const g = new Float64Array(CHECKS.length + 2);
   g.set(design);
@@ -174,5 +207,5 @@ export function judge(spring: GivenSpring, j: Judge): Verdict {
   }
   g[CHECKS.length] = (j.band.low - F1) / j.band.force;
   g[CHECKS.length + 1] = (F1 - j.band.high) / j.band.force;
-  return new JudgedSpring(spring, analysis, j, g, j.allowedMaterials.has(spring.choice.material.id), j.allowedEnds ? j.allowedEnds.includes(spring.geometry.ends) : null, madeYield);
+  return new JudgedSpring(spring, analysis, j, g, j.allowedMaterials.has(spring.choice.material.id), j.allowedEnds ? j.allowedEnds.includes(spring.geometry.ends) : null, madeYield, loose);
 }

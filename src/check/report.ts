@@ -41,6 +41,15 @@ export function failingRecord(v: Verdict): { name: string; by: number | null }[]
   return v.failing.map((l) => ({ name: l.name, by: l.margin === null ? null : -l.margin }));
 }
 
+/** What a loose spring means, in words: where, by how much, and the free length that would give the
+ * working force at this rate. */
+export function looseNotes(v: Verdict, band: WorkingBand, system: UnitSystem): string[] {
+  const L = (x: number) => formatQuantity(x, 'length', system);
+  const L0 = v.analysis.geometry.freeLength;
+  return v.loose.map((p) => `the spring is loose at the ${p.at} length: ${L(p.length)} is beyond its free length ${L(L0)}, so it carries no force there (taken as 0, never negative)`
+    + (p.at === 'working' ? `; at its rate of ${formatQuantity(v.analysis.rate, 'rate', system)} a free length of ${L(band.length + band.force / v.analysis.rate)} gives the working force` : ''));
+}
+
 export function checkJson(v: Verdict, band: WorkingBand, notes: string[]): Record<string, unknown> {
   return {
     units: SI_UNITS,
@@ -50,7 +59,8 @@ export function checkJson(v: Verdict, band: WorkingBand, notes: string[]): Recor
     working_band: bandRecord(band),
     spring: givenSpringRecord(v),
     checks: v.lines.map(checkLineRecord),
-    notes,
+    loose: v.loose,
+    notes: [...notes, ...looseNotes(v, band, 'si')],
     warnings: v.analysis.warnings.map((w) => w.message),
     cautions: cautionsOf(),
   };
@@ -72,6 +82,7 @@ export function writeMargin(m: number | null): string {
 /** "outer_diameter by 2.5% (16.4 mm, limit 16 mm)" */
 export function failureText(l: Omit<CheckLine, 'name'> & { name: string }, system: UnitSystem): string {
   // Five figures: a near miss by a fraction of a percent must not read "10.35 N against <= 10.35 N".
+  if (l.value === null && l.kind !== 'text') return `${l.name} (not judged)`;
   const by = l.margin === null ? `(${writeValue(l.value, l.kind, system)}, not ${l.limit})` : `by ${sig(-l.margin * 100, 3)}% (${writeValue(l.value, l.kind, system, 5)} against ${l.relation} ${writeValue(l.limit, l.kind, system, 5)})`;
   return `${l.name} ${by}`;
 }
@@ -102,10 +113,11 @@ export function checkText(v: Verdict, req: Requirements, band: WorkingBand, note
   out.push('');
   out.push(verdictSummary(v, system));
   const warnings = rulesOfThumb(v.analysis, givenService(req, v.spring), quantityWriter(system)).map((w) => w.message);
-  if (notes.length || warnings.length) {
+  const all = [...looseNotes(v, band, system), ...notes, ...warnings];
+  if (all.length) {
     out.push('');
     out.push('Notes:');
-    for (const n of [...notes, ...warnings]) out.push(`  ! ${n}`);
+    for (const n of all) out.push(`  ! ${n}`);
   }
   out.push('');
   out.push(cautionText());
