@@ -9,6 +9,7 @@ import { springServiceConditions } from '../kinds/compression/problem.js';
 import { CHECK, CHECKS, CHECK_LABELS, activeChecks, checkAnalysis, figuresUnder, forceBand, staticLimit, type CheckName } from '../kinds/compression/verify.js';
 import type { EndType } from '../kinds/compression/geometry.js';
 import type { Kind } from '../units/kinds.js';
+import { sig } from '../units/format.js';
 import { springYieldFigures, yieldShortfall } from '../kinds/compression/tolerance/confirm.js';
 import type { WorkingBand } from './band.js';
 import { givenService, type GivenSpring } from './given.js';
@@ -38,10 +39,21 @@ export interface CheckLine {
   kind: ValueKind;
   /** Normalised check value, g <= 0 passes (as src/kinds/compression/verify.ts defines it); NaN: not computable. */
   g: number;
-  /** -g: how far inside its limit the spring is, as a fraction of the limit; null for categorical checks. */
+  /** -g: how far inside its limit the spring is in the check's own normalisation (design's figure: a
+   * share of the limit for most checks, of the shortest length for clash, of the deflection for
+   * buckling); null for categorical checks. */
   margin: number | null;
   pass: boolean;
   note?: string;
+  /** The margin reads in the check's own unit (spareOf: so many mm of coil clearance), not as a share:
+   * for checks whose normalised value is not a share of the limit (clash, buckling). */
+  unitMargin?: boolean;
+}
+
+/** The distance from the figure to its limit in the figure's own unit, positive inside; null when either is missing. */
+export function spareOf(l: Pick<CheckLine, 'value' | 'limit' | 'relation'>): number | null {
+  if (typeof l.value !== 'number' || typeof l.limit !== 'number') return null;
+  return l.relation === '>=' ? l.value - l.limit : l.limit - l.value;
 }
 
 /** A working length at which a given compression spring is loose: beyond its free length nothing
@@ -88,7 +100,7 @@ export function makeJudge(req: Requirements, band: WorkingBand, endsStated: bool
   return { req, band, service: springServiceConditions(req), active: activeChecks(req), allowedMaterials: new Set(req.materials.map((m) => m.material.id)), allowedEnds: endsStated ? req.ends : null };
 }
 
-type Figure = Pick<CheckLine, 'value' | 'limit' | 'relation' | 'kind'> & { note?: string };
+type Figure = Pick<CheckLine, 'value' | 'limit' | 'relation' | 'kind' | 'unitMargin'> & { note?: string };
 
 /** The figure and limit behind each design check, for people; the verdict itself is checkAnalysis's. */
 function figureOf(name: CheckName, a: SpringAnalysis, req: Requirements, madeYield: number | null): Figure {
@@ -100,7 +112,14 @@ function figureOf(name: CheckName, a: SpringAnalysis, req: Requirements, madeYie
     case 'inner_diameter': return { value: g.innerDiameter, limit: req.minInnerDiameter ?? null, relation: '>=', kind: 'length' };
     case 'free_length': return { value: g.freeLength, limit: req.maxFreeLength ?? null, relation: '<=', kind: 'length' };
     case 'solid_length': return { value: g.solidLength, limit: req.maxSolidLength ?? null, relation: '<=', kind: 'length' };
-    case 'clash': return { value: a.clash.overrun, limit: req.clashAllowance, relation: '>=', kind: 'percent', note: 'force overrun to solid beyond the largest working force' };
+    case 'clash': {
+      // In mm at the shortest working length: the coil clearance left to solid against the clearance the
+      // clash allowance asks for (that share of the deflection there); the same test as the force overrun.
+      const Lmin = a.clash.shortestLength;
+      const overrun = Number.isFinite(a.clash.overrun) ? `${sig(a.clash.overrun * 100, 3)}% force overrun to solid` : 'no force there';
+      return { value: Lmin - g.solidLength, limit: req.clashAllowance * (g.freeLength - Lmin), relation: '>=', kind: 'length', unitMargin: true,
+        note: `coil clearance to solid at the ${req.operatingLength !== undefined ? 'operating' : 'working'} length against ${sig(req.clashAllowance * 100, 3)}% of the deflection there (${overrun}, asked ${sig(req.clashAllowance * 100, 3)}%)` };
+    }
     case 'coil_gaps': return { value: a.clash.gapSum, limit: a.clash.minGapSum, relation: '>=', kind: 'length', note: 'sum of coil gaps at the shortest length (EN 13906-1)' };
     case 'outer_diameter_at_solid': return { value: a.solid.outerDiameter, limit: req.maxOuterDiameter ?? null, relation: '<=', kind: 'length' };
     case 'static_stress': {
@@ -111,8 +130,8 @@ function figureOf(name: CheckName, a: SpringAnalysis, req: Requirements, madeYie
     case 'solid_stress': return { value: a.solid.stress, limit: staticLimit(req, a.material.allowableStress).limit, relation: '<=', kind: 'stress' };
     case 'fatigue': return { value: a.fatigue ? a.fatigue.safetyFactor : null, limit: req.safety.fatigue, relation: '>=', kind: 'number', note: 'fatigue safety factor' };
     case 'buckling': return a.buckling.absolutelyStable
-      ? { value: a.buckling.maxDeflection, limit: null, relation: '<', kind: 'length', note: 'absolutely stable' }
-      : { value: a.buckling.maxDeflection, limit: a.buckling.criticalDeflection, relation: '<', kind: 'length', note: 'largest deflection against the critical deflection' };
+      ? { value: a.buckling.maxDeflection, limit: null, relation: '<', kind: 'length', unitMargin: true, note: `largest deflection; absolutely stable at ${req.seating} seating (no deflection buckles it)` }
+      : { value: a.buckling.maxDeflection, limit: a.buckling.criticalDeflection, relation: '<', kind: 'length', unitMargin: true, note: `largest deflection against the critical deflection at ${req.seating} seating` };
     case 'surge': return { value: a.surge.relevant, limit: req.forcingFrequency ? req.safety.surge * req.forcingFrequency : null, relation: '>=', kind: 'frequency' };
     case 'operating_force_min': return { value: a.points[a.points.length - 1].force, limit: req.operatingForce! * (1 - forceBand(req)), relation: '>=', kind: 'force' };
     case 'operating_force_max': return { value: a.points[a.points.length - 1].force, limit: req.operatingForce! * (1 + forceBand(req)), relation: '<=', kind: 'force' };
@@ -152,7 +171,7 @@ class JudgedSpring implements Verdict {
     const F1 = analysis.points[0].force;
     const lines: CheckLine[] = [];
     const numeric = (name: AnyCheckName, label: string, gv: number, fig: Figure): CheckLine =>
-      ({ name, label, value: fig.value, limit: fig.limit, relation: fig.relation, kind: fig.kind, ...(fig.note ? { note: fig.note } : {}), g: gv, margin: Number.isNaN(gv) ? null : -gv, pass: passes(gv) });
+      ({ name, label, value: fig.value, limit: fig.limit, relation: fig.relation, kind: fig.kind, ...(fig.note ? { note: fig.note } : {}), g: gv, margin: Number.isNaN(gv) ? null : -gv, pass: passes(gv), ...(fig.unitMargin ? { unitMargin: true } : {}) });
     const looseAt = (at: LoosePoint['at']) => this.loose.some((p) => p.at === at);
     lines.push(numeric('working_force_min', looseAt('working') ? LOOSE_LABEL : GIVEN_CHECK_LABELS.working_force_min, g[n], { value: F1, limit: j.band.low, relation: '>=', kind: 'force' }));
     lines.push(numeric('working_force_max', GIVEN_CHECK_LABELS.working_force_max, g[n + 1], { value: F1, limit: j.band.high, relation: '<=', kind: 'force' }));

@@ -9,7 +9,7 @@ import { formatQuantity, quantityWriter, sig } from '../units/format.js';
 import type { UnitSystem } from '../units/systems.js';
 import { bandText, type WorkingBand } from './band.js';
 import { givenService } from './given.js';
-import type { CheckLine, ValueKind, Verdict } from './judge.js';
+import { spareOf, type CheckLine, type ValueKind, type Verdict } from './judge.js';
 
 /** The spring itself and its main figures, SI. */
 export function givenSpringRecord(v: Verdict): Record<string, unknown> {
@@ -29,7 +29,8 @@ export function givenSpringRecord(v: Verdict): Record<string, unknown> {
 }
 
 export function checkLineRecord(l: Omit<CheckLine, 'name'> & { name: string }): Record<string, unknown> {
-  return { name: l.name, label: l.label, value: l.value, relation: l.relation, limit: l.limit, margin: l.margin, pass: l.pass, ...(l.note ? { note: l.note } : {}) };
+  // spare: the margin in the figure's own unit (SI), positive inside the limit.
+  return { name: l.name, label: l.label, value: l.value, relation: l.relation, limit: l.limit, spare: spareOf(l), margin: l.margin, pass: l.pass, ...(l.note ? { note: l.note } : {}) };
 }
 
 export function bandRecord(b: WorkingBand): Record<string, unknown> {
@@ -79,10 +80,20 @@ export function writeMargin(m: number | null): string {
   return `${m >= 0 ? '+' : ''}${sig(m * 100, 3)}%`;
 }
 
+/** A line's margin as the table shows it: in the check's own unit where a share would not read
+ * (clash: "+6.95 mm" of coil clearance), else as a share of the limit. */
+export function writeLineMargin(l: Omit<CheckLine, 'name'>, system: UnitSystem): string {
+  if (!l.unitMargin) return writeMargin(l.margin);
+  const spare = spareOf(l);
+  return spare === null ? '' : `${spare >= 0 ? '+' : '-'}${writeValue(Math.abs(spare), l.kind, system)}`;
+}
+
 /** "outer_diameter by 2.5% (16.4 mm, limit 16 mm)" */
 export function failureText(l: Omit<CheckLine, 'name'> & { name: string }, system: UnitSystem): string {
   // Five figures: a near miss by a fraction of a percent must not read "10.35 N against <= 10.35 N".
   if (l.value === null && l.kind !== 'text') return `${l.name} (not judged)`;
+  const spare = l.unitMargin ? spareOf(l) : null;
+  if (spare !== null) return `${l.name} by ${writeValue(-spare, l.kind, system)} (${writeValue(l.value, l.kind, system, 5)} against ${l.relation} ${writeValue(l.limit, l.kind, system, 5)})`;
   const by = l.margin === null ? `(${writeValue(l.value, l.kind, system)}, not ${l.limit})` : `by ${sig(-l.margin * 100, 3)}% (${writeValue(l.value, l.kind, system, 5)} against ${l.relation} ${writeValue(l.limit, l.kind, system, 5)})`;
   return `${l.name} ${by}`;
 }
@@ -91,13 +102,13 @@ export function checkTable(v: Verdict, system: UnitSystem): string {
   const rows = [['check', 'spring', '', 'limit', 'margin', 'verdict', '']];
   for (const l of v.lines) {
     rows.push([l.name, writeValue(l.value, l.kind, system), l.relation, l.limit === null && l.name === 'buckling' ? 'stable' : writeValue(l.limit, l.kind, system),
-      writeMargin(l.margin), l.pass ? 'pass' : 'FAIL', l.pass ? (l.note ?? '') : l.label]);
+      writeLineMargin(l, system), l.pass ? 'pass' : 'FAIL', l.pass ? (l.note ?? '') : l.label]);
   }
   return table(rows);
 }
 
 export function verdictSummary(v: Verdict, system: UnitSystem): string {
-  if (v.pass) return `Result: all ${v.lines.length} checks pass${v.limiting ? `; the smallest margin is ${v.limiting.name} at ${writeMargin(v.limiting.margin)}` : ''}.`;
+  if (v.pass) return `Result: all ${v.lines.length} checks pass${v.limiting ? `; the smallest margin is ${v.limiting.name} at ${writeMargin(v.limiting.margin)}${v.limiting.unitMargin ? ` (${writeLineMargin(v.limiting, system)})` : ''}` : ''}.`;
   return `Result: FAILS ${v.failing.length} of ${v.lines.length} checks: ${v.failing.map((l) => failureText(l, system)).join('; ')}.`;
 }
 

@@ -1,3 +1,4 @@
+// source: none needed (our own scenarios; the checks are properties of coilfront's own verdicts).
 // `check`: every requirement check on one given spring, with margins. No outside values here: these are
 // properties of coilfront's own verdicts (check agrees with design), and scenarios of our own.
 import fc from 'fast-check';

@@ -1,3 +1,4 @@
+// source: none needed (our own scenarios; the checks are properties of coilfront's own verdicts).
 // `check` of a given extension spring: every check of the extension kind with its margin, the working
 // force held to its band, and a spring of one kind refused under requirements of another. No outside
 // values here: scenarios of our own (the pedal-bin demo, invented for coilfront), judged against
