@@ -1,42 +1,16 @@
+// source: none needed (properties of our own pages on our own demo scenarios).
 // Each check is a property of our own reports (no outside values): the HTML reports end to end in a real browser: Debian's Chromium driven by playwright-core. The
 // page must load offline (no network request of any kind), with no console errors, every plot drawn,
 // and the marked spring equal to the CLI's best candidate. Screenshots go to test-output/.
-import { existsSync, mkdirSync, readFileSync, rmSync } from 'node:fs';
-import { join, resolve } from 'node:path';
-import { pathToFileURL } from 'node:url';
-import { chromium, type Browser } from 'playwright-core';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { readFileSync, rmSync } from 'node:fs';
+import { join } from 'node:path';
+import { describe, expect, it } from 'vitest';
+import { OUT, openFile, useChromium } from '../browser.js';
 import { cli } from '../helpers.js';
 
-const OUT = resolve('test-output');
-const CHROMIUM = '/usr/bin/chromium';
-let browser: Browser;
+const browser = useChromium();
 
-beforeAll(async () => {
-  mkdirSync(OUT, { recursive: true });
-  if (!existsSync(CHROMIUM)) throw new Error(`${CHROMIUM} is missing: install Debian's chromium package (.ci/run does)`);
-  browser = await chromium.launch({
-    executablePath: CHROMIUM,
-    args: ['--no-sandbox', '--disable-gpu', '--disable-quic', '--no-first-run', '--disable-background-networking', '--disable-component-update', '--disable-sync'],
-  });
-});
-
-afterAll(async () => {
-  await browser?.close();
-});
-
-async function openReport(path: string) {
-  const page = await browser.newPage({ viewport: { width: 1200, height: 900 } });
-  const errors: string[] = [];
-  const requests: string[] = [];
-  page.on('console', (m) => { if (m.type() === 'error') errors.push(m.text()); });
-  page.on('pageerror', (e) => errors.push(String(e)));
-  page.on('request', (r) => { if (!r.url().startsWith('file:') && !r.url().startsWith('data:')) requests.push(r.url()); });
-  const url = pathToFileURL(path).href;
-  await page.goto(url);
-  await page.waitForLoadState('load');
-  return { page, errors, requests, url };
-}
+const openReport = (path: string) => openFile(browser(), path);
 
 async function geometry(page: import('playwright-core').Page, id: string) {
   return page.$eval(`#${id}`, (svg) => {

@@ -1,12 +1,11 @@
+// source: none needed (properties of our own pages on our own demo scenarios).
 // Each check is a property of our own output (no outside values): the specification sheet of the
 // demo's best spring in a real browser (Debian's Chromium driven by playwright-core): self-contained,
 // no network request, no console error, every item a maker quotes from present, and one printed page
 // on A4 and on Letter.
-import { existsSync, mkdirSync, readFileSync, writeFileSync } from 'node:fs';
-import { join, resolve } from 'node:path';
-import { pathToFileURL } from 'node:url';
-import { chromium, type Browser } from 'playwright-core';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { readFileSync, writeFileSync } from 'node:fs';
+import { join } from 'node:path';
+import { describe, expect, it } from 'vitest';
 import { parse } from 'yaml';
 import { loadCatalog } from '../../src/catalogs/load.js';
 import { readRequirements } from '../../src/kinds/compression/requirements.js';
@@ -14,23 +13,9 @@ import { specSheetHtml } from '../../src/kinds/compression/report/specSheet.js';
 import { runDesign } from '../../src/kinds/compression/design.js';
 import { loadToleranceCatalog } from '../../src/kinds/compression/tolerance/catalog.js';
 import { specifySpring } from '../../src/kinds/compression/tolerance/specify.js';
+import { OUT, openFile, useChromium } from '../browser.js';
 
-const OUT = resolve('test-output');
-const CHROMIUM = '/usr/bin/chromium';
-let browser: Browser;
-
-beforeAll(async () => {
-  mkdirSync(OUT, { recursive: true });
-  if (!existsSync(CHROMIUM)) throw new Error(`${CHROMIUM} is missing: install Debian's chromium package (.ci/run does)`);
-  browser = await chromium.launch({
-    executablePath: CHROMIUM,
-    args: ['--no-sandbox', '--disable-gpu', '--disable-quic', '--no-first-run', '--disable-background-networking', '--disable-component-update', '--disable-sync'],
-  });
-});
-
-afterAll(async () => {
-  await browser?.close();
-});
+const browser = useChromium();
 
 /** Pages of a PDF: its page objects (Chromium writes them uncompressed). */
 function pdfPages(pdf: Buffer): number {
@@ -54,14 +39,7 @@ describe('specification sheet in headless Chromium', () => {
       expect(html).not.toMatch(/NaN|Infinity|undefined/);
       const file = join(OUT, `spec-sheet-${units}.html`);
       writeFileSync(file, html);
-      const page = await browser.newPage({ viewport: { width: 1000, height: 1300 } });
-      const errors: string[] = [];
-      const requests: string[] = [];
-      page.on('console', (m) => { if (m.type() === 'error') errors.push(m.text()); });
-      page.on('pageerror', (e) => errors.push(String(e)));
-      page.on('request', (r) => { if (!r.url().startsWith('file:') && !r.url().startsWith('data:')) requests.push(r.url()); });
-      await page.goto(pathToFileURL(file).href);
-      await page.waitForLoadState('load');
+      const { page, errors, requests } = await openFile(browser(), file, { width: 1000, height: 1300 });
       expect(errors).toEqual([]);
       expect(requests).toEqual([]);
       const text = (await page.textContent('body')) ?? '';

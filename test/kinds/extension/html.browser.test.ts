@@ -1,44 +1,20 @@
+// source: none needed (properties of our own pages on our own demo scenarios).
 // The extension-spring HTML reports end to end in a real browser (Debian's Chromium driven by
 // playwright-core), as test/report/browser.test.ts does for compression springs: offline (no network
 // request), no console errors, the force-length line starting above zero at the free length, both loops
 // drawn, the loop stresses shown and the chosen spring the CLI's best. Properties of our own reports on
 // our own demo scenario; no outside values. Screenshots go to test-output/.
-import { existsSync, mkdirSync, readFileSync, rmSync } from 'node:fs';
-import { join, resolve } from 'node:path';
-import { pathToFileURL } from 'node:url';
-import { chromium, type Browser, type Page } from 'playwright-core';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { readFileSync, rmSync } from 'node:fs';
+import { join } from 'node:path';
+import type { Page } from 'playwright-core';
+import { describe, expect, it } from 'vitest';
+import { OUT, openFile, useChromium } from '../../browser.js';
 import { cli } from '../../helpers.js';
 
-const OUT = resolve('test-output');
-const CHROMIUM = '/usr/bin/chromium';
 const DEMO = 'examples/extension-pedal-bin.yaml';
-let browser: Browser;
+const browser = useChromium();
 
-beforeAll(async () => {
-  mkdirSync(OUT, { recursive: true });
-  if (!existsSync(CHROMIUM)) throw new Error(`${CHROMIUM} is missing: install Debian's chromium package (.ci/run does)`);
-  browser = await chromium.launch({
-    executablePath: CHROMIUM,
-    args: ['--no-sandbox', '--disable-gpu', '--disable-quic', '--no-first-run', '--disable-background-networking', '--disable-component-update', '--disable-sync'],
-  });
-});
-
-afterAll(async () => {
-  await browser?.close();
-});
-
-async function open(path: string): Promise<{ page: Page; errors: string[]; requests: string[] }> {
-  const page = await browser.newPage({ viewport: { width: 1200, height: 900 } });
-  const errors: string[] = [];
-  const requests: string[] = [];
-  page.on('console', (m) => { if (m.type() === 'error') errors.push(m.text()); });
-  page.on('pageerror', (e) => errors.push(String(e)));
-  page.on('request', (r) => { if (!r.url().startsWith('file:') && !r.url().startsWith('data:')) requests.push(r.url()); });
-  await page.goto(pathToFileURL(path).href);
-  await page.waitForLoadState('load');
-  return { page, errors, requests };
-}
+const open = (path: string) => openFile(browser(), path);
 
 /** The force-length line as drawn: its first point, and the screen height of force zero on the axis. */
 async function forceLine(page: Page) {
