@@ -19,6 +19,7 @@ import { table } from '../report/table.js';
 import { formatQuantity, quantityWriter, sig } from '../units/format.js';
 import type { UnitSystem } from '../units/systems.js';
 import { bandText, workingBand, type WorkingBand } from './band.js';
+import { serviceNotes } from './service.js';
 import { PASS_TOLERANCE, type CheckLine } from './judge.js';
 import { bandRecord, checkLineRecord, failureText, writeMargin, writeValue } from './report.js';
 
@@ -129,7 +130,7 @@ export function checkExtensionDocuments(spring: unknown, requirements: unknown, 
   const c = readExtensionSpring(spring, catalog, ext);
   const band = workingBand(req);
   const loopStated = isRecord(requirements) && requirements.loop !== undefined && requirements.loop !== null;
-  const notes = c.notes.filter((n) => !/judged as static service/.test(n));
+  const notes = [...c.notes.filter((n) => !/judged as static service/.test(n)), ...serviceNotes(req)];
   const doc = isRecord(spring) ? spring : {};
   const differ = ['lengths', 'forces', 'cycles', 'temperature', 'forcing_frequency', 'fatigue_criterion', 'stress_factor'].filter((k) => doc[k] !== undefined && doc[k] !== null);
   if (differ.length) notes.push(`the spring file's ${differ.join(', ')} ${differ.length === 1 ? 'is' : 'are'} not used: the requirement's service conditions are`);

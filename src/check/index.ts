@@ -13,6 +13,7 @@ import { judge, makeJudge, type Verdict } from './judge.js';
 import { checkJson, checkText } from './report.js';
 import { kindOf } from '../kinds/index.js';
 import { InputError } from '../units/parse.js';
+import { serviceNotes } from './service.js';
 import { checkExtensionDocuments, extensionCheckJson, extensionCheckText, type ExtensionCheckOutcome } from './extension.js';
 import type { UnitSystem } from '../units/systems.js';
 
@@ -42,6 +43,7 @@ export function checkDocuments(spring: unknown, requirements: unknown, catalog: 
   const c = readSpringCase(spring, catalog);
   const band = workingBand(req);
   const { spring: given, notes } = givenFromCase(c, spring, req);
+  notes.push(...serviceNotes(req));
   const verdict = judge(given, makeJudge(req, band, endsStated(requirements)));
   return { req, band, verdict, notes };
 }
