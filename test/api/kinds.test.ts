@@ -38,7 +38,7 @@ describe('frontier and sweep of extension springs from the library', () => {
     expect(fr.kind).toBe('extension');
     expect(fr.frontier_strategy).toBe('grid');
     expect(fr.frontier.length).toBeGreaterThan(1);
-    expect(fr.caution).toMatch(/draw-bar/);
+    expect(fr.cautions.at(-1)).toMatch(/draw-bar/);
     const safe = frontier(read(pedalBin), { x: 'safety_factor', y: 'mass' });
     await sameAsCli(safe, 'frontier', pedalBin, '--x', 'safety_factor', '--y', 'mass');
     // Along the front on (safety factor, mass), both minimised as stored: the factor read as itself

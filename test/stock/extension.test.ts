@@ -53,7 +53,7 @@ describe('stock with an extension requirement', () => {
     const printed = await cli('stock', REQ, TABLE, '--json');
     expect(JSON.stringify(j, null, 2) + '\n').toBe(printed.stdout);
     expect(j.kind).toBe('extension');
-    expect(j.caution).toMatch(/draw-bar/);
+    expect((j.cautions as string[]).at(-1)).toMatch(/draw-bar/);
     const rows = parse(text, { comment: '#', columns: true }) as Record<string, string>[];
     const inch = (v: string) => String(Number(v) / 25.4);
     const us = ['part_number,material,wire_diameter_in,outer_diameter_in,body_coils,initial_tension_lbf,free_length_in,loop',
