@@ -15,6 +15,14 @@ export function sig(v: number, digits = 4): string {
   return r.toFixed(Math.min(decimals, 8));
 }
 
+/** A whole count with its thousands grouped by commas (20,000), as en-US writes it, without the
+ * locale machinery: the first toLocaleString of a process loads the ICU data, about 12 ms, as long as
+ * a design's whole search. */
+export function groupedCount(n: number): string {
+  if (!Number.isSafeInteger(n)) return Number.isFinite(n) ? String(n) : '-';
+  return String(n).replace(/\B(?=(\d{3})+$)/g, ',');
+}
+
 /** A yield as a percentage: one decimal, never rounded up to 100% while any sampled spring failed. */
 export function yieldPercent(y: number): string {
   if (y >= 1) return '100%';

@@ -3,7 +3,7 @@
 // every row ("20.0 / 20.5", never "19.96" -> "20.00" beside "20.5").
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import { sig } from '../../src/units/format.js';
+import { groupedCount, sig } from '../../src/units/format.js';
 
 const significantDigits = (s: string) => s.replace(/^-/, '').replace('.', '').replace(/^0+/, '').length;
 
@@ -31,5 +31,17 @@ describe('sig', () => {
       expect(significantDigits(s), `${v} -> ${s}`).toBe(digits);
       expect(Math.abs(Number(s) - v)).toBeLessThanOrEqual(Math.abs(v) * 10 ** (1 - digits));
     }));
+  });
+});
+
+describe('groupedCount', () => {
+  it('groups a whole count by thousands exactly as en-US does', () => {
+    for (const n of [0, 7, 999, 1000, 20_000, 123_456_789, -4321]) expect(groupedCount(n)).toBe(n.toLocaleString('en-US'));
+    fc.assert(fc.property(fc.integer({ min: -Number.MAX_SAFE_INTEGER, max: Number.MAX_SAFE_INTEGER }), (n) => groupedCount(n) === n.toLocaleString('en-US')));
+  });
+
+  it('never writes NaN or Infinity', () => {
+    expect(groupedCount(NaN)).toBe('-');
+    expect(groupedCount(Infinity)).toBe('-');
   });
 });

@@ -4,7 +4,7 @@ import type { Requirements } from '../requirements.js';
 import { CHECK_LABELS, CHECKS, type CheckName } from '../verify.js';
 import { candidateAt, reportedChecks, type Candidate, type DesignRun } from '../design.js';
 import { limitingCheck, outward, relaxAdvice, type RelaxAdvice, type RelaxChange } from '../relax.js';
-import { formatQuantity, inUnit, quantityWriter, sig, unitSymbol, yieldPercent } from '../../../units/format.js';
+import { formatQuantity, groupedCount, inUnit, quantityWriter, sig, unitSymbol, yieldPercent } from '../../../units/format.js';
 import { rulesOfThumb } from '../analysis.js';
 import type { Kind } from '../../../units/kinds.js';
 import type { UnitSystem } from '../../../units/systems.js';
@@ -183,7 +183,7 @@ export function yieldNote(run: DesignRun): string[] {
   if (!run.yields) return [];
   const req = run.req;
   const n = run.yields[0]?.monteCarlo.samples ?? 0;
-  const lines = [`Yield: the share of made springs that pass every check, EN 15800 grade ${req.tolerance.grade}${Object.keys(req.tolerance.overrides).length ? ' with the given tolerances' : ''}, each tolerance taken as 3 sigma, the free length adjusted to the working force; seeded Monte Carlo of ${n.toLocaleString('en-US')} springs (seed ${req.seed}).`
+  const lines = [`Yield: the share of made springs that pass every check, EN 15800 grade ${req.tolerance.grade}${Object.keys(req.tolerance.overrides).length ? ' with the given tolerances' : ''}, each tolerance taken as 3 sigma, the free length adjusted to the working force; seeded Monte Carlo of ${groupedCount(n)} springs (seed ${req.seed}).`
     + (req.minYield !== undefined ? ` min_yield ${yieldPercent(req.minYield)}: the search required it by its estimate; the Monte Carlo confirms each listed spring to within its standard error (about ${sig(Math.sqrt(req.minYield * (1 - req.minYield) / Math.max(n, 1)) * 100, 2)}%).` : ' Add min_yield (such as 0.99) to design for it.')];
   for (const r of run.refused ?? []) {
     lines.push(`Refused: a ${r.candidate.item.choice.material.id} spring of d ${formatQuantity(r.candidate.geometry.wireDiameter, 'length', req.system)}, Na ${r.candidate.geometry.activeCoils} passed the search by its yield estimate (${yieldPercent(r.yield.estimate)}) but the Monte Carlo gives ${yieldPercent(r.yield.monteCarlo.yield)} +- ${sig(r.yield.monteCarlo.standardError * 100, 2)}%, below min_yield by more than its standard error: it is left out.`);

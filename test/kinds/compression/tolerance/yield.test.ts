@@ -14,6 +14,24 @@ import { analysisEvaluator, designedTolerances, fastEvaluator, madeSpring, nomin
 import { STAINLESS, buildSpec, designed, requirements, specArb, uniformSpec } from './specs.js';
 
 const tc = loadToleranceCatalog();
+
+/** The first `count` standard normal deviates of a uniform stream by Marsaglia's polar method (Marsaglia and
+ * Bray, 1964): a point (u, v) drawn in the square and kept inside the unit circle gives two, u first.
+ * The specification of the stream the sampling loop draws from, written as a plain list. */
+function polarDeviates(uniform: () => number, count: number): Float64Array {
+  const out = new Float64Array(count + 1);
+  for (let m = 0; m < count; ) {
+    const u = 2 * uniform() - 1;
+    const v = 2 * uniform() - 1;
+    const r2 = u * u + v * v;
+    if (r2 >= 1 || r2 === 0) continue;
+    const scale = Math.sqrt((-2 * Math.log(r2)) / r2);
+    out[m++] = u * scale;
+    out[m++] = v * scale;
+  }
+  return out;
+}
+
 const grade2 = { grade: 2 as const, overrides: {} };
 
 describe('normal distribution function', () => {
@@ -94,6 +112,40 @@ describe('the Monte Carlo', () => {
     const c = springYield(tc, grade2, spring, req, { samples: 3000, seed: 8 });
     expect(b.monteCarlo).toEqual(a.monteCarlo);
     expect(c.monteCarlo.yield).not.toBe(a.monteCarlo.yield);
+  });
+
+  it('draws the springs of the polar method\'s deviates taken in turn: same deviates, same order, same verdicts', () => {
+    // The sampling loop inlines the polar transform for speed; this is the plain loop it must equal:
+    // the same passes and the same failures per check for every seed.
+    const reference = (nominal: Float64Array, sigma: ArrayLike<number>, include: Uint8Array, samples: number, seed: number) => {
+      const z = polarDeviates(seedrandom(String(seed)), samples * nominal.length);
+      let next = 0;
+      const q = new Float64Array(nominal.length);
+      const g = new Float64Array(include.length);
+      const failed = new Array<number>(include.length).fill(0);
+      let passed = 0;
+      for (let k = 0; k < samples; k++) {
+        for (let i = 0; i < q.length; i++) q[i] = nominal[i] + sigma[i] * z[next++];
+        madeSpringChecks(context, q, g);
+        let ok = true;
+        for (let j = 0; j < include.length; j++) if (include[j] === 1 && !(g[j] <= 0)) { ok = false; failed[j]++; }
+        if (ok) passed++;
+      }
+      return { passed, failed: CHECKS.flatMap((name, j) => (include[j] === 1 ? [[name, failed[j]] as const] : [])) };
+    };
+    const context = madeSpringContext(req, spring.figures, spring.geometry.ends);
+    const t = designedTolerances(tc, { grade: 3, overrides: { working_force: { fraction: 0.05 } } }, spring, req);
+    const nominal = nominalQuantities(spring, req);
+    const sigma = standardDeviations(t);
+    const include = yieldChecks(req);
+    for (const [seed, samples] of [[1, 2001], [7, 3000], [42, 999]]) {
+      const fast = monteCarloYield((q, g) => madeSpringChecks(context, q, g), nominal, sigma, include, { seed, samples });
+      const ref = reference(nominal, sigma, include, samples, seed);
+      expect(fast.yield * samples).toBe(ref.passed);
+      expect(Object.entries(fast.failures)).toEqual(ref.failed);
+      expect(ref.passed).toBeGreaterThan(0);
+      expect(ref.passed).toBeLessThan(samples);
+    }
   });
 
   it('samples each quantity with its tolerance as three standard deviations', () => {
