@@ -60,6 +60,15 @@ if (!isDeepStrictEqual(JSON.parse(extensionJson), extension)) {
 }
 for (const dir of [cliDir, join(root, 'dist', 'src', 'kinds', 'extension')]) writeFileSync(join(dir, PREBUILT_EXTENSION_CATALOG), extensionJson);
 
+// The tolerance catalog the same way (the yield of every listed spring reads it).
+const { loadToleranceCatalogFromYaml, PREBUILT_TOLERANCE_CATALOG } = await import(join(root, 'dist', 'src', 'kinds', 'compression', 'tolerance', 'catalog.js'));
+const tolerance = loadToleranceCatalogFromYaml(join(root, 'catalogs'));
+const toleranceJson = JSON.stringify(tolerance);
+if (!isDeepStrictEqual(JSON.parse(toleranceJson), tolerance)) {
+  throw new Error('build: the validated tolerance catalog does not survive JSON unchanged (a value JSON cannot hold?)');
+}
+for (const dir of [cliDir, join(root, 'dist', 'src', 'kinds', 'compression', 'tolerance')]) writeFileSync(join(dir, PREBUILT_TOLERANCE_CATALOG), toleranceJson);
+
 // The code cache: what V8 compiled during one run of the demo, for the next starts to reuse.
 const record = spawnSync(process.execPath, [launcher, 'design', join(root, 'examples', 'washer-trigger.yaml')], { env: { ...process.env, COILFRONT_RECORD_CODE_CACHE: '1' }, stdio: ['ignore', 'ignore', 'inherit'] });
 if (record.status !== 0) throw new Error(`build: the bundled CLI failed on the demo (exit ${record.status})`);
