@@ -20,10 +20,15 @@ const nominalReq = readRequirements(doc, catalog);
 const robustReq = readRequirements({ ...doc, min_yield: 0.99 }, catalog);
 
 const median = (xs: number[]) => [...xs].sort((a, b) => a - b)[Math.floor(xs.length / 2)];
-const ms = (f: () => void) => { const t = performance.now(); f(); return performance.now() - t; };
+const ms = (f: () => void) => {
+  const t = performance.now();
+  f();
+  return performance.now() - t;
+};
 
 // Warm both paths, then interleave the timed runs so that a busy machine slows both alike.
-runDesign(nominalReq); runDesign(robustReq);
+runDesign(nominalReq);
+runDesign(robustReq);
 const tNominal: number[] = [];
 const tRobust: number[] = [];
 for (let i = 0; i < 9; i++) {
@@ -51,7 +56,13 @@ const fullRate = rate(analysisEvaluator(spring, nominalReq), 20_000);
 const say = (s: string) => process.stdout.write(s + '\n');
 say('## Robust design (min_yield) and the Monte Carlo');
 say('');
-say(`Demo (examples/washer-trigger.yaml), grid, medians of 9 interleaved runs without the LP bound, load average ${(await import('node:os')).loadavg()[0].toFixed(1)}:`);
+say(
+  `Demo (examples/washer-trigger.yaml), grid, medians of 9 interleaved runs without the LP bound, load average ${(await import('node:os')).loadavg()[0].toFixed(1)}:`,
+);
 say(`- nominal: ${nominal.result.evaluations.toLocaleString('en-US')} evaluations, ${median(tNominal).toFixed(1)} ms; best ${mass(nominal).toFixed(2)} g`);
-say(`- min_yield 0.99 (grade 2): ${robust.result.evaluations.toLocaleString('en-US')} evaluations (${(robust.result.evaluations / nominal.result.evaluations).toFixed(2)}x), ${median(tRobust).toFixed(1)} ms (${(median(tRobust) / median(tNominal)).toFixed(2)}x); best ${mass(robust).toFixed(2)} g (+${((mass(robust) / mass(nominal) - 1) * 100).toFixed(1)}% mass). The yield estimate runs only for candidates that pass every other check.`);
-say(`- Monte Carlo, samples per second: ${Math.round(fastRate).toLocaleString('en-US')} through the allocation-free made-spring checks (what confirms every listed spring: 20,000 samples each), ${Math.round(fullRate).toLocaleString('en-US')} through the full single-spring analysis (${(fastRate / fullRate).toFixed(0)}x slower; the two count the same passes, test/tolerance/inSearch.test.ts).`);
+say(
+  `- min_yield 0.99 (grade 2): ${robust.result.evaluations.toLocaleString('en-US')} evaluations (${(robust.result.evaluations / nominal.result.evaluations).toFixed(2)}x), ${median(tRobust).toFixed(1)} ms (${(median(tRobust) / median(tNominal)).toFixed(2)}x); best ${mass(robust).toFixed(2)} g (+${((mass(robust) / mass(nominal) - 1) * 100).toFixed(1)}% mass). The yield estimate runs only for candidates that pass every other check.`,
+);
+say(
+  `- Monte Carlo, samples per second: ${Math.round(fastRate).toLocaleString('en-US')} through the allocation-free made-spring checks (what confirms every listed spring: 20,000 samples each), ${Math.round(fullRate).toLocaleString('en-US')} through the full single-spring analysis (${(fastRate / fullRate).toFixed(0)}x slower; the two count the same passes, test/tolerance/inSearch.test.ts).`,
+);

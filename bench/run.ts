@@ -21,7 +21,10 @@ import { stockBenchLines } from './stock.js';
 const DEMO = 'examples/washer-trigger.yaml';
 const catalog = loadCatalog();
 const lines: string[] = [];
-const say = (s = '') => { lines.push(s); process.stderr.write(s + '\n'); };
+const say = (s = '') => {
+  lines.push(s);
+  process.stderr.write(s + '\n');
+};
 const median = (xs: number[]) => [...xs].sort((a, b) => a - b)[Math.floor(xs.length / 2)];
 const fmt = (v: number, d = 3) => Number(v.toPrecision(d)).toLocaleString('en-US', { maximumSignificantDigits: d });
 const int = (v: number) => Math.round(v).toLocaleString('en-US');
@@ -63,7 +66,10 @@ function innerLoopRate(p: Problem, count: number): { best: number; median: numbe
     const u2 = process.cpuUsage();
     for (let c = 0; c < count; c++) {
       let acc = 0;
-      for (let i = 0; i < n; i++) { x[i] = xs[c * n + i]; acc += x[i] * 1.0000001; }
+      for (let i = 0; i < n; i++) {
+        x[i] = xs[c * n + i];
+        acc += x[i] * 1.0000001;
+      }
       sink += acc;
     }
     const trivialCpu = cpuSeconds(process.cpuUsage(u2));
@@ -92,10 +98,18 @@ function timed<T>(fn: () => T, reps: number): { value: T; ms: number } {
 
 say('# coilfront benchmark results');
 say();
-say(`Machine: ${cpus()[0]?.model ?? 'unknown CPU'}, ${cpus().length} cores; Node ${process.version}. Written by \`npm run bench\` on ${new Date().toISOString().slice(0, 10)}.`);
+say(
+  `Machine: ${cpus()[0]?.model ?? 'unknown CPU'}, ${cpus().length} cores; Node ${process.version}. Written by \`npm run bench\` on ${new Date().toISOString().slice(0, 10)}.`,
+);
 say('Times are medians of repeated runs after a warm-up; counts are exact. Nothing here is a test assertion.');
-const startLoad = loadavg().map((v) => v.toFixed(1)).join(', ');
-say(`Load average when the run began: ${loadavg().map((v) => v.toFixed(1)).join(', ')} (1, 5, 15 min) on ${cpus().length} cores: times taken on a busier machine are longer, ratios measured interleaved much less so.`);
+const startLoad = loadavg()
+  .map((v) => v.toFixed(1))
+  .join(', ');
+say(
+  `Load average when the run began: ${loadavg()
+    .map((v) => v.toFixed(1))
+    .join(', ')} (1, 5, 15 min) on ${cpus().length} cores: times taken on a busier machine are longer, ratios measured interleaved much less so.`,
+);
 say();
 // The summary of issue 10's targets goes here, once every section has measured its figure.
 const summaryAt = lines.length;
@@ -105,7 +119,9 @@ const demoReq = readRequirements(readInputFile(DEMO), catalog);
 const demoProblem = buildSpringProblem(demoReq);
 const rate = innerLoopRate(demoProblem, 1_000_000);
 say('## Inner loop');
-say(`- Spring problem evaluate() on 1,000,000 random candidates held in one Float64Array, 12 passes (the first two are warm-up): **${fmt(rate.median / 1e6)} million candidate evaluations per second** of wall time, median (${fmt(rate.best / 1e6)} million best); **${fmt(rate.cpu / 1e6)} million per second of CPU time** (process.cpuUsage, which leaves out the time other processes held the core; target: at least 10 million). A trivial loop over the same candidates (copy the point, one multiply-add per variable), timed in alternate passes: ${fmt(rate.trivialCpu / 1e6)} million per CPU second; one evaluation costs **${fmt(rate.ratio, 3)}** trivial-loop iterations (median of the per-pass ratios), a figure that the machine's load and speed largely cancel out of.`);
+say(
+  `- Spring problem evaluate() on 1,000,000 random candidates held in one Float64Array, 12 passes (the first two are warm-up): **${fmt(rate.median / 1e6)} million candidate evaluations per second** of wall time, median (${fmt(rate.best / 1e6)} million best); **${fmt(rate.cpu / 1e6)} million per second of CPU time** (process.cpuUsage, which leaves out the time other processes held the core; target: at least 10 million). A trivial loop over the same candidates (copy the point, one multiply-add per variable), timed in alternate passes: ${fmt(rate.trivialCpu / 1e6)} million per CPU second; one evaluation costs **${fmt(rate.ratio, 3)}** trivial-loop iterations (median of the per-pass ratios), a figure that the machine's load and speed largely cancel out of.`,
+);
 say();
 
 // 2. The demo design.
@@ -115,18 +131,28 @@ const wall: number[] = [];
 const coldSearch: number[] = [];
 for (let i = 0; i < 5; i++) {
   const t = performance.now();
-  const out = execFileSync(process.execPath, ['dist/src/cli/main.js', 'design', DEMO, '--json', '--timing'], { stdio: ['ignore', 'pipe', 'ignore'] }).toString();
+  const out = execFileSync(process.execPath, ['dist/src/cli/main.js', 'design', DEMO, '--json', '--timing'], {
+    stdio: ['ignore', 'pipe', 'ignore'],
+  }).toString();
   wall.push(performance.now() - t);
   coldSearch.push(JSON.parse(out).search_ms);
 }
 const g = grid.value;
 const bruteForce = g.cells * Math.round((demoProblem.variables[3] as { max: number }).max / 0.01);
 say('## `coilfront design` on the demo (examples/washer-trigger.yaml)');
-say(`- Grid: ${g.cells.toLocaleString()} combinations (${demoProblem.stock.length} wire sizes x ${demoReq.ends.length} end type x ${valueCount(demoProblem.variables[2])} coil counts), ${g.evaluations.toLocaleString()} candidate evaluations, ${g.feasibleCells} feasible combinations examined, ${g.prunedCells} pruned by the incumbent bound.`);
+say(
+  `- Grid: ${g.cells.toLocaleString()} combinations (${demoProblem.stock.length} wire sizes x ${demoReq.ends.length} end type x ${valueCount(demoProblem.variables[2])} coil counts), ${g.evaluations.toLocaleString()} candidate evaluations, ${g.feasibleCells} feasible combinations examined, ${g.prunedCells} pruned by the incumbent bound.`,
+);
 say(`- Search phase: **${fmt(grid.ms)} ms** (target under 50 ms); search + analysis of the top ${demoReq.top} + LP bound: ${fmt(full.ms)} ms.`);
-say(`- Whole command from process start (\`node dist/src/cli/main.js design ... --json --timing\`): **${fmt(median(wall))} ms** wall (target under 1 s); its search phase, in that fresh process before the JIT has warmed up: ${fmt(median(coldSearch))} ms.`);
-say(`- A brute force over the same combinations with the mean diameter stepped at 0.01 mm over the index range would evaluate about ${fmt(bruteForce / 1e6)} million candidates; the grid evaluates ${fmt(g.evaluations / bruteForce * 100, 2)}% of that (${fmt(bruteForce / g.evaluations)} times fewer) by bracketing the diameter per combination and pruning on the incumbent.`);
-say(`- LP lower bound on mass: ${fmt(full.value.lp.value ?? NaN, 4)} kg; best spring ${fmt(full.value.candidates[0].analysis.geometry.mass, 4)} kg; gap ${fmt((full.value.gap ?? NaN) * 100)}% (the relaxation treats wire size and coil count as continuous, takes the lowest force of the operating band for the stress, and leaves fatigue and buckling out).`);
+say(
+  `- Whole command from process start (\`node dist/src/cli/main.js design ... --json --timing\`): **${fmt(median(wall))} ms** wall (target under 1 s); its search phase, in that fresh process before the JIT has warmed up: ${fmt(median(coldSearch))} ms.`,
+);
+say(
+  `- A brute force over the same combinations with the mean diameter stepped at 0.01 mm over the index range would evaluate about ${fmt(bruteForce / 1e6)} million candidates; the grid evaluates ${fmt((g.evaluations / bruteForce) * 100, 2)}% of that (${fmt(bruteForce / g.evaluations)} times fewer) by bracketing the diameter per combination and pruning on the incumbent.`,
+);
+say(
+  `- LP lower bound on mass: ${fmt(full.value.lp.value ?? NaN, 4)} kg; best spring ${fmt(full.value.candidates[0].analysis.geometry.mass, 4)} kg; gap ${fmt((full.value.gap ?? NaN) * 100)}% (the relaxation treats wire size and coil count as continuous, takes the lowest force of the operating band for the stress, and leaves fatigue and buckling out).`,
+);
 say();
 
 // 3. Everything at once.
@@ -134,7 +160,9 @@ const anyDoc = withValue(withValue(readInputFile(DEMO), ['material'], 'any'), ['
 const anyReq = readRequirements(anyDoc, catalog);
 const anyRun = timed(() => runDesign(anyReq, { strategy: 'grid' }), 3);
 say('## Every material, every end type, coil_step 0.25');
-say(`- ${anyRun.value.cells.toLocaleString()} combinations, ${anyRun.value.result.evaluations.toLocaleString()} candidate evaluations, best ${anyRun.value.candidates[0]?.item.choice.material.id ?? 'none'}: **${fmt(anyRun.ms)} ms** (target under 5 s).`);
+say(
+  `- ${anyRun.value.cells.toLocaleString()} combinations, ${anyRun.value.result.evaluations.toLocaleString()} candidate evaluations, best ${anyRun.value.candidates[0]?.item.choice.material.id ?? 'none'}: **${fmt(anyRun.ms)} ms** (target under 5 s).`,
+);
 say();
 
 // Issue 10's search targets: the brute-force yardstick, resolution, every series, the big genetic space.
@@ -170,7 +198,9 @@ for (const share of [0.1, 0.25, 1]) {
   const h = hitRate(sandgrenProblem(), sg.best[0].f[0], sg.evaluations, share);
   say(`| Sandgren mixed-discrete spring | ${share} | ${h.hits}/50 | ${fmt(h.share, 2)} |`);
 }
-say(`Target: 95% of seeds at no more than 10% of the grid's evaluations. The grid is frugal (it brackets the diameter, prunes on the incumbent and rules out whole wires and runs of coil counts by bounds): on the demo it spends ${g.evaluations.toLocaleString('en-US')} evaluations in all, so 10% of them is fewer than the genetic search's first population needs; on the Sandgren problem about 1.4 evaluations per combination. The genetic search is for spaces past the grid's size (the section above), not for these.`);
+say(
+  `Target: 95% of seeds at no more than 10% of the grid's evaluations. The grid is frugal (it brackets the diameter, prunes on the incumbent and rules out whole wires and runs of coil counts by bounds): on the demo it spends ${g.evaluations.toLocaleString('en-US')} evaluations in all, so 10% of them is fewer than the genetic search's first population needs; on the Sandgren problem about 1.4 evaluations per combination. The genetic search is for spaces past the grid's size (the section above), not for these.`,
+);
 say();
 
 // 5. Published benchmarks.
@@ -189,8 +219,12 @@ const [d, N, D] = sgT.value.best[0].x;
 say('## Published spring-optimisation benchmarks');
 say('| problem | published best known | coilfront grid | grid evaluations, time | genetic (50 seeds) |');
 say('|---|---|---|---|---|');
-say(`| Mixed-discrete coil compression spring, min wire volume (Sandgren 1990; Lampinen and Zelinka 1999; Datta and Figueira 2011; CEC2020 RC30) | 2.658559 at N = 9, d = 0.283, D = 1.223041 | ${sgT.value.best[0].f[0].toFixed(7)} at N = ${N}, d = ${d}, D = ${D.toFixed(6)}; next ${sgT.value.best[1].f[0].toFixed(4)}, ${sgT.value.best[2].f[0].toFixed(4)} | ${sgT.value.evaluations.toLocaleString()} evaluations over ${sgT.value.cells.toLocaleString()} combinations, ${fmt(sgT.ms)} ms | see the table above |`);
-say(`| Tension/compression spring, min weight (Belegundu 1982; Arora 1989; CEC2020 RC17) | 0.0126652328 | ${tc.value.best[0].f[0].toFixed(10)} (relative difference ${(tc.value.best[0].f[0] / TENSION_COMPRESSION_BEST_KNOWN - 1).toExponential(1)}) | ${tc.value.evaluations.toLocaleString()} evaluations, ${fmt(tc.ms)} ms | ${tcHits}/50 within 0.5% at 200,000 evaluations; best ${tcBestGa.toFixed(10)} |`);
+say(
+  `| Mixed-discrete coil compression spring, min wire volume (Sandgren 1990; Lampinen and Zelinka 1999; Datta and Figueira 2011; CEC2020 RC30) | 2.658559 at N = 9, d = 0.283, D = 1.223041 | ${sgT.value.best[0].f[0].toFixed(7)} at N = ${N}, d = ${d}, D = ${D.toFixed(6)}; next ${sgT.value.best[1].f[0].toFixed(4)}, ${sgT.value.best[2].f[0].toFixed(4)} | ${sgT.value.evaluations.toLocaleString()} evaluations over ${sgT.value.cells.toLocaleString()} combinations, ${fmt(sgT.ms)} ms | see the table above |`,
+);
+say(
+  `| Tension/compression spring, min weight (Belegundu 1982; Arora 1989; CEC2020 RC17) | 0.0126652328 | ${tc.value.best[0].f[0].toFixed(10)} (relative difference ${(tc.value.best[0].f[0] / TENSION_COMPRESSION_BEST_KNOWN - 1).toExponential(1)}) | ${tc.value.evaluations.toLocaleString()} evaluations, ${fmt(tc.ms)} ms | ${tcHits}/50 within 0.5% at 200,000 evaluations; best ${tcBestGa.toFixed(10)} |`,
+);
 say();
 say(`Sandgren best known reached: ${Math.abs(sgT.value.best[0].f[0] - SANDGREN_BEST_KNOWN) < 1e-6 ? 'yes, to the published 7 digits' : 'NO'}.`);
 stockBenchLines().forEach((l) => say(l));
@@ -204,7 +238,10 @@ const summary = [
   '| target | this run | before this session (commit 8c2e70a) | verdict |',
   '|---|---|---|---|',
   `| cold search phase at most one pass of the compiled brute force, same optimum | ${fmt(search.coldMs)} ms against ${fmt(search.bruteMs)} ms: **${fmt(search.coldMs / search.bruteMs, 2)}x** wall (interleaved medians); instructions ${fmt(search.coldInstructions / 1e6)} M against ${fmt(search.bruteInstructions / 1e6)} M: **${fmt(search.coldInstructions / search.bruteInstructions, 2)}x**; optimum ${search.sameOptimum ? 'the same' : 'DIFFERENT'} | 1.3x wall (74.3 against 55.4 ms, load about 10); 283 M instructions | ${pass(search.coldMs <= search.bruteMs && search.sameOptimum)} |`,
-  ...search.resolution.map((r) => `| work at 0.001 mm at most 1.5x, at 0.0001 mm at most 2x the work at 0.01 mm (${r.file}) | **${fmt(r.at001, 3)}x**, **${fmt(r.at0001, 3)}x** | ${RESOLUTION_BEFORE[r.file] ?? 'not measured'} | ${pass(r.at001 <= 1.5 && r.at0001 <= 2)} |`),
+  ...search.resolution.map(
+    (r) =>
+      `| work at 0.001 mm at most 1.5x, at 0.0001 mm at most 2x the work at 0.01 mm (${r.file}) | **${fmt(r.at001, 3)}x**, **${fmt(r.at0001, 3)}x** | ${RESOLUTION_BEFORE[r.file] ?? 'not measured'} | ${pass(r.at001 <= 1.5 && r.at0001 <= 2)} |`,
+  ),
   `| every material x every end type x every wire series at quarter coils under 0.5 s | **${fmt(search.everyMs)} ms** wall, ${fmt(search.everyCpuMs)} ms CPU (${int(search.everyEvaluations)} evaluations) | 484 ms wall (259,864 evaluations); 298 ms on a quiet machine | ${pass(search.everyMs < 500)} |`,
   `| genetic search: the grid optimum within 0.5% in at least 48 of 50 seeds at no more than 500,000 evaluations | **${search.gaHits}/50**, median ${int(search.gaMedianEvaluations)}, most ${int(search.gaMostEvaluations)} evaluations | 49/50, median 347,073 | ${pass(search.gaHits >= 48 && search.gaMostEvaluations <= 500_000)} |`,
   `| inner loop at least 10 M evaluations per second | **${fmt(rate.cpu / 1e6)} M** per CPU second (${fmt(rate.median / 1e6)} M per wall second; one evaluation costs ${fmt(rate.ratio, 3)} trivial-loop iterations) | evaluate() is unchanged this session (1.79 M per wall second in an older run at load 18) | ${pass(rate.cpu >= 10e6)} |`,

@@ -47,7 +47,10 @@ function timed<T>(fn: () => T, reps: number): { value: T; ms: number; cpuMs: num
 /** Instructions a command executes, counted by valgrind's callgrind (repeatable whatever the load),
  * or null when valgrind is not there or the count is missing. */
 function instructions(dir: string, command: string, args: string[]): number | null {
-  const r = spawnSync('valgrind', ['--tool=callgrind', `--callgrind-out-file=${join(dir, 'callgrind.out')}`, command, ...args], { encoding: 'utf8', maxBuffer: 1 << 26 });
+  const r = spawnSync('valgrind', ['--tool=callgrind', `--callgrind-out-file=${join(dir, 'callgrind.out')}`, command, ...args], {
+    encoding: 'utf8',
+    maxBuffer: 1 << 26,
+  });
   const m = /Collected : (\d+)/.exec(r.stderr ?? '');
   return m ? Number(m[1]) : null;
 }
@@ -63,22 +66,47 @@ function requirementAt(catalog: Catalog, file: string, resolution: number): Requ
 /** The figures of the issue-10 targets that these sections measure (NaN where not measured), for the
  * summary that bench/run.ts writes. */
 export interface SearchFigures {
-  coldMs: number; bruteMs: number; coldInstructions: number; bruteInstructions: number; sameOptimum: boolean;
+  coldMs: number;
+  bruteMs: number;
+  coldInstructions: number;
+  bruteInstructions: number;
+  sameOptimum: boolean;
   /** Work ratios at 0.001 and 0.0001 mm against 0.01 mm, per requirement file. */
   resolution: { file: string; at001: number; at0001: number }[];
-  everyMs: number; everyCpuMs: number; everyEvaluations: number;
-  gaHits: number; gaSeeds: number; gaMedianEvaluations: number; gaMostEvaluations: number;
+  everyMs: number;
+  everyCpuMs: number;
+  everyEvaluations: number;
+  gaHits: number;
+  gaSeeds: number;
+  gaMedianEvaluations: number;
+  gaMostEvaluations: number;
 }
 
 export function searchSections(catalog: Catalog, say: (s?: string) => void): SearchFigures {
   const figures: SearchFigures = {
-    coldMs: NaN, bruteMs: NaN, coldInstructions: NaN, bruteInstructions: NaN, sameOptimum: false, resolution: [],
-    everyMs: NaN, everyCpuMs: NaN, everyEvaluations: NaN, gaHits: NaN, gaSeeds: 50, gaMedianEvaluations: NaN, gaMostEvaluations: NaN,
+    coldMs: NaN,
+    bruteMs: NaN,
+    coldInstructions: NaN,
+    bruteInstructions: NaN,
+    sameOptimum: false,
+    resolution: [],
+    everyMs: NaN,
+    everyCpuMs: NaN,
+    everyEvaluations: NaN,
+    gaHits: NaN,
+    gaSeeds: 50,
+    gaMedianEvaluations: NaN,
+    gaMostEvaluations: NaN,
   };
   // 1. The cold search phase against one pass of the compiled brute force.
   say('## Cold search phase against a compiled brute force');
   let gcc = false;
-  try { execFileSync('gcc', ['--version'], { stdio: 'ignore' }); gcc = true; } catch { /* no gcc */ }
+  try {
+    execFileSync('gcc', ['--version'], { stdio: 'ignore' });
+    gcc = true;
+  } catch {
+    /* no gcc */
+  }
   if (!gcc || !existsSync(BRUTE_FORCE_SOURCE)) {
     say(`- gcc or ${BRUTE_FORCE_SOURCE} is not on this machine: the compiled brute force is not run, and this ratio is not measured.`);
   } else {
@@ -104,12 +132,23 @@ export function searchSections(catalog: Catalog, say: (s?: string) => void): Sea
     figures.coldMs = median(ours);
     figures.bruteMs = median(brute);
     figures.sameOptimum = same;
-    say(`- \`${MATCH}\` restates the brute force's requirement (\`brute-force ${BRUTE_FORCE_ARGS.slice(0, 10).join(' ')}\`: the metric series, 3 to 30 active coils by quarters, D from 4d to 12d at 0.01 mm, ${bruteLine.split(' ')[0]} candidates per pass), compiled here with \`gcc -O3 -march=native\`.`);
-    say(`- One pass of the brute force: **${fmt(median(brute))} ms** (median of 9). coilfront's search phase, cold in a fresh process (\`${CLI} design ${MATCH} --json --timing\`, interleaved with it; design's default grouped list, which looks at every feasible combination unpruned): **${fmt(median(ours))} ms** (median of 9), ${int(ourBest?.evaluations ?? 0)} candidate evaluations. Ratio **${fmt(median(ours) / median(brute), 2)}** (target at most 1; before the interval methods: about 2.3 on the demo-sized requirement of the issue, 157,363 evaluations on this one; at commit 8c2e70a, before this session: 1.3, 74.3 ms against 55.4 ms, 4,482 evaluations and 4,100 bound calls with the incumbent pruning of that day).`);
-    say(`- Optimum: brute force ${bMass} g at d = ${bd}, D = ${bD}, Na = ${bNa}; coilfront ${fmt((ourBest?.mass ?? NaN) * 1000, 6)} g at d = ${ourBest?.d}, D = ${fmt(ourBest?.D ?? NaN, 6)}, Na = ${ourBest?.Na}: ${same ? 'the same spring to the diameter resolution' : 'DIFFERENT'} (the brute force steps D from 4d, coilfront from the boundary of the monotone checks).`);
+    say(
+      `- \`${MATCH}\` restates the brute force's requirement (\`brute-force ${BRUTE_FORCE_ARGS.slice(0, 10).join(' ')}\`: the metric series, 3 to 30 active coils by quarters, D from 4d to 12d at 0.01 mm, ${bruteLine.split(' ')[0]} candidates per pass), compiled here with \`gcc -O3 -march=native\`.`,
+    );
+    say(
+      `- One pass of the brute force: **${fmt(median(brute))} ms** (median of 9). coilfront's search phase, cold in a fresh process (\`${CLI} design ${MATCH} --json --timing\`, interleaved with it; design's default grouped list, which looks at every feasible combination unpruned): **${fmt(median(ours))} ms** (median of 9), ${int(ourBest?.evaluations ?? 0)} candidate evaluations. Ratio **${fmt(median(ours) / median(brute), 2)}** (target at most 1; before the interval methods: about 2.3 on the demo-sized requirement of the issue, 157,363 evaluations on this one; at commit 8c2e70a, before this session: 1.3, 74.3 ms against 55.4 ms, 4,482 evaluations and 4,100 bound calls with the incumbent pruning of that day).`,
+    );
+    say(
+      `- Optimum: brute force ${bMass} g at d = ${bd}, D = ${bD}, Na = ${bNa}; coilfront ${fmt((ourBest?.mass ?? NaN) * 1000, 6)} g at d = ${ourBest?.d}, D = ${fmt(ourBest?.D ?? NaN, 6)}, Na = ${ourBest?.Na}: ${same ? 'the same spring to the diameter resolution' : 'DIFFERENT'} (the brute force steps D from 4d, coilfront from the boundary of the monotone checks).`,
+    );
     // The same comparison in instructions, which the machine's load does not move.
     let valgrind = false;
-    try { execFileSync('valgrind', ['--version'], { stdio: 'ignore' }); valgrind = true; } catch { /* no valgrind */ }
+    try {
+      execFileSync('valgrind', ['--version'], { stdio: 'ignore' });
+      valgrind = true;
+    } catch {
+      /* no valgrind */
+    }
     if (!valgrind) {
       say('- valgrind is not on this machine: the instruction counts are not measured.');
     } else {
@@ -124,14 +163,18 @@ export function searchSections(catalog: Catalog, say: (s?: string) => void): Sea
       figures.coldInstructions = search ?? NaN;
       figures.bruteInstructions = bruteCount ?? NaN;
       const m = (v: number | null) => (v === null ? 'not measured' : `${fmt(v / 1e6)} M`);
-      say(`- Instructions (valgrind callgrind): one pass of the brute force (built \`gcc -O3\`, which valgrind runs) **${m(bruteCount)}**; coilfront's cold search phase **${m(search)}** (\`node dist/bench/coldProbe.js ${MATCH}\`, ${m(whole)}, less the same process stopped before the search, ${m(stopped)}: the search's own work with its JIT warm-up). Ratio **${search !== null && bruteCount ? fmt(search / bruteCount, 2) : 'not measured'}** (before this session's engine work, commit 8c2e70a, the same count was 283 M).`);
+      say(
+        `- Instructions (valgrind callgrind): one pass of the brute force (built \`gcc -O3\`, which valgrind runs) **${m(bruteCount)}**; coilfront's cold search phase **${m(search)}** (\`node dist/bench/coldProbe.js ${MATCH}\`, ${m(whole)}, less the same process stopped before the search, ${m(stopped)}: the search's own work with its JIT warm-up). Ratio **${search !== null && bruteCount ? fmt(search / bruteCount, 2) : 'not measured'}** (before this session's engine work, commit 8c2e70a, the same count was 283 M).`,
+      );
     }
   }
   say();
 
   // 2. Work against the diameter resolution.
   say('## Evaluations against the diameter resolution');
-  say('Evaluations of the problem, and calls of its interval bounds (each about the cost of one evaluation), at diameter_resolution 0.01, 0.001 and 0.0001 mm; ratios to 0.01 mm. Target: at most 1.5x at 0.001 and 2x at 0.0001, the optimum never worse at the finer resolution.');
+  say(
+    'Evaluations of the problem, and calls of its interval bounds (each about the cost of one evaluation), at diameter_resolution 0.01, 0.001 and 0.0001 mm; ratios to 0.01 mm. Target: at most 1.5x at 0.001 and 2x at 0.0001, the optimum never worse at the finer resolution.',
+  );
   say('| requirement | resolution (mm) | evaluations | bound calls | work ratio (evaluations + bounds) | best mass (kg) | before: evaluations (ratio) |');
   say('|---|---|---|---|---|---|---|');
   const before: Record<string, number[]> = { [MATCH]: [157_363, 1_452_122, 14_383_337], [DEMO]: [16_191, 29_086, 150_808] };
@@ -143,12 +186,17 @@ export function searchSections(catalog: Catalog, say: (s?: string) => void): Sea
     [0.01, 0.001, 0.0001].forEach((res, i) => {
       const r = gridSearch(buildSpringProblem(requirementAt(catalog, file, res)), { top: 1 });
       const work = r.evaluations + (r.boundCalls ?? 0);
-      if (i === 0) { base = work; coarseBest = r.best[0].f[1]; }
+      if (i === 0) {
+        base = work;
+        coarseBest = r.best[0].f[1];
+      }
       const best = r.best[0].f[1];
       const b = before[file];
       if (i === 1) row.at001 = work / base;
       if (i === 2) row.at0001 = work / base;
-      say(`| ${file} | ${res} | ${int(r.evaluations)} | ${int(r.boundCalls ?? 0)} | **${fmt(work / base, 3)}** | ${best.toPrecision(10)}${best <= coarseBest ? '' : ' WORSE'} | ${int(b[i])} (${fmt(b[i] / b[0], 3)}) |`);
+      say(
+        `| ${file} | ${res} | ${int(r.evaluations)} | ${int(r.boundCalls ?? 0)} | **${fmt(work / base, 3)}** | ${best.toPrecision(10)}${best <= coarseBest ? '' : ' WORSE'} | ${int(b[i])} (${fmt(b[i] / b[0], 3)}) |`,
+      );
     });
   }
   say();
@@ -163,8 +211,10 @@ export function searchSections(catalog: Catalog, say: (s?: string) => void): Sea
   figures.everyMs = all.ms;
   figures.everyCpuMs = all.cpuMs;
   figures.everyEvaluations = all.value.evaluations;
-  say('## Every material x every end type x every wire series, quarter coils (the demo\'s loads)');
-  say(`- ${int(all.value.cells)} combinations (${allProblem.stock.length} material wire sizes from the union of every series x 4 end types x ${int(all.value.cells / allProblem.stock.length / 4)} coil counts): ${int(all.value.evaluations)} evaluations and ${int(all.value.boundCalls ?? 0)} bound calls (bracket bounds and branch and range hints); ${int(all.value.prunedCells)} combinations pruned by the incumbent; **${fmt(all.ms)} ms** wall, **${fmt(all.cpuMs)} ms** CPU, medians of 5 after a warm-up (target under 500 ms; before the interval methods: 2,034,596 evaluations, 2,224 ms on this machine; at commit 8c2e70a, before this session: 259,864 evaluations and 36,826 bound calls, 484 ms wall).`);
+  say("## Every material x every end type x every wire series, quarter coils (the demo's loads)");
+  say(
+    `- ${int(all.value.cells)} combinations (${allProblem.stock.length} material wire sizes from the union of every series x 4 end types x ${int(all.value.cells / allProblem.stock.length / 4)} coil counts): ${int(all.value.evaluations)} evaluations and ${int(all.value.boundCalls ?? 0)} bound calls (bracket bounds and branch and range hints); ${int(all.value.prunedCells)} combinations pruned by the incumbent; **${fmt(all.ms)} ms** wall, **${fmt(all.cpuMs)} ms** CPU, medians of 5 after a warm-up (target under 500 ms; before the interval methods: 2,034,596 evaluations, 2,224 ms on this machine; at commit 8c2e70a, before this session: 259,864 evaluations and 36,826 bound calls, 484 ms wall).`,
+  );
   say();
 
   // 4. The genetic search on the space too large for the grid.
@@ -197,8 +247,18 @@ export function searchSections(catalog: Catalog, say: (s?: string) => void): Sea
   figures.gaMostEvaluations = Math.max(...evals);
   const mean = (xs: number[]) => xs.reduce((a, b) => a + b, 0) / xs.length;
   say('## Genetic search on every material x every end type at coil_step 0.01');
-  say(`- ${int(gaGrid.cells)} combinations. The grid's optimum ${gaGrid.best[0].f[0].toPrecision(8)} kg (${int(gaGrid.evaluations)} evaluations, ${fmt(gridMs)} ms).`);
-  say(`- Genetic search, 50 seeds at a budget of ${int(budget)} evaluations, stopped as \`design\` stops it (after ${int(until.stallEvaluations)} evaluations without a better incumbent, or at the LP bound ${lp === null ? 'none' : lp.toPrecision(5)} kg within 0.1%): **${hits}/50** within 0.5% of the grid's optimum (target at least 48/50); evaluations used per seed median **${int(median(evals))}**, mean ${int(mean(evals))}, most ${int(Math.max(...evals))} (before: the whole budget every time, median 499,740); the best met after median ${int(median(toBest))}, most ${int(Math.max(...toBest))} evaluations; stopped by ${Object.entries(stops).map(([k, v]) => `${k} ${v}`).join(', ')}; ${fmt(gaMs)} ms per seed. The LP bound is ${lp === null ? 'absent' : `${fmt((1 - lp / gaGrid.best[0].f[0]) * 100, 2)}% below the optimum`}, so on this space the stall, not the bound, ends the runs (the bound stop is tested on a problem whose bound is tight: test/search/termination.test.ts).`);
+  say(
+    `- ${int(gaGrid.cells)} combinations. The grid's optimum ${gaGrid.best[0].f[0].toPrecision(8)} kg (${int(gaGrid.evaluations)} evaluations, ${fmt(gridMs)} ms).`,
+  );
+  say(
+    `- Genetic search, 50 seeds at a budget of ${int(budget)} evaluations, stopped as \`design\` stops it (after ${int(until.stallEvaluations)} evaluations without a better incumbent, or at the LP bound ${lp === null ? 'none' : lp.toPrecision(5)} kg within 0.1%): **${hits}/50** within 0.5% of the grid's optimum (target at least 48/50); evaluations used per seed median **${int(median(evals))}**, mean ${int(mean(evals))}, most ${int(Math.max(...evals))} (before: the whole budget every time, median 499,740); the best met after median ${int(median(toBest))}, most ${int(Math.max(...toBest))} evaluations; stopped by ${Object.entries(
+      stops,
+    )
+      .map(([k, v]) => `${k} ${v}`)
+      .join(
+        ', ',
+      )}; ${fmt(gaMs)} ms per seed. The LP bound is ${lp === null ? 'absent' : `${fmt((1 - lp / gaGrid.best[0].f[0]) * 100, 2)}% below the optimum`}, so on this space the stall, not the bound, ends the runs (the bound stop is tested on a problem whose bound is tight: test/search/termination.test.ts).`,
+  );
   say();
   return figures;
 }

@@ -16,11 +16,13 @@ const HEADING = '## Whole-command start-up';
 
 // History, measured once and kept here because the code it measured is gone: the figures before the
 // bundle, the pre-validated catalog and the code cache.
-const BEFORE = 'Before (commit 1f66dd6, 2026-12-02: unbundled modules, YAML catalogs parsed and validated at every start, every module loaded): '
-  + '3.99x `node -e 0` (304 ms against 76 ms, 15 interleaved pairs, medians). Whole-process instruction counts (valgrind callgrind, same machine, same day): '
-  + '`node -e 0` 499 M; before 1,826 M (3.66x); the ES-module bundle with split chunks 1,075 M; the CommonJS bundle without the code cache 1,062 M, with it 910 M (1.82x).';
+const BEFORE =
+  'Before (commit 1f66dd6, 2026-12-02: unbundled modules, YAML catalogs parsed and validated at every start, every module loaded): ' +
+  '3.99x `node -e 0` (304 ms against 76 ms, 15 interleaved pairs, medians). Whole-process instruction counts (valgrind callgrind, same machine, same day): ' +
+  '`node -e 0` 499 M; before 1,826 M (3.66x); the ES-module bundle with split chunks 1,075 M; the CommonJS bundle without the code cache 1,062 M, with it 910 M (1.82x).';
 
-const YIELD_SPEEDUP = 'Yield shown for every listed spring (2026-12-02, against commit 8686427; the same 20,000-sample Monte Carlo, same seed, outputs byte for byte the same): the polar transform written into the sampling loop, the tolerance catalog pre-validated into tolerance-catalog.json at build time, the sample count written without toLocaleString (whose first call loads ICU, about 12 ms). Whole process (21 interleaved pairs with `node -e 0`, medians, load average 2.5 to 3.5): before 3.21x wall, 3.32x CPU (213 ms against 63 ms); after 2.27x wall, 2.37x CPU (141 ms against 61 ms); after against before, paired: 0.73x wall, 0.71x CPU. Samples per second through the made-spring checks (washer-trigger\'s best spring, 200,000 samples, median of 5, warm): 1.37 M before, 1.54 M after (1.12x; medians of 7 processes each, interleaved, 0.87 M to 1.74 M run to run on the busy machine). Cold, the 20,000 samples of one listed spring in a fresh process: 49 ms before, 55 ms after (medians of 7; 46 to 102 ms, no difference above the noise): most of the cold cost is the time before the JIT optimises the loop, and most of the whole-process gain is the catalog and ICU.';
+const YIELD_SPEEDUP =
+  "Yield shown for every listed spring (2026-12-02, against commit 8686427; the same 20,000-sample Monte Carlo, same seed, outputs byte for byte the same): the polar transform written into the sampling loop, the tolerance catalog pre-validated into tolerance-catalog.json at build time, the sample count written without toLocaleString (whose first call loads ICU, about 12 ms). Whole process (21 interleaved pairs with `node -e 0`, medians, load average 2.5 to 3.5): before 3.21x wall, 3.32x CPU (213 ms against 63 ms); after 2.27x wall, 2.37x CPU (141 ms against 61 ms); after against before, paired: 0.73x wall, 0.71x CPU. Samples per second through the made-spring checks (washer-trigger's best spring, 200,000 samples, median of 5, warm): 1.37 M before, 1.54 M after (1.12x; medians of 7 processes each, interleaved, 0.87 M to 1.74 M run to run on the busy machine). Cold, the 20,000 samples of one listed spring in a fresh process: 49 ms before, 55 ms after (medians of 7; 46 to 102 ms, no difference above the noise): most of the cold cost is the time before the JIT optimises the loop, and most of the whole-process gain is the catalog and ICU.";
 
 const pkg = JSON.parse(readFileSync('package.json', 'utf8')) as { bin: Record<string, string> };
 const bin = pkg.bin.coilfront;
@@ -29,14 +31,22 @@ const scratch = mkdtempSync(join(tmpdir(), 'coilfront-startup-'));
 const demoJson = join(scratch, 'washer-trigger.json');
 writeFileSync(demoJson, JSON.stringify(parseYaml(readFileSync(DEMO, 'utf8'))));
 
-interface Subject { key: string; label: string; args: string[] }
+interface Subject {
+  key: string;
+  label: string;
+  args: string[];
+}
 const bundle = bin.replace(/coilfront\.cjs$/, 'coilfront-bundle.cjs');
 const subjects: Subject[] = [
   { key: 'node', label: '`node -e 0` (the yardstick)', args: ['-e', '0'] },
   { key: 'design', label: `\`coilfront design ${DEMO}\` (the built command, \`${bin}\`: bundle + code cache)`, args: [bin, 'design', DEMO] },
   { key: 'json', label: 'the same requirements as a JSON file (no YAML to parse)', args: [bin, 'design', demoJson] },
   { key: 'nocache', label: `the bundle alone, without the code cache (\`${bundle}\`)`, args: [bundle, 'design', DEMO] },
-  { key: 'modules', label: 'the unbundled modules (`dist/src/cli/main.js`, tsc output; it reads the catalog JSON too)', args: ['dist/src/cli/main.js', 'design', DEMO] },
+  {
+    key: 'modules',
+    label: 'the unbundled modules (`dist/src/cli/main.js`, tsc output; it reads the catalog JSON too)',
+    args: ['dist/src/cli/main.js', 'design', DEMO],
+  },
 ];
 
 function once(s: Subject): number {
@@ -58,7 +68,10 @@ for (let round = 0; round < ROUNDS; round++) {
 }
 rmSync(scratch, { recursive: true, force: true });
 
-const median = (xs: number[]) => { const s = [...xs].sort((a, b) => a - b); return s.length % 2 ? s[(s.length - 1) / 2] : (s[s.length / 2 - 1] + s[s.length / 2]) / 2; };
+const median = (xs: number[]) => {
+  const s = [...xs].sort((a, b) => a - b);
+  return s.length % 2 ? s[(s.length - 1) / 2] : (s[s.length / 2 - 1] + s[s.length / 2]) / 2;
+};
 const ratio = (key: string) => median(times.get(key)!.map((t, i) => t / times.get('node')![i]));
 const ms = (key: string) => median(times.get(key)!).toFixed(0);
 
@@ -81,7 +94,11 @@ process.stderr.write(text);
 
 // Replace this section of bench/results.md (bench/run.ts writes the rest), or add it at the end.
 let results = '';
-try { results = readFileSync(RESULTS, 'utf8'); } catch { /* a first run */ }
+try {
+  results = readFileSync(RESULTS, 'utf8');
+} catch {
+  /* a first run */
+}
 const start = results.indexOf(HEADING);
 if (start >= 0) {
   const next = results.indexOf('\n## ', start + HEADING.length);

@@ -18,7 +18,13 @@ const REQUIREMENTS = 'examples/stock-dispenser.yaml';
 export function benchTable(n: number, seed = 'stock-bench'): string {
   const rng = seedrandom(seed);
   const pick = <T>(xs: T[]): T => xs[Math.floor(rng() * xs.length)];
-  const materials: [string, number][] = [['302 SS', 69000], ['17-7 PH', 75800], ['Music wire', 81700], ['Chrome silicon', 77200], ['Phos bronze', 41400]];
+  const materials: [string, number][] = [
+    ['302 SS', 69000],
+    ['17-7 PH', 75800],
+    ['Music wire', 81700],
+    ['Chrome silicon', 77200],
+    ['Phos bronze', 41400],
+  ];
   const wires = [0.5, 0.6, 0.8, 0.9, 1, 1.2, 1.5, 1.6, 2, 2.5, 3];
   const lines = ['part_number,material,wire_diameter_mm,outer_diameter_mm,free_length_mm,total_coils,ends,rate_N_per_mm,price'];
   for (let i = 0; i < n; i++) {
@@ -26,7 +32,7 @@ export function benchTable(n: number, seed = 'stock-bench'): string {
     const d = word === 'Chrome silicon' ? pick([1.6, 2, 2.5, 3]) : pick(wires);
     const od = Number((d * (4 + 1 + rng() * 10)).toFixed(1));
     const L0 = Number((10 + rng() * 110).toFixed(1));
-    const Nt = Math.max(4, Math.round((2 * 0.45 * L0) / d) / 2 * (0.6 + 0.4 * rng()));
+    const Nt = Math.max(4, (Math.round((2 * 0.45 * L0) / d) / 2) * (0.6 + 0.4 * rng()));
     const Na = Math.round(Nt * 2) / 2 - 2;
     const ends = pick(['closed & ground', 'closed & ground', 'closed', 'open']);
     const D = od - d;
@@ -74,7 +80,9 @@ export function stockBenchLines(rows = 10_000): string[] {
   const service = springServiceConditions(req);
   const springs = runStock(raw, text, catalog, { label: 'bench' }).results.map((r) => r.verdict.spring);
   let sink = 0;
-  const floor = time(() => { for (const s of springs) sink += checkAnalysis(analyzeSpring(s.geometry, s.figures, service), req)[0]; }, 7);
+  const floor = time(() => {
+    for (const s of springs) sink += checkAnalysis(analyzeSpring(s.geometry, s.figures, service), req)[0];
+  }, 7);
   if (sink === 42) process.stderr.write('');
   const fmt = (v: number) => Math.round(v).toLocaleString('en-US');
   const perSecond = (ms: number) => fmt(rows / (ms / 1000));

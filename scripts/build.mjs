@@ -70,7 +70,12 @@ if (!isDeepStrictEqual(JSON.parse(toleranceJson), tolerance)) {
 for (const dir of [cliDir, join(root, 'dist', 'src', 'kinds', 'compression', 'tolerance')]) writeFileSync(join(dir, PREBUILT_TOLERANCE_CATALOG), toleranceJson);
 
 // The code cache: what V8 compiled during one run of the demo, for the next starts to reuse.
-const record = spawnSync(process.execPath, [launcher, 'design', join(root, 'examples', 'washer-trigger.yaml')], { env: { ...process.env, COILFRONT_RECORD_CODE_CACHE: '1' }, stdio: ['ignore', 'ignore', 'inherit'] });
+const record = spawnSync(process.execPath, [launcher, 'design', join(root, 'examples', 'washer-trigger.yaml')], {
+  env: { ...process.env, COILFRONT_RECORD_CODE_CACHE: '1' },
+  stdio: ['ignore', 'ignore', 'inherit'],
+});
 if (record.status !== 0) throw new Error(`build: the bundled CLI failed on the demo (exit ${record.status})`);
 const cacheKb = (readFileSync(`${bundle}.cache`).length / 1024).toFixed(0);
-console.log(`build: catalog ${(json.length / 1024).toFixed(1)} KB (${catalog.materials.length} materials, ${catalog.series.length} wire series); CLI dist/cli/coilfront.cjs running coilfront-bundle.cjs (${(readFileSync(bundle).length / 1024).toFixed(0)} KB) with a ${cacheKb} KB code cache`);
+console.log(
+  `build: catalog ${(json.length / 1024).toFixed(1)} KB (${catalog.materials.length} materials, ${catalog.series.length} wire series); CLI dist/cli/coilfront.cjs running coilfront-bundle.cjs (${(readFileSync(bundle).length / 1024).toFixed(0)} KB) with a ${cacheKb} KB code cache`,
+);

@@ -14,10 +14,15 @@ const { Script } = require('node:vm');
 const bundle = join(__dirname, 'coilfront-bundle.cjs');
 const cacheFile = `${bundle}.cache`;
 let cachedData;
-try { cachedData = readFileSync(cacheFile); } catch { /* no cache: V8 compiles the bundle */ }
+try {
+  cachedData = readFileSync(cacheFile);
+} catch {
+  /* no cache: V8 compiles the bundle */
+}
 // Wrapped as Node wraps a CommonJS module, on the first line so that line numbers stay true.
 const script = new Script(`(function (exports, require, module, __filename, __dirname) {${readFileSync(bundle, 'utf8')}\n})`, { filename: bundle, cachedData });
-if (process.env.COILFRONT_DEBUG) process.stderr.write(`coilfront: code cache ${cachedData === undefined ? 'absent' : script.cachedDataRejected ? 'rejected' : 'used'}\n`);
+if (process.env.COILFRONT_DEBUG)
+  process.stderr.write(`coilfront: code cache ${cachedData === undefined ? 'absent' : script.cachedDataRejected ? 'rejected' : 'used'}\n`);
 // The build runs the demo once with this set, then keeps what V8 compiled for the next starts.
 if (process.env.COILFRONT_RECORD_CODE_CACHE) process.once('exit', () => writeFileSync(cacheFile, script.createCachedData()));
 const module_ = { exports: {} };

@@ -21,7 +21,15 @@ export function useChromium(): () => Browser {
     browser = await chromium.launch({
       executablePath: CHROMIUM,
       // Offline and quiet: no first-run pages, background fetches, updates or sync.
-      args: ['--no-sandbox', '--disable-gpu', '--disable-quic', '--no-first-run', '--disable-background-networking', '--disable-component-update', '--disable-sync'],
+      args: [
+        '--no-sandbox',
+        '--disable-gpu',
+        '--disable-quic',
+        '--no-first-run',
+        '--disable-background-networking',
+        '--disable-component-update',
+        '--disable-sync',
+      ],
     });
   });
   afterAll(async () => {
@@ -47,9 +55,13 @@ export async function openFile(browser: Browser, path: string, viewport = { widt
   const page = await browser.newPage({ viewport });
   const errors: string[] = [];
   const requests: string[] = [];
-  page.on('console', (m) => { if (m.type() === 'error') errors.push(m.text()); });
+  page.on('console', (m) => {
+    if (m.type() === 'error') errors.push(m.text());
+  });
   page.on('pageerror', (e) => errors.push(String(e)));
-  page.on('request', (r) => { if (!r.url().startsWith('file:') && !r.url().startsWith('data:')) requests.push(r.url()); });
+  page.on('request', (r) => {
+    if (!r.url().startsWith('file:') && !r.url().startsWith('data:')) requests.push(r.url());
+  });
   const url = pathToFileURL(path).href;
   await page.goto(url);
   await page.waitForLoadState('load');

@@ -5,12 +5,24 @@ import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { run } from '../src/cli/run.js';
 
-export interface CliResult { code: number; stdout: string; stderr: string }
+export interface CliResult {
+  code: number;
+  stdout: string;
+  stderr: string;
+}
 
 export async function cli(...args: string[]): Promise<CliResult> {
   let stdout = '';
   let stderr = '';
-  const code = await run(args, { stdout: (t) => { stdout += t; }, stderr: (t) => { stderr += t; }, interactive: false });
+  const code = await run(args, {
+    stdout: (t) => {
+      stdout += t;
+    },
+    stderr: (t) => {
+      stderr += t;
+    },
+    interactive: false,
+  });
   return { code, stdout, stderr };
 }
 

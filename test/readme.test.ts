@@ -17,7 +17,7 @@ describe('README', () => {
     expect(pkg.scripts.demo).toContain('design examples/washer-trigger.yaml');
   });
 
-  it('the demo script\'s commands all run and succeed', async () => {
+  it("the demo script's commands all run and succeed", async () => {
     // Each step runs the installed command (package.json bin); here it runs in-process from source.
     const bin = `node ${pkg.bin.coilfront} `;
     const commands = pkg.scripts.demo.split('&&').map((c) => c.trim());

@@ -8,9 +8,8 @@ import { TREND, type Problem } from '../../src/search/problem.js';
 import { wahlFactor } from '../../src/model/stressFactor.js';
 
 export const SANDGREN_WIRE_SIZES = [
-  0.009, 0.0095, 0.0104, 0.0118, 0.0128, 0.0132, 0.014, 0.015, 0.0162, 0.0173, 0.018, 0.020, 0.023, 0.025, 0.028, 0.032,
-  0.035, 0.041, 0.047, 0.054, 0.063, 0.072, 0.080, 0.092, 0.105, 0.120, 0.135, 0.148, 0.162, 0.177, 0.192, 0.207, 0.225,
-  0.244, 0.263, 0.283, 0.307, 0.331, 0.362, 0.394, 0.4375, 0.500,
+  0.009, 0.0095, 0.0104, 0.0118, 0.0128, 0.0132, 0.014, 0.015, 0.0162, 0.0173, 0.018, 0.02, 0.023, 0.025, 0.028, 0.032, 0.035, 0.041, 0.047, 0.054, 0.063,
+  0.072, 0.08, 0.092, 0.105, 0.12, 0.135, 0.148, 0.162, 0.177, 0.192, 0.207, 0.225, 0.244, 0.263, 0.283, 0.307, 0.331, 0.362, 0.394, 0.4375, 0.5,
 ];
 
 export const SANDGREN_BEST_KNOWN = 2.658559;
@@ -36,7 +35,16 @@ export function sandgrenProblem(): Problem {
       { kind: 'range', name: 'N', min: 1, max: 70, step: 1 },
       { kind: 'continuous', name: 'D', min: 0.6, max: 3, resolution: 1e-4, solve: true },
     ],
-    constraintNames: ['g1 stress', 'g2 free length', 'g3 min wire', 'g4 max coil', 'g5 index', 'g6 preload deflection', 'g7 consistency', 'g8 working deflection'],
+    constraintNames: [
+      'g1 stress',
+      'g2 free length',
+      'g3 min wire',
+      'g4 max coil',
+      'g5 index',
+      'g6 preload deflection',
+      'g7 consistency',
+      'g8 working deflection',
+    ],
     objectiveNames: ['volume'],
     constraintTrend: Int8Array.from([inc, inc, inc, inc, dec, inc, inc, dec]),
     objectiveTrend: Int8Array.from([inc]),

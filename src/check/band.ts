@@ -21,16 +21,19 @@ export interface WorkingBand {
 
 /** Compression and extension requirements alike: the working force, its length and the two tolerances. */
 export function workingBand(req: Pick<Requirements, 'workingTolerance' | 'loadTolerance' | 'workingForce' | 'workingLength'>): WorkingBand {
-  const [tolerance, source]: [number, BandSource] = req.workingTolerance !== undefined
-    ? [req.workingTolerance, 'working_tolerance']
-    : req.loadTolerance > 0 ? [req.loadTolerance, 'load_tolerance'] : [DEFAULT_WORKING_TOLERANCE, 'default'];
+  const [tolerance, source]: [number, BandSource] =
+    req.workingTolerance !== undefined
+      ? [req.workingTolerance, 'working_tolerance']
+      : req.loadTolerance > 0
+        ? [req.loadTolerance, 'load_tolerance']
+        : [DEFAULT_WORKING_TOLERANCE, 'default'];
   const force = req.workingForce;
   return { force, length: req.workingLength, tolerance, source, low: force * (1 - tolerance), high: force * (1 + tolerance) };
 }
 
 const SOURCE_WORDS: Record<BandSource, string> = {
-  working_tolerance: 'the requirement\'s working_tolerance',
-  load_tolerance: 'the requirement\'s load_tolerance (no working_tolerance given)',
+  working_tolerance: "the requirement's working_tolerance",
+  load_tolerance: "the requirement's load_tolerance (no working_tolerance given)",
   default: 'the default 2% (neither working_tolerance nor load_tolerance given)',
 };
 

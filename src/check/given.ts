@@ -56,6 +56,9 @@ export function givenFromCase(c: SpringCase, raw: unknown, req: Requirements): {
   const notes = [...c.notes.filter((n) => !/judged as static service/.test(n))];
   const service = givenService(req, spring);
   const differ = SERVICE_FIELDS.filter(([key, get]) => stated(key) && !same(get(c.service), get(service))).map(([key]) => key);
-  if (differ.length) notes.push(`the spring file's ${differ.join(', ')} differ${differ.length === 1 ? 's' : ''} from the requirement's: the requirement's service conditions are used`);
+  if (differ.length)
+    notes.push(
+      `the spring file's ${differ.join(', ')} differ${differ.length === 1 ? 's' : ''} from the requirement's: the requirement's service conditions are used`,
+    );
   return { spring, notes };
 }

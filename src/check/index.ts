@@ -17,7 +17,12 @@ import { serviceNotes } from './service.js';
 import { checkExtensionDocuments, extensionCheckJson, extensionCheckText, type ExtensionCheckOutcome } from './extension.js';
 import type { UnitSystem } from '../units/systems.js';
 
-export interface CheckOutcome { req: Requirements; band: WorkingBand; verdict: Verdict; notes: string[] }
+export interface CheckOutcome {
+  req: Requirements;
+  band: WorkingBand;
+  verdict: Verdict;
+  notes: string[];
+}
 
 /** Whether a requirements document names its end types (otherwise the default does not restrict a given spring). */
 export function endsStated(rawRequirements: unknown): boolean {
@@ -28,12 +33,21 @@ export function endsStated(rawRequirements: unknown): boolean {
 export function givenKind(spring: unknown, requirements: unknown): string {
   const s = kindOf(spring).id;
   const r = kindOf(requirements).id;
-  if (s !== r) throw new InputError('kind', `the same kind in the spring file and the requirements file (the spring file is ${s}, the requirements ${r}; a missing kind means compression)`, s);
+  if (s !== r)
+    throw new InputError(
+      'kind',
+      `the same kind in the spring file and the requirements file (the spring file is ${s}, the requirements ${r}; a missing kind means compression)`,
+      s,
+    );
   return s;
 }
 
 /** `check` of either kind: the compression verdict, or the extension one (src/check/extension.ts). */
-export function checkAnyDocuments(spring: unknown, requirements: unknown, catalog: Catalog = loadCatalog()): (CheckOutcome & { kind: 'compression' }) | ExtensionCheckOutcome {
+export function checkAnyDocuments(
+  spring: unknown,
+  requirements: unknown,
+  catalog: Catalog = loadCatalog(),
+): (CheckOutcome & { kind: 'compression' }) | ExtensionCheckOutcome {
   if (givenKind(spring, requirements) === 'extension') return checkExtensionDocuments(spring, requirements, catalog);
   return { kind: 'compression', ...checkDocuments(spring, requirements, catalog) };
 }

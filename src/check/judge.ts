@@ -97,7 +97,14 @@ export interface Judge {
 }
 
 export function makeJudge(req: Requirements, band: WorkingBand, endsStated: boolean): Judge {
-  return { req, band, service: springServiceConditions(req), active: activeChecks(req), allowedMaterials: new Set(req.materials.map((m) => m.material.id)), allowedEnds: endsStated ? req.ends : null };
+  return {
+    req,
+    band,
+    service: springServiceConditions(req),
+    active: activeChecks(req),
+    allowedMaterials: new Set(req.materials.map((m) => m.material.id)),
+    allowedEnds: endsStated ? req.ends : null,
+  };
 }
 
 type Figure = Pick<CheckLine, 'value' | 'limit' | 'relation' | 'kind' | 'unitMargin'> & { note?: string };
@@ -106,37 +113,85 @@ type Figure = Pick<CheckLine, 'value' | 'limit' | 'relation' | 'kind' | 'unitMar
 function figureOf(name: CheckName, a: SpringAnalysis, req: Requirements, madeYield: number | null): Figure {
   const g = a.geometry;
   switch (name) {
-    case 'index_min': return { value: g.springIndex, limit: req.index[0], relation: '>=', kind: 'number' };
-    case 'index_max': return { value: g.springIndex, limit: req.index[1], relation: '<=', kind: 'number' };
-    case 'outer_diameter': return { value: g.outerDiameter, limit: req.maxOuterDiameter ?? null, relation: '<=', kind: 'length' };
-    case 'inner_diameter': return { value: g.innerDiameter, limit: req.minInnerDiameter ?? null, relation: '>=', kind: 'length' };
-    case 'free_length': return { value: g.freeLength, limit: req.maxFreeLength ?? null, relation: '<=', kind: 'length' };
-    case 'solid_length': return { value: g.solidLength, limit: req.maxSolidLength ?? null, relation: '<=', kind: 'length' };
+    case 'index_min':
+      return { value: g.springIndex, limit: req.index[0], relation: '>=', kind: 'number' };
+    case 'index_max':
+      return { value: g.springIndex, limit: req.index[1], relation: '<=', kind: 'number' };
+    case 'outer_diameter':
+      return { value: g.outerDiameter, limit: req.maxOuterDiameter ?? null, relation: '<=', kind: 'length' };
+    case 'inner_diameter':
+      return { value: g.innerDiameter, limit: req.minInnerDiameter ?? null, relation: '>=', kind: 'length' };
+    case 'free_length':
+      return { value: g.freeLength, limit: req.maxFreeLength ?? null, relation: '<=', kind: 'length' };
+    case 'solid_length':
+      return { value: g.solidLength, limit: req.maxSolidLength ?? null, relation: '<=', kind: 'length' };
     case 'clash': {
       // In mm at the shortest working length: the coil clearance left to solid against the clearance the
       // clash allowance asks for (that share of the deflection there); the same test as the force overrun.
       const Lmin = a.clash.shortestLength;
       const overrun = Number.isFinite(a.clash.overrun) ? `${sig(a.clash.overrun * 100, 3)}% force overrun to solid` : 'no force there';
-      return { value: Lmin - g.solidLength, limit: req.clashAllowance * (g.freeLength - Lmin), relation: '>=', kind: 'length', unitMargin: true,
-        note: `coil clearance to solid at the ${req.operatingLength !== undefined ? 'operating' : 'working'} length against ${sig(req.clashAllowance * 100, 3)}% of the deflection there (${overrun}, asked ${sig(req.clashAllowance * 100, 3)}%)` };
+      return {
+        value: Lmin - g.solidLength,
+        limit: req.clashAllowance * (g.freeLength - Lmin),
+        relation: '>=',
+        kind: 'length',
+        unitMargin: true,
+        note: `coil clearance to solid at the ${req.operatingLength !== undefined ? 'operating' : 'working'} length against ${sig(req.clashAllowance * 100, 3)}% of the deflection there (${overrun}, asked ${sig(req.clashAllowance * 100, 3)}%)`,
+      };
     }
-    case 'coil_gaps': return { value: a.clash.gapSum, limit: a.clash.minGapSum, relation: '>=', kind: 'length', note: 'sum of coil gaps at the shortest length (EN 13906-1)' };
-    case 'outer_diameter_at_solid': return { value: a.solid.outerDiameter, limit: req.maxOuterDiameter ?? null, relation: '<=', kind: 'length' };
+    case 'coil_gaps':
+      return { value: a.clash.gapSum, limit: a.clash.minGapSum, relation: '>=', kind: 'length', note: 'sum of coil gaps at the shortest length (EN 13906-1)' };
+    case 'outer_diameter_at_solid':
+      return { value: a.solid.outerDiameter, limit: req.maxOuterDiameter ?? null, relation: '<=', kind: 'length' };
     case 'static_stress': {
       const { limit, factor } = staticLimit(req, a.material.allowableStress);
       const tau = a.points.reduce((m, p) => Math.max(m, p.stress), -Infinity);
-      return { value: tau, limit: limit / factor, relation: '<=', kind: 'stress', note: factor !== 1 ? `allowable / static safety factor ${factor}` : 'the requirement\'s allowable_stress' };
+      return {
+        value: tau,
+        limit: limit / factor,
+        relation: '<=',
+        kind: 'stress',
+        note: factor !== 1 ? `allowable / static safety factor ${factor}` : "the requirement's allowable_stress",
+      };
     }
-    case 'solid_stress': return { value: a.solid.stress, limit: staticLimit(req, a.material.allowableStress).limit, relation: '<=', kind: 'stress' };
-    case 'fatigue': return { value: a.fatigue ? a.fatigue.safetyFactor : null, limit: req.safety.fatigue, relation: '>=', kind: 'number', note: 'fatigue safety factor' };
-    case 'buckling': return a.buckling.absolutelyStable
-      ? { value: a.buckling.maxDeflection, limit: null, relation: '<', kind: 'length', unitMargin: true, note: `largest deflection; absolutely stable at ${req.seating} seating (no deflection buckles it)` }
-      : { value: a.buckling.maxDeflection, limit: a.buckling.criticalDeflection, relation: '<', kind: 'length', unitMargin: true, note: `largest deflection against the critical deflection at ${req.seating} seating` };
-    case 'surge': return { value: a.surge.relevant, limit: req.forcingFrequency ? req.safety.surge * req.forcingFrequency : null, relation: '>=', kind: 'frequency' };
-    case 'operating_force_min': return { value: a.points[a.points.length - 1].force, limit: req.operatingForce! * (1 - forceBand(req)), relation: '>=', kind: 'force' };
-    case 'operating_force_max': return { value: a.points[a.points.length - 1].force, limit: req.operatingForce! * (1 + forceBand(req)), relation: '<=', kind: 'force' };
-    case 'temperature': return { value: req.temperature ?? null, limit: a.material.maxTemperature, relation: '<=', kind: 'temperature' };
-    case 'yield': return { value: madeYield, limit: req.minYield ?? null, relation: '>=', kind: 'percent', note: `share of made springs that pass every check: seeded Monte Carlo at EN 15800 grade ${req.tolerance.grade}${Object.keys(req.tolerance.overrides).length ? ' and the given tolerances' : ''}, accepted within its standard error` };
+    case 'solid_stress':
+      return { value: a.solid.stress, limit: staticLimit(req, a.material.allowableStress).limit, relation: '<=', kind: 'stress' };
+    case 'fatigue':
+      return { value: a.fatigue ? a.fatigue.safetyFactor : null, limit: req.safety.fatigue, relation: '>=', kind: 'number', note: 'fatigue safety factor' };
+    case 'buckling':
+      return a.buckling.absolutelyStable
+        ? {
+            value: a.buckling.maxDeflection,
+            limit: null,
+            relation: '<',
+            kind: 'length',
+            unitMargin: true,
+            note: `largest deflection; absolutely stable at ${req.seating} seating (no deflection buckles it)`,
+          }
+        : {
+            value: a.buckling.maxDeflection,
+            limit: a.buckling.criticalDeflection,
+            relation: '<',
+            kind: 'length',
+            unitMargin: true,
+            note: `largest deflection against the critical deflection at ${req.seating} seating`,
+          };
+    case 'surge':
+      return { value: a.surge.relevant, limit: req.forcingFrequency ? req.safety.surge * req.forcingFrequency : null, relation: '>=', kind: 'frequency' };
+    case 'operating_force_min':
+      return { value: a.points[a.points.length - 1].force, limit: req.operatingForce! * (1 - forceBand(req)), relation: '>=', kind: 'force' };
+    case 'operating_force_max':
+      return { value: a.points[a.points.length - 1].force, limit: req.operatingForce! * (1 + forceBand(req)), relation: '<=', kind: 'force' };
+    case 'temperature':
+      return { value: req.temperature ?? null, limit: a.material.maxTemperature, relation: '<=', kind: 'temperature' };
+    case 'yield':
+      return {
+        value: madeYield,
+        limit: req.minYield ?? null,
+        relation: '>=',
+        kind: 'percent',
+        note: `share of made springs that pass every check: seeded Monte Carlo at EN 15800 grade ${req.tolerance.grade}${Object.keys(req.tolerance.overrides).length ? ' and the given tolerances' : ''}, accepted within its standard error`,
+      };
   }
 }
 
@@ -148,13 +203,23 @@ class JudgedSpring implements Verdict {
   violation = 0;
   private built: { lines: CheckLine[]; failing: CheckLine[]; limiting: CheckLine | null } | null = null;
 
-  constructor(readonly spring: GivenSpring, readonly analysis: SpringAnalysis, private readonly j: Judge,
+  constructor(
+    readonly spring: GivenSpring,
+    readonly analysis: SpringAnalysis,
+    private readonly j: Judge,
     /** checkAnalysis's values, then the working band's low and high sides. */
-    private readonly g: Float64Array, private readonly materialOk: boolean, private readonly endsOk: boolean | null,
+    private readonly g: Float64Array,
+    private readonly materialOk: boolean,
+    private readonly endsOk: boolean | null,
     /** The Monte Carlo yield of the made springs, when min_yield asks for it. */
     readonly madeYield: number | null = null,
-    readonly loose: LoosePoint[] = []) {
-    const fail = (name: AnyCheckName, by: number) => { this.pass = false; this.failingNames.push(name); this.violation += by; };
+    readonly loose: LoosePoint[] = [],
+  ) {
+    const fail = (name: AnyCheckName, by: number) => {
+      this.pass = false;
+      this.failingNames.push(name);
+      this.violation += by;
+    };
     const n = CHECKS.length;
     if (!passes(g[n])) fail('working_force_min', Number.isNaN(g[n]) ? 1 : g[n]);
     if (!passes(g[n + 1])) fail('working_force_max', Number.isNaN(g[n + 1]) ? 1 : g[n + 1]);
@@ -170,10 +235,28 @@ class JudgedSpring implements Verdict {
     const n = CHECKS.length;
     const F1 = analysis.points[0].force;
     const lines: CheckLine[] = [];
-    const numeric = (name: AnyCheckName, label: string, gv: number, fig: Figure): CheckLine =>
-      ({ name, label, value: fig.value, limit: fig.limit, relation: fig.relation, kind: fig.kind, ...(fig.note ? { note: fig.note } : {}), g: gv, margin: Number.isNaN(gv) ? null : -gv, pass: passes(gv), ...(fig.unitMargin ? { unitMargin: true } : {}) });
+    const numeric = (name: AnyCheckName, label: string, gv: number, fig: Figure): CheckLine => ({
+      name,
+      label,
+      value: fig.value,
+      limit: fig.limit,
+      relation: fig.relation,
+      kind: fig.kind,
+      ...(fig.note ? { note: fig.note } : {}),
+      g: gv,
+      margin: Number.isNaN(gv) ? null : -gv,
+      pass: passes(gv),
+      ...(fig.unitMargin ? { unitMargin: true } : {}),
+    });
     const looseAt = (at: LoosePoint['at']) => this.loose.some((p) => p.at === at);
-    lines.push(numeric('working_force_min', looseAt('working') ? LOOSE_LABEL : GIVEN_CHECK_LABELS.working_force_min, g[n], { value: F1, limit: j.band.low, relation: '>=', kind: 'force' }));
+    lines.push(
+      numeric('working_force_min', looseAt('working') ? LOOSE_LABEL : GIVEN_CHECK_LABELS.working_force_min, g[n], {
+        value: F1,
+        limit: j.band.low,
+        relation: '>=',
+        kind: 'force',
+      }),
+    );
     lines.push(numeric('working_force_max', GIVEN_CHECK_LABELS.working_force_max, g[n + 1], { value: F1, limit: j.band.high, relation: '<=', kind: 'force' }));
     CHECKS.forEach((name, i) => {
       if (!j.active[i]) return;
@@ -181,9 +264,29 @@ class JudgedSpring implements Verdict {
       lines.push(numeric(name, label, g[CHECK[name]], figureOf(name, analysis, req, this.madeYield)));
     });
     const id = this.spring.choice.material.id;
-    lines.push({ name: 'material', label: GIVEN_CHECK_LABELS.material, value: id, limit: [...j.allowedMaterials].join(', '), relation: 'in', kind: 'text', g: this.materialOk ? -1 : 1, margin: null, pass: this.materialOk });
+    lines.push({
+      name: 'material',
+      label: GIVEN_CHECK_LABELS.material,
+      value: id,
+      limit: [...j.allowedMaterials].join(', '),
+      relation: 'in',
+      kind: 'text',
+      g: this.materialOk ? -1 : 1,
+      margin: null,
+      pass: this.materialOk,
+    });
     if (this.endsOk !== null) {
-      lines.push({ name: 'ends', label: GIVEN_CHECK_LABELS.ends, value: this.spring.geometry.ends, limit: j.allowedEnds!.join(', '), relation: 'in', kind: 'text', g: this.endsOk ? -1 : 1, margin: null, pass: this.endsOk });
+      lines.push({
+        name: 'ends',
+        label: GIVEN_CHECK_LABELS.ends,
+        value: this.spring.geometry.ends,
+        limit: j.allowedEnds!.join(', '),
+        relation: 'in',
+        kind: 'text',
+        g: this.endsOk ? -1 : 1,
+        margin: null,
+        pass: this.endsOk,
+      });
     }
     let limiting: CheckLine | null = null;
     for (const l of lines) if (l.margin !== null && (limiting === null || l.margin < limiting.margin!)) limiting = l;
@@ -191,9 +294,15 @@ class JudgedSpring implements Verdict {
     return this.built;
   }
 
-  get lines(): CheckLine[] { return this.build().lines; }
-  get failing(): CheckLine[] { return this.build().failing; }
-  get limiting(): CheckLine | null { return this.build().limiting; }
+  get lines(): CheckLine[] {
+    return this.build().lines;
+  }
+  get failing(): CheckLine[] {
+    return this.build().failing;
+  }
+  get limiting(): CheckLine | null {
+    return this.build().limiting;
+  }
 }
 
 /** The service a given spring sees: the requirement's, with the spring's peening, and every length
@@ -202,7 +311,9 @@ function servedAs(spring: GivenSpring, j: Judge): { service: ServiceConditions; 
   const service = spring.peened === j.service.peened ? j.service : givenService(j.req, spring);
   const L0 = spring.geometry.freeLength;
   const loose: LoosePoint[] = [];
-  service.lengths.forEach((length, i) => { if (length > L0) loose.push({ at: i === 0 ? 'working' : 'operating', length }); });
+  service.lengths.forEach((length, i) => {
+    if (length > L0) loose.push({ at: i === 0 ? 'working' : 'operating', length });
+  });
   if (loose.length === 0) return { service, loose };
   return { service: { ...service, lengths: service.lengths.map((L) => Math.min(L, L0)) }, loose };
 }
@@ -212,7 +323,10 @@ export function judge(spring: GivenSpring, j: Judge): Verdict {
   const { service, loose } = servedAs(spring, j);
   const analysis = analyzeSpring(spring.geometry, figuresUnder(j.req, spring.figures), service);
   // A loose point stands at the requirement's length with no deflection and no force (the analysis took it at the free length).
-  if (loose.length) analysis.points = analysis.points.map((p, i) => (j.service.lengths[i] > spring.geometry.freeLength ? { ...p, length: j.service.lengths[i], deflection: 0 } : p));
+  if (loose.length)
+    analysis.points = analysis.points.map((p, i) =>
+      j.service.lengths[i] > spring.geometry.freeLength ? { ...p, length: j.service.lengths[i], deflection: 0 } : p,
+    );
   const design = checkAnalysis(analysis, j.req);
   const g = new Float64Array(CHECKS.length + 2);
   g.set(design);
@@ -226,5 +340,14 @@ export function judge(spring: GivenSpring, j: Judge): Verdict {
   }
   g[CHECKS.length] = (j.band.low - F1) / j.band.force;
   g[CHECKS.length + 1] = (F1 - j.band.high) / j.band.force;
-  return new JudgedSpring(spring, analysis, j, g, j.allowedMaterials.has(spring.choice.material.id), j.allowedEnds ? j.allowedEnds.includes(spring.geometry.ends) : null, madeYield, loose);
+  return new JudgedSpring(
+    spring,
+    analysis,
+    j,
+    g,
+    j.allowedMaterials.has(spring.choice.material.id),
+    j.allowedEnds ? j.allowedEnds.includes(spring.geometry.ends) : null,
+    madeYield,
+    loose,
+  );
 }

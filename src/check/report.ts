@@ -17,20 +17,46 @@ export function givenSpringRecord(v: Verdict): Record<string, unknown> {
   const g = a.geometry;
   const m = v.spring.choice.material;
   return {
-    material: m.id, material_name: m.name, ends: g.ends, wire_diameter: g.wireDiameter, mean_diameter: g.meanDiameter,
-    outer_diameter: g.outerDiameter, inner_diameter: g.innerDiameter, spring_index: g.springIndex, active_coils: g.activeCoils,
-    total_coils: g.totalCoils, free_length: g.freeLength, solid_length: g.solidLength, rate: a.rate, mass: g.mass,
-    peened: v.spring.peened, set_removed: v.spring.setRemoved,
+    material: m.id,
+    material_name: m.name,
+    ends: g.ends,
+    wire_diameter: g.wireDiameter,
+    mean_diameter: g.meanDiameter,
+    outer_diameter: g.outerDiameter,
+    inner_diameter: g.innerDiameter,
+    spring_index: g.springIndex,
+    active_coils: g.activeCoils,
+    total_coils: g.totalCoils,
+    free_length: g.freeLength,
+    solid_length: g.solidLength,
+    rate: a.rate,
+    mass: g.mass,
+    peened: v.spring.peened,
+    set_removed: v.spring.setRemoved,
     points: a.points.map((p) => ({ length: p.length, force: p.force, stress: p.stress })),
-    solid_force: a.solid.force, solid_stress: a.solid.stress, allowable_stress: a.material.allowableStress,
-    static_safety_factor: a.staticSafetyFactor, fatigue_safety_factor: a.fatigue ? a.fatigue.safetyFactor : null,
-    natural_frequency: a.surge.relevant, critical_deflection: a.buckling.absolutelyStable ? null : a.buckling.criticalDeflection,
+    solid_force: a.solid.force,
+    solid_stress: a.solid.stress,
+    allowable_stress: a.material.allowableStress,
+    static_safety_factor: a.staticSafetyFactor,
+    fatigue_safety_factor: a.fatigue ? a.fatigue.safetyFactor : null,
+    natural_frequency: a.surge.relevant,
+    critical_deflection: a.buckling.absolutelyStable ? null : a.buckling.criticalDeflection,
   };
 }
 
 export function checkLineRecord(l: Omit<CheckLine, 'name'> & { name: string }): Record<string, unknown> {
   // spare: the margin in the figure's own unit (SI), positive inside the limit.
-  return { name: l.name, label: l.label, value: l.value, relation: l.relation, limit: l.limit, spare: spareOf(l), margin: l.margin, pass: l.pass, ...(l.note ? { note: l.note } : {}) };
+  return {
+    name: l.name,
+    label: l.label,
+    value: l.value,
+    relation: l.relation,
+    limit: l.limit,
+    spare: spareOf(l),
+    margin: l.margin,
+    pass: l.pass,
+    ...(l.note ? { note: l.note } : {}),
+  };
 }
 
 export function bandRecord(b: WorkingBand): Record<string, unknown> {
@@ -47,8 +73,13 @@ export function failingRecord(v: Verdict): { name: string; by: number | null }[]
 export function looseNotes(v: Verdict, band: WorkingBand, system: UnitSystem): string[] {
   const L = (x: number) => formatQuantity(x, 'length', system);
   const L0 = v.analysis.geometry.freeLength;
-  return v.loose.map((p) => `the spring is loose at the ${p.at} length: ${L(p.length)} is beyond its free length ${L(L0)}, so it carries no force there (taken as 0, never negative)`
-    + (p.at === 'working' ? `; at its rate of ${formatQuantity(v.analysis.rate, 'rate', system)} a free length of ${L(band.length + band.force / v.analysis.rate)} gives the working force` : ''));
+  return v.loose.map(
+    (p) =>
+      `the spring is loose at the ${p.at} length: ${L(p.length)} is beyond its free length ${L(L0)}, so it carries no force there (taken as 0, never negative)` +
+      (p.at === 'working'
+        ? `; at its rate of ${formatQuantity(v.analysis.rate, 'rate', system)} a free length of ${L(band.length + band.force / v.analysis.rate)} gives the working force`
+        : ''),
+  );
 }
 
 export function checkJson(v: Verdict, band: WorkingBand, notes: string[]): Record<string, unknown> {
@@ -93,22 +124,34 @@ export function failureText(l: Omit<CheckLine, 'name'> & { name: string }, syste
   // Five figures: a near miss by a fraction of a percent must not read "10.35 N against <= 10.35 N".
   if (l.value === null && l.kind !== 'text') return `${l.name} (not judged)`;
   const spare = l.unitMargin ? spareOf(l) : null;
-  if (spare !== null) return `${l.name} by ${writeValue(-spare, l.kind, system)} (${writeValue(l.value, l.kind, system, 5)} against ${l.relation} ${writeValue(l.limit, l.kind, system, 5)})`;
-  const by = l.margin === null ? `(${writeValue(l.value, l.kind, system)}, not ${l.limit})` : `by ${sig(-l.margin * 100, 3)}% (${writeValue(l.value, l.kind, system, 5)} against ${l.relation} ${writeValue(l.limit, l.kind, system, 5)})`;
+  if (spare !== null)
+    return `${l.name} by ${writeValue(-spare, l.kind, system)} (${writeValue(l.value, l.kind, system, 5)} against ${l.relation} ${writeValue(l.limit, l.kind, system, 5)})`;
+  const by =
+    l.margin === null
+      ? `(${writeValue(l.value, l.kind, system)}, not ${l.limit})`
+      : `by ${sig(-l.margin * 100, 3)}% (${writeValue(l.value, l.kind, system, 5)} against ${l.relation} ${writeValue(l.limit, l.kind, system, 5)})`;
   return `${l.name} ${by}`;
 }
 
 export function checkTable(v: Verdict, system: UnitSystem): string {
   const rows = [['check', 'spring', '', 'limit', 'margin', 'verdict', '']];
   for (const l of v.lines) {
-    rows.push([l.name, writeValue(l.value, l.kind, system), l.relation, l.limit === null && l.name === 'buckling' ? 'stable' : writeValue(l.limit, l.kind, system),
-      writeLineMargin(l, system), l.pass ? 'pass' : 'FAIL', l.pass ? (l.note ?? '') : l.label]);
+    rows.push([
+      l.name,
+      writeValue(l.value, l.kind, system),
+      l.relation,
+      l.limit === null && l.name === 'buckling' ? 'stable' : writeValue(l.limit, l.kind, system),
+      writeLineMargin(l, system),
+      l.pass ? 'pass' : 'FAIL',
+      l.pass ? (l.note ?? '') : l.label,
+    ]);
   }
   return table(rows);
 }
 
 export function verdictSummary(v: Verdict, system: UnitSystem): string {
-  if (v.pass) return `Result: all ${v.lines.length} checks pass${v.limiting ? `; the smallest margin is ${v.limiting.name} at ${writeMargin(v.limiting.margin)}${v.limiting.unitMargin ? ` (${writeLineMargin(v.limiting, system)})` : ''}` : ''}.`;
+  if (v.pass)
+    return `Result: all ${v.lines.length} checks pass${v.limiting ? `; the smallest margin is ${v.limiting.name} at ${writeMargin(v.limiting.margin)}${v.limiting.unitMargin ? ` (${writeLineMargin(v.limiting, system)})` : ''}` : ''}.`;
   return `Result: FAILS ${v.failing.length} of ${v.lines.length} checks: ${v.failing.map((l) => failureText(l, system)).join('; ')}.`;
 }
 
@@ -117,7 +160,9 @@ export function checkText(v: Verdict, req: Requirements, band: WorkingBand, note
   const L = (x: number) => formatQuantity(x, 'length', system);
   const m = v.spring.choice.material;
   const out: string[] = [];
-  out.push(`Check of a given spring: ${m.id} (${m.name}), wire ${L(g.wireDiameter)}, OD ${L(g.outerDiameter)}, ${sig(g.activeCoils, 4)} active of ${sig(g.totalCoils, 4)} coils, ${g.ends} ends, free length ${L(g.freeLength)}; rate ${formatQuantity(v.analysis.rate, 'rate', system)}`);
+  out.push(
+    `Check of a given spring: ${m.id} (${m.name}), wire ${L(g.wireDiameter)}, OD ${L(g.outerDiameter)}, ${sig(g.activeCoils, 4)} active of ${sig(g.totalCoils, 4)} coils, ${g.ends} ends, free length ${L(g.freeLength)}; rate ${formatQuantity(v.analysis.rate, 'rate', system)}`,
+  );
   out.push(`Working force band: ${bandText(band, system)}`);
   out.push('');
   out.push(checkTable(v, system));

@@ -9,7 +9,12 @@ import type { UnitSystem } from '../units/systems.js';
 import type { Io } from './io.js';
 import { checkOutputPaths, EXIT } from './io.js';
 
-export interface AnalyzeOptions { json?: boolean; units?: UnitSystem; report?: string; force?: boolean }
+export interface AnalyzeOptions {
+  json?: boolean;
+  units?: UnitSystem;
+  report?: string;
+  force?: boolean;
+}
 
 export async function analyzeCommand(file: string, opts: AnalyzeOptions, io: Io): Promise<number> {
   checkOutputPaths([{ option: '--report', path: opts.report }], !!opts.force, [file]);

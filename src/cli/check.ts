@@ -9,7 +9,10 @@ import { EXIT, type Io } from './io.js';
 import { unitsOption } from './options.js';
 import { addOverrideOptions, rawWithOverrides, type CommonOptions } from './searchCommands.js';
 
-interface CheckOptions extends CommonOptions { json?: boolean; units?: UnitSystem }
+interface CheckOptions extends CommonOptions {
+  json?: boolean;
+  units?: UnitSystem;
+}
 
 export function checkCommand(springFile: string, reqFile: string, opts: CheckOptions, io: Io): number {
   const spring = readInputFile(springFile);
@@ -25,11 +28,15 @@ export function checkCommand(springFile: string, reqFile: string, opts: CheckOpt
 }
 
 export function registerCheckCommand(program: Command, io: Io, setCode: (c: number) => void): void {
-  addOverrideOptions(program.command('check')
-    .description('run every requirement check on one given spring (an existing part, a stock spring, an exported design) and print each with its margin; exit 1 if any fails')
-    .argument('<spring-file>', 'YAML or JSON spring file (as `analyze` reads)')
-    .argument('<requirements-file>', 'YAML or JSON requirements file (as `design` reads)')
-    .option('--json', 'machine-readable output on stdout (always SI units)')
-    .addOption(unitsOption()))
-    .action((springFile: string, reqFile: string, opts: CheckOptions) => setCode(checkCommand(springFile, reqFile, opts, io)));
+  addOverrideOptions(
+    program
+      .command('check')
+      .description(
+        'run every requirement check on one given spring (an existing part, a stock spring, an exported design) and print each with its margin; exit 1 if any fails',
+      )
+      .argument('<spring-file>', 'YAML or JSON spring file (as `analyze` reads)')
+      .argument('<requirements-file>', 'YAML or JSON requirements file (as `design` reads)')
+      .option('--json', 'machine-readable output on stdout (always SI units)')
+      .addOption(unitsOption()),
+  ).action((springFile: string, reqFile: string, opts: CheckOptions) => setCode(checkCommand(springFile, reqFile, opts, io)));
 }

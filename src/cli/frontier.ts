@@ -17,15 +17,35 @@ import { addCommon, cautionsOf, planOf, progress, requirementNotes, tracedOverri
 // The CSV writer loads only when a command writes it (start-up time: issue 10).
 const csv = () => import('../report/csv.js');
 
-interface FrontierOptions extends CommonOptions { x: string; y: string; output?: string }
+interface FrontierOptions extends CommonOptions {
+  x: string;
+  y: string;
+  output?: string;
+}
 
 async function frontierCommand(file: string, opts: FrontierOptions, io: Io): Promise<number> {
   if (opts.x === opts.y) throw new InputError('--y', 'an objective other than --x');
   // The frontier is every non-dominated spring: a count, a ranking or one-per-wire would cut it silently.
-  for (const [option, given] of [['--top', opts.top !== undefined], ['--rank', opts.rank !== undefined], ['--per-wire', !!opts.perWire], ['--variants', !!opts.variants]] as const) {
-    if (given) throw new InputError(option, `an option of design or sweep (frontier lists every spring on the ${opts.x} / ${opts.y} frontier; choose the axes with --x and --y)`);
+  for (const [option, given] of [
+    ['--top', opts.top !== undefined],
+    ['--rank', opts.rank !== undefined],
+    ['--per-wire', !!opts.perWire],
+    ['--variants', !!opts.variants],
+  ] as const) {
+    if (given)
+      throw new InputError(
+        option,
+        `an option of design or sweep (frontier lists every spring on the ${opts.x} / ${opts.y} frontier; choose the axes with --x and --y)`,
+      );
   }
-  checkOutputPaths([{ option: '--output', path: opts.output }, { option: '--report', path: opts.report }], !!opts.force, [file]);
+  checkOutputPaths(
+    [
+      { option: '--output', path: opts.output },
+      { option: '--report', path: opts.report },
+    ],
+    !!opts.force,
+    [file],
+  );
   const traced = tracedOverrides(file, opts);
   const kind = kindOf(traced.doc);
   const x = frontierAxis(kind, opts.x, '--x', 'mass');
@@ -37,7 +57,10 @@ async function frontierCommand(file: string, opts: FrontierOptions, io: Io): Pro
   if (opts.json) {
     io.stdout(toJson(frontierResult(kind, fr)) + '\n');
   } else {
-    const text = (await csv()).toCsv(['rank', ...fieldColumns(kind.fields, system)], fr.front.map((c, i) => [i + 1, ...fieldRow(kind.fields, c, system)]));
+    const text = (await csv()).toCsv(
+      ['rank', ...fieldColumns(kind.fields, system)],
+      fr.front.map((c, i) => [i + 1, ...fieldRow(kind.fields, c, system)]),
+    );
     if (opts.output) {
       writeOutputFile(opts.output, text, !!opts.force, '--output');
       io.stderr(`coilfront: ${fr.front.length} springs on the ${x} / ${y} frontier (of ${fr.cloud.length} feasible) written to ${opts.output}\n`);
@@ -55,9 +78,13 @@ async function frontierCommand(file: string, opts: FrontierOptions, io: Io): Pro
 export function registerFrontierCommand(program: Command, io: Io, setCode: (c: number) => void): void {
   // Every kind's axes (a kind refuses those it does not have, naming --x or --y).
   const keys = [...new Set(KINDS.flatMap(frontierAxes))];
-  addCommon(program.command('frontier')
-    .description('the Pareto set of all feasible springs on two objectives, as CSV')
-    .argument('<requirements-file>', 'YAML or JSON requirements file'), false)
+  addCommon(
+    program
+      .command('frontier')
+      .description('the Pareto set of all feasible springs on two objectives, as CSV')
+      .argument('<requirements-file>', 'YAML or JSON requirements file'),
+    false,
+  )
     .addOption(new Option('--x <key>', 'objective on the x axis').choices(keys).default('mass'))
     .addOption(new Option('--y <key>', 'objective on the y axis').choices(keys).default('outer_diameter'))
     .option('-o, --output <file.csv>', 'write the CSV here instead of stdout')

@@ -11,8 +11,12 @@ export interface Io {
 }
 
 export const processIo: Io = {
-  stdout: (t) => { process.stdout.write(t); },
-  stderr: (t) => { process.stderr.write(t); },
+  stdout: (t) => {
+    process.stdout.write(t);
+  },
+  stderr: (t) => {
+    process.stderr.write(t);
+  },
   interactive: Boolean(process.stderr.isTTY),
 };
 
@@ -20,7 +24,10 @@ export const processIo: Io = {
 export const EXIT = { ok: 0, infeasible: 1, input: 2, internal: 3 } as const;
 
 export class CliExit extends Error {
-  constructor(readonly code: number, message = '') {
+  constructor(
+    readonly code: number,
+    message = '',
+  ) {
     super(message);
   }
 }
@@ -41,13 +48,25 @@ export function checkOutputPaths(outputs: readonly { option: string; path?: stri
     if (other) throw new InputError(option, `a file other than ${other}`, path);
     claimed.set(full, option);
     let st: Stats | undefined;
-    try { st = statSync(full); } catch { st = undefined; }
+    try {
+      st = statSync(full);
+    } catch {
+      st = undefined;
+    }
     if (st?.isDirectory()) throw new InputError(option, `a file name (${path} is a folder)`);
     if (st && !force) throw new InputError(option, `a file that does not exist yet (${path} exists; add --force to replace it)`);
     const dir = dirname(full);
     let dirStat: Stats | undefined;
-    try { dirStat = statSync(dir); } catch { dirStat = undefined; }
+    try {
+      dirStat = statSync(dir);
+    } catch {
+      dirStat = undefined;
+    }
     if (!dirStat?.isDirectory()) throw new InputError(option, `a path in an existing folder (${dirname(path)} not found)`);
-    try { accessSync(dir, constants.W_OK); } catch { throw new InputError(option, `a path in a writable folder (${dirname(path)} is not writable)`); }
+    try {
+      accessSync(dir, constants.W_OK);
+    } catch {
+      throw new InputError(option, `a path in a writable folder (${dirname(path)} is not writable)`);
+    }
   }
 }

@@ -21,20 +21,27 @@ export function packageVersion(): string {
     try {
       const pkg = JSON.parse(readFileSync(join(dir, 'package.json'), 'utf8')) as { name?: string; version?: string };
       if (pkg.name === 'coilfront' && pkg.version) return pkg.version;
-    } catch { /* keep walking up */ }
+    } catch {
+      /* keep walking up */
+    }
     dir = join(dir, '..');
   }
   return '0.0.0';
 }
 
-
 export function buildProgram(io: Io, setCode: (c: number) => void): Command {
   const program = new Command('coilfront');
   program
-    .description('Design and check helical compression and extension springs (kind: extension in the file): analyse one spring, or search standard wire sizes and coil counts for the lightest springs that meet your requirements.')
+    .description(
+      'Design and check helical compression and extension springs (kind: extension in the file): analyse one spring, or search standard wire sizes and coil counts for the lightest springs that meet your requirements.',
+    )
     .version(packageVersion(), '-V, --version')
     // A usage mistake is one line, like every other bad input, with the pointer to --help on it.
-    .configureOutput({ writeOut: io.stdout, writeErr: io.stderr, outputError: (text, write) => write(`coilfront: ${text.trim().replace(/\n+/g, ' ')} (run coilfront --help for usage)\n`) })
+    .configureOutput({
+      writeOut: io.stdout,
+      writeErr: io.stderr,
+      outputError: (text, write) => write(`coilfront: ${text.trim().replace(/\n+/g, ' ')} (run coilfront --help for usage)\n`),
+    })
     .exitOverride();
 
   program
@@ -65,7 +72,9 @@ export function buildProgram(io: Io, setCode: (c: number) => void): Command {
 /** Run the CLI on argv (without node and script) and return the exit code. */
 export async function run(argv: string[], io: Io): Promise<number> {
   let code: number = EXIT.ok;
-  const program = buildProgram(io, (c) => { code = c; });
+  const program = buildProgram(io, (c) => {
+    code = c;
+  });
   try {
     await program.parseAsync(argv, { from: 'user' });
     return code;

@@ -22,8 +22,22 @@ import { checkOutputPaths, EXIT, type Io } from './io.js';
 import { unitsOption } from './options.js';
 
 export interface CommonOptions {
-  json?: boolean; units?: UnitSystem; set?: string[]; strategy?: StrategyChoice; seed?: string; top?: string; rank?: string;
-  maxOd?: string; minId?: string; maxFreeLength?: string; maxSolidLength?: string; report?: string; force?: boolean; perWire?: boolean; variants?: boolean; timing?: boolean;
+  json?: boolean;
+  units?: UnitSystem;
+  set?: string[];
+  strategy?: StrategyChoice;
+  seed?: string;
+  top?: string;
+  rank?: string;
+  maxOd?: string;
+  minId?: string;
+  maxFreeLength?: string;
+  maxSolidLength?: string;
+  report?: string;
+  force?: boolean;
+  perWire?: boolean;
+  variants?: boolean;
+  timing?: boolean;
 }
 
 function collect(value: string, previous: string[] = []): string[] {
@@ -40,22 +54,30 @@ export function addOverrideOptions(cmd: Command): Command {
 /** The options every search command takes. `ranked: false` (frontier, which lists the whole front) keeps
  * --top, --rank and --per-wire out of its help; given anyway, they are refused by name. */
 export function addCommon(cmd: Command, ranked = true): Command {
-  cmd
-    .option('--json', 'machine-readable output on stdout (always SI units)')
-    .addOption(unitsOption());
+  cmd.option('--json', 'machine-readable output on stdout (always SI units)').addOption(unitsOption());
   const hide = (o: Option) => (ranked ? o : o.hideHelp());
   addOverrideOptions(cmd)
     .addOption(new Option('--strategy <name>', 'search strategy').choices(['auto', 'grid', 'genetic']).default('auto'))
     .option('--seed <n>', 'random seed for the genetic strategy (overrides the file)')
     .addOption(hide(new Option('--top <n>', 'how many candidates to list (overrides the file)')))
     .addOption(hide(new Option('--rank <key>', 'ranking objective (overrides the file)').choices([...RANK_KEYS])))
-    .addOption(hide(new Option('--variants', 'list every feasible spring (each coil count of a wire) instead of the best of each material, wire size and end type (overrides the file\'s variants)')))
-    .addOption(new Option('--per-wire', 'the best spring of each material, wire size and end type: the default (overrides the file\'s variants)').hideHelp())
+    .addOption(
+      hide(
+        new Option(
+          '--variants',
+          "list every feasible spring (each coil count of a wire) instead of the best of each material, wire size and end type (overrides the file's variants)",
+        ),
+      ),
+    )
+    .addOption(new Option('--per-wire', "the best spring of each material, wire size and end type: the default (overrides the file's variants)").hideHelp())
     .option('--timing', 'also report the search time (which makes the output differ from run to run)');
   return cmd;
 }
 
-export interface Override { path: string[]; option: string }
+export interface Override {
+  path: string[];
+  option: string;
+}
 
 /** The raw requirements document with every command-line override applied. */
 export function rawWithOverrides(file: string, opts: CommonOptions): unknown {
@@ -97,7 +119,13 @@ export function requirementNotes(kind: AnySpringKind, req: unknown, io: Io): voi
 /** What goes on stderr after a CSV of springs: what its less obvious columns mean (relative_cost),
  * then the cautions, the general ones and the kind's own. */
 export function cautionsOf(kind: AnySpringKind): string {
-  return fieldNotes(kind.fields).map((n) => `coilfront: ${n}\n`).join('') + cautionText(kind) + '\n';
+  return (
+    fieldNotes(kind.fields)
+      .map((n) => `coilfront: ${n}\n`)
+      .join('') +
+    cautionText(kind) +
+    '\n'
+  );
 }
 
 export function progress(io: Io, label: string): ((done: number, total: number) => void) | undefined {
@@ -112,7 +140,11 @@ export function progress(io: Io, label: string): ((done: number, total: number) 
   };
 }
 
-interface DesignOptions extends CommonOptions { spec?: string; springFile?: string; pick?: string }
+interface DesignOptions extends CommonOptions {
+  spec?: string;
+  springFile?: string;
+  pick?: string;
+}
 
 /** --pick: the rank of the spring --spec and --spring-file write (1, the best, when not given). */
 function readPick(opts: DesignOptions): number {
@@ -124,13 +156,22 @@ function readPick(opts: DesignOptions): number {
 }
 
 async function designCommand(file: string, opts: DesignOptions, io: Io): Promise<number> {
-  checkOutputPaths([{ option: '--report', path: opts.report }, { option: '--spec', path: opts.spec }, { option: '--spring-file', path: opts.springFile }], !!opts.force, [file]);
+  checkOutputPaths(
+    [
+      { option: '--report', path: opts.report },
+      { option: '--spec', path: opts.spec },
+      { option: '--spring-file', path: opts.springFile },
+    ],
+    !!opts.force,
+    [file],
+  );
   const pick = readPick(opts);
   // The document's `kind` picks the spring kind (src/kinds/index.ts); no kind is compression.
   const traced = tracedOverrides(file, opts);
   const kind = kindOf(traced.doc);
   // Refused before anything runs or is written (the report would be written first).
-  if (opts.spec && !kind.report.writeSpecSheet) throw new InputError('--spec', `a kind that has a specification sheet (the ${kind.label} sheet is not built yet)`);
+  if (opts.spec && !kind.report.writeSpecSheet)
+    throw new InputError('--spec', `a kind that has a specification sheet (the ${kind.label} sheet is not built yet)`);
   const plan = planOf(traced, planDesign);
   const req = plan.req;
   requirementNotes(kind, req, io);
@@ -141,7 +182,8 @@ async function designCommand(file: string, opts: DesignOptions, io: Io): Promise
   if ((opts.spec || opts.springFile) && listed > 0 && pick > listed) {
     throw new InputError('--pick', `a rank from 1 to ${listed} (the springs listed; --top lists more)`, String(pick));
   }
-  if (opts.springFile && !kind.report.springFile) throw new InputError('--spring-file', `a kind that exports spring files (the ${kind.label} export is not built yet)`);
+  if (opts.springFile && !kind.report.springFile)
+    throw new InputError('--spring-file', `a kind that exports spring files (the ${kind.label} export is not built yet)`);
   if (opts.report) {
     if (!kind.report.designHtml) throw new InputError('--report', `a report of a kind that has one (the ${kind.label} report is not built yet)`);
     writeOutputFile(opts.report, await kind.report.designHtml(run, system), !!opts.force, '--report');
@@ -149,7 +191,8 @@ async function designCommand(file: string, opts: DesignOptions, io: Io): Promise
   }
   if (opts.spec) {
     if (!kind.report.writeSpecSheet) throw new InputError('--spec', `a kind that has a specification sheet (the ${kind.label} sheet is not built yet)`);
-    if (await kind.report.writeSpecSheet(opts.spec, run, system, !!opts.force, pick)) io.stderr(`coilfront: specification sheet of spring ${pick} written to ${opts.spec}\n`);
+    if (await kind.report.writeSpecSheet(opts.spec, run, system, !!opts.force, pick))
+      io.stderr(`coilfront: specification sheet of spring ${pick} written to ${opts.spec}\n`);
     else io.stderr('coilfront: no spring to specify: no specification sheet written\n');
   }
   if (opts.springFile) {
@@ -170,12 +213,18 @@ async function designCommand(file: string, opts: DesignOptions, io: Io): Promise
 }
 
 export function registerSearchCommands(program: Command, io: Io, setCode: (c: number) => void): void {
-  addCommon(program.command('design')
-    .description('search every standard wire size, coil count and end type for the springs that meet the requirements, best first')
-    .argument('<requirements-file>', 'YAML or JSON requirements file (see README)'))
+  addCommon(
+    program
+      .command('design')
+      .description('search every standard wire size, coil count and end type for the springs that meet the requirements, best first')
+      .argument('<requirements-file>', 'YAML or JSON requirements file (see README)'),
+  )
     .option('--report <file.html>', 'also write a self-contained HTML design report')
-    .option('--spec <file.html>', 'also write the chosen spring\'s one-page specification sheet (as drawn, at the tolerance grade, 2 unless given)')
-    .option('--spring-file <file.yaml>', 'also write the chosen spring as a spring file (as `analyze` and `check` read it), at drawing precision, with the requirement\'s service conditions')
+    .option('--spec <file.html>', "also write the chosen spring's one-page specification sheet (as drawn, at the tolerance grade, 2 unless given)")
+    .option(
+      '--spring-file <file.yaml>',
+      "also write the chosen spring as a spring file (as `analyze` and `check` read it), at drawing precision, with the requirement's service conditions",
+    )
     .option('--pick <n>', 'the rank of the spring --spec and --spring-file write (default 1, the best)')
     .option('--force', 'overwrite existing output files')
     .action(async (file: string, opts: DesignOptions) => setCode(await designCommand(file, opts, io)));

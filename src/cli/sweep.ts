@@ -13,10 +13,20 @@ import { addCommon, cautionsOf, tracedOverrides, type CommonOptions } from './se
 // The CSV writer loads only when a command writes it (start-up time: issue 10).
 const csv = () => import('../report/csv.js');
 
-interface SweepOptions extends CommonOptions { vary: string; output?: string }
+interface SweepOptions extends CommonOptions {
+  vary: string;
+  output?: string;
+}
 
 async function sweepCommand(file: string, opts: SweepOptions, io: Io): Promise<number> {
-  checkOutputPaths([{ option: '--output', path: opts.output }, { option: '--report', path: opts.report }], !!opts.force, [file]);
+  checkOutputPaths(
+    [
+      { option: '--output', path: opts.output },
+      { option: '--report', path: opts.report },
+    ],
+    !!opts.force,
+    [file],
+  );
   const { doc, overrides } = tracedOverrides(file, opts);
   const plan = planSweep(doc, opts.vary, overrides, '--vary');
   const kind = plan.kind;
@@ -28,8 +38,15 @@ async function sweepCommand(file: string, opts: SweepOptions, io: Io): Promise<n
     io.stdout(toJson(sweepResult(kind, plan.path, rows)) + '\n');
   } else {
     const columns = fieldColumns(kind.fields, system);
-    const text = (await csv()).toCsv([`${name} (${plan.system === 'us' ? 'in/lbf/psi' : 'mm/N/MPa'})`, 'feasible_combinations', ...columns, 'limiting_check'],
-      rows.map((r) => [r.value, r.run.result.feasibleCells, ...(r.best ? fieldRow(kind.fields, r.best, system) : columns.map((_, i) => (i === 0 ? 'none' : null))), r.limiting]));
+    const text = (await csv()).toCsv(
+      [`${name} (${plan.system === 'us' ? 'in/lbf/psi' : 'mm/N/MPa'})`, 'feasible_combinations', ...columns, 'limiting_check'],
+      rows.map((r) => [
+        r.value,
+        r.run.result.feasibleCells,
+        ...(r.best ? fieldRow(kind.fields, r.best, system) : columns.map((_, i) => (i === 0 ? 'none' : null))),
+        r.limiting,
+      ]),
+    );
     if (opts.output) {
       writeOutputFile(opts.output, text, !!opts.force, '--output');
       io.stderr(`coilfront: ${rows.length} runs of ${name} written to ${opts.output}\n`);
@@ -46,9 +63,12 @@ async function sweepCommand(file: string, opts: SweepOptions, io: Io): Promise<n
 }
 
 export function registerSweepCommand(program: Command, io: Io, setCode: (c: number) => void): void {
-  addCommon(program.command('sweep')
-    .description('re-run the design for each value of one requirement: what a tighter envelope costs')
-    .argument('<requirements-file>', 'YAML or JSON requirements file'))
+  addCommon(
+    program
+      .command('sweep')
+      .description('re-run the design for each value of one requirement: what a tighter envelope costs')
+      .argument('<requirements-file>', 'YAML or JSON requirements file'),
+  )
     .requiredOption('--vary <path=from:to:step>', 'the requirement to vary, e.g. envelope.max_outer_diameter=14:24:0.5')
     .option('-o, --output <file.csv>', 'write the CSV here instead of stdout')
     .option('--report <file.html>', 'also write a self-contained HTML report with the sweep plot')

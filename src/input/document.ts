@@ -31,7 +31,11 @@ export function decodeText(bytes: Uint8Array, label: string): string {
     throw new InputError(label, 'UTF-8 text (this file is UTF-16: save it as UTF-8)');
   }
   const nul = bytes.indexOf(0);
-  if (nul >= 0) throw new InputError(`${label} at line ${lineOfByte(bytes, nul)}`, 'UTF-8 text (the file holds a NUL byte: binary data, or UTF-16 without a byte-order mark?)');
+  if (nul >= 0)
+    throw new InputError(
+      `${label} at line ${lineOfByte(bytes, nul)}`,
+      'UTF-8 text (the file holds a NUL byte: binary data, or UTF-16 without a byte-order mark?)',
+    );
   try {
     const text = new TextDecoder('utf-8', { fatal: true }).decode(bytes);
     return text.charCodeAt(0) === 0xfeff ? text.slice(1) : text;
@@ -40,7 +44,13 @@ export function decodeText(bytes: Uint8Array, label: string): string {
     // Find the first byte the strict decoder chokes on, to give its line.
     for (let lo = 0, hi = bytes.length; lo < hi;) {
       const mid = (lo + hi) >> 1;
-      try { new TextDecoder('utf-8', { fatal: true }).decode(bytes.subarray(0, mid)); lo = mid + 1; bad = mid; } catch { hi = mid; }
+      try {
+        new TextDecoder('utf-8', { fatal: true }).decode(bytes.subarray(0, mid));
+        lo = mid + 1;
+        bad = mid;
+      } catch {
+        hi = mid;
+      }
     }
     throw new InputError(`${label} at line ${lineOfByte(bytes, bad)}`, 'UTF-8 text (invalid UTF-8 bytes: save the file as UTF-8)');
   }
@@ -66,7 +76,9 @@ export function parseText(text: string, label: string): unknown {
       try {
         const doc = parseDocument(text, { prettyErrors: false, lineCounter: lines, logLevel: 'error' });
         if (doc.errors.length) where = ` at line ${lines.linePos(doc.errors[0].pos[0]).line}`;
-      } catch { /* keep the message without a line */ }
+      } catch {
+        /* keep the message without a line */
+      }
       const offset = jsonErrorOffset((e as Error).message, text);
       if (offset !== undefined) where = ` at line ${lineOfOffset(text, offset)}`;
       throw new InputError(`${label}${where}`, 'well-formed JSON', firstLine((e as Error).message));
@@ -145,7 +157,10 @@ function duplicateField(doc: Document): string | undefined {
       const seen = new Set<string>();
       for (const pair of map.items) {
         const key = String(isScalar(pair.key) ? pair.key.value : pair.key);
-        if (seen.has(key)) { found = [...pathOf(ancestors), key].join('.'); return visit.BREAK; }
+        if (seen.has(key)) {
+          found = [...pathOf(ancestors), key].join('.');
+          return visit.BREAK;
+        }
         seen.add(key);
       }
       return undefined;
@@ -184,7 +199,8 @@ function checkTree(doc: Document, label: string, lineAt: (offset: number) => num
       return undefined;
     },
     Alias(_, node) {
-      if (!node.resolve(doc)) throw new InputError(`${label} at line ${lineAt(node.range?.[0] ?? 0)}`, `an alias to an anchor set before it (no &${node.source} above)`);
+      if (!node.resolve(doc))
+        throw new InputError(`${label} at line ${lineAt(node.range?.[0] ?? 0)}`, `an alias to an anchor set before it (no &${node.source} above)`);
       return undefined;
     },
     Collection(_, node, ancestors) {

@@ -62,7 +62,11 @@ export function applyStrengthBasis(choices: MaterialChoice[], basis: StrengthBas
     const min = m.minimumStrength;
     if (!min) {
       const having = (catalog?.materials ?? []).filter((x) => x.minimumStrength).map((x) => x.id);
-      throw new InputError(field, `"law" for ${m.id}, which has only its published law (strength_basis: minimum needs the tabulated minimum tensile strength of the wire's standard; the catalog holds one for ${having.length ? having.join(', ') : 'some materials'}: choose those materials, or keep the law)`, basis);
+      throw new InputError(
+        field,
+        `"law" for ${m.id}, which has only its published law (strength_basis: minimum needs the tabulated minimum tensile strength of the wire's standard; the catalog holds one for ${having.length ? having.join(', ') : 'some materials'}: choose those materials, or keep the law)`,
+        basis,
+      );
     }
     return { ...c, strengthBasis: 'minimum', material: { ...m, strength: min.law, minDiameter: min.minDiameter, maxDiameter: min.maxDiameter } };
   });

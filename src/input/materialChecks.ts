@@ -17,12 +17,19 @@ export function checkMaterialChoice(choice: MaterialChoice, field: string, syste
     const G = choice.shearModulus ?? moduli.shearModulus;
     if (!(E >= 2 * G && E <= 3 * G)) {
       const blame = choice.elasticModulus !== undefined ? 'elastic_modulus' : 'shear_modulus';
-      throw new InputError(`${field}.${blame}`, `moduli with E between 2G and 3G (Poisson's ratio 0 to 0.5); here E = ${formatQuantity(E, 'stress', system)} and G = ${formatQuantity(G, 'stress', system)}`);
+      throw new InputError(
+        `${field}.${blame}`,
+        `moduli with E between 2G and 3G (Poisson's ratio 0 to 0.5); here E = ${formatQuantity(E, 'stress', system)} and G = ${formatQuantity(G, 'stress', system)}`,
+      );
     }
     if (choice.allowableStress !== undefined) {
       const sut = choice.tensileStrength ?? tensileStrength(m, d);
       if (choice.tensileStrength !== undefined && choice.allowableStress >= sut) {
-        throw new InputError(`${field}.allowable_stress`, `a shear stress below the tensile strength ${formatQuantity(sut, 'stress', system)}`, formatQuantity(choice.allowableStress, 'stress', system));
+        throw new InputError(
+          `${field}.allowable_stress`,
+          `a shear stress below the tensile strength ${formatQuantity(sut, 'stress', system)}`,
+          formatQuantity(choice.allowableStress, 'stress', system),
+        );
       }
     }
   }

@@ -43,7 +43,7 @@ export interface WireSizes {
 export function readWireSizes(f: Fields, catalog: Catalog): WireSizes {
   const raw = f.get('wire_sizes');
   let sizes: WireSizes;
-  if (raw === undefined) sizes = { wireSizes: (m) => findSeries(catalog, m.material.wireSeries)!.diameters, label: 'each material\'s own series' };
+  if (raw === undefined) sizes = { wireSizes: (m) => findSeries(catalog, m.material.wireSeries)!.diameters, label: "each material's own series" };
   else if (typeof raw === 'string') {
     const series = findSeries(catalog, raw);
     if (!series) throw new InputError('wire_sizes', `a wire series (${catalog.series.map((s) => s.id).join(' | ')}) or a list of diameters`, raw);
@@ -62,23 +62,40 @@ export function checkWireSizes(f: Fields, materials: MaterialChoice[], { wireSiz
   const raw = f.get('wire_sizes');
   const system = f.system;
   const fits = (m: MaterialChoice, d: number) => m.tensileStrength !== undefined || inStrengthRange(m.material, d);
-  const ranges = () => materials.map((m) => `${m.material.id} ${formatQuantity(m.material.minDiameter, 'length', system, 3)} to ${formatQuantity(m.material.maxDiameter, 'length', system, 3)}`)
-    .filter((v, i, a) => a.indexOf(v) === i).slice(0, 6).join('; ');
+  const ranges = () =>
+    materials
+      .map(
+        (m) =>
+          `${m.material.id} ${formatQuantity(m.material.minDiameter, 'length', system, 3)} to ${formatQuantity(m.material.maxDiameter, 'length', system, 3)}`,
+      )
+      .filter((v, i, a) => a.indexOf(v) === i)
+      .slice(0, 6)
+      .join('; ');
   if (Array.isArray(raw)) {
     for (const d of wireSizes(materials[0])) {
       if (!materials.some((m) => fits(m, d))) {
-        const i = raw.findIndex((v) => { try { return parseQuantity(v, 'length', system, 'x') === d; } catch { return false; } });
+        const i = raw.findIndex((v) => {
+          try {
+            return parseQuantity(v, 'length', system, 'x') === d;
+          } catch {
+            return false;
+          }
+        });
         throw new InputError(`wire_sizes[${Math.max(0, i)}]`, `a diameter the chosen material is made in (${ranges()})`, raw[i]);
       }
     }
     return;
   }
   if (!materials.some((m) => wireSizes(m).some((d) => fits(m, d)))) {
-    throw new InputError('wire_sizes', `a series with sizes the chosen material is made in (${ranges()})`, raw ?? 'each material\'s own series');
+    throw new InputError('wire_sizes', `a series with sizes the chosen material is made in (${ranges()})`, raw ?? "each material's own series");
   }
 }
 
-export interface SafetyFactors { static: number; fatigue: number; surge: number }
+export interface SafetyFactors {
+  static: number;
+  fatigue: number;
+  surge: number;
+}
 
 /** `safety: { static, fatigue, surge }`, each defaulting to the kind's own; never below 1 (LIMITS.safetyMin). */
 export function readSafety(f: Fields, defaults: SafetyFactors): SafetyFactors {

@@ -6,10 +6,7 @@ import { compression } from './compression/index.js';
 import { extension } from './extension/index.js';
 import type { AnySpringKind } from './kind.js';
 
-export const KINDS: readonly AnySpringKind[] = [
-  compression,
-  extension,
-];
+export const KINDS: readonly AnySpringKind[] = [compression, extension];
 
 export const DEFAULT_KIND = 'compression';
 
@@ -19,7 +16,8 @@ export function kindById(id: string): AnySpringKind | undefined {
 
 /** The kind a raw document asks for; a bad `kind` value is refused naming the field. */
 export function kindOf(raw: unknown): AnySpringKind {
-  const given = typeof raw === 'object' && raw !== null && !Array.isArray(raw) && Object.hasOwn(raw, 'kind') ? (raw as Record<string, unknown>).kind : undefined;
+  const given =
+    typeof raw === 'object' && raw !== null && !Array.isArray(raw) && Object.hasOwn(raw, 'kind') ? (raw as Record<string, unknown>).kind : undefined;
   const id = given ?? DEFAULT_KIND;
   const kind = typeof id === 'string' ? kindById(id) : undefined;
   if (!kind) throw new InputError('kind', `one of ${KINDS.map((k) => k.id).join(' | ')} (default ${DEFAULT_KIND})`, given);

@@ -67,7 +67,9 @@ export interface KindProblem<Req, Cand> extends Problem {
 }
 
 /** What every designed spring carries: its objective vector, f[1 + i] for objective i (times its sign). */
-export interface KindCandidate { readonly objectives: Float64Array }
+export interface KindCandidate {
+  readonly objectives: Float64Array;
+}
 
 /** What every design run holds, whatever the kind: its requirements, the engine's result (counts, cuts)
  * and the springs it lists, best first. */
@@ -92,7 +94,10 @@ export interface KindFrontier<Run = unknown, Cand = unknown> {
 }
 
 /** A sweep as its report draws it: the varied requirement and the best spring at each value. */
-export interface SweepSummary<Cand = unknown> { name: string; rows: { value: number; best: Cand | null }[] }
+export interface SweepSummary<Cand = unknown> {
+  name: string;
+  rows: { value: number; best: Cand | null }[];
+}
 
 /** How a kind's results are shown. HTML renderers may be loaded lazily (start-up time). */
 export interface KindReport<Case, Analysis, Req, Run, Cand = unknown, Front = KindFrontier<Run, Cand>> {
@@ -138,7 +143,9 @@ export interface DesignRequest extends SearchRequest {
 }
 
 /** Spring cases and requirements say which unit system their file was written in (the default of output). */
-export interface InUnits { readonly system: UnitSystem }
+export interface InUnits {
+  readonly system: UnitSystem;
+}
 
 export interface SpringKind<
   Case extends InUnits = InUnits,
@@ -202,6 +209,8 @@ export function frontierAxes(kind: Pick<AnySpringKind, 'objectives'>): string[] 
  * (a property load V8 folds to a constant), never a Map lookup. */
 export function indexOf<const N extends string>(names: readonly N[]): { readonly [K in N]: number } {
   const out = {} as { [K in N]: number };
-  names.forEach((n, i) => { out[n] = i; });
+  names.forEach((n, i) => {
+    out[n] = i;
+  });
   return Object.freeze(out);
 }

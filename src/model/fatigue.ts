@@ -33,9 +33,15 @@ export type FatigueCriterion = 'gerber' | 'goodman' | 'sines';
 export const FATIGUE_CRITERIA: readonly FatigueCriterion[] = ['gerber', 'goodman', 'sines'];
 
 /** Repeated-stress fractions of Sut at 1e5, 1e6, 1e7 cycles, unpeened and peened. */
-export interface FiniteLifeTable { unpeened: readonly [number, number, number]; peened: readonly [number, number, number] }
+export interface FiniteLifeTable {
+  unpeened: readonly [number, number, number];
+  peened: readonly [number, number, number];
+}
 
-export interface EndurancePoint { alternating: number; mean: number }
+export interface EndurancePoint {
+  alternating: number;
+  mean: number;
+}
 
 export const ZIMMERLI_UNPEENED: EndurancePoint = { alternating: 241, mean: 379 };
 export const ZIMMERLI_PEENED: EndurancePoint = { alternating: 398, mean: 534 };
@@ -89,7 +95,15 @@ export interface LifeCurvePoint {
  * The life curve of one material at one wire size (see the file comment): S_sr at `cycles` (1e4 and
  * up; Infinity is infinite life). `ultimateShear` is Ssu = 0.67 Sut.
  */
-export function lifeCurve(cycles: number, peened: boolean, zimmerli: boolean, table: FiniteLifeTable, tensileStrength: number, ultimateShear: number, criterion: FatigueCriterion): LifeCurvePoint {
+export function lifeCurve(
+  cycles: number,
+  peened: boolean,
+  zimmerli: boolean,
+  table: FiniteLifeTable,
+  tensileStrength: number,
+  ultimateShear: number,
+  criterion: FatigueCriterion,
+): LifeCurvePoint {
   const f = peened ? table.peened : table.unpeened;
   const t6 = f[1] * tensileStrength;
   const t7 = f[2] * tensileStrength;
@@ -166,13 +180,27 @@ export function fatigueSafetyFactor(alternating: number, mean: number, point: En
 }
 
 /** The same with the fully reversed endurance Sse given. */
-export function fatigueSafetyFactorFrom(alternating: number, mean: number, point: EndurancePoint, ultimateShear: number, sse: number, criterion: FatigueCriterion): number {
+export function fatigueSafetyFactorFrom(
+  alternating: number,
+  mean: number,
+  point: EndurancePoint,
+  ultimateShear: number,
+  sse: number,
+  criterion: FatigueCriterion,
+): number {
   if (!(alternating > 0)) return NaN;
   const slope = mean > 0 ? alternating / mean : Infinity;
   return alternatingStrengthFrom(slope, point, ultimateShear, sse, criterion) / alternating;
 }
 
 /** The endurance point for a service life: the life curve at `cycles` (Infinity for infinite life). */
-export function endurancePoint(cycles: number, peened: boolean, zimmerli: boolean, table: FiniteLifeTable, tensileStrength: number, criterion: FatigueCriterion): LifeCurvePoint {
+export function endurancePoint(
+  cycles: number,
+  peened: boolean,
+  zimmerli: boolean,
+  table: FiniteLifeTable,
+  tensileStrength: number,
+  criterion: FatigueCriterion,
+): LifeCurvePoint {
   return lifeCurve(cycles, peened, zimmerli, table, tensileStrength, ultimateShearStrength(tensileStrength), criterion);
 }

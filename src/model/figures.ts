@@ -17,4 +17,7 @@ export interface MaterialFigures {
 }
 
 /** A rule of thumb an analysis flags (a code for machines, a sentence for people). */
-export interface Warning { code: string; message: string }
+export interface Warning {
+  code: string;
+  message: string;
+}

@@ -19,8 +19,16 @@ export function sanitize(value: unknown): unknown {
 }
 
 export const SI_UNITS = {
-  length: 'mm', force: 'N', rate: 'N/mm', stress: 'MPa', mass: 'kg', density: 'kg/m^3',
-  frequency: 'Hz', temperature: 'degC', volume: 'mm^3', angle: 'deg',
+  length: 'mm',
+  force: 'N',
+  rate: 'N/mm',
+  stress: 'MPa',
+  mass: 'kg',
+  density: 'kg/m^3',
+  frequency: 'Hz',
+  temperature: 'degC',
+  volume: 'mm^3',
+  angle: 'deg',
 } as const;
 
 export function toJson(value: unknown): string {

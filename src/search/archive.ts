@@ -6,7 +6,11 @@ export class TopK {
   readonly xs: Float64Array;
   readonly fs: Float64Array;
   size = 0;
-  constructor(readonly k: number, readonly nx: number, readonly nf: number) {
+  constructor(
+    readonly k: number,
+    readonly nx: number,
+    readonly nf: number,
+  ) {
     this.xs = new Float64Array(k * nx);
     this.fs = new Float64Array(k * nf);
   }
@@ -31,8 +35,12 @@ export class TopK {
     return true;
   }
 
-  x(i: number): Float64Array { return this.xs.subarray(i * this.nx, (i + 1) * this.nx); }
-  f(i: number): Float64Array { return this.fs.subarray(i * this.nf, (i + 1) * this.nf); }
+  x(i: number): Float64Array {
+    return this.xs.subarray(i * this.nx, (i + 1) * this.nx);
+  }
+  f(i: number): Float64Array {
+    return this.fs.subarray(i * this.nf, (i + 1) * this.nf);
+  }
 }
 
 /** Every offered point, in a buffer that doubles when full. */
@@ -40,7 +48,11 @@ export class PointBuffer {
   xs: Float64Array;
   fs: Float64Array;
   size = 0;
-  constructor(readonly nx: number, readonly nf: number, capacity = 1024) {
+  constructor(
+    readonly nx: number,
+    readonly nf: number,
+    capacity = 1024,
+  ) {
     this.xs = new Float64Array(capacity * nx);
     this.fs = new Float64Array(capacity * nf);
   }
@@ -59,6 +71,10 @@ export class PointBuffer {
     this.size++;
   }
 
-  x(i: number): Float64Array { return this.xs.subarray(i * this.nx, (i + 1) * this.nx); }
-  f(i: number): Float64Array { return this.fs.subarray(i * this.nf, (i + 1) * this.nf); }
+  x(i: number): Float64Array {
+    return this.xs.subarray(i * this.nx, (i + 1) * this.nx);
+  }
+  f(i: number): Float64Array {
+    return this.fs.subarray(i * this.nf, (i + 1) * this.nf);
+  }
 }

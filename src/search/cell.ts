@@ -90,13 +90,32 @@ export function makeWorkspace(p: Problem, relativeTolerance = 1e-10, stats: RunS
     else if (t === TREND.decreasing) decMask[j] = 1;
   }
   return {
-    g: new Float64Array(m), f: new Float64Array(p.objectiveNames.length), bounds: new Float64Array(2),
+    g: new Float64Array(m),
+    f: new Float64Array(p.objectiveNames.length),
+    bounds: new Float64Array(2),
     stats,
-    missX: new Float64Array(p.variables.length), missG: new Float64Array(m), missF: new Float64Array(p.objectiveNames.length), missViolation: Infinity,
-    incMask, decMask, relativeTolerance, maxScanPoints: Infinity, scanCoarsening: 1, worstInc: -Infinity, worstDec: -Infinity,
-    lower: new Float64Array(m), narrowing: true,
-    badValue: NaN, badObjective: NaN, lastAtGood: false, lastTotal: NaN, pruneF: new Float64Array(p.objectiveNames.length), prunedAtLowest: false, stop: false,
-    cap: Infinity, replay: false,
+    missX: new Float64Array(p.variables.length),
+    missG: new Float64Array(m),
+    missF: new Float64Array(p.objectiveNames.length),
+    missViolation: Infinity,
+    incMask,
+    decMask,
+    relativeTolerance,
+    maxScanPoints: Infinity,
+    scanCoarsening: 1,
+    worstInc: -Infinity,
+    worstDec: -Infinity,
+    lower: new Float64Array(m),
+    narrowing: true,
+    badValue: NaN,
+    badObjective: NaN,
+    lastAtGood: false,
+    lastTotal: NaN,
+    pruneF: new Float64Array(p.objectiveNames.length),
+    prunedAtLowest: false,
+    stop: false,
+    cap: Infinity,
+    replay: false,
   };
 }
 
@@ -113,8 +132,14 @@ function evaluateAt(p: Problem, x: Float64Array, ws: CellWorkspace): number {
   let wDec = -Infinity;
   for (let j = 0; j < g.length; j++) {
     const v = g[j];
-    if (v > 0) { total += v; count++; sole = j; }
-    if (inc[j] === 1) { if (v > wInc) wInc = v; } else if (ws.decMask[j] === 1 && v > wDec) wDec = v;
+    if (v > 0) {
+      total += v;
+      count++;
+      sole = j;
+    }
+    if (inc[j] === 1) {
+      if (v > wInc) wInc = v;
+    } else if (ws.decMask[j] === 1 && v > wDec) wDec = v;
   }
   ws.worstInc = wInc;
   ws.worstDec = wDec;
@@ -127,7 +152,6 @@ function evaluateAt(p: Problem, x: Float64Array, ws: CellWorkspace): number {
   }
   return total;
 }
-
 
 function attributeCut(ws: CellWorkspace, g: Float64Array): void {
   let jw = 0;
@@ -152,8 +176,12 @@ function boundary(p: Problem, s: number, x: Float64Array, ws: CellWorkspace, a: 
     const total = evaluateAt(p, x, ws);
     const w = mask === ws.incMask ? ws.worstInc : ws.worstDec;
     const bad = w > 0;
-    if (bad === badBelow) a = m; else b = m;
-    if (bad) { badValue = w; badObjective = ws.f[0]; }
+    if (bad === badBelow) a = m;
+    else b = m;
+    if (bad) {
+      badValue = w;
+      badObjective = ws.f[0];
+    }
     ws.lastAtGood = !bad;
     ws.lastTotal = total;
   }
@@ -184,8 +212,15 @@ function decBisection(p: Problem, s: number, x: Float64Array, ws: CellWorkspace,
   while (width > tol) width *= 0.5;
   const delta = 0.125 * width;
   const q = gap;
-  q.ra = a; q.va = fa; q.rb = b; q.vb = fb;
-  q.raValue = NaN; q.raObjective = NaN; q.lastAt = NaN; q.lastGood = false; q.lastTotal = NaN;
+  q.ra = a;
+  q.va = fa;
+  q.rb = b;
+  q.vb = fb;
+  q.raValue = NaN;
+  q.raObjective = NaN;
+  q.lastAt = NaN;
+  q.lastGood = false;
+  q.lastTotal = NaN;
   let side = 0;
   let wait = 0;
   let backoff = 2;
@@ -193,8 +228,14 @@ function decBisection(p: Problem, s: number, x: Float64Array, ws: CellWorkspace,
   let hi = b;
   while (hi - lo > tol) {
     const m = 0.5 * (lo + hi);
-    if (m <= q.ra) { lo = m; continue; }
-    if (m >= q.rb) { hi = m; continue; }
+    if (m <= q.ra) {
+      lo = m;
+      continue;
+    }
+    if (m >= q.rb) {
+      hi = m;
+      continue;
+    }
     if (wait === 0 && q.rb - q.ra > 2 * delta) {
       let r = q.va > 0 && q.vb <= 0 ? q.rb - (q.vb * (q.rb - q.ra)) / (q.vb - q.va) : m;
       r -= side * delta;
@@ -203,14 +244,21 @@ function decBisection(p: Problem, s: number, x: Float64Array, ws: CellWorkspace,
         probeGap(p, s, x, ws, r);
         const now = q.lastGood ? 1 : -1;
         // Illinois: an end that stays put twice has its value halved, so that the next estimate moves it.
-        if (now === side) { if (now === 1) q.va *= 0.5; else q.vb *= 0.5; }
+        if (now === side) {
+          if (now === 1) q.va *= 0.5;
+          else q.vb *= 0.5;
+        }
         side = now;
-        if (q.rb - q.ra > 0.5 * before) { wait = backoff; backoff *= 2; } else backoff = 2;
+        if (q.rb - q.ra > 0.5 * before) {
+          wait = backoff;
+          backoff *= 2;
+        } else backoff = 2;
         continue;
       }
     }
     probeGap(p, s, x, ws, m);
-    if (q.lastGood) hi = m; else lo = m;
+    if (q.lastGood) hi = m;
+    else lo = m;
     if (wait > 0) wait--;
   }
   ws.bounds[0] = q.ra;
@@ -234,7 +282,15 @@ function probeGap(p: Problem, s: number, x: Float64Array, ws: CellWorkspace, m: 
   q.lastAt = m;
   const v = ws.worstDec;
   q.lastGood = !(v > 0);
-  if (q.lastGood) { q.rb = m; q.vb = v; } else { q.ra = m; q.va = v; q.raValue = v; q.raObjective = ws.f[0]; }
+  if (q.lastGood) {
+    q.rb = m;
+    q.vb = v;
+  } else {
+    q.ra = m;
+    q.va = v;
+    q.raValue = v;
+    q.raObjective = ws.f[0];
+  }
 }
 
 /**
@@ -260,12 +316,14 @@ function decBoundary(p: Problem, s: number, x: Float64Array, ws: CellWorkspace, 
     ws.lastTotal = evaluateAt(p, x, ws);
     const v = ws.worstDec;
     if (v > 0) {
-      a = m; fa = v;
+      a = m;
+      fa = v;
       if (side === -1) fb *= 0.5;
       side = -1;
       ws.lastAtGood = false;
     } else {
-      b = m; fb = v;
+      b = m;
+      fb = v;
       if (side === 1) fa *= 0.5;
       side = 1;
       ws.lastAtGood = true;
@@ -370,14 +428,26 @@ function firstFeasible(p: Problem, s: number, x: Float64Array, ws: CellWorkspace
     x[s] = grid.at(k);
     if (evaluateAt(p, x, ws) === 0) return k;
     // An increasing check that fails here fails at every later point.
-    if (ws.worstInc > 0) { ws.stop = true; return -1; }
+    if (ws.worstInc > 0) {
+      ws.stop = true;
+      return -1;
+    }
   }
   return -1;
 }
 
 /** Visit every feasible scan point in [ka, kb] in increasing order; true when any was found. */
-function everyFeasible(p: Problem, s: number, x: Float64Array, ws: CellWorkspace, grid: ScanGrid, ka: number, kb: number, checked: boolean,
-  visit: ((x: Float64Array, f: Float64Array, g: Float64Array) => void) | null): boolean {
+function everyFeasible(
+  p: Problem,
+  s: number,
+  x: Float64Array,
+  ws: CellWorkspace,
+  grid: ScanGrid,
+  ka: number,
+  kb: number,
+  checked: boolean,
+  visit: ((x: Float64Array, f: Float64Array, g: Float64Array) => void) | null,
+): boolean {
   if (kb - ka + 1 > LEAF_POINTS && p.bracketBounds && ws.narrowing) {
     if (!checked && excluded(p, x, grid.at(ka), grid.at(kb), ws)) return false;
     const mid = (ka + kb) >>> 1;
@@ -409,7 +479,10 @@ export function evaluateFixed(p: Problem, x: Float64Array, ws: CellWorkspace): b
   return infeasibleCell(ws);
 }
 
-export const enum CellMode { First = 0, All = 1 }
+export const enum CellMode {
+  First = 0,
+  All = 1,
+}
 
 /**
  * Solve one cell. x holds the cell's fixed values; on return with `true`, x[s] holds the first
@@ -418,7 +491,11 @@ export const enum CellMode { First = 0, All = 1 }
  * `prune(f)`: return true to abandon the cell when the objective at its lowest bound shows it cannot win.
  */
 export function solveCell(
-  p: Problem, s: number, x: Float64Array, ws: CellWorkspace, mode: CellMode,
+  p: Problem,
+  s: number,
+  x: Float64Array,
+  ws: CellWorkspace,
+  mode: CellMode,
   visit: ((x: Float64Array, f: Float64Array, g: Float64Array) => void) | null,
   prune: ((f: Float64Array) => boolean) | null,
 ): boolean | 'pruned' {
@@ -427,7 +504,8 @@ export function solveCell(
   let lo = v.min;
   let hi = v.max;
   if (p.solvedBounds) {
-    ws.bounds[0] = lo; ws.bounds[1] = hi;
+    ws.bounds[0] = lo;
+    ws.bounds[1] = hi;
     p.solvedBounds(x, ws.bounds);
     lo = Math.max(lo, ws.bounds[0]);
     hi = Math.min(hi, ws.bounds[1]);
@@ -503,7 +581,7 @@ export function solveCell(
     // since the scan stops at the first point where one fails (all later points fail it too).
     if (loBad === loBad) {
       // The bracket's last evaluation may have been at lo itself (x, ws are still there).
-      const total = ws.lastAtGood ? ws.lastTotal : (x[s] = lo, evaluateAt(p, x, ws));
+      const total = ws.lastAtGood ? ws.lastTotal : ((x[s] = lo), evaluateAt(p, x, ws));
       if (total === 0) {
         refineLow(p, s, x, ws, loBad, loBadValue, lo, tol);
         return true;

@@ -29,10 +29,14 @@ export interface GeneticOptions {
   searchTolerance?: number;
   /** Scan step while searching, in multiples of the solved variable's resolution (default 4 with discrete genes only). */
   scanCoarsening?: number;
-
 }
 
-interface Individual { genes: Float64Array; f: number; violation: number; x: Float64Array }
+interface Individual {
+  genes: Float64Array;
+  f: number;
+  violation: number;
+  x: Float64Array;
+}
 
 function better(a: Individual, b: Individual): boolean {
   if (a.violation === 0 && b.violation === 0) return a.f < b.f;
@@ -72,7 +76,10 @@ export function geneticSearch(p: Problem, opts: GeneticOptions): SearchResult {
   const cellBest = { f: Infinity, x: new Float64Array(n) };
   const visitAll = (px: Float64Array, f: Float64Array) => {
     top.offer(px, f);
-    if (f[0] < cellBest.f) { cellBest.f = f[0]; cellBest.x.set(px); }
+    if (f[0] < cellBest.f) {
+      cellBest.f = f[0];
+      cellBest.x.set(px);
+    }
   };
 
   let bestFeasible = Infinity;
@@ -102,7 +109,13 @@ export function geneticSearch(p: Problem, opts: GeneticOptions): SearchResult {
         f = cw.pruneF[0];
       } else if (r === true) {
         counts.feasible++;
-        if (increasing) { f = cw.f[0]; top.offer(x, cw.f); } else { f = cellBest.f; x.set(cellBest.x); }
+        if (increasing) {
+          f = cw.f[0];
+          top.offer(x, cw.f);
+        } else {
+          f = cellBest.f;
+          x.set(cellBest.x);
+        }
       } else {
         violation = cw.missViolation;
         misses.offer(cw.missX, cw.missG, cw.missF, cw.missViolation);
@@ -117,7 +130,10 @@ export function geneticSearch(p: Problem, opts: GeneticOptions): SearchResult {
       misses.offer(cw.missX, cw.missG, cw.missF, cw.missViolation);
     }
     if (violation === 0 && f < bestFeasible && top.size > 0) bestFeasible = top.f(0)[0];
-    if (violation === 0 && f < incumbent) { incumbent = f; foundAt = spent(); }
+    if (violation === 0 && f < incumbent) {
+      incumbent = f;
+      foundAt = spent();
+    }
     const ind = { genes, f, violation, x: Float64Array.from(x) };
     if (k >= 0) cm.set(k, { f, violation, x: ind.x });
     return ind;
@@ -133,8 +149,14 @@ export function geneticSearch(p: Problem, opts: GeneticOptions): SearchResult {
   // The run ends early on a proven bound, or when it has gone stallEvaluations without a better
   // incumbent (a run that has found nothing feasible keeps looking until its budget is spent).
   const halted = (): boolean => {
-    if (proven(best)) { stoppedBy = 'bound'; return true; }
-    if (incumbent < Infinity && spent() - foundAt >= until.stallEvaluations) { stoppedBy = 'stall'; return true; }
+    if (proven(best)) {
+      stoppedBy = 'bound';
+      return true;
+    }
+    if (incumbent < Infinity && spent() - foundAt >= until.stallEvaluations) {
+      stoppedBy = 'stall';
+      return true;
+    }
     return false;
   };
 
@@ -160,7 +182,12 @@ export function geneticSearch(p: Problem, opts: GeneticOptions): SearchResult {
         if (j >= 0) g[j] += dj;
         if (g[i] < 0 || g[i] >= sizes[i] || (j >= 0 && (g[j] < 0 || g[j] >= sizes[j]))) continue;
         const cand = assess(g);
-        if (better(cand, here)) { here = cand; last = m; improved = true; break; }
+        if (better(cand, here)) {
+          here = cand;
+          last = m;
+          improved = true;
+          break;
+        }
       }
     }
     return here;
@@ -208,7 +235,10 @@ export function geneticSearch(p: Problem, opts: GeneticOptions): SearchResult {
       }
       pop = next;
       const genBest = pop.reduce((a, b) => (better(b, a) ? b : a));
-      if (better(genBest, best)) { best = genBest; sinceBetter = 0; } else sinceBetter++;
+      if (better(genBest, best)) {
+        best = genBest;
+        sinceBetter = 0;
+      } else sinceBetter++;
     }
     if (fineClimb) {
       cw = fineWs;
@@ -218,7 +248,10 @@ export function geneticSearch(p: Problem, opts: GeneticOptions): SearchResult {
     } else best = hillClimb(best, budget);
     // A whole round that met no combination it had not seen means the space is exhausted.
     if (halted()) break;
-    if (counts.cells === cellsBefore) { stoppedBy = 'exhausted'; break; }
+    if (counts.cells === cellsBefore) {
+      stoppedBy = 'exhausted';
+      break;
+    }
     pop = [best];
     cw = ws;
     cm = memo;

@@ -22,7 +22,17 @@ export interface FrontOptions {
   termination?: Termination;
 }
 
-interface Member { genes: Float64Array; feasible: boolean; violation: number; a: number; b: number; x: Float64Array; f: Float64Array; rank: number; crowd: number }
+interface Member {
+  genes: Float64Array;
+  feasible: boolean;
+  violation: number;
+  a: number;
+  b: number;
+  x: Float64Array;
+  f: Float64Array;
+  rank: number;
+  crowd: number;
+}
 
 /** Constraint-domination of p over q on objectives (a, b). */
 function dominatesMember(p: Member, q: Member): boolean {
@@ -83,9 +93,20 @@ export function geneticFront(p: Problem, opts: FrontOptions): SearchResult {
     const r = solveCell(p, s, x, ws, CellMode.First, null, null);
     if (r === true) feasibleCells++;
     else misses.offer(ws.missX, ws.missG, ws.missF, ws.missViolation);
-    const m: Member = r === true
-      ? { genes, feasible: true, violation: 0, a: ws.f[ia], b: ws.f[ib], x: Float64Array.from(x), f: Float64Array.from(ws.f), rank: 0, crowd: 0 }
-      : { genes, feasible: false, violation: ws.missViolation, a: Infinity, b: Infinity, x: Float64Array.from(ws.missX), f: Float64Array.from(ws.missF), rank: 0, crowd: 0 };
+    const m: Member =
+      r === true
+        ? { genes, feasible: true, violation: 0, a: ws.f[ia], b: ws.f[ib], x: Float64Array.from(x), f: Float64Array.from(ws.f), rank: 0, crowd: 0 }
+        : {
+            genes,
+            feasible: false,
+            violation: ws.missViolation,
+            a: Infinity,
+            b: Infinity,
+            x: Float64Array.from(ws.missX),
+            f: Float64Array.from(ws.missF),
+            rank: 0,
+            crowd: 0,
+          };
     memo.set(key, m);
     return m;
   };

@@ -37,8 +37,18 @@ export interface GridOptions {
   onProgress?: (done: number, total: number) => void;
 }
 
-function gridPass(p: Problem, vars: readonly Variable[], s: number, opts: GridOptions, top: TopK, cloud: PointBuffer | null,
-  misses: NearestMisses, ws: ReturnType<typeof makeWorkspace>, counts: GridCounts, groups: TopK[] | null = null): void {
+function gridPass(
+  p: Problem,
+  vars: readonly Variable[],
+  s: number,
+  opts: GridOptions,
+  top: TopK,
+  cloud: PointBuffer | null,
+  misses: NearestMisses,
+  ws: ReturnType<typeof makeWorkspace>,
+  counts: GridCounts,
+  groups: TopK[] | null = null,
+): void {
   const n = vars.length;
   const sizes = new Int32Array(n);
   const idx = new Int32Array(n);
@@ -56,7 +66,11 @@ function gridPass(p: Problem, vars: readonly Variable[], s: number, opts: GridOp
   const cellF = new Float64Array(p.objectiveNames.length);
   let cellBest = Infinity;
   const visit = (px: Float64Array, f: Float64Array) => {
-    if (f[0] < cellBest) { cellBest = f[0]; cellX.set(px); cellF.set(f); }
+    if (f[0] < cellBest) {
+      cellBest = f[0];
+      cellX.set(px);
+      cellF.set(f);
+    }
     if (cloud) cloud.push(px, f);
   };
   const group = opts.bestPerValueOf ?? -1;
@@ -80,7 +94,10 @@ function gridPass(p: Problem, vars: readonly Variable[], s: number, opts: GridOp
         const j = p.branchInfeasible!(x, depth);
         if (j < 0) continue;
         let size = 1;
-        for (let i = depth; i < n; i++) { size *= sizes[i]; idx[i] = sizes[i] - 1; }
+        for (let i = depth; i < n; i++) {
+          size *= sizes[i];
+          idx[i] = sizes[i] - 1;
+        }
         ws.stats.cutBy[j] += size;
         counts.cells += size;
         counts.branchCut += size;
@@ -100,34 +117,37 @@ function gridPass(p: Problem, vars: readonly Variable[], s: number, opts: GridOp
       }
     }
     if (!skip) {
-    counts.cells++;
-    cellBest = Infinity;
-    ws.cap = prune !== null ? sink().threshold() : Infinity;
-    const r = s >= 0 ? solveCell(p, s, x, ws, mode, visit, prune) : evaluateFixed(p, x, ws);
-    if (r === 'pruned') {
-      counts.pruned++;
-      if (branchPrune && ws.prunedAtLowest) {
-        const rest = sizes[innermost] - 1 - idx[innermost];
-        counts.cells += rest;
-        counts.pruned += rest;
-        done += rest;
-        idx[innermost] = sizes[innermost] - 1;
+      counts.cells++;
+      cellBest = Infinity;
+      ws.cap = prune !== null ? sink().threshold() : Infinity;
+      const r = s >= 0 ? solveCell(p, s, x, ws, mode, visit, prune) : evaluateFixed(p, x, ws);
+      if (r === 'pruned') {
+        counts.pruned++;
+        if (branchPrune && ws.prunedAtLowest) {
+          const rest = sizes[innermost] - 1 - idx[innermost];
+          counts.cells += rest;
+          counts.pruned += rest;
+          done += rest;
+          idx[innermost] = sizes[innermost] - 1;
+        }
+      } else if (r) {
+        counts.feasible++;
+        if (mode === CellMode.First) visit(x, ws.f);
+        if (cellBest < Infinity) sink().offer(cellX, cellF);
+        else sink().offer(x, ws.f);
+      } else if (ws.missViolation < misses.threshold()) {
+        misses.offer(ws.missX, ws.missG, ws.missF, ws.missViolation);
       }
-    } else if (r) {
-      counts.feasible++;
-      if (mode === CellMode.First) visit(x, ws.f);
-      if (cellBest < Infinity) sink().offer(cellX, cellF);
-      else sink().offer(x, ws.f);
-    } else if (ws.missViolation < misses.threshold()) {
-      misses.offer(ws.missX, ws.missG, ws.missF, ws.missViolation);
-    }
-    if (opts.onProgress && done % progressEvery === 0) opts.onProgress(done, total);
+      if (opts.onProgress && done % progressEvery === 0) opts.onProgress(done, total);
     }
     // Odometer step over the non-solved variables, last variable fastest.
     for (let i = n - 1; i >= 0; i--) {
       if (i === s) continue;
       changed = i;
-      if (++idx[i] < sizes[i]) { x[i] = valueAt(vars[i], idx[i]); break; }
+      if (++idx[i] < sizes[i]) {
+        x[i] = valueAt(vars[i], idx[i]);
+        break;
+      }
       idx[i] = 0;
       x[i] = valueAt(vars[i], 0);
     }
@@ -158,7 +178,10 @@ function ruleOutEnds(p: Problem, x: Float64Array, v: number, size: number, ruled
     while (bad - head > 1) {
       const mid = (head + bad) >>> 1;
       const j = hint(x, v, 0, mid);
-      if (j >= 0) { head = mid; first = j; } else bad = mid;
+      if (j >= 0) {
+        head = mid;
+        first = j;
+      } else bad = mid;
     }
     ruled.fill(first, 0, head + 1);
   }
@@ -170,12 +193,20 @@ function ruleOutEnds(p: Problem, x: Float64Array, v: number, size: number, ruled
   while (tail - bad > 1) {
     const mid = (bad + tail + 1) >>> 1;
     const j = hint(x, v, mid, size - 1);
-    if (j >= 0) { tail = mid; last = j; } else bad = mid;
+    if (j >= 0) {
+      tail = mid;
+      last = j;
+    } else bad = mid;
   }
   ruled.fill(last, tail, size);
 }
 
-export interface GridCounts { cells: number; feasible: number; pruned: number; branchCut: number }
+export interface GridCounts {
+  cells: number;
+  feasible: number;
+  pruned: number;
+  branchCut: number;
+}
 
 export function gridSearch(p: Problem, opts: GridOptions): SearchResult {
   const s = solvedIndex(p);
@@ -201,7 +232,10 @@ export function gridSearch(p: Problem, opts: GridOptions): SearchResult {
     ws.narrowing = false;
     ws.replay = false;
     ws.cap = Infinity;
-    counts.cells = 0; counts.feasible = 0; counts.pruned = 0; counts.branchCut = 0;
+    counts.cells = 0;
+    counts.feasible = 0;
+    counts.pruned = 0;
+    counts.branchCut = 0;
     result = new NearestMisses(5);
     gridPass(p, p.variables, s, opts, top, cloud, result, ws, counts, groups);
   }

@@ -8,14 +8,21 @@ import type { Model, SolverAPI } from 'javascript-lp-solver';
 // The package is CommonJS: under Node's ESM loader its default import is module.exports, the solver.
 const solver = lpModule as unknown as SolverAPI;
 
-export interface LinearRow<V extends string> { coefficients: Partial<Record<V, number>>; min?: number; max?: number }
+export interface LinearRow<V extends string> {
+  coefficients: Partial<Record<V, number>>;
+  min?: number;
+  max?: number;
+}
 
 export type LpOutcome<V extends string> =
-  | { status: 'optimal'; objective: number; values: Record<V, number> }
-  | { status: 'infeasible' }
-  | { status: 'unbounded' };
+  { status: 'optimal'; objective: number; values: Record<V, number> } | { status: 'infeasible' } | { status: 'unbounded' };
 
-export function minimiseLinear<V extends string>(variables: readonly V[], objective: Partial<Record<V, number>>, rows: LinearRow<V>[], timeoutMs = 2000): LpOutcome<V> {
+export function minimiseLinear<V extends string>(
+  variables: readonly V[],
+  objective: Partial<Record<V, number>>,
+  rows: LinearRow<V>[],
+  timeoutMs = 2000,
+): LpOutcome<V> {
   const constraints: Model['constraints'] = {};
   const vars: Model['variables'] = {};
   const unrestricted: Record<string, boolean> = {};

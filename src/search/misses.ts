@@ -1,6 +1,11 @@
 // The few infeasible points closest to feasibility, kept for the "nothing is feasible" report.
 /** An infeasible point, its checks, objectives and total violation. */
-export interface Miss { x: Float64Array; g: Float64Array; f: Float64Array; violation: number }
+export interface Miss {
+  x: Float64Array;
+  g: Float64Array;
+  f: Float64Array;
+  violation: number;
+}
 
 /** The `capacity` least-violation points offered, least first (a later point goes after an earlier
  * one of the same violation). Held in preallocated rows, so that offering a point allocates nothing:
@@ -25,7 +30,9 @@ export class NearestMisses {
   offer(x: Float64Array, g: Float64Array, f: Float64Array, violation: number): void {
     if (!(violation < this.threshold())) return;
     if (this.nx < 0) {
-      this.nx = x.length; this.ng = g.length; this.nf = f.length;
+      this.nx = x.length;
+      this.ng = g.length;
+      this.nf = f.length;
       this.xs = new Float64Array(this.capacity * this.nx);
       this.gs = new Float64Array(this.capacity * this.ng);
       this.fs = new Float64Array(this.capacity * this.nf);
@@ -49,8 +56,10 @@ export class NearestMisses {
     const out: Miss[] = [];
     for (let i = 0; i < this.size; i++) {
       out.push({
-        x: this.xs.slice(i * this.nx, (i + 1) * this.nx), g: this.gs.slice(i * this.ng, (i + 1) * this.ng),
-        f: this.fs.slice(i * this.nf, (i + 1) * this.nf), violation: this.violations[i],
+        x: this.xs.slice(i * this.nx, (i + 1) * this.nx),
+        g: this.gs.slice(i * this.ng, (i + 1) * this.ng),
+        f: this.fs.slice(i * this.nf, (i + 1) * this.nf),
+        violation: this.violations[i],
       });
     }
     return out;

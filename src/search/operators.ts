@@ -84,7 +84,14 @@ export function tournament<T>(pop: readonly T[], better: (a: T, b: T) => boolean
 /** Solve the cell of x again at full precision (the searches judge cells coarsely) and hand each
  * feasible point to sink: the cell's first feasible point when objective 0 grows with the solved
  * variable, else every scanned feasible point. */
-export function resolveCell(p: Problem, s: number, x: Float64Array, fine: CellWorkspace, increasing: boolean, sink: (x: Float64Array, f: Float64Array) => void): boolean {
+export function resolveCell(
+  p: Problem,
+  s: number,
+  x: Float64Array,
+  fine: CellWorkspace,
+  increasing: boolean,
+  sink: (x: Float64Array, f: Float64Array) => void,
+): boolean {
   if (increasing) {
     const ok = solveCell(p, s, x, fine, CellMode.First, null, null) === true;
     if (ok) sink(x, fine.f);

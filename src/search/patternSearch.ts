@@ -50,7 +50,11 @@ export function patternSearch(p: Problem, s: number, halvings: number, top: TopK
             at.set(cur);
             at[i] += m * dir * steps[i];
             const fm = trial(at);
-            if (Number.isFinite(fm)) { a = m; fa = fm; t.set(at); } else b = m;
+            if (Number.isFinite(fm)) {
+              a = m;
+              fa = fm;
+              t.set(at);
+            } else b = m;
           }
           ft = a > 0 ? fa : Infinity;
           // Restoration: take the full move, then regain feasibility along another axis (expanding,
@@ -80,13 +84,26 @@ export function patternSearch(p: Problem, s: number, halvings: number, top: TopK
                 const probe = Float64Array.from(moved);
                 probe[j] += dj * m;
                 const fm = trial(probe);
-                if (Number.isFinite(fm)) { hi = m; if (fm < bestF) { bestF = fm; bestProbe = probe; } } else lo = m;
+                if (Number.isFinite(fm)) {
+                  hi = m;
+                  if (fm < bestF) {
+                    bestF = fm;
+                    bestProbe = probe;
+                  }
+                } else lo = m;
               }
-              if (bestF < ft) { ft = bestF; t.set(bestProbe); }
+              if (bestF < ft) {
+                ft = bestF;
+                t.set(bestProbe);
+              }
             }
           }
         }
-        if (ft < curF) { cur.set(t); curF = ft; break; }
+        if (ft < curF) {
+          cur.set(t);
+          curF = ft;
+          break;
+        }
       }
     }
     return [cur, curF];
@@ -98,13 +115,18 @@ export function patternSearch(p: Problem, s: number, halvings: number, top: TopK
     if (nextF < baseF) {
       // Pattern moves: keep going in the direction that worked while it keeps working.
       let prev = Float64Array.from(base);
-      base.set(next); baseF = nextF;
+      base.set(next);
+      baseF = nextF;
       for (;;) {
         const jump = Float64Array.from(base);
         for (const i of axes) jump[i] = 2 * base[i] - prev[i];
         const jf = trial(jump);
         const [after, afterF] = explore(Number.isFinite(jf) ? jump : base, Number.isFinite(jf) ? jf : baseF);
-        if (afterF < baseF) { prev = Float64Array.from(base); base.set(after); baseF = afterF; } else break;
+        if (afterF < baseF) {
+          prev = Float64Array.from(base);
+          base.set(after);
+          baseF = afterF;
+        } else break;
       }
     } else {
       for (const i of axes) steps[i] /= 2;

@@ -6,8 +6,16 @@ import type { NearestMisses } from './misses.js';
 import type { Problem } from './problem.js';
 import type { StopReason } from './termination.js';
 
-export interface Point { x: Float64Array; f: Float64Array }
-export interface Miss { x: Float64Array; g: Float64Array; f: Float64Array; violation: number }
+export interface Point {
+  x: Float64Array;
+  f: Float64Array;
+}
+export interface Miss {
+  x: Float64Array;
+  g: Float64Array;
+  f: Float64Array;
+  violation: number;
+}
 
 export interface SearchResult {
   strategy: 'grid' | 'genetic';
@@ -34,16 +42,37 @@ export interface SearchResult {
 
 /** Gather a strategy's stores into its result, with counts keyed by constraint name. `top` is the
  * ranked store, or the points themselves in their order (a two-objective front). */
-export function packResult(strategy: SearchResult['strategy'], p: Problem, top: TopK | Point[], cloud: PointBuffer | null,
-  ws: CellWorkspace, counts: { cells: number; feasible: number; pruned: number }, misses: NearestMisses, stoppedBy: StopReason = 'complete'): SearchResult {
+export function packResult(
+  strategy: SearchResult['strategy'],
+  p: Problem,
+  top: TopK | Point[],
+  cloud: PointBuffer | null,
+  ws: CellWorkspace,
+  counts: { cells: number; feasible: number; pruned: number },
+  misses: NearestMisses,
+  stoppedBy: StopReason = 'complete',
+): SearchResult {
   const cutBy: Record<string, number> = {};
   const sole: Record<string, number> = {};
-  p.constraintNames.forEach((name, j) => { cutBy[name] = ws.stats.cutBy[j]; sole[name] = ws.stats.soleViolation[j]; });
+  p.constraintNames.forEach((name, j) => {
+    cutBy[name] = ws.stats.cutBy[j];
+    sole[name] = ws.stats.soleViolation[j];
+  });
   const best: Point[] = [];
   if (Array.isArray(top)) for (const q of top) best.push({ x: Float64Array.from(q.x), f: Float64Array.from(q.f) });
   else for (let i = 0; i < top.size; i++) best.push({ x: Float64Array.from(top.x(i)), f: Float64Array.from(top.f(i)) });
   return {
-    strategy, stoppedBy, best, cloud, evaluations: ws.stats.evaluations, boundCalls: ws.stats.boundCalls, cells: counts.cells, feasibleCells: counts.feasible,
-    prunedCells: counts.pruned, cutBy, soleViolation: sole, nearestMisses: misses.items,
+    strategy,
+    stoppedBy,
+    best,
+    cloud,
+    evaluations: ws.stats.evaluations,
+    boundCalls: ws.stats.boundCalls,
+    cells: counts.cells,
+    feasibleCells: counts.feasible,
+    prunedCells: counts.pruned,
+    cutBy,
+    soleViolation: sole,
+    nearestMisses: misses.items,
   };
 }

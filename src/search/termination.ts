@@ -21,8 +21,11 @@ export type StopReason = 'budget' | 'stall' | 'exhausted' | 'bound' | 'complete'
 
 export function termination(t: Partial<Termination> & { maxEvaluations: number }): Termination {
   return {
-    maxEvaluations: t.maxEvaluations, stallGenerations: t.stallGenerations ?? 30, stallEvaluations: t.stallEvaluations ?? Infinity,
-    lowerBound: t.lowerBound ?? null, boundTolerance: t.boundTolerance ?? 1e-3,
+    maxEvaluations: t.maxEvaluations,
+    stallGenerations: t.stallGenerations ?? 30,
+    stallEvaluations: t.stallEvaluations ?? Infinity,
+    lowerBound: t.lowerBound ?? null,
+    boundTolerance: t.boundTolerance ?? 1e-3,
   };
 }
 

@@ -59,13 +59,21 @@ export interface Layout<F extends string = StockField> {
 }
 
 export function normaliseHeader(h: string): string {
-  return h.trim().toLowerCase().replace(/[\s-]+/g, '_');
+  return h
+    .trim()
+    .toLowerCase()
+    .replace(/[\s-]+/g, '_');
 }
 
 /** Map a header row to the stock fields (of compression springs unless given); a table without a
  * required column is bad input as a whole. */
-export function readHeader<F extends string = StockField>(header: string[], label: string, system: UnitSystem,
-  fields: Record<F, FieldType> = STOCK_FIELDS as unknown as Record<F, FieldType>, required: readonly (F | readonly F[])[] = REQUIRED as unknown as readonly (F | readonly F[])[]): Layout<F> {
+export function readHeader<F extends string = StockField>(
+  header: string[],
+  label: string,
+  system: UnitSystem,
+  fields: Record<F, FieldType> = STOCK_FIELDS as unknown as Record<F, FieldType>,
+  required: readonly (F | readonly F[])[] = REQUIRED as unknown as readonly (F | readonly F[])[],
+): Layout<F> {
   const columns: Partial<Record<F, Column<F>>> = {};
   const ignored: string[] = [];
   header.forEach((name, index) => {
@@ -86,16 +94,23 @@ export function readHeader<F extends string = StockField>(header: string[], labe
     const f = field as F;
     const type = fields[f];
     if (unit !== null && lookupUnit(unit)?.kind !== type) {
-      throw new InputError(`${label}: column "${name.trim()}"`, `a unit that fits ${f} (${type === 'count' || type === 'number' || type === 'text' ? 'no unit' : `a ${type}`}), not ${unit}`);
+      throw new InputError(
+        `${label}: column "${name.trim()}"`,
+        `a unit that fits ${f} (${type === 'count' || type === 'number' || type === 'text' ? 'no unit' : `a ${type}`}), not ${unit}`,
+      );
     }
     if (columns[f]) throw new InputError(`${label}: column "${name.trim()}"`, `each field in one column (${f} is also in column "${columns[f]!.name}")`);
-    const toSI = type === 'length' || type === 'force' || type === 'rate' ? (unit !== null ? toCore(1, lookupUnit(unit)!) : displayUnit(system, type).toCore(1)) : 1;
+    const toSI =
+      type === 'length' || type === 'force' || type === 'rate' ? (unit !== null ? toCore(1, lookupUnit(unit)!) : displayUnit(system, type).toCore(1)) : 1;
     columns[f] = { name: name.trim(), index, field: f, unit, toSI };
   });
   for (const need of required) {
     const options: readonly F[] = typeof need === 'string' ? [need as F] : (need as readonly F[]);
     if (!options.some((o) => columns[o])) {
-      throw new InputError(`${label}: header`, `a column ${options.join(' or ')} (with an optional unit suffix such as _mm or _in); the header has: ${header.map((h) => h.trim()).join(', ')}`);
+      throw new InputError(
+        `${label}: header`,
+        `a column ${options.join(' or ')} (with an optional unit suffix such as _mm or _in); the header has: ${header.map((h) => h.trim()).join(', ')}`,
+      );
     }
   }
   return { columns, ignored };

@@ -50,7 +50,14 @@ export const EXTENSION_STOCK_FIELDS = {
 } as const satisfies Record<string, FieldType>;
 export type ExtensionStockField = keyof typeof EXTENSION_STOCK_FIELDS;
 
-const REQUIRED: readonly (ExtensionStockField | readonly ExtensionStockField[])[] = ['part_number', 'material', 'wire_diameter', DIAMETER_FIELDS, 'body_coils', 'initial_tension'];
+const REQUIRED: readonly (ExtensionStockField | readonly ExtensionStockField[])[] = [
+  'part_number',
+  'material',
+  'wire_diameter',
+  DIAMETER_FIELDS,
+  'body_coils',
+  'initial_tension',
+];
 
 export const EXTENSION_STOCK_NOTE = 'Stock rows are judged as not shot-peened (a stock table has no column for it); lengths are inside the loops.';
 
@@ -99,7 +106,11 @@ export interface ExtensionStockRun {
   compare: null;
 }
 
-interface RowContext { system: UnitSystem; materialMap: MaterialMap; catalog: Catalog }
+interface RowContext {
+  system: UnitSystem;
+  materialMap: MaterialMap;
+  catalog: Catalog;
+}
 
 function readRow(cells: string[], line: number, layout: Layout<ExtensionStockField>, o: RowContext): ExtensionStockRow {
   const cols = layout.columns;
@@ -116,19 +127,36 @@ function readRow(cells: string[], line: number, layout: Layout<ExtensionStockFie
   const partNumber = need('part_number', 'a part number');
   const kind = cell('kind');
   if (kind !== undefined && kind.toLowerCase() !== 'extension') {
-    throw new RowError(cols.kind!.name, `extension (the requirements are for extension springs: check ${kind.toLowerCase() === 'compression' ? 'compression rows' : 'other rows'} against requirements of their own kind), got ${JSON.stringify(kind)}`);
+    throw new RowError(
+      cols.kind!.name,
+      `extension (the requirements are for extension springs: check ${kind.toLowerCase() === 'compression' ? 'compression rows' : 'other rows'} against requirements of their own kind), got ${JSON.stringify(kind)}`,
+    );
   }
   const materialWord = need('material', 'a material');
   const material = resolveMaterial(materialWord, o.materialMap, o.catalog);
-  if (!material) throw new RowError(cols.material!.name, `a catalog material id or a word that the requirements' material_map maps to one, got ${JSON.stringify(materialWord)}`);
+  if (!material)
+    throw new RowError(
+      cols.material!.name,
+      `a catalog material id or a word that the requirements' material_map maps to one, got ${JSON.stringify(materialWord)}`,
+    );
   const q = (f: ExtensionStockField) => quantityCell(cell(f)!, cols[f]!, o.system, EXTENSION_STOCK_FIELDS[f] as 'length' | 'force' | 'rate');
   const diameter = DIAMETER_FIELDS.find((f) => cell(f) !== undefined);
-  if (!diameter) throw new RowError(DIAMETER_FIELDS.filter((f) => cols[f]).map((f) => cols[f]!.name).join(' | '), 'a coil diameter (the cells are empty)');
+  if (!diameter)
+    throw new RowError(
+      DIAMETER_FIELDS.filter((f) => cols[f])
+        .map((f) => cols[f]!.name)
+        .join(' | '),
+      'a coil diameter (the cells are empty)',
+    );
   need('wire_diameter', 'a wire diameter');
   need('body_coils', 'a body-coil count');
   const fi = need('initial_tension', 'an initial tension');
   const springFile: Record<string, unknown> = {
-    kind: 'extension', units: 'si', material, wire_diameter: q('wire_diameter'), [diameter]: q(diameter),
+    kind: 'extension',
+    units: 'si',
+    material,
+    wire_diameter: q('wire_diameter'),
+    [diameter]: q(diameter),
     body_coils: numberCell(cell('body_coils')!, cols.body_coils!, { positive: true }),
     // A spring may be wound without initial tension: zero is a value, not an empty cell.
     initial_tension: Number(fi) === 0 ? 0 : q('initial_tension'),
@@ -153,16 +181,30 @@ function rankValue(v: ExtensionVerdict, row: ExtensionStockRow, key: StockRankKe
   const a = v.analysis;
   const g = a.geometry;
   switch (key) {
-    case 'mass': return g.mass;
-    case 'wire_volume': return g.wireVolume;
-    case 'outer_diameter': return g.outerDiameter;
-    case 'free_length': return g.freeLength;
-    case 'safety_factor': return -Math.min(staticSafety(a), fatigueSafety(a) ?? Infinity);
-    case 'price': return row.price ?? Infinity;
+    case 'mass':
+      return g.mass;
+    case 'wire_volume':
+      return g.wireVolume;
+    case 'outer_diameter':
+      return g.outerDiameter;
+    case 'free_length':
+      return g.freeLength;
+    case 'safety_factor':
+      return -Math.min(staticSafety(a), fatigueSafety(a) ?? Infinity);
+    case 'price':
+      return row.price ?? Infinity;
   }
 }
 
-function judgeRow(row: ExtensionStockRow, req: ExtensionRequirements, band: WorkingBand, loopStated: boolean, catalog: Catalog, rank: StockRankKey, rateLimit: number): ExtensionRowResult {
+function judgeRow(
+  row: ExtensionStockRow,
+  req: ExtensionRequirements,
+  band: WorkingBand,
+  loopStated: boolean,
+  catalog: Catalog,
+  rank: StockRankKey,
+  rateLimit: number,
+): ExtensionRowResult {
   let spring;
   try {
     spring = readExtensionSpring(row.springFile, catalog, loadExtensionCatalog(catalog.materials));
@@ -174,17 +216,34 @@ function judgeRow(row: ExtensionStockRow, req: ExtensionRequirements, band: Work
   const a = verdict.analysis;
   const notes = [...spring.notes];
   const rateDeviation = row.tableRate !== undefined ? (row.tableRate - a.rate) / a.rate : null;
-  if (rateDeviation !== null && Math.abs(rateDeviation) > rateLimit) notes.push(`the table's rate differs from coilfront's by ${(rateDeviation * 100).toFixed(1)}% (more than ${(rateLimit * 100).toFixed(0)}%)`);
+  if (rateDeviation !== null && Math.abs(rateDeviation) > rateLimit)
+    notes.push(`the table's rate differs from coilfront's by ${(rateDeviation * 100).toFixed(1)}% (more than ${(rateLimit * 100).toFixed(0)}%)`);
   const beyondMakerLimits: string[] = [];
   const longest = Math.max(req.operatingLength ?? req.workingLength, req.maxExtendedLength ?? 0);
   if (row.maxExtendedLength !== undefined && longest > row.maxExtendedLength) beyondMakerLimits.push('max_extended_length');
   if (row.maxLoad !== undefined && a.points.reduce((m, p) => Math.max(m, p.force), 0) > row.maxLoad) beyondMakerLimits.push('max_load');
   const violation = verdict.lines.reduce((s, l) => s + (Number.isFinite(l.g) && l.g > 0 ? l.g : 0), 0);
-  return { row, verdict, pass: verdict.pass, violation, rankValue: rankValue(verdict, row, rank), rateDeviation, beyondMakerLimits, notes, failingNames: verdict.failing.map((l) => l.name) };
+  return {
+    row,
+    verdict,
+    pass: verdict.pass,
+    violation,
+    rankValue: rankValue(verdict, row, rank),
+    rateDeviation,
+    beyondMakerLimits,
+    notes,
+    failingNames: verdict.failing.map((l) => l.name),
+  };
 }
 
-export function runExtensionStock(rawRequirements: unknown, input: string | Record<string, unknown>[], catalog: Catalog, o: StockOptions = {}): ExtensionStockRun {
-  if (o.compare) throw new InputError('--compare', 'a table of compression springs (the stock-against-custom comparison of extension springs is not built yet)');
+export function runExtensionStock(
+  rawRequirements: unknown,
+  input: string | Record<string, unknown>[],
+  catalog: Catalog,
+  o: StockOptions = {},
+): ExtensionStockRun {
+  if (o.compare)
+    throw new InputError('--compare', 'a table of compression springs (the stock-against-custom comparison of extension springs is not built yet)');
   const ext = loadExtensionCatalog(catalog.materials);
   const req = readExtensionRequirements(rawRequirements, catalog, ext);
   const label = o.label ?? 'stock table';
@@ -209,8 +268,19 @@ export function runExtensionStock(rawRequirements: unknown, input: string | Reco
   }
   const { passing, misses, failedBy } = settleRows(results, bad, label, o.misses);
   return {
-    kind: 'extension', req, band, table: { system, total: raw.length + bad.filter((b) => b.field === 'row').length, layout }, bad, rank,
-    rateDeviationLimit: rateLimit, results, passing, misses, top: o.top ?? req.top, failedBy, compare: null,
+    kind: 'extension',
+    req,
+    band,
+    table: { system, total: raw.length + bad.filter((b) => b.field === 'row').length, layout },
+    bad,
+    rank,
+    rateDeviationLimit: rateLimit,
+    results,
+    passing,
+    misses,
+    top: o.top ?? req.top,
+    failedBy,
+    compare: null,
   };
 }
 
@@ -223,21 +293,49 @@ function springRecord(v: ExtensionVerdict): Record<string, unknown> {
   const g = a.geometry;
   const m = v.spring.materialChoice.material;
   return {
-    material: m.id, material_name: m.name, loop: g.loop, wire_diameter: g.wireDiameter, mean_diameter: g.meanDiameter, outer_diameter: g.outerDiameter,
-    spring_index: g.springIndex, body_coils: g.bodyCoils, active_coils: g.activeCoils, free_length: g.freeLength, initial_tension: a.initialTension.force,
-    initial_tension_stress: a.initialTension.stress, initial_tension_band: a.initialTension.position, rate: a.rate, mass: g.mass,
-    static_safety_factor: staticSafety(a), fatigue_safety_factor: fatigueSafety(a),
-    points: a.points.map((p) => ({ length: p.length, force: p.force, body_stress: p.bodyStress, loop_bending_stress: p.loopBendingStress, loop_torsion_stress: p.loopTorsionStress })),
+    material: m.id,
+    material_name: m.name,
+    loop: g.loop,
+    wire_diameter: g.wireDiameter,
+    mean_diameter: g.meanDiameter,
+    outer_diameter: g.outerDiameter,
+    spring_index: g.springIndex,
+    body_coils: g.bodyCoils,
+    active_coils: g.activeCoils,
+    free_length: g.freeLength,
+    initial_tension: a.initialTension.force,
+    initial_tension_stress: a.initialTension.stress,
+    initial_tension_band: a.initialTension.position,
+    rate: a.rate,
+    mass: g.mass,
+    static_safety_factor: staticSafety(a),
+    fatigue_safety_factor: fatigueSafety(a),
+    points: a.points.map((p) => ({
+      length: p.length,
+      force: p.force,
+      body_stress: p.bodyStress,
+      loop_bending_stress: p.loopBendingStress,
+      loop_torsion_stress: p.loopTorsionStress,
+    })),
   };
 }
 
 function rowRecord(r: ExtensionRowResult): Record<string, unknown> {
   const v = r.verdict;
   return {
-    line: r.row.line, part_number: r.row.partNumber, material_word: r.row.materialWord, price: r.row.price ?? null, table_rate: r.row.tableRate ?? null,
-    rate_deviation: r.rateDeviation, beyond_maker_limits: r.beyondMakerLimits, pass: v.pass,
-    failing: v.failing.map((l) => ({ name: l.name, by: l.margin === null ? null : -l.margin })), limiting_check: limitingRecord(v),
-    spring: springRecord(v), checks: v.lines.map(checkLineRecord), notes: r.notes,
+    line: r.row.line,
+    part_number: r.row.partNumber,
+    material_word: r.row.materialWord,
+    price: r.row.price ?? null,
+    table_rate: r.row.tableRate ?? null,
+    rate_deviation: r.rateDeviation,
+    beyond_maker_limits: r.beyondMakerLimits,
+    pass: v.pass,
+    failing: v.failing.map((l) => ({ name: l.name, by: l.margin === null ? null : -l.margin })),
+    limiting_check: limitingRecord(v),
+    spring: springRecord(v),
+    checks: v.lines.map(checkLineRecord),
+    notes: r.notes,
   };
 }
 
@@ -250,15 +348,26 @@ export function extensionStockJson(run: ExtensionStockRun): Record<string, unkno
     requirements: extensionRequirementsRecord(run.req),
     working_band: bandRecord(run.band),
     table: {
-      units: run.table.system, rows: run.table.total, checked: run.results.length, bad: run.bad.length,
-      passing: run.passing.length, failing: run.results.length - run.passing.length, ignored_columns: run.table.layout.ignored,
+      units: run.table.system,
+      rows: run.table.total,
+      checked: run.results.length,
+      bad: run.bad.length,
+      passing: run.passing.length,
+      failing: run.results.length - run.passing.length,
+      ignored_columns: run.table.layout.ignored,
     },
     rank: run.rank,
     passing: run.passing.slice(0, run.top).map(rowRecord),
     near_misses: run.misses.map(rowRecord),
     failed_by: run.failedBy,
     rate_deviation_limit: run.rateDeviationLimit,
-    rate_notes: rateNotes(run).map((r) => ({ line: r.row.line, part_number: r.row.partNumber, table_rate: r.row.tableRate, rate: r.verdict.analysis.rate, deviation: r.rateDeviation })),
+    rate_notes: rateNotes(run).map((r) => ({
+      line: r.row.line,
+      part_number: r.row.partNumber,
+      table_rate: r.row.tableRate,
+      rate: r.verdict.analysis.rate,
+      deviation: r.rateDeviation,
+    })),
     bad_rows: run.bad.map((b) => ({ line: b.line, part_number: b.partNumber, field: b.field, message: b.message })),
     compare: null,
     notes: [EXTENSION_STOCK_NOTE],
@@ -274,32 +383,72 @@ export function extensionStockGrid(rows: ExtensionRowResult[], system: UnitSyste
   const u = (k: Kind) => unitSymbol(k, system);
   // Masses in grams when every spring listed is under 1 kg (SI), as in the compression table.
   const mass = readableUnit(system, 'mass', Math.max(0, ...rows.map((r) => r.verdict.analysis.geometry.mass)));
-  const header = [ranked ? '#' : 'line', 'part', 'material', `d ${u('length')}`, `OD ${u('length')}`, 'Nb', 'loop', `L0 ${u('length')}`, `Fi ${u('force')}`, 'Fi band',
-    `k ${u('rate')}`, `forces ${u('force')}`, 'SF static', 'SF fatigue', `mass ${mass.symbol}`, 'price', 'smallest margin'];
+  const header = [
+    ranked ? '#' : 'line',
+    'part',
+    'material',
+    `d ${u('length')}`,
+    `OD ${u('length')}`,
+    'Nb',
+    'loop',
+    `L0 ${u('length')}`,
+    `Fi ${u('force')}`,
+    'Fi band',
+    `k ${u('rate')}`,
+    `forces ${u('force')}`,
+    'SF static',
+    'SF fatigue',
+    `mass ${mass.symbol}`,
+    'price',
+    'smallest margin',
+  ];
   const cells = rows.map((r, i) => {
     const a = r.verdict.analysis;
     const g = a.geometry;
     const fatigue = fatigueSafety(a);
-    return [ranked ? String(i + 1) : String(r.row.line), r.row.partNumber + (r.beyondMakerLimits.length ? ' !' : ''), r.verdict.spring.materialChoice.material.id,
-      num(g.wireDiameter, 'length', system), num(g.outerDiameter, 'length', system), sig(g.bodyCoils, 4), g.loop, num(g.freeLength, 'length', system),
-      num(a.initialTension.force, 'force', system, 3), a.initialTension.position, num(a.rate, 'rate', system), a.points.map((p) => num(p.force, 'force', system, 3)).join(' / '),
-      sig(staticSafety(a), 3), fatigue === null ? '-' : sig(fatigue, 3), sig(mass.fromCore(g.mass), 3), r.row.price !== undefined ? sig(r.row.price, 4) : '-', smallest(r.verdict)];
+    return [
+      ranked ? String(i + 1) : String(r.row.line),
+      r.row.partNumber + (r.beyondMakerLimits.length ? ' !' : ''),
+      r.verdict.spring.materialChoice.material.id,
+      num(g.wireDiameter, 'length', system),
+      num(g.outerDiameter, 'length', system),
+      sig(g.bodyCoils, 4),
+      g.loop,
+      num(g.freeLength, 'length', system),
+      num(a.initialTension.force, 'force', system, 3),
+      a.initialTension.position,
+      num(a.rate, 'rate', system),
+      a.points.map((p) => num(p.force, 'force', system, 3)).join(' / '),
+      sig(staticSafety(a), 3),
+      fatigue === null ? '-' : sig(fatigue, 3),
+      sig(mass.fromCore(g.mass), 3),
+      r.row.price !== undefined ? sig(r.row.price, 4) : '-',
+      smallest(r.verdict),
+    ];
   });
   return { header, cells };
 }
 
-const label = (name: string) => EXTENSION_CHECK_LABELS[name as keyof typeof EXTENSION_CHECK_LABELS] ?? (name.startsWith('working_force') ? `working force ${name.endsWith('min') ? 'below' : 'above'} its band` : name);
+const label = (name: string) =>
+  EXTENSION_CHECK_LABELS[name as keyof typeof EXTENSION_CHECK_LABELS] ??
+  (name.startsWith('working_force') ? `working force ${name.endsWith('min') ? 'below' : 'above'} its band` : name);
 
 export function extensionStockText(run: ExtensionStockRun, system: UnitSystem, tableLabel: string): string {
   const req = run.req;
   const F = (v: number) => formatQuantity(v, 'force', system);
   const L = (v: number) => formatQuantity(v, 'length', system);
   const out: string[] = [];
-  out.push(`Stock extension springs for ${F(req.workingForce)} at ${L(req.workingLength)} inside the loops` +
-    (req.operatingLength !== undefined ? `, stretched to ${L(req.operatingLength)}${req.operatingForce !== undefined ? ` at ${F(req.operatingForce)}` : ''}` : '') +
-    `; table ${tableLabel} (plain numbers in ${run.table.system === 'us' ? 'in, lbf' : 'mm, N'})`);
+  out.push(
+    `Stock extension springs for ${F(req.workingForce)} at ${L(req.workingLength)} inside the loops` +
+      (req.operatingLength !== undefined
+        ? `, stretched to ${L(req.operatingLength)}${req.operatingForce !== undefined ? ` at ${F(req.operatingForce)}` : ''}`
+        : '') +
+      `; table ${tableLabel} (plain numbers in ${run.table.system === 'us' ? 'in, lbf' : 'mm, N'})`,
+  );
   out.push(`Working force band: ${bandText(run.band, system)}`);
-  out.push(`Table: ${run.table.total} rows, ${run.results.length} checked, ${run.bad.length} bad${run.bad.length ? ' (each on stderr with its line and column)' : ''}; ${run.passing.length} pass every check${run.passing.length ? `, ranked by ${run.rank.replace('_', ' ')}` : ''}.`);
+  out.push(
+    `Table: ${run.table.total} rows, ${run.results.length} checked, ${run.bad.length} bad${run.bad.length ? ' (each on stderr with its line and column)' : ''}; ${run.passing.length} pass every check${run.passing.length ? `, ranked by ${run.rank.replace('_', ' ')}` : ''}.`,
+  );
   out.push('');
   if (run.passing.length) {
     const shown = run.passing.slice(0, run.top);
@@ -312,17 +461,23 @@ export function extensionStockText(run: ExtensionStockRun, system: UnitSystem, t
     out.push('Best near misses (least total violation) and what they fail, by how much:');
     const t = extensionStockGrid(run.misses, system, false);
     out.push(table([t.header, ...t.cells]));
-    for (const r of run.misses) out.push(`  - ${r.row.partNumber} (line ${r.row.line}) fails ${r.verdict.failing.map((l: GivenLine) => failureText(l, system)).join('; ')}`);
+    for (const r of run.misses)
+      out.push(`  - ${r.row.partNumber} (line ${r.row.line}) fails ${r.verdict.failing.map((l: GivenLine) => failureText(l, system)).join('; ')}`);
   }
   if ([...run.passing.slice(0, run.top), ...run.misses].some((r) => r.beyondMakerLimits.length)) {
-    out.push('  ! marks a part that the requirement takes beyond the table\'s own max_extended_length or max_load: ask the maker before using it there');
+    out.push("  ! marks a part that the requirement takes beyond the table's own max_extended_length or max_load: ask the maker before using it there");
   }
   out.push(...failedByLines(run.failedBy, label));
   const rates = rateNotes(run);
   if (rates.length) {
     out.push('');
-    out.push(`The table's rate differs from coilfront's k = G d^4 / (8 D^3 Na) by more than ${sig(run.rateDeviationLimit * 100, 3)}% on ${rates.length} row${rates.length === 1 ? '' : 's'} (the checks use coilfront's):`);
-    for (const r of rates.slice(0, 20)) out.push(`  - ${r.row.partNumber} (line ${r.row.line}): table ${num(r.row.tableRate!, 'rate', system)}, coilfront ${num(r.verdict.analysis.rate, 'rate', system)} ${unitSymbol('rate', system)}`);
+    out.push(
+      `The table's rate differs from coilfront's k = G d^4 / (8 D^3 Na) by more than ${sig(run.rateDeviationLimit * 100, 3)}% on ${rates.length} row${rates.length === 1 ? '' : 's'} (the checks use coilfront's):`,
+    );
+    for (const r of rates.slice(0, 20))
+      out.push(
+        `  - ${r.row.partNumber} (line ${r.row.line}): table ${num(r.row.tableRate!, 'rate', system)}, coilfront ${num(r.verdict.analysis.rate, 'rate', system)} ${unitSymbol('rate', system)}`,
+      );
   }
   out.push('');
   out.push('Notes:');
@@ -337,23 +492,66 @@ export function extensionStockText(run: ExtensionStockRun, system: UnitSystem, t
 /** Every checked row for a spreadsheet: passing rows in rank order, then the rest by how close they came. */
 export function extensionStockCsv(run: ExtensionStockRun, system: UnitSystem): string {
   const s = (k: Kind) => unitSymbol(k, system).replace('/', '_per_').replace('^', '');
-  const header = ['rank', 'verdict', 'line', 'part_number', 'material', 'loop', `wire_diameter_${s('length')}`, `mean_diameter_${s('length')}`, `outer_diameter_${s('length')}`,
-    'body_coils', 'active_coils', `free_length_${s('length')}`, `initial_tension_${s('force')}`, 'initial_tension_band', `rate_${s('rate')}`, `table_rate_${s('rate')}`,
-    `working_force_${s('force')}`, `operating_force_${s('force')}`, 'static_safety_factor', 'fatigue_safety_factor', `mass_${s('mass')}`, 'price',
-    'limiting_check', 'smallest_margin', 'failing_checks'];
+  const header = [
+    'rank',
+    'verdict',
+    'line',
+    'part_number',
+    'material',
+    'loop',
+    `wire_diameter_${s('length')}`,
+    `mean_diameter_${s('length')}`,
+    `outer_diameter_${s('length')}`,
+    'body_coils',
+    'active_coils',
+    `free_length_${s('length')}`,
+    `initial_tension_${s('force')}`,
+    'initial_tension_band',
+    `rate_${s('rate')}`,
+    `table_rate_${s('rate')}`,
+    `working_force_${s('force')}`,
+    `operating_force_${s('force')}`,
+    'static_safety_factor',
+    'fatigue_safety_factor',
+    `mass_${s('mass')}`,
+    'price',
+    'limiting_check',
+    'smallest_margin',
+    'failing_checks',
+  ];
   const failing = run.results.filter((r) => !r.pass).sort((a, b) => a.violation - b.violation || a.row.line - b.row.line);
   const six = (v: number, k: Kind) => Number(sig(inUnit(v, k, system), 6));
   const rows = [...run.passing, ...failing].map((r, i) => {
     const a = r.verdict.analysis;
     const g = a.geometry;
     const fatigue = fatigueSafety(a);
-    return [r.pass ? i + 1 : null, r.pass ? 'pass' : 'fail', r.row.line, r.row.partNumber, r.verdict.spring.materialChoice.material.id, g.loop,
-      six(g.wireDiameter, 'length'), six(g.meanDiameter, 'length'), six(g.outerDiameter, 'length'), g.bodyCoils, g.activeCoils, six(g.freeLength, 'length'),
-      six(a.initialTension.force, 'force'), a.initialTension.position, six(a.rate, 'rate'), r.row.tableRate !== undefined ? six(r.row.tableRate, 'rate') : null,
-      six(a.points[0].force, 'force'), a.points.length > 1 ? six(a.points[a.points.length - 1].force, 'force') : null, Number(sig(staticSafety(a), 5)),
-      fatigue === null ? null : Number(sig(fatigue, 5)), six(g.mass, 'mass'), r.row.price ?? null, r.verdict.limiting?.name ?? null,
+    return [
+      r.pass ? i + 1 : null,
+      r.pass ? 'pass' : 'fail',
+      r.row.line,
+      r.row.partNumber,
+      r.verdict.spring.materialChoice.material.id,
+      g.loop,
+      six(g.wireDiameter, 'length'),
+      six(g.meanDiameter, 'length'),
+      six(g.outerDiameter, 'length'),
+      g.bodyCoils,
+      g.activeCoils,
+      six(g.freeLength, 'length'),
+      six(a.initialTension.force, 'force'),
+      a.initialTension.position,
+      six(a.rate, 'rate'),
+      r.row.tableRate !== undefined ? six(r.row.tableRate, 'rate') : null,
+      six(a.points[0].force, 'force'),
+      a.points.length > 1 ? six(a.points[a.points.length - 1].force, 'force') : null,
+      Number(sig(staticSafety(a), 5)),
+      fatigue === null ? null : Number(sig(fatigue, 5)),
+      six(g.mass, 'mass'),
+      r.row.price ?? null,
+      r.verdict.limiting?.name ?? null,
       r.verdict.limiting?.margin !== undefined && r.verdict.limiting.margin !== null ? Number(sig(r.verdict.limiting.margin, 5)) : null,
-      r.verdict.failing.map((l) => (l.margin === null ? l.name : `${l.name} ${sig(-l.margin * 100, 3)}%`)).join('; ')];
+      r.verdict.failing.map((l) => (l.margin === null ? l.name : `${l.name} ${sig(-l.margin * 100, 3)}%`)).join('; '),
+    ];
   });
   return toCsv(header, rows);
 }

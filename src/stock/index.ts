@@ -7,7 +7,11 @@ import { sanitize } from '../report/json.js';
 import { stockJson } from './report.js';
 import { runStock, type StockOptions } from './run.js';
 
-export function stock(requirements: unknown, table: string | Record<string, unknown>[], options: StockOptions & { catalog?: Catalog } = {}): Record<string, unknown> {
+export function stock(
+  requirements: unknown,
+  table: string | Record<string, unknown>[],
+  options: StockOptions & { catalog?: Catalog } = {},
+): Record<string, unknown> {
   const run = runStock(requirements, table, options.catalog ?? loadCatalog(), options);
   return sanitize(stockJson(run)) as Record<string, unknown>;
 }

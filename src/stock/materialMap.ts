@@ -17,7 +17,8 @@ export function readMaterialMap(rawRequirements: unknown, catalog: Catalog): Mat
   const map: MaterialMap = new Map();
   const raw = isRecord(rawRequirements) ? rawRequirements.material_map : undefined;
   if (raw === undefined || raw === null) return map;
-  if (!isRecord(raw)) throw new InputError('material_map', 'a mapping from the table\'s material words to catalog ids, such as { "302 SS": stainless-302 }', raw);
+  if (!isRecord(raw))
+    throw new InputError('material_map', 'a mapping from the table\'s material words to catalog ids, such as { "302 SS": stainless-302 }', raw);
   for (const [word, id] of Object.entries(raw)) {
     const key = materialKey(word);
     if (map.has(key)) throw new InputError(`material_map.${word}`, 'each material word once (it differs from another only in case or spaces)');

@@ -49,8 +49,19 @@ export function compareRecord(run: StockRun): Record<string, unknown> | null {
   const c = run.compare;
   if (!c) return null;
   const best = run.passing[0];
-  const custom = c.custom && c.verdict ? { ...givenSpringRecord(c.verdict), limiting_check: c.verdict.limiting ? { name: c.verdict.limiting.name, margin: c.verdict.limiting.margin } : null } : null;
-  const stock = best ? { part_number: best.row.partNumber, line: best.row.line, price: best.row.price ?? null, ...givenSpringRecord(best.verdict), limiting_check: best.verdict.limiting ? { name: best.verdict.limiting.name, margin: best.verdict.limiting.margin } : null } : null;
+  const custom =
+    c.custom && c.verdict
+      ? { ...givenSpringRecord(c.verdict), limiting_check: c.verdict.limiting ? { name: c.verdict.limiting.name, margin: c.verdict.limiting.margin } : null }
+      : null;
+  const stock = best
+    ? {
+        part_number: best.row.partNumber,
+        line: best.row.line,
+        price: best.row.price ?? null,
+        ...givenSpringRecord(best.verdict),
+        limiting_check: best.verdict.limiting ? { name: best.verdict.limiting.name, margin: best.verdict.limiting.margin } : null,
+      }
+    : null;
   return {
     design_strategy: c.run.result.strategy,
     design_feasible: c.run.result.feasibleCells,
@@ -67,15 +78,26 @@ export function stockJson(run: AnyStockRun): Record<string, unknown> {
     requirements: requirementsRecord(run.req),
     working_band: bandRecord(run.band),
     table: {
-      units: run.table.system, rows: run.table.total, checked: run.results.length, bad: run.bad.length,
-      passing: run.passing.length, failing: run.results.length - run.passing.length, ignored_columns: run.table.layout.ignored,
+      units: run.table.system,
+      rows: run.table.total,
+      checked: run.results.length,
+      bad: run.bad.length,
+      passing: run.passing.length,
+      failing: run.results.length - run.passing.length,
+      ignored_columns: run.table.layout.ignored,
     },
     rank: run.rank,
     passing: run.passing.slice(0, run.top).map(rowRecord),
     near_misses: run.misses.map(rowRecord),
     failed_by: run.failedBy,
     rate_deviation_limit: run.rateDeviationLimit,
-    rate_notes: rateNotes(run).map((r) => ({ line: r.row.line, part_number: r.row.partNumber, table_rate: r.row.tableRate, rate: r.rate, deviation: r.rateDeviation })),
+    rate_notes: rateNotes(run).map((r) => ({
+      line: r.row.line,
+      part_number: r.row.partNumber,
+      table_rate: r.row.tableRate,
+      rate: r.rate,
+      deviation: r.rateDeviation,
+    })),
     bad_rows: run.bad.map((b) => ({ line: b.line, part_number: b.partNumber, field: b.field, message: b.message })),
     compare: compareRecord(run),
     notes: [STOCK_NOTE],
@@ -90,17 +112,48 @@ export function stockGrid(rows: RowResult[], system: UnitSystem, ranked: boolean
   const u = (k: Kind) => unitSymbol(k, system);
   // Masses in grams when every spring listed is under 1 kg (SI).
   const mass = readableUnit(system, 'mass', Math.max(0, ...rows.map((r) => r.verdict.analysis.geometry.mass)));
-  const header = [ranked ? '#' : 'line', 'part', 'material', `d ${u('length')}`, `OD ${u('length')}`, `ID ${u('length')}`, `L0 ${u('length')}`, `Ls ${u('length')}`,
-    'Na', 'ends', `k ${u('rate')}`, `forces ${u('force')}`, 'SF static', 'SF fatigue', `mass ${mass.symbol}`, 'price', 'smallest margin'];
+  const header = [
+    ranked ? '#' : 'line',
+    'part',
+    'material',
+    `d ${u('length')}`,
+    `OD ${u('length')}`,
+    `ID ${u('length')}`,
+    `L0 ${u('length')}`,
+    `Ls ${u('length')}`,
+    'Na',
+    'ends',
+    `k ${u('rate')}`,
+    `forces ${u('force')}`,
+    'SF static',
+    'SF fatigue',
+    `mass ${mass.symbol}`,
+    'price',
+    'smallest margin',
+  ];
   const cells = rows.map((r, i) => {
     const a = r.verdict.analysis;
     const g = a.geometry;
     const flag = r.beyondMakerLimits.length ? ' !' : '';
-    return [ranked ? String(i + 1) : String(r.row.line), r.row.partNumber + flag, r.verdict.spring.choice.material.id, num(g.wireDiameter, 'length', system), num(g.outerDiameter, 'length', system),
-      num(g.innerDiameter, 'length', system), num(g.freeLength, 'length', system), num(g.solidLength, 'length', system), sig(g.activeCoils, 4), g.ends,
-      num(a.rate, 'rate', system), a.points.map((p) => num(p.force, 'force', system, 3)).join(' / '), sig(a.staticSafetyFactor, 3),
-      a.fatigue ? sig(a.fatigue.safetyFactor, 3) : '-', sig(mass.fromCore(g.mass), 3), r.row.price !== undefined ? sig(r.row.price, 4) : '-',
-      r.verdict.limiting ? `${r.verdict.limiting.name} ${writeMargin(r.verdict.limiting.margin)}` : '-'];
+    return [
+      ranked ? String(i + 1) : String(r.row.line),
+      r.row.partNumber + flag,
+      r.verdict.spring.choice.material.id,
+      num(g.wireDiameter, 'length', system),
+      num(g.outerDiameter, 'length', system),
+      num(g.innerDiameter, 'length', system),
+      num(g.freeLength, 'length', system),
+      num(g.solidLength, 'length', system),
+      sig(g.activeCoils, 4),
+      g.ends,
+      num(a.rate, 'rate', system),
+      a.points.map((p) => num(p.force, 'force', system, 3)).join(' / '),
+      sig(a.staticSafetyFactor, 3),
+      a.fatigue ? sig(a.fatigue.safetyFactor, 3) : '-',
+      sig(mass.fromCore(g.mass), 3),
+      r.row.price !== undefined ? sig(r.row.price, 4) : '-',
+      r.verdict.limiting ? `${r.verdict.limiting.name} ${writeMargin(r.verdict.limiting.margin)}` : '-',
+    ];
   });
   return { header, cells };
 }
@@ -117,9 +170,17 @@ export function compareRows(run: StockRun, system: UnitSystem): string[][] | nul
   const col = (v: Verdict | null | undefined, name: string): string[] => {
     if (!v) return [name, '-', '-', '-', '-', '-', '-', '-', '-'];
     const g = v.analysis.geometry;
-    return [name, v.spring.choice.material.id, formatQuantity(g.mass, 'mass', system, 3), formatQuantity(g.outerDiameter, 'length', system), formatQuantity(g.freeLength, 'length', system),
-      formatQuantity(v.analysis.rate, 'rate', system), sig(v.analysis.staticSafetyFactor, 3), v.analysis.fatigue ? sig(v.analysis.fatigue.safetyFactor, 3) : '-',
-      v.limiting ? `${v.limiting.name} ${writeMargin(v.limiting.margin)}` : '-'];
+    return [
+      name,
+      v.spring.choice.material.id,
+      formatQuantity(g.mass, 'mass', system, 3),
+      formatQuantity(g.outerDiameter, 'length', system),
+      formatQuantity(g.freeLength, 'length', system),
+      formatQuantity(v.analysis.rate, 'rate', system),
+      sig(v.analysis.staticSafetyFactor, 3),
+      v.analysis.fatigue ? sig(v.analysis.fatigue.safetyFactor, 3) : '-',
+      v.limiting ? `${v.limiting.name} ${writeMargin(v.limiting.margin)}` : '-',
+    ];
   };
   return [
     ['', 'material', 'mass', 'outer diameter', 'free length', 'rate', 'SF static', 'SF fatigue', 'smallest margin'],
@@ -135,7 +196,10 @@ export function compareSummary(run: StockRun): string {
   if (!best) return 'No stock row passes: the custom spring is the only option.';
   const ratio = best.verdict.analysis.geometry.mass / c.custom.analysis.geometry.mass;
   const F = best.verdict.analysis.points[0].force;
-  const why = ratio < 1 ? ` It is lighter because it works at ${sig(F, 4)} N at the working length, inside the working-force band, where design meets ${sig(run.req.workingForce, 4)} N exactly.` : '';
+  const why =
+    ratio < 1
+      ? ` It is lighter because it works at ${sig(F, 4)} N at the working length, inside the working-force band, where design meets ${sig(run.req.workingForce, 4)} N exactly.`
+      : '';
   return `The best stock spring (${best.row.partNumber}) is ${sig(Math.abs(ratio - 1) * 100, 3)}% ${ratio >= 1 ? 'heavier' : 'lighter'} than the best custom spring; it ships from stock with no tooling.${why}`;
 }
 
@@ -143,11 +207,17 @@ export function stockText(run: AnyStockRun, system: UnitSystem, tableLabel: stri
   if (run.kind === 'extension') return extensionStockText(run, system, tableLabel);
   const req = run.req;
   const out: string[] = [];
-  out.push(`Stock springs for ${formatQuantity(req.workingForce, 'force', system)} at ${formatQuantity(req.workingLength, 'length', system)}` +
-    (req.operatingLength !== undefined ? `, stroke to ${formatQuantity(req.operatingLength, 'length', system)}${req.operatingForce !== undefined ? ` at ${formatQuantity(req.operatingForce, 'force', system)}` : ''}` : '') +
-    `; table ${tableLabel} (plain numbers in ${run.table.system === 'us' ? 'in, lbf' : 'mm, N'})`);
+  out.push(
+    `Stock springs for ${formatQuantity(req.workingForce, 'force', system)} at ${formatQuantity(req.workingLength, 'length', system)}` +
+      (req.operatingLength !== undefined
+        ? `, stroke to ${formatQuantity(req.operatingLength, 'length', system)}${req.operatingForce !== undefined ? ` at ${formatQuantity(req.operatingForce, 'force', system)}` : ''}`
+        : '') +
+      `; table ${tableLabel} (plain numbers in ${run.table.system === 'us' ? 'in, lbf' : 'mm, N'})`,
+  );
   out.push(`Working force band: ${bandText(run.band, system)}`);
-  out.push(`Table: ${run.table.total} rows, ${run.results.length} checked, ${run.bad.length} bad${run.bad.length ? ' (each on stderr with its line and column)' : ''}; ${run.passing.length} pass every check${run.passing.length ? `, ranked by ${run.rank.replace('_', ' ')}` : ''}.`);
+  out.push(
+    `Table: ${run.table.total} rows, ${run.results.length} checked, ${run.bad.length} bad${run.bad.length ? ' (each on stderr with its line and column)' : ''}; ${run.passing.length} pass every check${run.passing.length ? `, ranked by ${run.rank.replace('_', ' ')}` : ''}.`,
+  );
   out.push('');
   if (run.passing.length) {
     const shown = run.passing.slice(0, run.top);
@@ -165,16 +235,30 @@ export function stockText(run: AnyStockRun, system: UnitSystem, tableLabel: stri
     for (const r of run.misses) out.push(`  - ${missText(r, system)}`);
   }
   if ([...run.passing.slice(0, run.top), ...run.misses].some((r) => r.beyondMakerLimits.length)) {
-    out.push('  ! marks a part that the stroke takes beyond the table\'s own max_deflection or max_load: ask the maker before using it there');
+    out.push("  ! marks a part that the stroke takes beyond the table's own max_deflection or max_load: ask the maker before using it there");
   }
   out.push(...failedByLines(run.failedBy, label));
   const rates = rateNotes(run);
   if (rates.length) {
     out.push('');
-    out.push(`The table's rate differs from coilfront's k = G d^4 / (8 D^3 Na) by more than ${sig(run.rateDeviationLimit * 100, 3)}% on ${rates.length} row${rates.length === 1 ? '' : 's'} (a catalogue rate is a nominal with its own tolerance; the checks use coilfront's):`);
+    out.push(
+      `The table's rate differs from coilfront's k = G d^4 / (8 D^3 Na) by more than ${sig(run.rateDeviationLimit * 100, 3)}% on ${rates.length} row${rates.length === 1 ? '' : 's'} (a catalogue rate is a nominal with its own tolerance; the checks use coilfront's):`,
+    );
     const u = unitSymbol('rate', system);
-    out.push(table([['line', 'part', `table k ${u}`, `coilfront k ${u}`, 'difference'],
-      ...rates.slice(0, 20).map((r) => [String(r.row.line), r.row.partNumber, num(r.row.tableRate!, 'rate', system), num(r.rate, 'rate', system), `${r.rateDeviation! >= 0 ? '+' : ''}${sig(r.rateDeviation! * 100, 3)}%`])]));
+    out.push(
+      table([
+        ['line', 'part', `table k ${u}`, `coilfront k ${u}`, 'difference'],
+        ...rates
+          .slice(0, 20)
+          .map((r) => [
+            String(r.row.line),
+            r.row.partNumber,
+            num(r.row.tableRate!, 'rate', system),
+            num(r.rate, 'rate', system),
+            `${r.rateDeviation! >= 0 ? '+' : ''}${sig(r.rateDeviation! * 100, 3)}%`,
+          ]),
+      ]),
+    );
     if (rates.length > 20) out.push(`  ... and ${rates.length - 20} more (all in --json and the CSV)`);
   }
   if (run.compare) {
@@ -201,24 +285,77 @@ export function stockCsv(run: AnyStockRun, system: UnitSystem): string {
     const sym = unitSymbol(k, system);
     return sym.replace('/', '_per_').replace('^', '');
   };
-  const header = ['rank', 'verdict', 'line', 'part_number', 'material', 'ends', `wire_diameter_${s('length')}`, `mean_diameter_${s('length')}`, `outer_diameter_${s('length')}`,
-    `inner_diameter_${s('length')}`, 'active_coils', 'total_coils', `free_length_${s('length')}`, `solid_length_${s('length')}`, `rate_${s('rate')}`, `table_rate_${s('rate')}`,
-    `working_force_${s('force')}`, `operating_force_${s('force')}`, `max_stress_${s('stress')}`, 'static_safety_factor', 'fatigue_safety_factor', `mass_${s('mass')}`, 'price',
-    'limiting_check', 'smallest_margin', 'failing_checks'];
+  const header = [
+    'rank',
+    'verdict',
+    'line',
+    'part_number',
+    'material',
+    'ends',
+    `wire_diameter_${s('length')}`,
+    `mean_diameter_${s('length')}`,
+    `outer_diameter_${s('length')}`,
+    `inner_diameter_${s('length')}`,
+    'active_coils',
+    'total_coils',
+    `free_length_${s('length')}`,
+    `solid_length_${s('length')}`,
+    `rate_${s('rate')}`,
+    `table_rate_${s('rate')}`,
+    `working_force_${s('force')}`,
+    `operating_force_${s('force')}`,
+    `max_stress_${s('stress')}`,
+    'static_safety_factor',
+    'fatigue_safety_factor',
+    `mass_${s('mass')}`,
+    'price',
+    'limiting_check',
+    'smallest_margin',
+    'failing_checks',
+  ];
   const failing = run.results.filter((r) => !r.pass).sort((a, b) => a.violation - b.violation || a.row.line - b.row.line);
   const L = (v: number) => Number(sig(inUnit(v, 'length', system), 6));
   const rows = [...run.passing, ...failing].map((r, i) => {
     const a = r.verdict.analysis;
     const g = a.geometry;
     const last = a.points[a.points.length - 1];
-    return [r.verdict.pass ? i + 1 : null, r.verdict.pass ? 'pass' : 'fail', r.row.line, r.row.partNumber, r.verdict.spring.choice.material.id, g.ends,
-      L(g.wireDiameter), L(g.meanDiameter), L(g.outerDiameter), L(g.innerDiameter), g.activeCoils, g.totalCoils, L(g.freeLength), L(g.solidLength),
-      Number(sig(inUnit(a.rate, 'rate', system), 6)), r.row.tableRate !== undefined ? Number(sig(inUnit(r.row.tableRate, 'rate', system), 6)) : null,
-      Number(sig(inUnit(a.points[0].force, 'force', system), 6)), a.points.length > 1 ? Number(sig(inUnit(last.force, 'force', system), 6)) : null,
-      Number(sig(inUnit(a.points.reduce((m, p) => Math.max(m, p.stress), -Infinity), 'stress', system), 6)), Number(sig(a.staticSafetyFactor, 5)),
-      a.fatigue ? Number(sig(a.fatigue.safetyFactor, 5)) : null, Number(sig(inUnit(g.mass, 'mass', system), 6)), r.row.price ?? null,
-      r.verdict.limiting?.name ?? null, r.verdict.limiting?.margin !== undefined && r.verdict.limiting.margin !== null ? Number(sig(r.verdict.limiting.margin, 5)) : null,
-      r.verdict.failing.map((l) => (l.margin === null ? l.name : `${l.name} ${sig(-l.margin * 100, 3)}%`)).join('; ')];
+    return [
+      r.verdict.pass ? i + 1 : null,
+      r.verdict.pass ? 'pass' : 'fail',
+      r.row.line,
+      r.row.partNumber,
+      r.verdict.spring.choice.material.id,
+      g.ends,
+      L(g.wireDiameter),
+      L(g.meanDiameter),
+      L(g.outerDiameter),
+      L(g.innerDiameter),
+      g.activeCoils,
+      g.totalCoils,
+      L(g.freeLength),
+      L(g.solidLength),
+      Number(sig(inUnit(a.rate, 'rate', system), 6)),
+      r.row.tableRate !== undefined ? Number(sig(inUnit(r.row.tableRate, 'rate', system), 6)) : null,
+      Number(sig(inUnit(a.points[0].force, 'force', system), 6)),
+      a.points.length > 1 ? Number(sig(inUnit(last.force, 'force', system), 6)) : null,
+      Number(
+        sig(
+          inUnit(
+            a.points.reduce((m, p) => Math.max(m, p.stress), -Infinity),
+            'stress',
+            system,
+          ),
+          6,
+        ),
+      ),
+      Number(sig(a.staticSafetyFactor, 5)),
+      a.fatigue ? Number(sig(a.fatigue.safetyFactor, 5)) : null,
+      Number(sig(inUnit(g.mass, 'mass', system), 6)),
+      r.row.price ?? null,
+      r.verdict.limiting?.name ?? null,
+      r.verdict.limiting?.margin !== undefined && r.verdict.limiting.margin !== null ? Number(sig(r.verdict.limiting.margin, 5)) : null,
+      r.verdict.failing.map((l) => (l.margin === null ? l.name : `${l.name} ${sig(-l.margin * 100, 3)}%`)).join('; '),
+    ];
   });
   return toCsv(header, rows);
 }

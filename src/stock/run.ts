@@ -40,9 +40,16 @@ export class RowResult {
   readonly beyondMakerLimits: string[];
   private judged: Verdict | null = null;
 
-  constructor(readonly row: StockRow, private readonly spring: GivenSpring, private readonly j: Judge, v: Verdict, rank: StockRankKey,
+  constructor(
+    readonly row: StockRow,
+    private readonly spring: GivenSpring,
+    private readonly j: Judge,
+    v: Verdict,
+    rank: StockRankKey,
     /** The row's own notes: figures outside a sourced range, the table's figures beside coilfront's. */
-    readonly notes: string[], rateLimit: number) {
+    readonly notes: string[],
+    rateLimit: number,
+  ) {
     const a = v.analysis;
     this.pass = v.pass;
     this.failingNames = v.failingNames;
@@ -50,9 +57,12 @@ export class RowResult {
     this.rankValue = rankValue(v, row, rank);
     this.rate = a.rate;
     this.rateDeviation = row.tableRate !== undefined ? (row.tableRate - a.rate) / a.rate : null;
-    if (this.rateDeviation !== null && Math.abs(this.rateDeviation) > rateLimit) notes.push(`the table's rate differs from coilfront's by ${(this.rateDeviation * 100).toFixed(1)}% (more than ${(rateLimit * 100).toFixed(0)}%)`);
+    if (this.rateDeviation !== null && Math.abs(this.rateDeviation) > rateLimit)
+      notes.push(`the table's rate differs from coilfront's by ${(this.rateDeviation * 100).toFixed(1)}% (more than ${(rateLimit * 100).toFixed(0)}%)`);
     if (row.tableSolidLength !== undefined && row.tableSolidLength > a.geometry.solidLength * (1 + SOLID_LENGTH_DEVIATION)) {
-      notes.push(`the table's solid length is ${((row.tableSolidLength / a.geometry.solidLength - 1) * 100).toFixed(1)}% above coilfront's: the clash check used coilfront's`);
+      notes.push(
+        `the table's solid length is ${((row.tableSolidLength / a.geometry.solidLength - 1) * 100).toFixed(1)}% above coilfront's: the clash check used coilfront's`,
+      );
     }
     this.beyondMakerLimits = [];
     if (row.maxDeflection !== undefined && a.geometry.freeLength - shortestLength(j.req) > row.maxDeflection) this.beyondMakerLimits.push('max_deflection');
@@ -65,7 +75,11 @@ export class RowResult {
   }
 }
 
-export interface Comparison { run: DesignRun; custom: Candidate | null; verdict: Verdict | null }
+export interface Comparison {
+  run: DesignRun;
+  custom: Candidate | null;
+  verdict: Verdict | null;
+}
 
 export interface StockRun {
   kind: 'compression';
@@ -87,12 +101,18 @@ export interface StockRun {
 export function rankValue(v: Verdict, row: StockRow, key: StockRankKey): number {
   const a = v.analysis;
   switch (key) {
-    case 'mass': return a.geometry.mass;
-    case 'wire_volume': return a.geometry.wireVolume;
-    case 'outer_diameter': return a.geometry.outerDiameter;
-    case 'free_length': return a.geometry.freeLength;
-    case 'safety_factor': return -Math.min(a.staticSafetyFactor, a.fatigue && Number.isFinite(a.fatigue.safetyFactor) ? a.fatigue.safetyFactor : Infinity);
-    case 'price': return row.price ?? Infinity;
+    case 'mass':
+      return a.geometry.mass;
+    case 'wire_volume':
+      return a.geometry.wireVolume;
+    case 'outer_diameter':
+      return a.geometry.outerDiameter;
+    case 'free_length':
+      return a.geometry.freeLength;
+    case 'safety_factor':
+      return -Math.min(a.staticSafetyFactor, a.fatigue && Number.isFinite(a.fatigue.safetyFactor) ? a.fatigue.safetyFactor : Infinity);
+    case 'price':
+      return row.price ?? Infinity;
   }
 }
 
@@ -117,8 +137,18 @@ function rowSpring(row: StockRow, catalog: Catalog, cache: FiguresCache): { spri
   const Na = row.coils.field === 'active_coils' ? row.coils.value : row.coils.value - Q;
   if (!(Na > 0)) throw new RowError(row.columnOf[row.coils.field], `more total coils than the ${Q} inactive coils of ${row.ends} ends, got ${row.coils.value}`);
   const Ls = solidLength(d, Na + Q, row.ends);
-  if (row.freeLength <= Ls) throw new RowError(row.columnOf.free_length, `a free length above the solid length ${Number(Ls.toPrecision(4))} mm (the coils overlap at free length), got ${Number(row.freeLength.toPrecision(6))} mm`);
-  const spring: GivenSpring = { choice: entry.choice, figures: entry.figures, geometry: { wireDiameter: d, meanDiameter: D, activeCoils: Na, ends: row.ends, freeLength: row.freeLength }, peened: false, setRemoved: false };
+  if (row.freeLength <= Ls)
+    throw new RowError(
+      row.columnOf.free_length,
+      `a free length above the solid length ${Number(Ls.toPrecision(4))} mm (the coils overlap at free length), got ${Number(row.freeLength.toPrecision(6))} mm`,
+    );
+  const spring: GivenSpring = {
+    choice: entry.choice,
+    figures: entry.figures,
+    geometry: { wireDiameter: d, meanDiameter: D, activeCoils: Na, ends: row.ends, freeLength: row.freeLength },
+    peened: false,
+    setRemoved: false,
+  };
   return { spring, notes: entry.note ? [entry.note] : [] };
 }
 
@@ -135,7 +165,9 @@ export function givenCustom(c: Candidate, req: Requirements): GivenSpring {
 export type AnyStockRun = StockRun | ExtensionStockRun;
 
 export function runStock(rawRequirements: unknown, input: string | Record<string, unknown>[], catalog: Catalog, o: StockOptions = {}): AnyStockRun {
-  return kindOf(rawRequirements).id === 'extension' ? runExtensionStock(rawRequirements, input, catalog, o) : runCompressionStock(rawRequirements, input, catalog, o);
+  return kindOf(rawRequirements).id === 'extension'
+    ? runExtensionStock(rawRequirements, input, catalog, o)
+    : runCompressionStock(rawRequirements, input, catalog, o);
 }
 
 export function runCompressionStock(rawRequirements: unknown, input: string | Record<string, unknown>[], catalog: Catalog, o: StockOptions = {}): StockRun {
@@ -164,5 +196,19 @@ export function runCompressionStock(rawRequirements: unknown, input: string | Re
     const custom = run.candidates[0] ?? null;
     compare = { run, custom, verdict: custom ? judge(givenCustom(custom, req), j) : null };
   }
-  return { kind: 'compression', req, band, table, bad, rank, rateDeviationLimit: rateLimit, results, passing, misses, top: o.top ?? req.top, failedBy, compare };
+  return {
+    kind: 'compression',
+    req,
+    band,
+    table,
+    bad,
+    rank,
+    rateDeviationLimit: rateLimit,
+    results,
+    passing,
+    misses,
+    top: o.top ?? req.top,
+    failedBy,
+    compare,
+  };
 }

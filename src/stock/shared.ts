@@ -28,21 +28,38 @@ export interface StockOptions {
   label?: string;
 }
 
-interface Checked { readonly pass: boolean; readonly rankValue: number; readonly violation: number; readonly row: { readonly line: number }; readonly failingNames: readonly string[] }
+interface Checked {
+  readonly pass: boolean;
+  readonly rankValue: number;
+  readonly violation: number;
+  readonly row: { readonly line: number };
+  readonly failingNames: readonly string[];
+}
 
 /** The bad rows in line order; the passing rows ranked (ties by line), the near misses by least total
  * violation, the rows each check failed. A table with no usable row is bad input as a whole. */
-export function settleRows<R extends Checked>(results: R[], bad: BadRow[], label: string, misses = 5): { passing: R[]; misses: R[]; failedBy: Record<string, number> } {
+export function settleRows<R extends Checked>(
+  results: R[],
+  bad: BadRow[],
+  label: string,
+  misses = 5,
+): { passing: R[]; misses: R[]; failedBy: Record<string, number> } {
   bad.sort((a, b) => a.line - b.line);
   if (results.length === 0) {
-    const first = bad.slice(0, 3).map((b) => `line ${b.line}, ${b.field}: ${b.message}`).join('; ');
+    const first = bad
+      .slice(0, 3)
+      .map((b) => `line ${b.line}, ${b.field}: ${b.message}`)
+      .join('; ');
     throw new InputError(label, `at least one usable row; all ${bad.length} data rows are bad (${first}${bad.length > 3 ? '; ...' : ''})`);
   }
   const failedBy: Record<string, number> = {};
   for (const r of results) for (const name of r.failingNames) failedBy[name] = (failedBy[name] ?? 0) + 1;
   return {
     passing: results.filter((r) => r.pass).sort((a, b) => a.rankValue - b.rankValue || a.row.line - b.row.line),
-    misses: results.filter((r) => !r.pass).sort((a, b) => a.violation - b.violation || a.row.line - b.row.line).slice(0, misses),
+    misses: results
+      .filter((r) => !r.pass)
+      .sort((a, b) => a.violation - b.violation || a.row.line - b.row.line)
+      .slice(0, misses),
     failedBy,
   };
 }

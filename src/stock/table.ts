@@ -31,7 +31,12 @@ export interface StockRow {
   price?: number;
 }
 
-export interface BadRow { line: number; partNumber: string | null; field: string; message: string }
+export interface BadRow {
+  line: number;
+  partNumber: string | null;
+  field: string;
+  message: string;
+}
 
 export interface StockTable {
   rows: StockRow[];
@@ -43,20 +48,32 @@ export interface StockTable {
   total: number;
 }
 
-export interface TableOptions { system: UnitSystem; materialMap: MaterialMap; catalog: Catalog; label: string }
+export interface TableOptions {
+  system: UnitSystem;
+  materialMap: MaterialMap;
+  catalog: Catalog;
+  label: string;
+}
 
 /** A row's mistake: the column (as the table names it) and what was expected. Not an Error: a table
  * may hold thousands of bad rows, and a stack trace per row is wasted work. */
 export class RowError {
-  constructor(readonly field: string, readonly message: string) {}
+  constructor(
+    readonly field: string,
+    readonly message: string,
+  ) {}
 }
 
 // End types as stock tables write them: the trade's words for the four kinds (closed = squared).
 const END_WORDS: Record<string, EndType> = {
-  'plain': 'plain', 'open': 'plain',
-  'plain-ground': 'plain-ground', 'open-ground': 'plain-ground',
-  'squared': 'squared', 'closed': 'squared',
-  'squared-ground': 'squared-ground', 'closed-ground': 'squared-ground',
+  plain: 'plain',
+  open: 'plain',
+  'plain-ground': 'plain-ground',
+  'open-ground': 'plain-ground',
+  squared: 'squared',
+  closed: 'squared',
+  'squared-ground': 'squared-ground',
+  'closed-ground': 'squared-ground',
 };
 
 const endWordCache = new Map<string, EndType | undefined>();
@@ -69,13 +86,24 @@ export function endType(word: string): EndType | undefined {
 }
 
 function normaliseEndWord(word: string): string {
-  return word.trim().toLowerCase().replace(/\s*(&|\band\b|\+)\s*/g, '-').replace(/[\s_,/]+/g, '-').replace(/-+/g, '-').replace(/^-|-$/g, '');
+  return word
+    .trim()
+    .toLowerCase()
+    .replace(/\s*(&|\band\b|\+)\s*/g, '-')
+    .replace(/[\s_,/]+/g, '-')
+    .replace(/-+/g, '-')
+    .replace(/^-|-$/g, '');
 }
 
 const PLAIN_NUMBER = /^[-+]?(?:\d+\.?\d*|\.\d+)(?:[eE][-+]?\d+)?$/;
 
 /** A quantity cell in SI: a plain number in the column's unit, or a number with its own unit. */
-export function quantityCell(cell: string, col: Column<string>, system: UnitSystem, kind: 'length' | 'force' | 'rate' = STOCK_FIELDS[col.field as StockField] as 'length' | 'force' | 'rate'): number {
+export function quantityCell(
+  cell: string,
+  col: Column<string>,
+  system: UnitSystem,
+  kind: 'length' | 'force' | 'rate' = STOCK_FIELDS[col.field as StockField] as 'length' | 'force' | 'rate',
+): number {
   let v: number;
   if (PLAIN_NUMBER.test(cell)) v = Number(cell) * col.toSI;
   else {
@@ -115,27 +143,59 @@ function readRow(cells: string[], line: number, layout: Layout, o: TableOptions)
   const kind = cell('kind');
   if (kind !== undefined) {
     const k = kind.toLowerCase();
-    if (k === 'extension') throw new RowError(cols.kind!.name, 'compression (the requirements are for compression springs: run the extension rows against an extension requirements file, kind: extension)');
+    if (k === 'extension')
+      throw new RowError(
+        cols.kind!.name,
+        'compression (the requirements are for compression springs: run the extension rows against an extension requirements file, kind: extension)',
+      );
     if (k !== 'compression') throw new RowError(cols.kind!.name, `compression or extension, got ${JSON.stringify(kind)}`);
   }
   const materialWord = need('material', 'a material');
   const material = resolveMaterial(materialWord, o.materialMap, o.catalog);
-  if (!material) throw new RowError(cols.material!.name, `a catalog material id or a word that the requirements' material_map maps to one, got ${JSON.stringify(materialWord)}`);
+  if (!material)
+    throw new RowError(
+      cols.material!.name,
+      `a catalog material id or a word that the requirements' material_map maps to one, got ${JSON.stringify(materialWord)}`,
+    );
   const endsWord = need('ends', `an end type (${END_TYPES.join(' | ')}, or closed / closed and ground / open / open ground)`);
   const ends = endType(endsWord);
-  if (!ends) throw new RowError(cols.ends!.name, `an end type (${END_TYPES.join(' | ')}, or closed / closed and ground / open / open ground), got ${JSON.stringify(endsWord)}`);
+  if (!ends)
+    throw new RowError(
+      cols.ends!.name,
+      `an end type (${END_TYPES.join(' | ')}, or closed / closed and ground / open / open ground), got ${JSON.stringify(endsWord)}`,
+    );
   const q = (f: StockField) => quantityCell(cell(f)!, cols[f]!, o.system);
   const diameter = DIAMETER_FIELDS.find((f) => cell(f) !== undefined);
-  if (!diameter) throw new RowError(DIAMETER_FIELDS.filter((f) => cols[f]).map((f) => cols[f]!.name).join(' | '), 'a coil diameter (the cells are empty)');
+  if (!diameter)
+    throw new RowError(
+      DIAMETER_FIELDS.filter((f) => cols[f])
+        .map((f) => cols[f]!.name)
+        .join(' | '),
+      'a coil diameter (the cells are empty)',
+    );
   const coils = COIL_FIELDS.find((f) => cell(f) !== undefined);
-  if (!coils) throw new RowError(COIL_FIELDS.filter((f) => cols[f]).map((f) => cols[f]!.name).join(' | '), 'a coil count (the cells are empty)');
+  if (!coils)
+    throw new RowError(
+      COIL_FIELDS.filter((f) => cols[f])
+        .map((f) => cols[f]!.name)
+        .join(' | '),
+      'a coil count (the cells are empty)',
+    );
   need('wire_diameter', 'a wire diameter');
   need('free_length', 'a free length');
   const columnOf: Record<string, string> = {};
   for (const f of ['material', 'wire_diameter', diameter, coils, 'ends', 'free_length'] as StockField[]) columnOf[f] = cols[f]!.name;
   const row: StockRow = {
-    line, partNumber, materialWord, material, wireDiameter: q('wire_diameter'), diameter: { field: diameter, value: q(diameter) },
-    coils: { field: coils, value: numberCell(cell(coils)!, cols[coils]!, { positive: true }) }, ends, freeLength: q('free_length'), columnOf,
+    line,
+    partNumber,
+    materialWord,
+    material,
+    wireDiameter: q('wire_diameter'),
+    diameter: { field: diameter, value: q(diameter) },
+    coils: { field: coils, value: numberCell(cell(coils)!, cols[coils]!, { positive: true }) },
+    ends,
+    freeLength: q('free_length'),
+    columnOf,
   };
   if (cell('rate') !== undefined) row.tableRate = q('rate');
   if (cell('solid_length') !== undefined) row.tableSolidLength = q('solid_length');
@@ -149,13 +209,24 @@ function readRow(cells: string[], line: number, layout: Layout, o: TableOptions)
  * peening or set removal: a stock spring is judged without either. */
 export function rowSpringFile(row: StockRow): Record<string, unknown> {
   return {
-    units: 'si', material: row.material, wire_diameter: row.wireDiameter, [row.diameter.field]: row.diameter.value,
-    [row.coils.field]: row.coils.value, ends: row.ends, free_length: row.freeLength, peened: false, set_removed: false,
+    units: 'si',
+    material: row.material,
+    wire_diameter: row.wireDiameter,
+    [row.diameter.field]: row.diameter.value,
+    [row.coils.field]: row.coils.value,
+    ends: row.ends,
+    free_length: row.freeLength,
+    peened: false,
+    set_removed: false,
   };
 }
 
 /** Header and data rows with their line numbers, from CSV text or from plain records. */
-export function rawRows(input: string | Record<string, unknown>[], label: string, bad: BadRow[]): { header: string[]; rows: { cells: string[]; line: number }[] } {
+export function rawRows(
+  input: string | Record<string, unknown>[],
+  label: string,
+  bad: BadRow[],
+): { header: string[]; rows: { cells: string[]; line: number }[] } {
   if (typeof input !== 'string') {
     const header: string[] = [];
     for (const r of input) for (const k of Object.keys(r)) if (!header.includes(k)) header.push(k);
@@ -166,14 +237,25 @@ export function rawRows(input: string | Record<string, unknown>[], label: string
   const lines: number[] = [];
   try {
     records = parse(input, {
-      comment: '#', skip_empty_lines: true, relax_column_count: true, bom: true,
+      comment: '#',
+      skip_empty_lines: true,
+      relax_column_count: true,
+      bom: true,
       // The line a record starts on (context.lines is where it ends; quoted fields may span lines).
       on_record: (record: string[], context) => {
         lines.push(context.lines - record.reduce((n, c) => n + (c.includes('\n') ? c.split('\n').length - 1 : 0), 0));
         return record;
       },
       skip_records_with_error: true,
-      on_skip: (err) => { if (err) bad.push({ line: (err as { lines?: number }).lines ?? 0, partNumber: null, field: 'row', message: `well-formed CSV (${err.message.replace(/^Invalid (Record|Closing Quote|Opening Quote): /, '')})` }); },
+      on_skip: (err) => {
+        if (err)
+          bad.push({
+            line: (err as { lines?: number }).lines ?? 0,
+            partNumber: null,
+            field: 'row',
+            message: `well-formed CSV (${err.message.replace(/^Invalid (Record|Closing Quote|Opening Quote): /, '')})`,
+          });
+      },
     });
   } catch (e) {
     throw new InputError(label, 'a CSV table with a header row', (e as Error).message);

@@ -15,11 +15,16 @@ export function isRecord(v: unknown): v is Raw {
 
 export class Fields {
   private readonly seen = new Set<string>();
-  constructor(readonly raw: Raw, readonly path: string, readonly system: UnitSystem) {}
+  constructor(
+    readonly raw: Raw,
+    readonly path: string,
+    readonly system: UnitSystem,
+  ) {}
 
   static of(raw: unknown, path: string, system: UnitSystem): Fields {
     if (!isRecord(raw)) throw new InputError(path || 'file', 'a mapping of fields (key: value)', raw);
-    if (Object.getPrototypeOf(raw) !== Object.prototype && Object.getPrototypeOf(raw) !== null) throw new InputError(path || 'file', 'a plain mapping of fields', raw);
+    if (Object.getPrototypeOf(raw) !== Object.prototype && Object.getPrototypeOf(raw) !== null)
+      throw new InputError(path || 'file', 'a plain mapping of fields', raw);
     return new Fields(raw, path, system);
   }
 

@@ -11,7 +11,11 @@ export const PSI_MPA = LBF_N / (INCH_MM * INCH_MM);
 export const LB_KG = 0.45359237;
 export const LB_PER_IN3_KG_PER_M3 = LB_KG / Math.pow(INCH_MM / 1000, 3);
 
-interface UnitDef { kind: Kind; factor: number; offset?: number }
+interface UnitDef {
+  kind: Kind;
+  factor: number;
+  offset?: number;
+}
 
 // Unit spellings are compared after lower-casing and removing spaces, '^' and '·'.
 const UNITS: Record<string, UnitDef> = {
@@ -68,7 +72,11 @@ const UNITS: Record<string, UnitDef> = {
 };
 
 export function lookupUnit(symbol: string): UnitDef | undefined {
-  const key = symbol.toLowerCase().replace(/[\s^·]/g, '').replace(/³/g, '3').replace(/²/g, '2');
+  const key = symbol
+    .toLowerCase()
+    .replace(/[\s^·]/g, '')
+    .replace(/³/g, '3')
+    .replace(/²/g, '2');
   return UNITS[key];
 }
 

@@ -4,7 +4,11 @@ import { lookupUnit, toCore, type Kind } from './kinds.js';
 import { displayUnit, type UnitSystem } from './systems.js';
 
 export class InputError extends Error {
-  constructor(public readonly field: string, public readonly expected: string, public readonly got?: unknown) {
+  constructor(
+    public readonly field: string,
+    public readonly expected: string,
+    public readonly got?: unknown,
+  ) {
     super(`${field}: ${expected.startsWith('no such') ? '' : 'expected '}${expected}${got === undefined ? '' : `, got ${describe(got)}`}`);
     this.name = 'InputError';
   }
@@ -47,7 +51,10 @@ export function decimal(text: string): number {
   return DECIMAL.test(text) ? Number(text) : NaN;
 }
 
-export interface QuantityRule { positive?: boolean; nonNegative?: boolean }
+export interface QuantityRule {
+  positive?: boolean;
+  nonNegative?: boolean;
+}
 
 /**
  * The magnitudes a coil-spring quantity can meaningfully have (core units). Outside them a value is a

@@ -4,7 +4,11 @@ import { INCH_MM, LBF_N, PSI_MPA, LB_KG, LB_PER_IN3_KG_PER_M3, type Kind } from 
 
 export type UnitSystem = 'si' | 'us';
 
-export interface DisplayUnit { symbol: string; fromCore: (v: number) => number; toCore: (v: number) => number }
+export interface DisplayUnit {
+  symbol: string;
+  fromCore: (v: number) => number;
+  toCore: (v: number) => number;
+}
 
 const scale = (symbol: string, factor: number): DisplayUnit => ({
   symbol,
@@ -29,7 +33,7 @@ const US: Record<Kind, DisplayUnit> = {
   force: scale('lbf', LBF_N),
   stress: scale('psi', PSI_MPA),
   density: scale('lb/in^3', LB_PER_IN3_KG_PER_M3),
-  temperature: { symbol: 'degF', fromCore: (c) => c * 9 / 5 + 32, toCore: (f) => (f - 32) * 5 / 9 },
+  temperature: { symbol: 'degF', fromCore: (c) => (c * 9) / 5 + 32, toCore: (f) => ((f - 32) * 5) / 9 },
   frequency: scale('Hz', 1),
   rate: scale('lbf/in', LBF_N / INCH_MM),
   mass: scale('lb', LB_KG),

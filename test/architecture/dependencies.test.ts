@@ -16,16 +16,13 @@ function layerOf(unit: string): number {
 }
 
 /** Upward imports that exist today, unit -> unit, and the way out of each. */
-const UPWARD_DEBTS: Record<string, string> = {
-};
+const UPWARD_DEBTS: Record<string, string> = {};
 
 /** Imports from one kind into another that exist today, and the way out. */
-const ACROSS_DEBTS: Record<string, string> = {
-};
+const ACROSS_DEBTS: Record<string, string> = {};
 
 /** File cycles that exist today (sorted members joined by ' | '), and the way out of each. */
-const CYCLE_DEBTS: Record<string, string> = {
-};
+const CYCLE_DEBTS: Record<string, string> = {};
 
 const graph = importGraph(sourceFiles());
 const units = unitGraph(graph);
@@ -37,8 +34,14 @@ describe('dependency direction', () => {
 
   it('no file of src/ imports itself back through others (beyond the listed debts)', () => {
     const found = cycles(graph).map((c) => c.join(' | '));
-    expect(found.filter((c) => !(c in CYCLE_DEBTS)), 'new import cycles between files').toEqual([]);
-    expect(Object.keys(CYCLE_DEBTS).filter((c) => !found.includes(c)), 'paid cycle debts: delete their lines').toEqual([]);
+    expect(
+      found.filter((c) => !(c in CYCLE_DEBTS)),
+      'new import cycles between files',
+    ).toEqual([]);
+    expect(
+      Object.keys(CYCLE_DEBTS).filter((c) => !found.includes(c)),
+      'paid cycle debts: delete their lines',
+    ).toEqual([]);
   });
 
   it('layers import downwards only (beyond the listed debts)', () => {
@@ -48,14 +51,19 @@ describe('dependency direction', () => {
     }
     const fresh = upward.filter((e) => !(e in UPWARD_DEBTS)).map((e) => `${e} (${units.get(e.split(' -> ')[0])!.get(e.split(' -> ')[1])![0]})`);
     expect(fresh, 'new upward imports').toEqual([]);
-    expect(Object.keys(UPWARD_DEBTS).filter((e) => !upward.includes(e)), 'paid upward debts: delete their lines').toEqual([]);
+    expect(
+      Object.keys(UPWARD_DEBTS).filter((e) => !upward.includes(e)),
+      'paid upward debts: delete their lines',
+    ).toEqual([]);
   });
 
   it('no folder imports itself back through others, once the listed debts are set aside', () => {
     // src/kinds/index.ts, the registry, is the one file that names every kind (kinds -> kinds/<kind>);
     // each kind implements src/kinds/kind.ts (kinds/<kind> -> kinds). That pair is the seam, not a cycle.
     const debts = new Set([...Object.keys(UPWARD_DEBTS), ...Object.keys(ACROSS_DEBTS)]);
-    const simple = new Map([...units].map(([u, edges]) => [u, [...edges.keys()].filter((t) => !debts.has(`${u} -> ${t}`) && !(u === 'kinds' && t.startsWith('kinds/')))]));
+    const simple = new Map(
+      [...units].map(([u, edges]) => [u, [...edges.keys()].filter((t) => !debts.has(`${u} -> ${t}`) && !(u === 'kinds' && t.startsWith('kinds/')))]),
+    );
     expect(cycles(simple)).toEqual([]);
   });
 
@@ -65,8 +73,14 @@ describe('dependency direction', () => {
       if (!from.startsWith('kinds/')) continue;
       for (const [to] of edges) if (to.startsWith('kinds/') && to !== from) across.push(`${from} -> ${to}`);
     }
-    expect(across.filter((e) => !(e in ACROSS_DEBTS)).map((e) => `${e} (${units.get(e.split(' -> ')[0])!.get(e.split(' -> ')[1])![0]})`), 'new imports across kinds').toEqual([]);
-    expect(Object.keys(ACROSS_DEBTS).filter((e) => !across.includes(e)), 'paid debts: delete their lines').toEqual([]);
+    expect(
+      across.filter((e) => !(e in ACROSS_DEBTS)).map((e) => `${e} (${units.get(e.split(' -> ')[0])!.get(e.split(' -> ')[1])![0]})`),
+      'new imports across kinds',
+    ).toEqual([]);
+    expect(
+      Object.keys(ACROSS_DEBTS).filter((e) => !across.includes(e)),
+      'paid debts: delete their lines',
+    ).toEqual([]);
   });
 
   it('the search engine knows nothing of springs, catalogs or input', () => {

@@ -6,9 +6,15 @@ import { join } from 'node:path';
 import { describe, expect, it } from 'vitest';
 import { LAYER } from './layers.js';
 
-const dirs = (d: string) => readdirSync(d).filter((n) => statSync(join(d, n)).isDirectory()).sort();
+const dirs = (d: string) =>
+  readdirSync(d)
+    .filter((n) => statSync(join(d, n)).isDirectory())
+    .sort();
 /** Every folder of src/ and, below src/kinds/, every folder of a kind: what the layout must show. */
-const actual = [...dirs('src').map((d) => `src/${d}/`), ...dirs('src/kinds').flatMap((k) => [`src/kinds/${k}/`, ...dirs(`src/kinds/${k}`).map((d) => `src/kinds/${k}/${d}/`)])].sort();
+const actual = [
+  ...dirs('src').map((d) => `src/${d}/`),
+  ...dirs('src/kinds').flatMap((k) => [`src/kinds/${k}/`, ...dirs(`src/kinds/${k}`).map((d) => `src/kinds/${k}/${d}/`)]),
+].sort();
 
 /** The folders a layout block names: `src/x/` lines (several on a line, comma-separated; a second may
  * drop the `src/`), and indented `name/` lines below src/kinds/ (two spaces: a kind, four: its folder). */
@@ -32,9 +38,13 @@ function shown(doc: string, opening: string): { path: string; layer?: number }[]
 }
 
 describe('the documented layout', () => {
-  it('the README\'s architecture section names every folder of src/ and of each kind, and no other', () => {
+  it("the README's architecture section names every folder of src/ and of each kind, and no other", () => {
     const readme = readFileSync('README.md', 'utf8');
-    expect(shown(readme, '```\nsrc/units/').map((s) => s.path).sort()).toEqual(actual);
+    expect(
+      shown(readme, '```\nsrc/units/')
+        .map((s) => s.path)
+        .sort(),
+    ).toEqual(actual);
   });
 
   it('DEVELOPERS.md names the same folders, each top folder with the layer the architecture test enforces', () => {

@@ -50,16 +50,25 @@ export function cycles(graph: Map<string, string[]>): string[][] {
   const on = new Set<string>();
   const out: string[][] = [];
   const visit = (v: string) => {
-    idx.set(v, index); low.set(v, index); index++;
-    stack.push(v); on.add(v);
+    idx.set(v, index);
+    low.set(v, index);
+    index++;
+    stack.push(v);
+    on.add(v);
     for (const w of graph.get(v) ?? []) {
-      if (!idx.has(w)) { visit(w); low.set(v, Math.min(low.get(v)!, low.get(w)!)); }
-      else if (on.has(w)) low.set(v, Math.min(low.get(v)!, idx.get(w)!));
+      if (!idx.has(w)) {
+        visit(w);
+        low.set(v, Math.min(low.get(v)!, low.get(w)!));
+      } else if (on.has(w)) low.set(v, Math.min(low.get(v)!, idx.get(w)!));
     }
     if (low.get(v) === idx.get(v)) {
       const scc: string[] = [];
       let w: string;
-      do { w = stack.pop()!; on.delete(w); scc.push(w); } while (w !== v);
+      do {
+        w = stack.pop()!;
+        on.delete(w);
+        scc.push(w);
+      } while (w !== v);
       if (scc.length > 1 || (graph.get(v) ?? []).includes(v)) out.push(scc.sort());
     }
   };

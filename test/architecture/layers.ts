@@ -14,5 +14,16 @@
 //   7 api, . (src/index.ts) the library API and the package's entry, which re-exports it
 //   8 cli                   the command line, thin over the rest
 export const LAYER: Record<string, number> = {
-  units: 0, model: 1, search: 1, catalogs: 2, input: 3, report: 4, kinds: 5, check: 6, stock: 6, api: 7, '.': 7, cli: 8,
+  units: 0,
+  model: 1,
+  search: 1,
+  catalogs: 2,
+  input: 3,
+  report: 4,
+  kinds: 5,
+  check: 6,
+  stock: 6,
+  api: 7,
+  '.': 7,
+  cli: 8,
 };

@@ -44,10 +44,17 @@ type ReqCase = typeof reqArb extends fc.Arbitrary<infer T> ? T : never;
 
 function requirementsDoc(r: ReqCase): Record<string, unknown> {
   const doc: Record<string, unknown> = {
-    units: 'si', material: r.material, ends: r.ends, seating: r.seating,
-    load: { force: r.force, length: r.length }, operating_length: r.length * (1 - r.stroke),
+    units: 'si',
+    material: r.material,
+    ends: r.ends,
+    seating: r.seating,
+    load: { force: r.force, length: r.length },
+    operating_length: r.length * (1 - r.stroke),
     envelope: { max_outer_diameter: r.od, max_free_length: r.length * 2.5 },
-    load_tolerance: r.tolerance, solid_safe: r.solidSafe, coil_step: 1, top: 4,
+    load_tolerance: r.tolerance,
+    solid_safe: r.solidSafe,
+    coil_step: 1,
+    top: 4,
   };
   if (r.rateFixed) doc.operating_force = r.force * r.forceRise;
   if (r.cycles !== undefined) doc.cycles = r.cycles;
@@ -58,28 +65,31 @@ describe('check agrees with design', () => {
   it('every spring design reports passes check, read back from its spring file; every nearest miss fails check on the checks design saw fail (property)', () => {
     let passed = 0;
     let missed = 0;
-    fc.assert(fc.property(reqArb, (r) => {
-      const raw = requirementsDoc(r);
-      const req = readRequirements(raw, catalog);
-      const run = runDesign(req, { strategy: 'grid' });
-      for (const c of run.candidates) {
-        const out = check(springDocument(c, req), raw, { catalog });
-        expect(out.failing).toEqual([]);
-        expect(out.pass).toBe(true);
-        passed++;
-      }
-      for (const m of run.result.nearestMisses) {
-        const c = candidateAt(run.problem, m.x, m.f);
-        if (c.analysis.geometry.freeLength <= c.analysis.geometry.solidLength) continue; // no spring at all: no spring file to write
-        const designFails = [...c.checks.keys()].filter((i) => c.checks[i] > 1e-6).map((i) => run.problem.constraintNames[i]);
-        // A miss may go solid before the operating length: its spring file leaves the lengths to the requirement.
-        const { lengths: _lengths, ...springFile } = springDocument(c, req);
-        const out = check(springFile, raw, { catalog }) as { pass: boolean; failing: { name: string }[] };
-        expect(out.pass).toBe(false);
-        expect(out.failing.map((f) => f.name).sort()).toEqual([...designFails].sort());
-        missed++;
-      }
-    }), { numRuns: 16, seed: 5 });
+    fc.assert(
+      fc.property(reqArb, (r) => {
+        const raw = requirementsDoc(r);
+        const req = readRequirements(raw, catalog);
+        const run = runDesign(req, { strategy: 'grid' });
+        for (const c of run.candidates) {
+          const out = check(springDocument(c, req), raw, { catalog });
+          expect(out.failing).toEqual([]);
+          expect(out.pass).toBe(true);
+          passed++;
+        }
+        for (const m of run.result.nearestMisses) {
+          const c = candidateAt(run.problem, m.x, m.f);
+          if (c.analysis.geometry.freeLength <= c.analysis.geometry.solidLength) continue; // no spring at all: no spring file to write
+          const designFails = [...c.checks.keys()].filter((i) => c.checks[i] > 1e-6).map((i) => run.problem.constraintNames[i]);
+          // A miss may go solid before the operating length: its spring file leaves the lengths to the requirement.
+          const { lengths: _lengths, ...springFile } = springDocument(c, req);
+          const out = check(springFile, raw, { catalog }) as { pass: boolean; failing: { name: string }[] };
+          expect(out.pass).toBe(false);
+          expect(out.failing.map((f) => f.name).sort()).toEqual([...designFails].sort());
+          missed++;
+        }
+      }),
+      { numRuns: 16, seed: 5 },
+    );
     expect(passed).toBeGreaterThan(10);
     expect(missed).toBeGreaterThan(10);
   });
@@ -126,7 +136,9 @@ describe('coilfront check', () => {
 
   it('fails a working force outside its band, on the side it misses', async () => {
     // 49.7 mm free gives 20.01 N at 35 mm; 48 mm free gives 17.7 N: below the 19 N floor.
-    const j = JSON.parse((await cli('check', inputFile(TRIGGER_SPRING.replace('free_length: 49.7', 'free_length: 48')), DEMO, '--json', '--set', 'load_tolerance=6%')).stdout);
+    const j = JSON.parse(
+      (await cli('check', inputFile(TRIGGER_SPRING.replace('free_length: 49.7', 'free_length: 48')), DEMO, '--json', '--set', 'load_tolerance=6%')).stdout,
+    );
     expect(j.pass).toBe(false);
     expect(j.failing.map((f: { name: string }) => f.name)).toEqual(['working_force_min']);
   });
@@ -137,9 +149,12 @@ describe('coilfront check', () => {
     expect(JSON.stringify(lib, null, 2) + '\n').toBe(r.stdout);
   });
 
-  it('holds the spring to the requirement\'s material and named end types', () => {
+  it("holds the spring to the requirement's material and named end types", () => {
     const req = readInputFile(DEMO) as Record<string, unknown>;
-    const spring = readInputFile(inputFile(TRIGGER_SPRING.replace('stainless-302', 'music-wire').replace('squared-ground', 'squared'))) as Record<string, unknown>;
+    const spring = readInputFile(inputFile(TRIGGER_SPRING.replace('stainless-302', 'music-wire').replace('squared-ground', 'squared'))) as Record<
+      string,
+      unknown
+    >;
     const out = checkDocuments(spring, { ...req, load_tolerance: '6%' }, catalog);
     expect(out.verdict.failing.map((l) => l.name)).toEqual(expect.arrayContaining(['material', 'ends']));
     // Without an `ends` field the default end type does not restrict a given spring.
@@ -147,7 +162,7 @@ describe('coilfront check', () => {
     expect(checkDocuments(spring, noEnds, catalog).verdict.lines.map((l) => l.name)).not.toContain('ends');
   });
 
-  it('uses the requirement\'s service conditions and says so where the spring file states others', async () => {
+  it("uses the requirement's service conditions and says so where the spring file states others", async () => {
     const j = JSON.parse((await cli('check', inputFile(TRIGGER_SPRING + 'lengths: [40, 30]\ncycles: 1e6\n'), DEMO, '--json')).stdout);
     expect(j.notes.join(' ')).toMatch(/the spring file's lengths, cycles differ from the requirement's: the requirement's service conditions are used/);
     expect(j.spring.points.map((p: { length: number }) => p.length)).toEqual([35, 25]);
@@ -182,11 +197,26 @@ describe('coilfront check', () => {
 
 // Keep the YAML writer exercised: a spring file written from a check's own spring record reads back the same verdict.
 describe('spring file round trip', () => {
-  it('a spring written from check\'s JSON record re-checks to the same verdict', () => {
+  it("a spring written from check's JSON record re-checks to the same verdict", () => {
     const req = readInputFile(DEMO);
     const first = check(readInputFile(inputFile(TRIGGER_SPRING)), req) as { spring: Record<string, number | string>; pass: boolean };
     const s = first.spring;
-    const again = check(readInputFile(inputFile(stringify({ units: 'si', material: s.material, wire_diameter: s.wire_diameter, mean_diameter: s.mean_diameter, active_coils: s.active_coils, ends: s.ends, free_length: s.free_length }))), req) as { pass: boolean; spring: unknown };
+    const again = check(
+      readInputFile(
+        inputFile(
+          stringify({
+            units: 'si',
+            material: s.material,
+            wire_diameter: s.wire_diameter,
+            mean_diameter: s.mean_diameter,
+            active_coils: s.active_coils,
+            ends: s.ends,
+            free_length: s.free_length,
+          }),
+        ),
+      ),
+      req,
+    ) as { pass: boolean; spring: unknown };
     expect(again.pass).toBe(first.pass);
     expect(again.spring).toEqual(first.spring);
   });

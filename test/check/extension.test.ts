@@ -62,7 +62,11 @@ describe('check of an extension spring', () => {
     expect(r.code).toBe(2);
     expect(r.stdout).toBe('');
     expect(r.stderr).toMatch(/kind: expected the same kind .*spring file is extension, the requirements compression/);
-    const r2 = await cli('check', inputFile('units: si\nmaterial: stainless-302\nwire_diameter: 1.4\nouter_diameter: 15.74\nactive_coils: 8.25\nends: squared-ground\nfree_length: 49.7\n'), REQ);
+    const r2 = await cli(
+      'check',
+      inputFile('units: si\nmaterial: stainless-302\nwire_diameter: 1.4\nouter_diameter: 15.74\nactive_coils: 8.25\nends: squared-ground\nfree_length: 49.7\n'),
+      REQ,
+    );
     expect(r2.code).toBe(2);
     expect(r2.stderr).toMatch(/kind: .*spring file is compression, the requirements extension/);
   });

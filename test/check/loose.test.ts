@@ -15,13 +15,28 @@ const BIN = 'examples/extension-pedal-bin.yaml';
 const BIN_SPRING = 'examples/extension-pedal-bin-spring.yaml';
 
 // The trigger spring of the washer-gun demo (free length 49.7 mm), cut to a free length of its own.
-const trigger = (freeLength: number) => ({ units: 'si', material: 'stainless-302', wire_diameter: 1.4, outer_diameter: 15.74, active_coils: 8.25, ends: 'squared-ground', free_length: freeLength });
+const trigger = (freeLength: number) => ({
+  units: 'si',
+  material: 'stainless-302',
+  wire_diameter: 1.4,
+  outer_diameter: 15.74,
+  active_coils: 8.25,
+  ends: 'squared-ground',
+  free_length: freeLength,
+});
 const demo = parse(readFileSync(DEMO, 'utf8')) as Record<string, unknown>;
 const bin = parse(readFileSync(BIN, 'utf8')) as Record<string, unknown>;
 const binSpring = parse(readFileSync(BIN_SPRING, 'utf8')) as Record<string, unknown>;
 
 type Line = { name: string; value: unknown; label: string; pass: boolean; margin: number | null };
-type Result = { pass: boolean; checks: Line[]; notes: string[]; loose?: unknown; slack?: unknown; spring: { points: { length: number; force: number }[]; rate: number } };
+type Result = {
+  pass: boolean;
+  checks: Line[];
+  notes: string[];
+  loose?: unknown;
+  slack?: unknown;
+  spring: { points: { length: number; force: number }[]; rate: number };
+};
 const line = (r: Result, name: string) => r.checks.find((l) => l.name === name)!;
 const forces = (r: Result) => r.spring.points.map((p) => p.force);
 
@@ -50,7 +65,10 @@ describe('a compression spring beyond its free length is loose', () => {
 
   it('at both lengths: every force 0, both force checks fail as loose, no NaN anywhere', async () => {
     const r = check(trigger(24), demo) as unknown as Result;
-    expect(r.loose).toStrictEqual([{ at: 'working', length: 35 }, { at: 'operating', length: 25 }]);
+    expect(r.loose).toStrictEqual([
+      { at: 'working', length: 35 },
+      { at: 'operating', length: 25 },
+    ]);
     expect(forces(r)).toStrictEqual([0, 0]);
     expect(line(r, 'operating_force_min').label).toMatch(/loose/);
     expect(line(r, 'operating_force_min').pass).toBe(false);

@@ -13,7 +13,16 @@ import { cli, inputFile } from '../helpers.js';
 
 const DEMO = 'examples/washer-trigger.yaml';
 const demo = parse(readFileSync(DEMO, 'utf8')) as Record<string, unknown>;
-const spring = (over: Record<string, unknown> = {}) => ({ units: 'si', material: 'stainless-302', wire_diameter: 1.4, outer_diameter: 15.75, active_coils: 8.25, ends: 'squared-ground', free_length: 49.7, ...over });
+const spring = (over: Record<string, unknown> = {}) => ({
+  units: 'si',
+  material: 'stainless-302',
+  wire_diameter: 1.4,
+  outer_diameter: 15.75,
+  active_coils: 8.25,
+  ends: 'squared-ground',
+  free_length: 49.7,
+  ...over,
+});
 
 type Line = { name: string; value: number | null; limit: number | null; spare: number | null; margin: number | null; pass: boolean; note?: string };
 type Result = { checks: Line[]; spring: { free_length: number; solid_length: number; critical_deflection: number | null } };
@@ -51,21 +60,26 @@ describe('clash reads as coil clearance', () => {
     expect(out.stdout).toMatch(/buckling by 21\.59 mm \(24\.700 mm against < 3\.1066 mm\)/);
   });
 
-  it('over many springs, the sign of each unit margin is the verdict, and clash agrees with analyze\'s overrun (property)', () => {
-    fc.assert(fc.property(
-      fc.double({ min: 30, max: 90, noNaN: true }), fc.double({ min: 4, max: 14, noNaN: true }), fc.constantFrom('fixed-fixed', 'fixed-pivoted', 'pivoted-pivoted', 'fixed-free'),
-      (freeLength, coils, seating) => {
-        const s = spring({ free_length: freeLength, active_coils: coils });
-        const r = check(s, { ...demo, seating }) as unknown as Result;
-        for (const name of ['clash', 'buckling']) {
-          const l = line(r, name);
-          if (l.spare !== null) expect(l.pass, `${name} ${JSON.stringify(l)}`).toBe(l.spare >= -1e-9 * Math.max(1, Math.abs(l.limit!)));
-        }
-        if (freeLength <= 35) return; // loose at the working length: analyze refuses such lengths
-        const clash = line(r, 'clash');
-        const a = analyze({ ...s, seating, lengths: [35, 25] }) as unknown as { clash: { overrun: number | null } };
-        if (a.clash.overrun !== null) expect(clash.value! / (freeLength - 25)).toBeCloseTo(a.clash.overrun, 6);
-      },
-    ), { numRuns: 60, seed: 7 });
+  it("over many springs, the sign of each unit margin is the verdict, and clash agrees with analyze's overrun (property)", () => {
+    fc.assert(
+      fc.property(
+        fc.double({ min: 30, max: 90, noNaN: true }),
+        fc.double({ min: 4, max: 14, noNaN: true }),
+        fc.constantFrom('fixed-fixed', 'fixed-pivoted', 'pivoted-pivoted', 'fixed-free'),
+        (freeLength, coils, seating) => {
+          const s = spring({ free_length: freeLength, active_coils: coils });
+          const r = check(s, { ...demo, seating }) as unknown as Result;
+          for (const name of ['clash', 'buckling']) {
+            const l = line(r, name);
+            if (l.spare !== null) expect(l.pass, `${name} ${JSON.stringify(l)}`).toBe(l.spare >= -1e-9 * Math.max(1, Math.abs(l.limit!)));
+          }
+          if (freeLength <= 35) return; // loose at the working length: analyze refuses such lengths
+          const clash = line(r, 'clash');
+          const a = analyze({ ...s, seating, lengths: [35, 25] }) as unknown as { clash: { overrun: number | null } };
+          if (a.clash.overrun !== null) expect(clash.value! / (freeLength - 25)).toBeCloseTo(a.clash.overrun, 6);
+        },
+      ),
+      { numRuns: 60, seed: 7 },
+    );
   });
 });

@@ -8,7 +8,15 @@ import { check } from '../../src/check/index.js';
 const demo = parse(readFileSync('examples/washer-trigger.yaml', 'utf8')) as Record<string, unknown>;
 const bin = parse(readFileSync('examples/extension-pedal-bin.yaml', 'utf8')) as Record<string, unknown>;
 const binSpring = parse(readFileSync('examples/extension-pedal-bin-spring.yaml', 'utf8')) as Record<string, unknown>;
-const trigger = { units: 'si', material: 'stainless-302', wire_diameter: 1.4, outer_diameter: 15.75, active_coils: 8.25, ends: 'squared-ground', free_length: 49.7 };
+const trigger = {
+  units: 'si',
+  material: 'stainless-302',
+  wire_diameter: 1.4,
+  outer_diameter: 15.75,
+  active_coils: 8.25,
+  ends: 'squared-ground',
+  free_length: 49.7,
+};
 const without = (doc: Record<string, unknown>, ...keys: string[]) => Object.fromEntries(Object.entries(doc).filter(([k]) => !keys.includes(k)));
 type Result = { notes: string[]; checks: { name: string }[] };
 

@@ -16,7 +16,12 @@ const good: Record<string, string> = {
 
 function springText(change: Record<string, string | null>): string {
   const fields = { ...good, ...change };
-  return Object.entries(fields).filter(([, v]) => v !== null).map(([k, v]) => `${k}: ${v}`).join('\n') + '\n';
+  return (
+    Object.entries(fields)
+      .filter(([, v]) => v !== null)
+      .map(([k, v]) => `${k}: ${v}`)
+      .join('\n') + '\n'
+  );
 }
 
 async function expectInputError(text: string, pattern: RegExp, ext = 'yaml') {

@@ -27,17 +27,42 @@ export interface BadCase {
 
 /** A spring to analyse: the valve-return spring of the demo, with working lengths. */
 export const GOOD_SPRING: Record<string, unknown> = {
-  units: 'si', material: 'stainless-302', wire_diameter: 1.0, outer_diameter: 9.0, active_coils: 8, ends: 'squared-ground',
-  free_length: 30, seating: 'fixed-fixed', lengths: [22, 16], cycles: 2e6, peened: false, fatigue_criterion: 'gerber', temperature: 95,
+  units: 'si',
+  material: 'stainless-302',
+  wire_diameter: 1.0,
+  outer_diameter: 9.0,
+  active_coils: 8,
+  ends: 'squared-ground',
+  free_length: 30,
+  seating: 'fixed-fixed',
+  lengths: [22, 16],
+  cycles: 2e6,
+  peened: false,
+  fatigue_criterion: 'gerber',
+  temperature: 95,
 };
 
 /** Requirements to design from: the washer-trigger demo. */
 export const GOOD_REQUIREMENTS: Record<string, unknown> = {
-  units: 'si', material: 'stainless-302', ends: 'squared-ground', seating: 'fixed-fixed',
-  load: { force: 20, length: 35 }, operating_length: 25, operating_force: 32, load_tolerance: '5%',
+  units: 'si',
+  material: 'stainless-302',
+  ends: 'squared-ground',
+  seating: 'fixed-fixed',
+  load: { force: 20, length: 35 },
+  operating_length: 25,
+  operating_force: 32,
+  load_tolerance: '5%',
   envelope: { max_outer_diameter: 16, min_inner_diameter: 6.5, max_free_length: 60 },
-  cycles: 5e5, peened: false, temperature: 40, wire_sizes: 'metric', active_coils: [3, 30], coil_step: 0.25, index: [4, 12],
-  rank: 'mass', top: 10, seed: 1,
+  cycles: 5e5,
+  peened: false,
+  temperature: 40,
+  wire_sizes: 'metric',
+  active_coils: [3, 30],
+  coil_step: 0.25,
+  index: [4, 12],
+  rank: 'mass',
+  top: 10,
+  seed: 1,
 };
 
 const DELETE = Symbol('delete');
@@ -60,11 +85,30 @@ const spring = (change: Record<string, unknown>) => ({ text: yamlOf(changed(GOOD
 const requirements = (change: Record<string, unknown>) => ({ text: yamlOf(changed(GOOD_REQUIREMENTS, change)) });
 
 /** A spring-file field case (analyze). */
-const S = (name: string, change: Record<string, unknown>, field: string): BadCase => ({ name: `spring: ${name}`, command: 'analyze', file: spring(change), code: 2, field });
+const S = (name: string, change: Record<string, unknown>, field: string): BadCase => ({
+  name: `spring: ${name}`,
+  command: 'analyze',
+  file: spring(change),
+  code: 2,
+  field,
+});
 /** A requirements-file field case (design). */
-const R = (name: string, change: Record<string, unknown>, field: string): BadCase => ({ name: `requirements: ${name}`, command: 'design', file: requirements(change), code: 2, field });
+const R = (name: string, change: Record<string, unknown>, field: string): BadCase => ({
+  name: `requirements: ${name}`,
+  command: 'design',
+  file: requirements(change),
+  code: 2,
+  field,
+});
 /** A command-line case on the good requirements. */
-const O = (name: string, command: Command, args: string[], field: string, existing?: string[]): BadCase => ({ name: `${command} ${name}`, command, args, code: 2, field, existing });
+const O = (name: string, command: Command, args: string[], field: string, existing?: string[]): BadCase => ({
+  name: `${command} ${name}`,
+  command,
+  args,
+  code: 2,
+  field,
+  existing,
+});
 
 // ---- whole files -------------------------------------------------------------------------------------
 
@@ -72,14 +116,18 @@ const utf8 = (s: string) => new TextEncoder().encode(s);
 const concat = (...parts: Uint8Array[]) => {
   const out = new Uint8Array(parts.reduce((n, p) => n + p.length, 0));
   let at = 0;
-  for (const p of parts) { out.set(p, at); at += p.length; }
+  for (const p of parts) {
+    out.set(p, at);
+    at += p.length;
+  }
   return out;
 };
 function utf16(text: string, bigEndian: boolean, bom: boolean): Uint8Array {
   const out: number[] = bom ? (bigEndian ? [0xfe, 0xff] : [0xff, 0xfe]) : [];
   for (let i = 0; i < text.length; i++) {
     const c = text.charCodeAt(i);
-    if (bigEndian) out.push(c >> 8, c & 0xff); else out.push(c & 0xff, c >> 8);
+    if (bigEndian) out.push(c >> 8, c & 0xff);
+    else out.push(c & 0xff, c >> 8);
   }
   return new Uint8Array(out);
 }
@@ -87,8 +135,14 @@ const goodSpringYaml = yamlOf(GOOD_SPRING);
 const goodReqYaml = yamlOf(GOOD_REQUIREMENTS);
 
 /** An alias bomb: each level lists the one before ten times (10^9 leaves if expanded). */
-const aliasBomb = ['a: &a ["lol","lol","lol","lol","lol","lol","lol","lol","lol","lol"]',
-  ...'bcdefghi'.split('').map((k, i) => { const prev = 'abcdefghi'[i]; return `${k}: &${k} [${Array(10).fill(`*${prev}`).join(',')}]`; })].join('\n') + '\n';
+const aliasBomb =
+  [
+    'a: &a ["lol","lol","lol","lol","lol","lol","lol","lol","lol","lol"]',
+    ...'bcdefghi'.split('').map((k, i) => {
+      const prev = 'abcdefghi'[i];
+      return `${k}: &${k} [${Array(10).fill(`*${prev}`).join(',')}]`;
+    }),
+  ].join('\n') + '\n';
 
 function wholeFiles(command: 'analyze' | 'design', good: string): BadCase[] {
   const C = (name: string, file: BadCase['file'], field: string): BadCase => ({ name: `${command} file: ${name}`, command, file, code: 2, field });
@@ -100,7 +154,11 @@ function wholeFiles(command: 'analyze' | 'design', good: string): BadCase[] {
     C('empty JSON object', { text: '{}', ext: 'json' }, 'material'),
     C('binary bytes', { bytes: new Uint8Array([0x89, 0x50, 0x4e, 0x47, 0x0d, 0x0a, 0x1a, 0x0a, 0, 0, 0, 0x0d, 0x49, 0x48, 0x44, 0x52]) }, 'NUL byte'),
     C('random binary', { bytes: new Uint8Array(Array.from({ length: 512 }, (_, i) => (i * 73 + 11) % 256)) }, 'UTF-8'),
-    C('invalid UTF-8 in a value', { bytes: concat(utf8('units: si\nmaterial: stainless-302\nends: "squared'), new Uint8Array([0xc3, 0x28]), utf8('"\n')) }, 'line 3'),
+    C(
+      'invalid UTF-8 in a value',
+      { bytes: concat(utf8('units: si\nmaterial: stainless-302\nends: "squared'), new Uint8Array([0xc3, 0x28]), utf8('"\n')) },
+      'line 3',
+    ),
     C('a lone continuation byte', { bytes: concat(utf8(good), new Uint8Array([0x80]), utf8('\n')) }, 'invalid UTF-8'),
     C('an overlong encoding', { bytes: concat(utf8('units: si\n'), new Uint8Array([0xc0, 0xaf]), utf8('\n')) }, 'line 2'),
     C('UTF-16 LE with a byte-order mark', { bytes: utf16(good, false, true) }, 'UTF-16'),
@@ -113,9 +171,28 @@ function wholeFiles(command: 'analyze' | 'design', good: string): BadCase[] {
     C('an alias bomb', { text: good + aliasBomb }, 'alias'),
     C('an alias to no anchor', { text: good + 'extra: *nothing\n' }, 'no &nothing'),
     C('a repeated top-level key (YAML)', { text: good + 'units: us\n' }, 'units is repeated'),
-    C('a repeated nested key (YAML)', { text: command === 'design' ? good + 'safety:\n  static: 1.2\n  static: 1.5\n' : good.replace('material: stainless-302', 'material:\n  like: stainless-302\n  like: music-wire') }, command === 'design' ? 'safety.static is repeated' : 'material.like is repeated'),
+    C(
+      'a repeated nested key (YAML)',
+      {
+        text:
+          command === 'design'
+            ? good + 'safety:\n  static: 1.2\n  static: 1.5\n'
+            : good.replace('material: stainless-302', 'material:\n  like: stainless-302\n  like: music-wire'),
+      },
+      command === 'design' ? 'safety.static is repeated' : 'material.like is repeated',
+    ),
     C('a repeated key names its line (YAML)', { text: 'units: si\nunits: si\n' }, 'line 2'),
-    C('a repeated top-level key (JSON)', { text: JSON.stringify(JSON.parse(JSON.stringify(command === 'design' ? GOOD_REQUIREMENTS : GOOD_SPRING)), null, 1).replace(/\n}$/, ',\n "units": "us"\n}'), ext: 'json' }, 'units is repeated'),
+    C(
+      'a repeated top-level key (JSON)',
+      {
+        text: JSON.stringify(JSON.parse(JSON.stringify(command === 'design' ? GOOD_REQUIREMENTS : GOOD_SPRING)), null, 1).replace(
+          /\n}$/,
+          ',\n "units": "us"\n}',
+        ),
+        ext: 'json',
+      },
+      'units is repeated',
+    ),
     C('a repeated nested key (JSON)', { text: '{\n"units": "si",\n"load": {"force": 20,\n "force": 30}\n}', ext: 'json' }, 'load.force is repeated'),
     C('a repeated key names its line (JSON)', { text: '{\n"units": "si",\n\n"units": "us"\n}', ext: 'json' }, 'line 4'),
     C('a YAML syntax error names its line', { text: 'units: si\nmaterial: [stainless-302\nends: plain\n' }, 'line'),
@@ -136,10 +213,28 @@ function wholeFiles(command: 'analyze' | 'design', good: string): BadCase[] {
     C('a hex number in the file', { text: good.replace(/^units: si$/m, 'units: si\nseed: 0x10') }, 'seed'),
     C('an octal number in the file', { text: good.replace(/^units: si$/m, 'units: si\ncycles: 0o17') }, 'cycles'),
     C('a __proto__ key (YAML)', { text: good + '__proto__:\n  cycles: 100000\n' }, '__proto__'),
-    C('a __proto__ key (JSON)', { text: JSON.stringify(command === 'design' ? GOOD_REQUIREMENTS : GOOD_SPRING).replace(/^\{/, '{"__proto__": {"cycles": 1e5}, '), ext: 'json' }, '__proto__'),
+    C(
+      'a __proto__ key (JSON)',
+      { text: JSON.stringify(command === 'design' ? GOOD_REQUIREMENTS : GOOD_SPRING).replace(/^\{/, '{"__proto__": {"cycles": 1e5}, '), ext: 'json' },
+      '__proto__',
+    ),
     C('a constructor key', { text: good + 'constructor:\n  prototype:\n    cycles: 1\n' }, 'constructor'),
-    C('a nested __proto__ key (YAML)', { text: good.replace(/^material: stainless-302$/m, 'material:\n  like: stainless-302\n  __proto__:\n    density: 1') }, 'material.__proto__'),
-    C('a nested __proto__ key (JSON)', { text: JSON.stringify(command === 'design' ? GOOD_REQUIREMENTS : GOOD_SPRING).replace('"material":"stainless-302"', '"material":{"like":"stainless-302","__proto__":{"density":1}}'), ext: 'json' }, 'material.__proto__'),
+    C(
+      'a nested __proto__ key (YAML)',
+      { text: good.replace(/^material: stainless-302$/m, 'material:\n  like: stainless-302\n  __proto__:\n    density: 1') },
+      'material.__proto__',
+    ),
+    C(
+      'a nested __proto__ key (JSON)',
+      {
+        text: JSON.stringify(command === 'design' ? GOOD_REQUIREMENTS : GOOD_SPRING).replace(
+          '"material":"stainless-302"',
+          '"material":{"like":"stainless-302","__proto__":{"density":1}}',
+        ),
+        ext: 'json',
+      },
+      'material.__proto__',
+    ),
     C('deep JSON object nesting', { text: `{"units": "si", "x": ${'{"a": '.repeat(100)}1${'}'.repeat(100)}}`, ext: 'json' }, 'levels of nesting'),
     C('a misspelt field', { text: good + 'matrial: music-wire\n' }, 'matrial'),
     C('a 1 MB string in a field', { text: good.replace(/^units: si$/m, `units: ${'z'.repeat(900 * 1024)}`) }, 'units'),
@@ -164,7 +259,11 @@ const springFields: BadCase[] = [
   S('override density as a stress', { material: { like: 'stainless-302', density: '8 MPa' } }, 'material.density'),
   S('override density huge', { material: { like: 'stainless-302', density: 1e12 } }, 'material.density'),
   S('override tensile strength NaN', { material: { like: 'stainless-302', tensile_strength: 'NaN' } }, 'material.tensile_strength'),
-  S('override allowable above the tensile strength', { material: { like: 'stainless-302', tensile_strength: 1500, allowable_stress: 1600 } }, 'material.allowable_stress'),
+  S(
+    'override allowable above the tensile strength',
+    { material: { like: 'stainless-302', tensile_strength: 1500, allowable_stress: 1600 } },
+    'material.allowable_stress',
+  ),
   S('wire diameter missing', { wire_diameter: DELETE }, 'wire_diameter'),
   S('wire diameter as text', { wire_diameter: 'thin' }, 'wire_diameter'),
   S('wire diameter as a force', { wire_diameter: '1 N' }, 'wire_diameter'),
@@ -241,7 +340,11 @@ const requirementFields: BadCase[] = [
   R('material family unknown', { material: { family: 'plastic' } }, 'material.family'),
   R('material family with a stray field', { material: { family: 'stainless', grade: 2 } }, 'material.grade'),
   R('material override E below G', { material: { like: 'stainless-302', elastic_modulus: '60 GPa' } }, 'material.elastic_modulus'),
-  R('material override in a list, E below G', { material: ['music-wire', { like: 'stainless-302', elastic_modulus: '60 GPa' }] }, 'material[1].elastic_modulus'),
+  R(
+    'material override in a list, E below G',
+    { material: ['music-wire', { like: 'stainless-302', elastic_modulus: '60 GPa' }] },
+    'material[1].elastic_modulus',
+  ),
   R('material override allowable negative', { material: { like: 'stainless-302', allowable_stress: -5 } }, 'material.allowable_stress'),
   R('ends an empty list', { ends: [] }, 'ends'),
   R('ends with an unknown type', { ends: ['plain', 'flared'] }, 'ends[1]'),
@@ -278,8 +381,8 @@ const requirementFields: BadCase[] = [
   R('envelope with a stray field', { 'envelope.max_od': 16 }, 'envelope.max_od'),
   R('wire sizes an unknown series', { wire_sizes: 'imperial' }, 'wire_sizes'),
   R('wire sizes an empty list', { wire_sizes: [] }, 'wire_sizes'),
-  R('wire sizes below the material\'s range', { wire_sizes: [0.01, 1] }, 'wire_sizes[0]'),
-  R('wire sizes above the material\'s range', { wire_sizes: [1, 40] }, 'wire_sizes[1]'),
+  R("wire sizes below the material's range", { wire_sizes: [0.01, 1] }, 'wire_sizes[0]'),
+  R("wire sizes above the material's range", { wire_sizes: [1, 40] }, 'wire_sizes[1]'),
   R('wire sizes with a negative size', { wire_sizes: [1, -1] }, 'wire_sizes[1]'),
   R('wire sizes 1e-300 mm', { wire_sizes: [1e-300] }, 'wire_sizes[0]'),
   R('wire sizes as a number', { wire_sizes: 1.2 }, 'wire_sizes'),
@@ -295,8 +398,19 @@ const requirementFields: BadCase[] = [
   R('coil step huge', { coil_step: 1e6 }, 'coil_step'),
   // Every material, every end type at coil_step 0.01 (2,149,996 combinations) is the genetic search's
   // under --strategy auto; only a grid forced onto it is too much work.
-  { ...R('coil step too fine for a forced grid', { material: 'any', ends: ['plain', 'squared', 'squared-ground', 'plain-ground'], coil_step: 0.01 }, 'coil_step'), args: ['--strategy', 'grid'] },
-  R('coil step too fine for the best of every wire', { material: 'any', ends: ['plain', 'squared', 'squared-ground', 'plain-ground'], coil_step: 0.01, best_per_wire: true }, 'coil_step'),
+  {
+    ...R(
+      'coil step too fine for a forced grid',
+      { material: 'any', ends: ['plain', 'squared', 'squared-ground', 'plain-ground'], coil_step: 0.01 },
+      'coil_step',
+    ),
+    args: ['--strategy', 'grid'],
+  },
+  R(
+    'coil step too fine for the best of every wire',
+    { material: 'any', ends: ['plain', 'squared', 'squared-ground', 'plain-ground'], coil_step: 0.01, best_per_wire: true },
+    'coil_step',
+  ),
   R('index reversed', { index: [12, 4] }, 'index'),
   R('index at 1', { index: [1, 12] }, 'index[0]'),
   R('index huge', { index: [4, 1e6] }, 'index[1]'),
@@ -371,7 +485,12 @@ const options: BadCase[] = [
   O('--set diameter_resolution=1e-9', 'design', ['--set', 'diameter_resolution=1e-9'], '--set diameter_resolution'),
   O('--set removing a required field', 'design', ['--set', 'load=none'], '--set load'),
   O('--set an object with a __proto__ key', 'design', ['--set', 'material={like: stainless-302, __proto__: {density: 1}}'], '--set material.__proto__'),
-  O('--set a YAML alias bomb', 'design', ['--set', 'material={a: &a [x,x,x,x,x,x,x,x,x,x], b: &b [*a,*a,*a,*a,*a,*a,*a,*a,*a,*a], c: [*b,*b,*b,*b,*b,*b,*b,*b,*b,*b]}'], 'alias bomb'),
+  O(
+    '--set a YAML alias bomb',
+    'design',
+    ['--set', 'material={a: &a [x,x,x,x,x,x,x,x,x,x], b: &b [*a,*a,*a,*a,*a,*a,*a,*a,*a,*a], c: [*b,*b,*b,*b,*b,*b,*b,*b,*b,*b]}'],
+    'alias bomb',
+  ),
   O('--max-od negative', 'design', ['--max-od', '-3'], '--max-od'),
   O('--max-od as a force', 'design', ['--max-od', '15 N'], '--max-od'),
   O('--min-id empty', 'design', ['--min-id', ''], '--min-id'),
@@ -420,7 +539,13 @@ const options: BadCase[] = [
   O('--vary __proto__', 'sweep', ['--vary', '__proto__.cycles=1:2:1'], '--vary'),
   O('--vary a bad path', 'sweep', ['--vary', 'Envelope=1:2:1'], '--vary'),
   O('-o existing without --force', 'sweep', ['--vary', 'envelope.max_outer_diameter=14:16:1', '-o', '{dir}/exists.csv'], '--output', ['exists.csv']),
-  O('-o new with --report existing', 'sweep', ['--vary', 'envelope.max_outer_diameter=14:16:1', '-o', '{dir}/new.csv', '--report', '{dir}/exists.html'], '--report', ['exists.html']),
+  O(
+    '-o new with --report existing',
+    'sweep',
+    ['--vary', 'envelope.max_outer_diameter=14:16:1', '-o', '{dir}/new.csv', '--report', '{dir}/exists.html'],
+    '--report',
+    ['exists.html'],
+  ),
   O('--report over an existing file', 'analyze', ['--report', '{dir}/exists.html'], '--report', ['exists.html']),
   O('--report in a missing folder', 'analyze', ['--report', '{dir}/none/r.html'], '--report'),
 ];

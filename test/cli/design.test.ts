@@ -30,7 +30,19 @@ describe('coilfront design', () => {
     expect(j.feasible).toBeGreaterThan(0);
     expect(j.candidates.length).toBe(10);
     for (const c of j.candidates) {
-      for (const key of ['material', 'wire_diameter', 'mean_diameter', 'outer_diameter', 'inner_diameter', 'active_coils', 'total_coils', 'free_length', 'solid_length', 'rate', 'mass']) {
+      for (const key of [
+        'material',
+        'wire_diameter',
+        'mean_diameter',
+        'outer_diameter',
+        'inner_diameter',
+        'active_coils',
+        'total_coils',
+        'free_length',
+        'solid_length',
+        'rate',
+        'mass',
+      ]) {
         expect(c[key], key).toBeDefined();
       }
       expect(c.outer_diameter).toBeLessThanOrEqual(16 + 1e-6);
@@ -96,7 +108,9 @@ top: 6
     expect(keys.length).toBeGreaterThan(2);
     expect(per.candidates[0].mass).toBeCloseTo(all.candidates[0].mass, 12);
     for (const c of per.candidates.slice(0, 3)) {
-      const only = JSON.parse((await cli('design', req, '--json', '--set', `material=${c.material}`, '--set', `wire_sizes=[${c.wire_diameter}]`, '--top', '1')).stdout);
+      const only = JSON.parse(
+        (await cli('design', req, '--json', '--set', `material=${c.material}`, '--set', `wire_sizes=[${c.wire_diameter}]`, '--top', '1')).stdout,
+      );
       expect(only.candidates[0].mass).toBeCloseTo(c.mass, 12);
     }
   });
@@ -137,9 +151,15 @@ top: 6
       ['units: si\nmaterial: music-wire\nenvelope: { max_outer_diameter: 20 }\n', /load: expected the force at the working length/],
       ['units: si\nmaterial: music-wire\nload: { force: 10, length: 30 }\n', /envelope: expected a mapping of envelope limits/],
       ['units: si\nmaterial: { family: plastics }\nload: { force: 10, length: 30 }\nenvelope: {}\n', /material\.family: expected one of carbon-steel/],
-      ['units: si\nmaterial: music-wire\nload: { force: 10, length: 30 }\noperating_length: 40\nenvelope: {}\n', /operating_length: expected a length shorter than the working length/],
+      [
+        'units: si\nmaterial: music-wire\nload: { force: 10, length: 30 }\noperating_length: 40\nenvelope: {}\n',
+        /operating_length: expected a length shorter than the working length/,
+      ],
       ['units: si\nmaterial: music-wire\nload: { force: 10, length: "30 N" }\nenvelope: {}\n', /load\.length: expected a length/],
-      ['units: si\nmaterial: music-wire\nload: { force: 10, length: 30 }\nenvelope: { max_outer_diameter: -5 }\n', /envelope\.max_outer_diameter: expected a positive length/],
+      [
+        'units: si\nmaterial: music-wire\nload: { force: 10, length: 30 }\nenvelope: { max_outer_diameter: -5 }\n',
+        /envelope\.max_outer_diameter: expected a positive length/,
+      ],
       ['units: si\nmaterial: music-wire\nload: { force: 10, length: 30 }\nenvelope: {}\nwire_sizes: imperial\n', /wire_sizes: expected a wire series/],
     ];
     for (const [text, pattern] of cases) {

@@ -14,17 +14,35 @@ const SPRING = 'examples/extension-pedal-bin-spring.yaml';
 const demoDoc = parse(readFileSync(DEMO, 'utf8')) as Record<string, unknown>;
 
 /** The demo requirements written in US customary units (exact conversions). */
-const usDemo = inputFile(stringify({
-  ...demoDoc, units: 'us', load: { force: `${20 / 4.4482216152605} lbf`, length: `${60 / 25.4} in` }, operating_length: `${75 / 25.4} in`,
-  operating_force: `${45 / 4.4482216152605} lbf`, envelope: { max_outer_diameter: `${14 / 25.4} in`, max_free_length: `${55 / 25.4} in`, max_extended_length: `${85 / 25.4} in` },
-}));
+const usDemo = inputFile(
+  stringify({
+    ...demoDoc,
+    units: 'us',
+    load: { force: `${20 / 4.4482216152605} lbf`, length: `${60 / 25.4} in` },
+    operating_length: `${75 / 25.4} in`,
+    operating_force: `${45 / 4.4482216152605} lbf`,
+    envelope: { max_outer_diameter: `${14 / 25.4} in`, max_free_length: `${55 / 25.4} in`, max_extended_length: `${85 / 25.4} in` },
+  }),
+);
 
 /** A designed spring (JSON record) as a spring file, at the requirement's lengths. */
 function springFileOf(c: Record<string, any>, lengths: number[], extra: Record<string, unknown> = {}): string {
-  return inputFile(stringify({
-    kind: 'extension', units: 'si', material: c.material, wire_diameter: c.wire_diameter, mean_diameter: c.mean_diameter, body_coils: c.body_coils,
-    initial_tension: c.initial_tension, loop: c.loop, loop_radius: c.loop_radius, bend_radius: c.bend_radius, lengths, ...extra,
-  }));
+  return inputFile(
+    stringify({
+      kind: 'extension',
+      units: 'si',
+      material: c.material,
+      wire_diameter: c.wire_diameter,
+      mean_diameter: c.mean_diameter,
+      body_coils: c.body_coils,
+      initial_tension: c.initial_tension,
+      loop: c.loop,
+      loop_radius: c.loop_radius,
+      bend_radius: c.bend_radius,
+      lengths,
+      ...extra,
+    }),
+  );
 }
 
 describe('coilfront analyze, kind: extension', () => {
@@ -57,8 +75,17 @@ describe('coilfront analyze, kind: extension', () => {
   it('a spring file written in US units gives the same analysis as in SI', async () => {
     const si = JSON.parse((await cli('analyze', SPRING, '--json')).stdout);
     const doc = parse(readFileSync(SPRING, 'utf8'));
-    const usFile = inputFile(stringify({ ...doc, units: 'us', wire_diameter: `${doc.wire_diameter / 25.4} in`, mean_diameter: `${doc.mean_diameter / 25.4} in`,
-      initial_tension: `${7.2 / 4.4482216152605} lbf`, bend_radius: `${doc.bend_radius / 25.4} in`, lengths: doc.lengths.map((v: number) => `${v / 25.4} in`) }));
+    const usFile = inputFile(
+      stringify({
+        ...doc,
+        units: 'us',
+        wire_diameter: `${doc.wire_diameter / 25.4} in`,
+        mean_diameter: `${doc.mean_diameter / 25.4} in`,
+        initial_tension: `${7.2 / 4.4482216152605} lbf`,
+        bend_radius: `${doc.bend_radius / 25.4} in`,
+        lengths: doc.lengths.map((v: number) => `${v / 25.4} in`),
+      }),
+    );
     const us = JSON.parse((await cli('analyze', usFile, '--json')).stdout);
     for (const key of ['rate', 'mass']) expect(relClose(us[key], si[key], 1e-9), key).toBe(true);
     expect(relClose(us.fatigue.loop_bending.safety_factor, si.fatigue.loop_bending.safety_factor, 1e-9)).toBe(true);
@@ -102,8 +129,10 @@ describe('coilfront design, kind: extension', () => {
       // Within the requirement's limits, with every safety factor at or above its target.
       expect(a.geometry.outer_diameter).toBeLessThanOrEqual(14 + 1e-9);
       expect(a.geometry.free_length).toBeLessThanOrEqual(55 + 1e-9);
-      for (const v of Object.values(a.safety_factors.static).filter((x) => typeof x === 'number')) expect(v as number).toBeGreaterThanOrEqual(j.requirements.safety.static - 1e-6);
-      for (const v of Object.values(a.safety_factors.fatigue).filter((x) => typeof x === 'number')) expect(v as number).toBeGreaterThanOrEqual(j.requirements.safety.fatigue - 1e-6);
+      for (const v of Object.values(a.safety_factors.static).filter((x) => typeof x === 'number'))
+        expect(v as number).toBeGreaterThanOrEqual(j.requirements.safety.static - 1e-6);
+      for (const v of Object.values(a.safety_factors.fatigue).filter((x) => typeof x === 'number'))
+        expect(v as number).toBeGreaterThanOrEqual(j.requirements.safety.fatigue - 1e-6);
       expect(a.initial_tension.position).toBe('inside');
       expect(a.points[1].force).toBeGreaterThanOrEqual(45 * 0.9 - 1e-6);
       expect(a.points[1].force).toBeLessThanOrEqual(45 * 1.1 + 1e-6);
@@ -129,7 +158,7 @@ describe('coilfront design, kind: extension', () => {
     expect((await cli('design', file, '--set', `envelope.max_outer_diameter=${5 + 0.9 * (od.to - 5)}`)).code).toBe(1);
   });
 
-  it('--per-wire lists one spring per wire size; --strategy genetic finds the grid\'s best spring', async () => {
+  it("--per-wire lists one spring per wire size; --strategy genetic finds the grid's best spring", async () => {
     const j = JSON.parse((await cli('design', DEMO, '--json', '--per-wire')).stdout);
     const wires = j.candidates.map((c: any) => `${c.material}/${c.wire_diameter}`);
     expect(new Set(wires).size).toBe(wires.length);
@@ -168,7 +197,9 @@ describe('coilfront frontier and sweep, kind: extension', () => {
       expect(relClose(a.mass, c.mass, 1e-9)).toBe(true);
       expect(relClose(a.geometry.outer_diameter, c.outer_diameter, 1e-12)).toBe(true);
       expect(a.geometry.outer_diameter).toBeLessThanOrEqual(14 + 1e-9);
-      expect(Math.min(a.safety_factors.static.body, a.safety_factors.static.loop_bending, a.safety_factors.static.loop_torsion)).toBeGreaterThanOrEqual(1.2 - 1e-6);
+      expect(Math.min(a.safety_factors.static.body, a.safety_factors.static.loop_bending, a.safety_factors.static.loop_torsion)).toBeGreaterThanOrEqual(
+        1.2 - 1e-6,
+      );
       expect(a.initial_tension.position).toBe('inside');
     }
   });

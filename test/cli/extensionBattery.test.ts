@@ -15,10 +15,22 @@ const SPRING = parse(readFileSync('examples/extension-pedal-bin-spring.yaml', 'u
 const REQ = parse(readFileSync('examples/extension-pedal-bin.yaml', 'utf8')) as Record<string, unknown>;
 const DELETE = undefined;
 
-interface Case { name: string; command: 'analyze' | 'design' | 'frontier' | 'sweep'; change?: Record<string, unknown>; args?: string[]; code?: number; field: string }
+interface Case {
+  name: string;
+  command: 'analyze' | 'design' | 'frontier' | 'sweep';
+  change?: Record<string, unknown>;
+  args?: string[];
+  code?: number;
+  field: string;
+}
 
 const spring = (name: string, change: Record<string, unknown>, field: string): Case => ({ name: `spring: ${name}`, command: 'analyze', change, field });
-const req = (name: string, change: Record<string, unknown>, field: string, command: Case['command'] = 'design'): Case => ({ name: `requirements: ${name}`, command, change, field });
+const req = (name: string, change: Record<string, unknown>, field: string, command: Case['command'] = 'design'): Case => ({
+  name: `requirements: ${name}`,
+  command,
+  change,
+  field,
+});
 
 const CASES: Case[] = [
   spring('kind is not a spring kind', { kind: 'helical' }, 'kind'),
@@ -65,17 +77,32 @@ const CASES: Case[] = [
   req('frontier: a bad loop type', { loop: 'crochet' }, 'loop', 'frontier'),
   // The shared readers (src/input/readers.ts): the same rules as for compression requirements.
   req('material override with E below 2G', { material: { like: 'music-wire', elastic_modulus: '100 GPa' } }, 'material.elastic_modulus'),
-  req('material override in a list, E above 3G', { material: ['music-wire', { like: 'music-wire', elastic_modulus: '300 GPa' }] }, 'material[1].elastic_modulus'),
+  req(
+    'material override in a list, E above 3G',
+    { material: ['music-wire', { like: 'music-wire', elastic_modulus: '300 GPa' }] },
+    'material[1].elastic_modulus',
+  ),
   req('safety.static below 1', { 'safety.static': 0.8 }, 'safety.static'),
   req('safety.surge unknown key', { 'safety.sure': 2 }, 'safety.sure'),
   req('sweep: a bad bend index', { bend_index: 0 }, 'bend_index', 'sweep'),
   { name: 'option: --min-id is a compression limit', command: 'design', args: ['--min-id', '5'], field: '--min-id' },
-  { name: 'option: --strategy grid on a space too large for the grid', command: 'design', change: { material: 'any', body_coils: [3, 80], coil_step: 0.005 }, args: ['--strategy', 'grid'], field: 'coil_step' },
+  {
+    name: 'option: --strategy grid on a space too large for the grid',
+    command: 'design',
+    change: { material: 'any', body_coils: [3, 80], coil_step: 0.005 },
+    args: ['--strategy', 'grid'],
+    field: 'coil_step',
+  },
   { name: 'option: --spec (no extension sheet yet)', command: 'design', args: ['--spec', '{dir}/spec.html'], field: '--spec' },
   { name: 'option: frontier --x of compression springs only', command: 'frontier', args: ['--x', 'fatigue_safety'], field: '--x' },
   { name: 'option: frontier --y of compression springs only', command: 'frontier', args: ['--y', 'static_safety'], field: '--y' },
   { name: 'option: sweep --vary of a bad bend index', command: 'sweep', args: ['--vary', 'bend_index=0:1:0.5'], field: '--vary' },
-  { name: 'option: --set a bad initial_tension_range', command: 'design', args: ['--set', 'initial_tension_range=loose'], field: '--set initial_tension_range' },
+  {
+    name: 'option: --set a bad initial_tension_range',
+    command: 'design',
+    args: ['--set', 'initial_tension_range=loose'],
+    field: '--set initial_tension_range',
+  },
 ];
 
 const withoutEchoes = (text: string) => text.replace(/"(?:[^"\\]|\\.)*"/g, '""');
@@ -83,7 +110,9 @@ const withoutEchoes = (text: string) => text.replace(/"(?:[^"\\]|\\.)*"/g, '""')
 describe('extension bad-input battery', () => {
   it.each(CASES.map((c) => [c.name, c] as const))('%s', async (_name, c) => {
     const base = c.command === 'analyze' ? SPRING : REQ;
-    const doc = c.change ? changed(base, Object.fromEntries(Object.entries(c.change).map(([k, v]) => [k, v === undefined ? Symbol.for('coilfront-test-delete') : v]))) : base;
+    const doc = c.change
+      ? changed(base, Object.fromEntries(Object.entries(c.change).map(([k, v]) => [k, v === undefined ? Symbol.for('coilfront-test-delete') : v])))
+      : base;
     const outDir = mkdtempSync(join(tmpdir(), 'coilfront-xbattery-out-'));
     const input = join(mkdtempSync(join(tmpdir(), 'coilfront-xbattery-in-')), 'input.yaml');
     writeFileSync(input, stringify(stripDeleted(doc)));
@@ -106,6 +135,11 @@ describe('extension bad-input battery', () => {
 /** Remove the fields marked for deletion. */
 function stripDeleted(v: unknown): unknown {
   if (Array.isArray(v)) return v.map(stripDeleted);
-  if (v && typeof v === 'object') return Object.fromEntries(Object.entries(v).filter(([, x]) => x !== Symbol.for('coilfront-test-delete')).map(([k, x]) => [k, stripDeleted(x)]));
+  if (v && typeof v === 'object')
+    return Object.fromEntries(
+      Object.entries(v)
+        .filter(([, x]) => x !== Symbol.for('coilfront-test-delete'))
+        .map(([k, x]) => [k, stripDeleted(x)]),
+    );
   return v;
 }

@@ -28,7 +28,15 @@ describe('coilfront program', () => {
   it('shows a progress bar on stderr only when stderr is a terminal; stdout carries only the result', async () => {
     let out = '';
     let err = '';
-    const code = await run(['design', 'examples/washer-trigger.yaml', '--json'], { stdout: (t) => { out += t; }, stderr: (t) => { err += t; }, interactive: true });
+    const code = await run(['design', 'examples/washer-trigger.yaml', '--json'], {
+      stdout: (t) => {
+        out += t;
+      },
+      stderr: (t) => {
+        err += t;
+      },
+      interactive: true,
+    });
     expect(code).toBe(0);
     expect(err).toMatch(/searching \[#+ *\] \d+%/);
     expect(() => JSON.parse(out)).not.toThrow();

@@ -2,7 +2,11 @@
 // No outside values here: the expected outputs are coilfront's own, recorded before the seam
 // restructuring (issue 7) so that every later commit can prove it changed no output byte.
 /** `output`: the case writes a file (its path is '{out}' in args) and the file is what is recorded. */
-export interface GoldenCase { name: string; args: string[]; output?: boolean }
+export interface GoldenCase {
+  name: string;
+  args: string[];
+  output?: boolean;
+}
 
 const demo = 'examples/washer-trigger.yaml';
 const dispenser = 'examples/stock-dispenser.yaml';

@@ -16,7 +16,9 @@ describe('outputs stay byte-identical', () => {
       const out = c.output ? tempPath(c.name) : '';
       const r = await cli(...c.args.map((a) => (a === '{out}' ? out : a)));
       // A written file is recorded instead of the streams (stderr names the temporary path).
-      const recorded = c.output ? `exit ${r.code}\n--- ${c.args[c.args.indexOf('{out}') - 1]}\n${readFileSync(out, 'utf8')}` : `exit ${r.code}\n--- stderr\n${r.stderr}--- stdout\n${r.stdout}`;
+      const recorded = c.output
+        ? `exit ${r.code}\n--- ${c.args[c.args.indexOf('{out}') - 1]}\n${readFileSync(out, 'utf8')}`
+        : `exit ${r.code}\n--- stderr\n${r.stderr}--- stdout\n${r.stdout}`;
       const path = join(dir, c.name);
       if (update) {
         mkdirSync(dir, { recursive: true });

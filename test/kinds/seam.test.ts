@@ -63,6 +63,9 @@ describe('the spring-kind interface', () => {
       }
     }
     expect(branches.filter((p) => !(p in KIND_BRANCH_DEBTS))).toEqual([]);
-    expect(Object.keys(KIND_BRANCH_DEBTS).filter((p) => !branches.includes(p)), 'paid debts: delete their lines').toEqual([]);
+    expect(
+      Object.keys(KIND_BRANCH_DEBTS).filter((p) => !branches.includes(p)),
+      'paid debts: delete their lines',
+    ).toEqual([]);
   });
 });

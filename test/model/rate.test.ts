@@ -20,27 +20,46 @@ describe('spring rate k = G d^4 / (8 D^3 Na) (Castigliano; Shigley eq. 10-9)', (
 
   it('the direct-shear rate is the plain rate over directShearFactor(C) = 1 + 1/(2C^2) (Shigley eq. 10-8 derivation; property)', () => {
     expect(directShearFactor(4)).toBe(1 + 1 / 32);
-    fc.assert(fc.property(fc.double({ min: 0.2, max: 10, noNaN: true }), fc.double({ min: 3, max: 20, noNaN: true }), fc.double({ min: 2, max: 40, noNaN: true }), (d, c, n) => {
-      expect(springRate(79000, d, c * d, n, true) * directShearFactor(c) / springRate(79000, d, c * d, n)).toBeCloseTo(1, 12);
-    }));
+    fc.assert(
+      fc.property(
+        fc.double({ min: 0.2, max: 10, noNaN: true }),
+        fc.double({ min: 3, max: 20, noNaN: true }),
+        fc.double({ min: 2, max: 40, noNaN: true }),
+        (d, c, n) => {
+          expect((springRate(79000, d, c * d, n, true) * directShearFactor(c)) / springRate(79000, d, c * d, n)).toBeCloseTo(1, 12);
+        },
+      ),
+    );
   });
 
   it('scales as d^4 / (D^3 Na) (property)', () => {
-    fc.assert(fc.property(
-      fc.double({ min: 0.1, max: 20, noNaN: true }), fc.double({ min: 0.5, max: 200, noNaN: true }), fc.double({ min: 1, max: 50, noNaN: true }),
-      fc.double({ min: 0.5, max: 2, noNaN: true }),
-      (d, D, n, s) => {
-        const k = springRate(80000, d, D, n);
-        expect(springRate(80000, d * s, D, n) / k).toBeCloseTo(s ** 4, 6);
-        expect(springRate(80000, d, D * s, n) / k).toBeCloseTo(s ** -3, 6);
-        expect(springRate(80000, d, D, n * s) / k).toBeCloseTo(1 / s, 6);
-      }));
+    fc.assert(
+      fc.property(
+        fc.double({ min: 0.1, max: 20, noNaN: true }),
+        fc.double({ min: 0.5, max: 200, noNaN: true }),
+        fc.double({ min: 1, max: 50, noNaN: true }),
+        fc.double({ min: 0.5, max: 2, noNaN: true }),
+        (d, D, n, s) => {
+          const k = springRate(80000, d, D, n);
+          expect(springRate(80000, d * s, D, n) / k).toBeCloseTo(s ** 4, 6);
+          expect(springRate(80000, d, D * s, n) / k).toBeCloseTo(s ** -3, 6);
+          expect(springRate(80000, d, D, n * s) / k).toBeCloseTo(1 / s, 6);
+        },
+      ),
+    );
   });
 
   it('activeCoilsForRate inverts springRate (property)', () => {
-    fc.assert(fc.property(fc.double({ min: 0.2, max: 10, noNaN: true }), fc.double({ min: 3, max: 20, noNaN: true }), fc.double({ min: 2, max: 40, noNaN: true }), (d, c, n) => {
-      const k = springRate(79000, d, c * d, n);
-      expect(activeCoilsForRate(79000, d, c * d, k)).toBeCloseTo(n, 8);
-    }));
+    fc.assert(
+      fc.property(
+        fc.double({ min: 0.2, max: 10, noNaN: true }),
+        fc.double({ min: 3, max: 20, noNaN: true }),
+        fc.double({ min: 2, max: 40, noNaN: true }),
+        (d, c, n) => {
+          const k = springRate(79000, d, c * d, n);
+          expect(activeCoilsForRate(79000, d, c * d, k)).toBeCloseTo(n, 8);
+        },
+      ),
+    );
   });
 });

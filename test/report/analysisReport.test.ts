@@ -2,7 +2,8 @@
 import { describe, expect, it } from 'vitest';
 import { cli, inputFile } from '../helpers.js';
 
-const spring = (extra: string) => inputFile(`units: si
+const spring = (extra: string) =>
+  inputFile(`units: si
 material: music-wire
 wire_diameter: 1.6
 mean_diameter: 12
@@ -37,7 +38,8 @@ describe('analysis output: surge', () => {
 const KPSI = 6.894757293168361; // MPa per kpsi
 
 describe('strength basis: the published law (default) or the tabulated minimum', () => {
-  const musicWire = (extra: string) => inputFile(`units: us
+  const musicWire = (extra: string) =>
+    inputFile(`units: us
 material: music-wire
 wire_diameter: 0.100
 mean_diameter: 0.8
@@ -47,7 +49,7 @@ free_length: 2.4
 lengths: [2.0, 1.6]
 ${extra}`);
 
-  it('by default the power law is used and the output says how far it runs above the ASTM A228 minimum: 3.4% at 0.100 in (sources: Shigley Table 10-4; ASTM A228 as in distributors\' tables, 271 kpsi)', async () => {
+  it("by default the power law is used and the output says how far it runs above the ASTM A228 minimum: 3.4% at 0.100 in (sources: Shigley Table 10-4; ASTM A228 as in distributors' tables, 271 kpsi)", async () => {
     const r = await cli('analyze', musicWire(''), '--json');
     const j = JSON.parse(r.stdout);
     expect(j.material.strength_basis).toBe('law');
@@ -59,28 +61,36 @@ ${extra}`);
     expect(text).toMatch(/tensile strength: published law \(strength_basis: law\), Shigley Table 10-4.*runs 3\.4% above the tabulated minimum 271\.0 kpsi/);
   });
 
-  it('strength_basis: minimum uses 271 kpsi at 0.100 in and 261 kpsi at 0.125 in, and says so (source: ASTM A228 tensile requirements, as printed in music-wire distributors\' data sheets)', async () => {
+  it("strength_basis: minimum uses 271 kpsi at 0.100 in and 261 kpsi at 0.125 in, and says so (source: ASTM A228 tensile requirements, as printed in music-wire distributors' data sheets)", async () => {
     const j = JSON.parse((await cli('analyze', musicWire('strength_basis: minimum\n'), '--json')).stdout);
     expect(j.material.strength_basis).toBe('minimum');
     expect(j.material.strength_source).toMatch(/ASTM A228/);
     expect(j.material.tensile_strength / KPSI).toBeCloseTo(271, 6);
     expect(j.material.allowable_stress / KPSI).toBeCloseTo(0.45 * 271, 6); // Shigley Table 10-6, 45% for music wire
     expect(j.material.law_above_minimum).toBeUndefined();
-    const big = inputFile(`units: us\nmaterial: music-wire\nwire_diameter: 0.125\nmean_diameter: 1\nactive_coils: 8\nfree_length: 3\nlengths: [2.5]\nstrength_basis: minimum\n`);
+    const big = inputFile(
+      `units: us\nmaterial: music-wire\nwire_diameter: 0.125\nmean_diameter: 1\nactive_coils: 8\nfree_length: 3\nlengths: [2.5]\nstrength_basis: minimum\n`,
+    );
     expect(JSON.parse((await cli('analyze', big, '--json')).stdout).material.tensile_strength / KPSI).toBeCloseTo(261, 6);
     const text = (await cli('analyze', musicWire('strength_basis: minimum\n'))).stdout;
     expect(text).toMatch(/tensile strength: tabulated minimum \(strength_basis: minimum\), ASTM A228/);
   });
 
   it('EN 10270-1 DM: its law already is the lower bound of the tensile range, so both bases give 1630 MPa at 3 mm (source: EN 10270-1 as tabulated by European spring makers)', async () => {
-    const f = (extra: string) => inputFile(`units: si\nmaterial: en10270-1-dm\nwire_diameter: 3\nmean_diameter: 24\nactive_coils: 8\nfree_length: 70\nlengths: [60]\n${extra}`);
+    const f = (extra: string) =>
+      inputFile(`units: si\nmaterial: en10270-1-dm\nwire_diameter: 3\nmean_diameter: 24\nactive_coils: 8\nfree_length: 70\nlengths: [60]\n${extra}`);
     for (const extra of ['', 'strength_basis: minimum\n']) {
       expect(JSON.parse((await cli('analyze', f(extra), '--json')).stdout).material.tensile_strength).toBeCloseTo(1630, 9);
     }
   });
 
   it('a material with no tabulated minimum is an input error naming strength_basis and the materials that have one', async () => {
-    const r = await cli('analyze', inputFile(`units: si\nmaterial: hard-drawn\nwire_diameter: 2\nmean_diameter: 16\nactive_coils: 8\nfree_length: 50\nlengths: [40]\nstrength_basis: minimum\n`));
+    const r = await cli(
+      'analyze',
+      inputFile(
+        `units: si\nmaterial: hard-drawn\nwire_diameter: 2\nmean_diameter: 16\nactive_coils: 8\nfree_length: 50\nlengths: [40]\nstrength_basis: minimum\n`,
+      ),
+    );
     expect(r.code).toBe(2);
     expect(r.stderr).toMatch(/strength_basis: expected "law" for hard-drawn.*music-wire, en10270-1-dm/);
     expect(r.stderr).not.toMatch(/at .*\.ts:\d+/);

@@ -23,7 +23,7 @@ async function geometry(page: import('playwright-core').Page, id: string) {
 
 describe('design report in headless Chromium', () => {
   const file = join(OUT, 'design-report.html');
-  it('loads offline with every plot drawn and the CLI\'s best spring marked', async () => {
+  it("loads offline with every plot drawn and the CLI's best spring marked", async () => {
     rmSync(file, { force: true });
     const r = await cli('design', 'examples/washer-trigger.yaml', '--report', file);
     expect(r.code).toBe(0);
@@ -107,11 +107,20 @@ describe('design report printed', () => {
     const { page } = await openReport(file);
     await page.setViewportSize({ width: Math.floor(width), height: 1000 });
     await page.emulateMedia({ media });
-    const box = await page.$eval('table.ranked', (t) => ({ width: t.scrollWidth, right: t.getBoundingClientRect().right, page: document.documentElement.clientWidth, cells: t.querySelectorAll('tbody td').length }));
+    const box = await page.$eval('table.ranked', (t) => ({
+      width: t.scrollWidth,
+      right: t.getBoundingClientRect().right,
+      page: document.documentElement.clientWidth,
+      cells: t.querySelectorAll('tbody td').length,
+    }));
     return { page, box };
   }
 
-  for (const [units, extra] of [['si', []], ['us', ['--units', 'us']], ['si, every variant', ['--variants']]] as const) {
+  for (const [units, extra] of [
+    ['si', []],
+    ['us', ['--units', 'us']],
+    ['si, every variant', ['--variants']],
+  ] as const) {
     it(`(${units}) the ranked table fits the printed width of A4 and of Letter, every column on the page`, async () => {
       const file = join(OUT, `design-report-print-${units.replace(/\W+/g, '-')}.html`);
       rmSync(file, { force: true });
@@ -124,7 +133,11 @@ describe('design report printed', () => {
         expect(await page.textContent('table.ranked thead')).toContain('yield limited by');
         expect(box.width, `${format}: table ${box.width} px on a ${box.page} px page`).toBeLessThanOrEqual(box.page);
         expect(box.right, format).toBeLessThanOrEqual(box.page);
-        await page.pdf({ path: join(OUT, `design-report-${units.replace(/\W+/g, '-')}-${format}.pdf`), format: format as 'A4' | 'Letter', printBackground: true });
+        await page.pdf({
+          path: join(OUT, `design-report-${units.replace(/\W+/g, '-')}-${format}.pdf`),
+          format: format as 'A4' | 'Letter',
+          printBackground: true,
+        });
         await page.close();
       }
     });

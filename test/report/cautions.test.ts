@@ -22,7 +22,11 @@ const binSpring = 'examples/extension-pedal-bin-spring.yaml';
 function textCautions(text: string): string[] {
   const at = text.lastIndexOf('Cautions:\n');
   expect(at, 'a Cautions: block').toBeGreaterThanOrEqual(0);
-  return text.slice(at + 'Cautions:\n'.length).split('\n').filter((l) => l.startsWith('  - ')).map((l) => l.slice(4));
+  return text
+    .slice(at + 'Cautions:\n'.length)
+    .split('\n')
+    .filter((l) => l.startsWith('  - '))
+    .map((l) => l.slice(4));
 }
 
 const COMMANDS: { kind: 'compression' | 'extension'; args: string[] }[] = [
@@ -77,7 +81,11 @@ describe('the wording fits the kind', () => {
   });
 
   it('the extension text and HTML outputs never call the spring compressed', async () => {
-    for (const args of [['design', bin], ['analyze', binSpring], ['check', binSpring, bin]]) {
+    for (const args of [
+      ['design', bin],
+      ['analyze', binSpring],
+      ['check', binSpring, bin],
+    ]) {
       const r = await cli(...args);
       expect(r.stdout + r.stderr, args.join(' ')).not.toMatch(/compressed spring/);
     }

@@ -5,7 +5,11 @@ import { fieldColumns, fieldGrid, fieldRecord, fieldRow } from '../../src/report
 import { COMPRESSION_FIELDS, COMPRESSION_JSON_FIELDS, COMPRESSION_TABLE_FIELDS } from '../../src/kinds/compression/fields.js';
 import { EXTENSION_FIELDS, EXTENSION_TABLE_FIELDS } from '../../src/kinds/extension/fields.js';
 
-interface Toy { d: number; tag?: string; f: number }
+interface Toy {
+  d: number;
+  tag?: string;
+  f: number;
+}
 const FIELDS: FieldDefinition<Toy>[] = [
   { name: 'wire_diameter', unit: 'length', digits: 4, read: (c) => c.d, column: { head: 'd', digits: 3 } },
   { name: 'tag', unit: null, digits: 0, present: (c) => c.tag !== undefined, read: (c) => c.tag ?? null, column: { head: 'tag', digits: 0 } },
@@ -27,7 +31,14 @@ describe('fieldGrid (text and HTML tables)', () => {
   });
 
   it('shows a column that only some rows carry, with a dash where a row does not', () => {
-    const g = fieldGrid(FIELDS, [{ d: 1, f: 1 }, { d: 2, tag: 'b', f: 1 }], 'si');
+    const g = fieldGrid(
+      FIELDS,
+      [
+        { d: 1, f: 1 },
+        { d: 2, tag: 'b', f: 1 },
+      ],
+      'si',
+    );
     expect(g.header).toEqual(['#', 'd mm', 'tag']);
     expect(g.rows.map((r) => r[2])).toEqual(['-', 'b']);
   });

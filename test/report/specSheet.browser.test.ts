@@ -27,7 +27,13 @@ function demoSheet(units: 'si' | 'us', extra: Record<string, unknown> = {}) {
   const req = readRequirements(raw, loadCatalog());
   const shown = { ...req, system: units };
   const best = runDesign(req).candidates[0];
-  const spec = specifySpring(loadToleranceCatalog(), { grade: 2, overrides: {} }, { geometry: best.geometry, figures: best.item.figures, material: best.item.choice.material }, shown, { samples: 2000 });
+  const spec = specifySpring(
+    loadToleranceCatalog(),
+    { grade: 2, overrides: {} },
+    { geometry: best.geometry, figures: best.item.figures, material: best.item.choice.material },
+    shown,
+    { samples: 2000 },
+  );
   return { html: specSheetHtml({ ...spec.sheet, part: 'trigger return spring (demo, invented)', coilingDirection: 'right' }), spec, req };
 }
 
@@ -43,15 +49,44 @@ describe('specification sheet in headless Chromium', () => {
       expect(errors).toEqual([]);
       expect(requests).toEqual([]);
       const text = (await page.textContent('body')) ?? '';
-      for (const item of ['ASTM A313', 'wire diameter', 'outer diameter OD (controlled)', 'EN 15800 grade 2', 'free length L0', 'reference', 'total / active coils',
-        'ends', 'coiling direction', 'right hand', 'working force F1', 'operating force F2', 'largest solid length', 'set removal', 'shot peening', 'finish',
-        'temperature', 'load cycles', 'yield (estimate)', 'yield (Monte Carlo)', 'EN 13906-1', 'verify material figures']) {
+      for (const item of [
+        'ASTM A313',
+        'wire diameter',
+        'outer diameter OD (controlled)',
+        'EN 15800 grade 2',
+        'free length L0',
+        'reference',
+        'total / active coils',
+        'ends',
+        'coiling direction',
+        'right hand',
+        'working force F1',
+        'operating force F2',
+        'largest solid length',
+        'set removal',
+        'shot peening',
+        'finish',
+        'temperature',
+        'load cycles',
+        'yield (estimate)',
+        'yield (Monte Carlo)',
+        'EN 13906-1',
+        'verify material figures',
+      ]) {
         expect(text, item).toContain(item);
       }
       const g = spec.drawn.geometry;
-      const od = units === 'si' ? `${(g.meanDiameter + g.wireDiameter).toFixed(2)} mm ± ${spec.yield.tolerances.meanDiameter.halfWidth.toFixed(3)} mm` : `${((g.meanDiameter + g.wireDiameter) / 25.4).toFixed(3)} in ± ${(spec.yield.tolerances.meanDiameter.halfWidth / 25.4).toFixed(4)} in`;
+      const od =
+        units === 'si'
+          ? `${(g.meanDiameter + g.wireDiameter).toFixed(2)} mm ± ${spec.yield.tolerances.meanDiameter.halfWidth.toFixed(3)} mm`
+          : `${((g.meanDiameter + g.wireDiameter) / 25.4).toFixed(3)} in ± ${(spec.yield.tolerances.meanDiameter.halfWidth / 25.4).toFixed(4)} in`;
       expect(text).toContain(od);
-      const view = await page.$eval('#spec-view', (svg) => ({ w: svg.getBoundingClientRect().width, h: svg.getBoundingClientRect().height, marks: svg.querySelectorAll('circle, line').length, labels: Array.from(svg.querySelectorAll('text')).map((t) => t.textContent) }));
+      const view = await page.$eval('#spec-view', (svg) => ({
+        w: svg.getBoundingClientRect().width,
+        h: svg.getBoundingClientRect().height,
+        marks: svg.querySelectorAll('circle, line').length,
+        labels: Array.from(svg.querySelectorAll('text')).map((t) => t.textContent),
+      }));
       expect(view.w).toBeGreaterThan(200);
       expect(view.h).toBeGreaterThan(100);
       expect(view.marks).toBeGreaterThan(2 * g.activeCoils);

@@ -22,7 +22,7 @@ describe('design --spec', () => {
     expect(html).not.toMatch(/<script|NaN|Infinity|undefined/);
   });
 
-  it('is drawn at the requirement\'s own tolerance grade, its yield sampled as the design\'s is', async () => {
+  it("is drawn at the requirement's own tolerance grade, its yield sampled as the design's is", async () => {
     // A grade-1 requirement once got a grade-2 sheet (and a yield at grade 2), sampled 5,000 times where
     // the design confirms with 20,000. The sheet's spring is the drawn one (dimensions rounded as a
     // drawing gives them), so its yield may differ a little from the design's: not compared here.

@@ -20,7 +20,7 @@ describe('wire volume in output', () => {
     expect(Number(usBound![1]) * 16387.064).toBeCloseTo(json.lp_bound, 0);
   });
 
-  it('the HTML report writes the bound and the frontier axis in the report\'s units', async () => {
+  it("the HTML report writes the bound and the frontier axis in the report's units", async () => {
     const path = tempPath('volume.html');
     const r = await cli('frontier', demo, '--x', 'wire_volume', '--units', 'us', '--report', path, '--output', tempPath('f.csv'));
     expect(r.code).toBe(0);

@@ -109,56 +109,84 @@ describe('grid and cell solver', () => {
     }
   });
   it('interval bounds rule out parts of the scan and change nothing but the work (property)', () => {
-    fc.assert(fc.property(fc.double({ min: 0.5, max: 9.5, noNaN: true }), fc.double({ min: 0.01, max: 4, noNaN: true }), fc.double({ min: 0, max: 5, noNaN: true }),
-      fc.constantFrom(0.01, 0.003, 0.001), (centre, half, lo, res) => {
-        const withBounds = gridSearch(banded(centre, half, lo, res), { top: 2 });
-        const plain = gridSearch(banded(centre, half, lo, res, false), { top: 2 });
-        const off = gridSearch(banded(centre, half, lo, res), { top: 2, narrowing: false });
-        expect(withBounds.best.map((b) => Array.from(b.x))).toEqual(plain.best.map((b) => Array.from(b.x)));
-        expect(off.best.map((b) => Array.from(b.x))).toEqual(plain.best.map((b) => Array.from(b.x)));
-        // Only points a plain scan would reach are evaluated.
-        expect(withBounds.evaluations).toBeLessThanOrEqual(plain.evaluations);
-      }), { numRuns: 200, seed: 7 });
+    fc.assert(
+      fc.property(
+        fc.double({ min: 0.5, max: 9.5, noNaN: true }),
+        fc.double({ min: 0.01, max: 4, noNaN: true }),
+        fc.double({ min: 0, max: 5, noNaN: true }),
+        fc.constantFrom(0.01, 0.003, 0.001),
+        (centre, half, lo, res) => {
+          const withBounds = gridSearch(banded(centre, half, lo, res), { top: 2 });
+          const plain = gridSearch(banded(centre, half, lo, res, false), { top: 2 });
+          const off = gridSearch(banded(centre, half, lo, res), { top: 2, narrowing: false });
+          expect(withBounds.best.map((b) => Array.from(b.x))).toEqual(plain.best.map((b) => Array.from(b.x)));
+          expect(off.best.map((b) => Array.from(b.x))).toEqual(plain.best.map((b) => Array.from(b.x)));
+          // Only points a plain scan would reach are evaluated.
+          expect(withBounds.evaluations).toBeLessThanOrEqual(plain.evaluations);
+        },
+      ),
+      { numRuns: 200, seed: 7 },
+    );
   });
   it('the boundary of the decreasing checks, bracketed and then replayed, is the one plain bisection finds; the objective ceiling stops a cell where it can no longer win, the range hint rules out the largest c; none changes anything but the work (property)', () => {
-    fc.assert(fc.property(fc.double({ min: 0.2, max: 20, noNaN: true }), fc.constantFrom('linear', 'cubic', 'floored') as fc.Arbitrary<'linear' | 'cubic' | 'floored'>,
-      fc.double({ min: 0.5, max: 9.5, noNaN: true }), fc.double({ min: 0.01, max: 3, noNaN: true }), fc.integer({ min: 1, max: 4 }), (lo, shape, centre, half, top) => {
-        const plain = gridSearch(shaped(lo, shape, centre, half, false), { top, narrowing: false });
-        const replayed = gridSearch(shaped(lo, shape, centre, half, false), { top });
-        const capped = gridSearch(shaped(lo, shape, centre, half, true), { top });
-        const points = (r: ReturnType<typeof gridSearch>) => r.best.map((b) => [...Array.from(b.x), ...Array.from(b.f)]);
-        expect(points(replayed)).toEqual(points(plain));
-        expect(points(capped)).toEqual(points(plain));
-        expect(capped.evaluations).toBeLessThanOrEqual(replayed.evaluations);
-      }), { numRuns: 300, seed: 12 });
+    fc.assert(
+      fc.property(
+        fc.double({ min: 0.2, max: 20, noNaN: true }),
+        fc.constantFrom('linear', 'cubic', 'floored') as fc.Arbitrary<'linear' | 'cubic' | 'floored'>,
+        fc.double({ min: 0.5, max: 9.5, noNaN: true }),
+        fc.double({ min: 0.01, max: 3, noNaN: true }),
+        fc.integer({ min: 1, max: 4 }),
+        (lo, shape, centre, half, top) => {
+          const plain = gridSearch(shaped(lo, shape, centre, half, false), { top, narrowing: false });
+          const replayed = gridSearch(shaped(lo, shape, centre, half, false), { top });
+          const capped = gridSearch(shaped(lo, shape, centre, half, true), { top });
+          const points = (r: ReturnType<typeof gridSearch>) => r.best.map((b) => [...Array.from(b.x), ...Array.from(b.f)]);
+          expect(points(replayed)).toEqual(points(plain));
+          expect(points(capped)).toEqual(points(plain));
+          expect(capped.evaluations).toBeLessThanOrEqual(replayed.evaluations);
+        },
+      ),
+      { numRuns: 300, seed: 12 },
+    );
   });
   it('the replayed bracket of the decreasing checks costs fewer evaluations than plain bisection over many cells, and never many more in one', () => {
     let plainWork = 0;
     let replayedWork = 0;
-    fc.assert(fc.property(fc.double({ min: 0.2, max: 9, noNaN: true }), fc.constantFrom('linear', 'cubic', 'floored') as fc.Arbitrary<'linear' | 'cubic' | 'floored'>, fc.integer({ min: 1, max: 5 }), (lo, shape, c) => {
-      // No band (half 0): the cell's answer is the boundary itself.
-      const p = shaped(lo, shape, 5, 1e-9, false);
-      const solve = (replay: boolean) => {
-        const ws = makeWorkspace(p);
-        ws.replay = replay;
-        const x = Float64Array.of(c, 0);
-        const r = solveCell(p, 1, x, ws, CellMode.First, null, null);
-        return { r, x: x[1], evaluations: ws.stats.evaluations };
-      };
-      const plain = solve(false);
-      const replayed = solve(true);
-      expect(replayed.r).toBe(plain.r);
-      expect(replayed.x).toBe(plain.x);
-      expect(replayed.evaluations).toBeLessThanOrEqual(plain.evaluations + 4);
-      plainWork += plain.evaluations;
-      replayedWork += replayed.evaluations;
-    }), { numRuns: 300, seed: 13 });
+    fc.assert(
+      fc.property(
+        fc.double({ min: 0.2, max: 9, noNaN: true }),
+        fc.constantFrom('linear', 'cubic', 'floored') as fc.Arbitrary<'linear' | 'cubic' | 'floored'>,
+        fc.integer({ min: 1, max: 5 }),
+        (lo, shape, c) => {
+          // No band (half 0): the cell's answer is the boundary itself.
+          const p = shaped(lo, shape, 5, 1e-9, false);
+          const solve = (replay: boolean) => {
+            const ws = makeWorkspace(p);
+            ws.replay = replay;
+            const x = Float64Array.of(c, 0);
+            const r = solveCell(p, 1, x, ws, CellMode.First, null, null);
+            return { r, x: x[1], evaluations: ws.stats.evaluations };
+          };
+          const plain = solve(false);
+          const replayed = solve(true);
+          expect(replayed.r).toBe(plain.r);
+          expect(replayed.x).toBe(plain.x);
+          expect(replayed.evaluations).toBeLessThanOrEqual(plain.evaluations + 4);
+          plainWork += plain.evaluations;
+          replayedWork += replayed.evaluations;
+        },
+      ),
+      { numRuns: 300, seed: 13 },
+    );
     // A probe that misses can cost an evaluation more than bisection in a cell; over many, far fewer.
     // (Each cell also refines its answer to full precision, the same work in both.)
     expect(replayedWork).toBeLessThan(0.85 * plainWork);
   });
   it('with interval bounds, the work grows with the logarithm of the resolution, not linearly', () => {
-    const work = (res: number) => { const r = gridSearch(banded(5, 2, 3.5, res), { top: 1 }); return r.evaluations + (r.boundCalls ?? 0); };
+    const work = (res: number) => {
+      const r = gridSearch(banded(5, 2, 3.5, res), { top: 1 });
+      return r.evaluations + (r.boundCalls ?? 0);
+    };
     const coarse = work(0.01);
     expect(work(0.0001) / coarse).toBeLessThan(2);
     // Without bounds the scan walks the band at the resolution: 100 times finer, about 100 times the work.
@@ -186,24 +214,28 @@ describe('grid and cell solver', () => {
 
 describe('archives and fronts (property)', () => {
   it('TopK keeps the k smallest, sorted', () => {
-    fc.assert(fc.property(fc.array(fc.double({ min: -1e6, max: 1e6, noNaN: true }), { maxLength: 200 }), fc.integer({ min: 1, max: 20 }), (vals, k) => {
-      const t = new TopK(k, 1, 1);
-      for (const v of vals) t.offer(Float64Array.of(v), Float64Array.of(v));
-      const want = [...vals].sort((a, b) => a - b).slice(0, k);
-      expect(Array.from({ length: t.size }, (_, i) => t.f(i)[0])).toEqual(want);
-    }));
+    fc.assert(
+      fc.property(fc.array(fc.double({ min: -1e6, max: 1e6, noNaN: true }), { maxLength: 200 }), fc.integer({ min: 1, max: 20 }), (vals, k) => {
+        const t = new TopK(k, 1, 1);
+        for (const v of vals) t.offer(Float64Array.of(v), Float64Array.of(v));
+        const want = [...vals].sort((a, b) => a - b).slice(0, k);
+        expect(Array.from({ length: t.size }, (_, i) => t.f(i)[0])).toEqual(want);
+      }),
+    );
   });
   it('paretoFront2 returns exactly the non-dominated points', () => {
-    fc.assert(fc.property(fc.array(fc.tuple(fc.integer({ min: 0, max: 50 }), fc.integer({ min: 0, max: 50 })), { minLength: 1, maxLength: 120 }), (pts) => {
-      const xs = pts.map((p) => p[0]);
-      const ys = pts.map((p) => p[1]);
-      const front = new Set(paretoFront2(xs, ys));
-      pts.forEach((p, i) => {
-        const dominated = pts.some((q) => dominates(q[0], q[1], p[0], p[1]));
-        const duplicateKept = [...front].some((j) => xs[j] === p[0] && ys[j] === p[1]);
-        if (front.has(i)) expect(dominated).toBe(false);
-        else expect(dominated || duplicateKept).toBe(true);
-      });
-    }));
+    fc.assert(
+      fc.property(fc.array(fc.tuple(fc.integer({ min: 0, max: 50 }), fc.integer({ min: 0, max: 50 })), { minLength: 1, maxLength: 120 }), (pts) => {
+        const xs = pts.map((p) => p[0]);
+        const ys = pts.map((p) => p[1]);
+        const front = new Set(paretoFront2(xs, ys));
+        pts.forEach((p, i) => {
+          const dominated = pts.some((q) => dominates(q[0], q[1], p[0], p[1]));
+          const duplicateKept = [...front].some((j) => xs[j] === p[0] && ys[j] === p[1]);
+          if (front.has(i)) expect(dominated).toBe(false);
+          else expect(dominated || duplicateKept).toBe(true);
+        });
+      }),
+    );
   });
 });

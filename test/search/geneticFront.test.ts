@@ -58,9 +58,10 @@ describe('two-objective genetic search', () => {
       expect(Array.from(f)).toEqual(Array.from(q.f));
     }
     for (let i = 1; i < r.best.length; i++) expect(r.best[i].f[0]).toBeGreaterThanOrEqual(r.best[i - 1].f[0]);
-    for (const u of r.best) for (const v of r.best) {
-      if (u !== v) expect(u.f[0] <= v.f[0] && u.f[1] <= v.f[1] && (u.f[0] < v.f[0] || u.f[1] < v.f[1])).toBe(false);
-    }
+    for (const u of r.best)
+      for (const v of r.best) {
+        if (u !== v) expect(u.f[0] <= v.f[0] && u.f[1] <= v.f[1] && (u.f[0] < v.f[0] || u.f[1] < v.f[1])).toBe(false);
+      }
   });
 
   it('the same seed gives the same result', () => {

@@ -15,35 +15,48 @@ describe('genetic operators', () => {
     expect(e.discrete).toBe(true);
     expect(e.s).toBeGreaterThanOrEqual(0);
     expect(e.sizes[e.s]).toBe(1);
-    e.sizes.forEach((k, i) => { if (i !== e.s) expect(k).toBeGreaterThan(1); });
+    e.sizes.forEach((k, i) => {
+      if (i !== e.s) expect(k).toBeGreaterThan(1);
+    });
   });
 
-  it('random genes and mutated genes stay inside every gene\'s range, and decode to the variables\' own values (property)', () => {
-    fc.assert(fc.property(fc.integer(), fc.double({ min: 0, max: 1, noNaN: true }), fc.double({ min: 0, max: 1, noNaN: true }), (seed, rate, reset) => {
-      const rng = seedrandom(String(seed));
-      const g = randomGenes(e, rng);
-      mutate(e, g, rate, reset, rng);
-      const x = new Float64Array(e.n);
-      decode(e, g, x);
-      for (let i = 0; i < e.n; i++) {
-        if (i === e.s) continue;
-        expect(Number.isInteger(g[i]) && g[i] >= 0 && g[i] < e.sizes[i]).toBe(true);
-        expect(x[i]).toBe(valueAt(p.variables[i], g[i]));
-      }
-    }), { numRuns: 300 });
+  it("random genes and mutated genes stay inside every gene's range, and decode to the variables' own values (property)", () => {
+    fc.assert(
+      fc.property(fc.integer(), fc.double({ min: 0, max: 1, noNaN: true }), fc.double({ min: 0, max: 1, noNaN: true }), (seed, rate, reset) => {
+        const rng = seedrandom(String(seed));
+        const g = randomGenes(e, rng);
+        mutate(e, g, rate, reset, rng);
+        const x = new Float64Array(e.n);
+        decode(e, g, x);
+        for (let i = 0; i < e.n; i++) {
+          if (i === e.s) continue;
+          expect(Number.isInteger(g[i]) && g[i] >= 0 && g[i] < e.sizes[i]).toBe(true);
+          expect(x[i]).toBe(valueAt(p.variables[i], g[i]));
+        }
+      }),
+      { numRuns: 300 },
+    );
   });
 
   it('the cell key names each combination of integer genes once (property)', () => {
-    fc.assert(fc.property(fc.integer(), fc.integer(), (s1, s2) => {
-      const a = randomGenes(e, seedrandom(String(s1)));
-      const b = randomGenes(e, seedrandom(String(s2)));
-      const same = a.every((v, i) => i === e.s || v === b[i]);
-      expect(cellKey(e, a) === cellKey(e, b)).toBe(same);
-    }), { numRuns: 300 });
+    fc.assert(
+      fc.property(fc.integer(), fc.integer(), (s1, s2) => {
+        const a = randomGenes(e, seedrandom(String(s1)));
+        const b = randomGenes(e, seedrandom(String(s2)));
+        const same = a.every((v, i) => i === e.s || v === b[i]);
+        expect(cellKey(e, a) === cellKey(e, b)).toBe(same);
+      }),
+      { numRuns: 300 },
+    );
   });
 
   it('the same seed draws the same genes and mutations', () => {
-    const one = () => { const r = seedrandom('42'); const g = randomGenes(e, r); mutate(e, g, 0.5, 0.15, r); return Array.from(g); };
+    const one = () => {
+      const r = seedrandom('42');
+      const g = randomGenes(e, r);
+      mutate(e, g, 0.5, 0.15, r);
+      return Array.from(g);
+    };
     expect(one()).toEqual(one());
   });
 

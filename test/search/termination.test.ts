@@ -27,14 +27,21 @@ describe('termination', () => {
     const optimum = gridSearch(p, { top: 1 }).best[0].f[0];
     for (const seed of [1, 2, 3]) {
       const free = geneticSearch(p, { seed, maxEvaluations: 40_000, top: 1 });
-      const bounded = geneticSearch(p, { seed, maxEvaluations: 40_000, top: 1, termination: termination({ maxEvaluations: 40_000, lowerBound: optimum, boundTolerance: 1e-3 }) });
+      const bounded = geneticSearch(p, {
+        seed,
+        maxEvaluations: 40_000,
+        top: 1,
+        termination: termination({ maxEvaluations: 40_000, lowerBound: optimum, boundTolerance: 1e-3 }),
+      });
       if (bounded.stoppedBy === 'bound') {
         expect(bounded.best[0].f[0]).toBeLessThanOrEqual(optimum * (1 + 1e-3));
         expect(bounded.evaluations).toBeLessThan(free.evaluations);
       }
       expect(bounded.evaluations).toBeLessThanOrEqual(40_000);
     }
-    const stops = [1, 2, 3].map((seed) => geneticSearch(p, { seed, maxEvaluations: 40_000, top: 1, termination: termination({ maxEvaluations: 40_000, lowerBound: optimum }) }).stoppedBy);
+    const stops = [1, 2, 3].map(
+      (seed) => geneticSearch(p, { seed, maxEvaluations: 40_000, top: 1, termination: termination({ maxEvaluations: 40_000, lowerBound: optimum }) }).stoppedBy,
+    );
     expect(stops.filter((r) => r === 'bound').length).toBeGreaterThanOrEqual(2);
   });
 

@@ -11,7 +11,7 @@ import { cli } from '../helpers.js';
 const browser = useChromium();
 
 describe('stock report in headless Chromium', () => {
-  it('loads offline, lists the CLI\'s best stock row first and draws its plots', async () => {
+  it("loads offline, lists the CLI's best stock row first and draws its plots", async () => {
     const file = join(OUT, 'stock-report.html');
     rmSync(file, { force: true });
     const r = await cli('stock', 'examples/stock-dispenser.yaml', 'examples/stock-springs.csv', '--report', file);
@@ -25,7 +25,9 @@ describe('stock report in headless Chromium', () => {
     const firstRow = await page.$eval('tr.best', (tr) => Array.from(tr.querySelectorAll('td')).map((td) => td.textContent));
     expect(firstRow[1]).toBe(best.part_number);
     const headings = await page.$$eval('h2', (hs) => hs.map((h) => h.textContent));
-    expect(headings).toEqual(expect.arrayContaining(['Stock springs', 'Best near misses', 'Bad rows (skipped)', `The best stock spring: ${best.part_number}`, 'Cautions']));
+    expect(headings).toEqual(
+      expect.arrayContaining(['Stock springs', 'Best near misses', 'Bad rows (skipped)', `The best stock spring: ${best.part_number}`, 'Cautions']),
+    );
     const plots = await page.$$eval('svg.plot', (svgs) => svgs.map((s) => s.getBoundingClientRect().width));
     expect(plots.length).toBeGreaterThanOrEqual(2);
     for (const w of plots) expect(w).toBeGreaterThan(100);

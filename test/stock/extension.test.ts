@@ -35,7 +35,9 @@ describe('stock with an extension requirement', () => {
     expect(listed).toEqual(PASSING);
     expect(r.stdout).toMatch(/XM-065-070-21 \(line 41\) fails loop_bending_fatigue by 2\.27% \(1\.4659 against >= 1\.5000\)/);
     expect(r.stdout).toMatch(/draw-bar arrangement or fit a guard/);
-    expect(r.stderr).toMatch(/stock-extension-springs\.csv line 65 \(XC-080-090-12\), initial_tension_N: expected an initial tension \(the cell is empty\); row skipped/);
+    expect(r.stderr).toMatch(
+      /stock-extension-springs\.csv line 65 \(XC-080-090-12\), initial_tension_N: expected an initial tension \(the cell is empty\); row skipped/,
+    );
   });
 
   it('agrees with `check` row by row: the same verdict and the same failing checks for every row', () => {
@@ -56,16 +58,31 @@ describe('stock with an extension requirement', () => {
     expect((j.cautions as string[]).at(-1)).toMatch(/draw-bar/);
     const rows = parse(text, { comment: '#', columns: true }) as Record<string, string>[];
     const inch = (v: string) => String(Number(v) / 25.4);
-    const us = ['part_number,material,wire_diameter_in,outer_diameter_in,body_coils,initial_tension_lbf,free_length_in,loop',
-      ...rows.map((r) => [r.part_number, r.material, inch(r.wire_diameter_mm), inch(r.outer_diameter_mm), r.body_coils,
-        r.initial_tension_N === '' ? '' : String(Number(r.initial_tension_N) / 4.4482216152605), inch(r.free_length_mm), r.loop].join(','))].join('\n');
+    const us = [
+      'part_number,material,wire_diameter_in,outer_diameter_in,body_coils,initial_tension_lbf,free_length_in,loop',
+      ...rows.map((r) =>
+        [
+          r.part_number,
+          r.material,
+          inch(r.wire_diameter_mm),
+          inch(r.outer_diameter_mm),
+          r.body_coils,
+          r.initial_tension_N === '' ? '' : String(Number(r.initial_tension_N) / 4.4482216152605),
+          inch(r.free_length_mm),
+          r.loop,
+        ].join(','),
+      ),
+    ].join('\n');
     const ju = stock(req, us, { label: 'us' }) as { passing: { part_number: string }[]; failed_by: Record<string, number> };
     expect(ju.passing.map((p) => p.part_number)).toEqual(PASSING);
     expect(ju.failed_by).toEqual(j.failed_by);
   });
 
   it('a row of another kind is a bad row naming the kind column; --compare is refused by name; a table without body_coils names the header', async () => {
-    const t = inputFile('part_number,material,wire_diameter,outer_diameter,body_coils,initial_tension,kind\nA,music-wire,0.65,6.8,23,1.6,extension\nB,music-wire,0.65,6.8,23,1.6,compression\n', 'csv');
+    const t = inputFile(
+      'part_number,material,wire_diameter,outer_diameter,body_coils,initial_tension,kind\nA,music-wire,0.65,6.8,23,1.6,extension\nB,music-wire,0.65,6.8,23,1.6,compression\n',
+      'csv',
+    );
     const j = JSON.parse((await cli('stock', REQ, t, '--json')).stdout);
     expect(j.table.checked).toBe(1);
     expect(j.bad_rows[0]).toMatchObject({ line: 3, field: 'kind' });

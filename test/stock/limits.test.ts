@@ -19,16 +19,27 @@ const music = catalog.materials.find((m) => m.id === 'music-wire')!;
 // The scenario (our own): 10 N at 40 mm, +-5%, stroke to 35 mm; 16 mm bore, 6 mm rod, 60 mm free at most;
 // the static shear limit given outright as 700 MPa; both ends fixed on plates.
 const REQUIREMENTS = {
-  units: 'si', material: 'music-wire', ends: 'squared-ground', seating: 'fixed-fixed',
-  load: { force: 10, length: 40 }, operating_length: 35, working_tolerance: '5%',
+  units: 'si',
+  material: 'music-wire',
+  ends: 'squared-ground',
+  seating: 'fixed-fixed',
+  load: { force: 10, length: 40 },
+  operating_length: 35,
+  working_tolerance: '5%',
   envelope: { max_outer_diameter: 16, min_inner_diameter: 6, max_free_length: 60 },
-  allowable_stress: 700, index: [4, 12],
+  allowable_stress: 700,
+  index: [4, 12],
 };
 const F1 = 10;
 const L1 = 40;
 const LMIN = 35;
 
-interface Spring { d: number; D: number; Na: number; L0: number }
+interface Spring {
+  d: number;
+  D: number;
+  Na: number;
+  L0: number;
+}
 
 const G = (d: number) => moduliAt(music, d).shearModulus;
 const E = (d: number) => moduliAt(music, d).elasticModulus;
@@ -61,7 +72,8 @@ function solve(f: (x: number) => number, target: number, lo: number, hi: number)
   const up = f(hi) > f(lo);
   for (let i = 0; i < 200; i++) {
     const mid = (lo + hi) / 2;
-    if ((f(mid) < target) === up) lo = mid; else hi = mid;
+    if (f(mid) < target === up) lo = mid;
+    else hi = mid;
   }
   return (lo + hi) / 2;
 }
@@ -72,31 +84,107 @@ const OUT = 1.003;
 // name, the spring, and the checks it must fail (none: it passes).
 const rows: [string, Spring, string[]][] = [];
 // Bore: the coils grow when closed, so the outer diameter at solid binds first; just outside, both fail.
-rows.push(['bore-in', spring(1.4, solve((D) => solidOD(spring(1.4, D, 10)), 16 * IN, 12, 15), 10), []]);
+rows.push([
+  'bore-in',
+  spring(
+    1.4,
+    solve((D) => solidOD(spring(1.4, D, 10)), 16 * IN, 12, 15),
+    10,
+  ),
+  [],
+]);
 rows.push(['bore-out', spring(1.4, 16 * OUT - 1.4, 10), ['outer_diameter', 'outer_diameter_at_solid']]);
 rows.push(['rod-in', spring(1, 6 * (2 - IN) + 1, 10), []]);
 rows.push(['rod-out', spring(1, 6 * (2 - OUT) + 1, 10), ['inner_diameter']]);
-rows.push(['free-length-in', spring(1, 11, solve((Na) => freeFor(1, 11, Na), 60 * IN, 5, 40)), []]);
-rows.push(['free-length-out', spring(1, 11, solve((Na) => freeFor(1, 11, Na), 60 * OUT, 5, 40)), ['free_length']]);
+rows.push([
+  'free-length-in',
+  spring(
+    1,
+    11,
+    solve((Na) => freeFor(1, 11, Na), 60 * IN, 5, 40),
+  ),
+  [],
+]);
+rows.push([
+  'free-length-out',
+  spring(
+    1,
+    11,
+    solve((Na) => freeFor(1, 11, Na), 60 * OUT, 5, 40),
+  ),
+  ['free_length'],
+]);
 rows.push(['force-low-in', spring(1, 9, 10, 9.5 / IN), []]);
 rows.push(['force-low-out', spring(1, 9, 10, 9.5 / OUT), ['working_force_min']]);
 rows.push(['force-high-in', spring(1, 9, 10, 10.5 * IN), []]);
 rows.push(['force-high-out', spring(1, 9, 10, 10.5 * OUT), ['working_force_max']]);
-rows.push(['stress-in', spring(solve((d) => stressAtShortest(spring(d, 9, 6)), 700 * IN, 0.75, 1), 9, 6), []]);
-rows.push(['stress-out', spring(solve((d) => stressAtShortest(spring(d, 9, 6)), 700 * OUT, 0.75, 1), 9, 6), ['static_stress']]);
-rows.push(['clash-in', spring(1.6, 12, solve((Na) => clashValue(spring(1.6, 12, Na)), LMIN * IN, 10, 19)), []]);
-rows.push(['clash-out', spring(1.6, 12, solve((Na) => clashValue(spring(1.6, 12, Na)), LMIN * OUT, 10, 19)), ['clash']]);
-rows.push(['buckling-in', spring(0.8, 7.2, solve((Na) => bucklingMargin(spring(0.8, 7.2, Na)), 1 / IN, 5, 14)), []]);
-rows.push(['buckling-out', spring(0.8, 7.2, solve((Na) => bucklingMargin(spring(0.8, 7.2, Na)), 1 / OUT, 5, 14)), ['buckling']]);
+rows.push([
+  'stress-in',
+  spring(
+    solve((d) => stressAtShortest(spring(d, 9, 6)), 700 * IN, 0.75, 1),
+    9,
+    6,
+  ),
+  [],
+]);
+rows.push([
+  'stress-out',
+  spring(
+    solve((d) => stressAtShortest(spring(d, 9, 6)), 700 * OUT, 0.75, 1),
+    9,
+    6,
+  ),
+  ['static_stress'],
+]);
+rows.push([
+  'clash-in',
+  spring(
+    1.6,
+    12,
+    solve((Na) => clashValue(spring(1.6, 12, Na)), LMIN * IN, 10, 19),
+  ),
+  [],
+]);
+rows.push([
+  'clash-out',
+  spring(
+    1.6,
+    12,
+    solve((Na) => clashValue(spring(1.6, 12, Na)), LMIN * OUT, 10, 19),
+  ),
+  ['clash'],
+]);
+rows.push([
+  'buckling-in',
+  spring(
+    0.8,
+    7.2,
+    solve((Na) => bucklingMargin(spring(0.8, 7.2, Na)), 1 / IN, 5, 14),
+  ),
+  [],
+]);
+rows.push([
+  'buckling-out',
+  spring(
+    0.8,
+    7.2,
+    solve((Na) => bucklingMargin(spring(0.8, 7.2, Na)), 1 / OUT, 5, 14),
+  ),
+  ['buckling'],
+]);
 rows.push(['index-in', spring(1, 12 * IN, 5), []]);
 rows.push(['index-out', spring(1, 12 * OUT, 5), ['index_max']]);
 
-const csv = ['part_number,material,wire_diameter_mm,mean_diameter_mm,active_coils,free_length_mm,ends',
-  ...rows.map(([name, s]) => `${name},music-wire,${s.d.toPrecision(15)},${s.D.toPrecision(15)},${s.Na.toPrecision(15)},${s.L0.toPrecision(15)},squared-ground`)].join('\n');
+const csv = [
+  'part_number,material,wire_diameter_mm,mean_diameter_mm,active_coils,free_length_mm,ends',
+  ...rows.map(([name, s]) => `${name},music-wire,${s.d.toPrecision(15)},${s.D.toPrecision(15)},${s.Na.toPrecision(15)},${s.L0.toPrecision(15)},squared-ground`),
+].join('\n');
 
 describe('stock: rows just inside and just outside each limit (hand-built table)', () => {
   const out = stock(REQUIREMENTS, csv, { catalog, top: 100, misses: 100 }) as {
-    passing: { part_number: string }[]; near_misses: { part_number: string; failing: { name: string; by: number }[] }[]; bad_rows: unknown[];
+    passing: { part_number: string }[];
+    near_misses: { part_number: string; failing: { name: string; by: number }[] }[];
+    bad_rows: unknown[];
   };
 
   it('reads every row', () => {

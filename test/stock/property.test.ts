@@ -15,10 +15,16 @@ const catalog = loadCatalog();
 const IN = 25.4;
 
 const REQUIREMENTS = {
-  units: 'si', material: ['music-wire', 'stainless-302', 'chrome-silicon'], seating: 'fixed-fixed',
+  units: 'si',
+  material: ['music-wire', 'stainless-302', 'chrome-silicon'],
+  seating: 'fixed-fixed',
   material_map: { 'Music wire': 'music-wire', '302 SS': 'stainless-302', 'Phos bronze': 'phosphor-bronze' },
-  load: { force: 12, length: 30 }, operating_length: 24, operating_force: 19.5, load_tolerance: '20%',
-  envelope: { max_outer_diameter: 15, min_inner_diameter: 5, max_free_length: 50 }, cycles: 3e5,
+  load: { force: 12, length: 30 },
+  operating_length: 24,
+  operating_force: 19.5,
+  load_tolerance: '20%',
+  envelope: { max_outer_diameter: 15, min_inner_diameter: 5, max_free_length: 50 },
+  cycles: 3e5,
 };
 
 const rowArb = fc.record({
@@ -68,48 +74,55 @@ describe('stock and check agree on every row (property)', () => {
   it('a row passes stock exactly when its spring file passes check, failing the same checks', () => {
     let passes = 0;
     let fails = 0;
-    fc.assert(fc.property(tableArb, (t) => {
-      let run: StockRun;
-      try {
-        run = runStock(REQUIREMENTS, tableText(t), catalog, {});
-      } catch (e) {
-        // A table whose every row is refused is bad input as a whole.
-        expect((e as Error).message).toMatch(/expected at least one usable row; all \d+ data rows are bad/);
-        return;
-      }
-      for (const r of run.results) {
-        // The spring file as a user would save it: YAML text, read back.
-        const file = parse(stringify(rowSpringFile(r.row)));
-        const c = check(file, REQUIREMENTS, { catalog }) as { pass: boolean; failing: { name: string }[] };
-        expect(c.pass).toBe(r.verdict.pass);
-        expect(c.failing.map((f) => f.name)).toEqual(r.verdict.failingNames);
-        if (r.verdict.pass) passes++; else fails++;
-      }
-    }), { numRuns: 40, seed: 3 });
+    fc.assert(
+      fc.property(tableArb, (t) => {
+        let run: StockRun;
+        try {
+          run = runStock(REQUIREMENTS, tableText(t), catalog, {});
+        } catch (e) {
+          // A table whose every row is refused is bad input as a whole.
+          expect((e as Error).message).toMatch(/expected at least one usable row; all \d+ data rows are bad/);
+          return;
+        }
+        for (const r of run.results) {
+          // The spring file as a user would save it: YAML text, read back.
+          const file = parse(stringify(rowSpringFile(r.row)));
+          const c = check(file, REQUIREMENTS, { catalog }) as { pass: boolean; failing: { name: string }[] };
+          expect(c.pass).toBe(r.verdict.pass);
+          expect(c.failing.map((f) => f.name)).toEqual(r.verdict.failingNames);
+          if (r.verdict.pass) passes++;
+          else fails++;
+        }
+      }),
+      { numRuns: 40, seed: 3 },
+    );
     expect(passes).toBeGreaterThan(20);
     expect(fails).toBeGreaterThan(100);
   });
 
-  it('the reported rate of each row is G d^4 / (8 D^3 Na) from the row\'s own figures', () => {
-    fc.assert(fc.property(tableArb, (t) => {
-      let run: StockRun;
-      try {
-        run = runStock(REQUIREMENTS, tableText(t), catalog, {});
-      } catch {
-        return; // no usable row: nothing to report a rate for
-      }
-      t.rows.forEach((r, i) => {
-        const res = run.results.find((x) => x.row.partNumber === `P${i + 1}`);
-        if (!res) return; // a row refused as bad (coils overlapping at free length): no rate to report
-        const D = r.d * r.index;
-        const { coils } = shape(r);
-        const Na = r.coilField === 'active_coils' ? coils : coils - inactiveOf(r.ends);
-        const id = REQUIREMENTS.material_map[r.material as keyof typeof REQUIREMENTS.material_map] ?? r.material;
-        const G = materialFigures({ material: catalog.materials.find((m) => m.id === id)! }, r.d, false).shearModulus;
-        const k = (G * r.d ** 4) / (8 * D ** 3 * Na);
-        expect(res.verdict.analysis.rate).toBeCloseTo(k, 6);
-        expect(Math.abs(res.verdict.analysis.rate / k - 1)).toBeLessThan(1e-7);
-      });
-    }), { numRuns: 40, seed: 4 });
+  it("the reported rate of each row is G d^4 / (8 D^3 Na) from the row's own figures", () => {
+    fc.assert(
+      fc.property(tableArb, (t) => {
+        let run: StockRun;
+        try {
+          run = runStock(REQUIREMENTS, tableText(t), catalog, {});
+        } catch {
+          return; // no usable row: nothing to report a rate for
+        }
+        t.rows.forEach((r, i) => {
+          const res = run.results.find((x) => x.row.partNumber === `P${i + 1}`);
+          if (!res) return; // a row refused as bad (coils overlapping at free length): no rate to report
+          const D = r.d * r.index;
+          const { coils } = shape(r);
+          const Na = r.coilField === 'active_coils' ? coils : coils - inactiveOf(r.ends);
+          const id = REQUIREMENTS.material_map[r.material as keyof typeof REQUIREMENTS.material_map] ?? r.material;
+          const G = materialFigures({ material: catalog.materials.find((m) => m.id === id)! }, r.d, false).shearModulus;
+          const k = (G * r.d ** 4) / (8 * D ** 3 * Na);
+          expect(res.verdict.analysis.rate).toBeCloseTo(k, 6);
+          expect(Math.abs(res.verdict.analysis.rate / k - 1)).toBeLessThan(1e-7);
+        });
+      }),
+      { numRuns: 40, seed: 4 },
+    );
   });
 });

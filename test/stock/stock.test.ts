@@ -24,7 +24,11 @@ describe('the stock demo', () => {
   it('lists the three rows that meet the dispenser requirement, ranked by mass, with margins, and exits 0', async () => {
     const r = await cli('stock', REQ, TABLE);
     expect(r.code).toBe(0);
-    const listed = r.stdout.slice(0, r.stdout.indexOf('Best near misses')).split('\n').filter((l) => /^\s+\d+\s+(PH|SS|MW|CS|PB)-/.test(l)).map((l) => l.trim().split(/\s+/)[1]);
+    const listed = r.stdout
+      .slice(0, r.stdout.indexOf('Best near misses'))
+      .split('\n')
+      .filter((l) => /^\s+\d+\s+(PH|SS|MW|CS|PB)-/.test(l))
+      .map((l) => l.trim().split(/\s+/)[1]);
     expect(listed).toEqual(MATCHES);
     expect(r.stdout).toMatch(/3 pass every check, ranked by mass/);
     expect(r.stdout).toMatch(/static_stress \+3\.43%/);
@@ -37,12 +41,14 @@ describe('the stock demo', () => {
 
   it('reports each bad row on stderr with its line and column, counts it, and goes on', async () => {
     const r = await cli('stock', REQ, TABLE);
-    expect(r.stderr).toMatch(/examples\/stock-springs\.csv line 129 \(SS-100-090-040\), kind: expected compression \(the requirements are for compression springs: run the extension rows against an extension requirements file/);
+    expect(r.stderr).toMatch(
+      /examples\/stock-springs\.csv line 129 \(SS-100-090-040\), kind: expected compression \(the requirements are for compression springs: run the extension rows against an extension requirements file/,
+    );
     expect(r.stderr).toMatch(/line 130 \(MW-120-120-060\), kind:/);
     expect(r.stdout).toMatch(/Table: 125 rows, 123 checked, 2 bad/);
   });
 
-  it('puts the table\'s rate beside coilfront\'s where they differ by more than the stated percentage', async () => {
+  it("puts the table's rate beside coilfront's where they differ by more than the stated percentage", async () => {
     const r = await cli('stock', REQ, TABLE);
     expect(r.stdout).toMatch(/differs from coilfront's k = G d\^4 \/ \(8 D\^3 Na\) by more than 10\.0% on 2 rows/);
     expect(r.stdout).toMatch(/127\s+PH-100-110-038B\s+1\.120\s+0\.9480\s+\+18\.1%/);
@@ -72,7 +78,7 @@ describe('the stock demo', () => {
     expect(lib.table).toEqual({ units: 'si', rows: 125, checked: 123, bad: 2, passing: 3, failing: 120, ignored_columns: [] });
   });
 
-  it('--rank price ranks the passing rows by the table\'s price; --rank and --top come from the command line', async () => {
+  it("--rank price ranks the passing rows by the table's price; --rank and --top come from the command line", async () => {
     const j = JSON.parse((await cli('stock', REQ, TABLE, '--json', '--rank', 'price', '--top', '2')).stdout);
     expect(j.rank).toBe('price');
     expect(j.passing.map((p: { part_number: string }) => p.part_number)).toEqual(['SS-090-090-040', 'PH-090-100-040']);
@@ -94,7 +100,9 @@ describe('the stock demo', () => {
     expect(r.code).toBe(0);
     const rows = parse(readFileSync(csvPath, 'utf8'), { columns: true }) as Record<string, string>[];
     expect(rows).toHaveLength(123);
-    expect(Object.keys(rows[0])).toEqual(expect.arrayContaining(['wire_diameter_mm', 'rate_N_per_mm', 'table_rate_N_per_mm', 'working_force_N', 'max_stress_MPa', 'failing_checks']));
+    expect(Object.keys(rows[0])).toEqual(
+      expect.arrayContaining(['wire_diameter_mm', 'rate_N_per_mm', 'table_rate_N_per_mm', 'working_force_N', 'max_stress_MPa', 'failing_checks']),
+    );
     expect(rows.slice(0, 3).map((x) => x.part_number)).toEqual(MATCHES);
     expect(rows[3].verdict).toBe('fail');
     const html = readFileSync(htmlPath, 'utf8');
@@ -117,9 +125,18 @@ envelope: { max_outer_diameter: 16 }
 `);
 
   it('reads units from column suffixes and plain numbers in the --units system, to the same verdicts', async () => {
-    const mm = inputFile('part_number,material,wire_diameter_mm,outer_diameter_mm,free_length_mm,total_coils,ends,rate_N_per_mm\nA,music-wire,1,10,47.05,12,squared-ground,1.42\n', 'csv');
-    const inch = inputFile(`part_number,material,wire_diameter_in,outer_diameter_in,free_length_in,total_coils,ends,rate_lbf_per_in\nA,music-wire,${1 / 25.4},${10 / 25.4},${47.05 / 25.4},12,squared-ground,${(1.42 * 25.4) / 4.4482216152605}\n`, 'csv');
-    const plainUs = inputFile(`part_number,material,wire_diameter,outer_diameter,free_length,total_coils,ends,rate\nA,music-wire,${1 / 25.4},${10 / 25.4},${47.05 / 25.4},12,squared-ground,${(1.42 * 25.4) / 4.4482216152605}\n`, 'csv');
+    const mm = inputFile(
+      'part_number,material,wire_diameter_mm,outer_diameter_mm,free_length_mm,total_coils,ends,rate_N_per_mm\nA,music-wire,1,10,47.05,12,squared-ground,1.42\n',
+      'csv',
+    );
+    const inch = inputFile(
+      `part_number,material,wire_diameter_in,outer_diameter_in,free_length_in,total_coils,ends,rate_lbf_per_in\nA,music-wire,${1 / 25.4},${10 / 25.4},${47.05 / 25.4},12,squared-ground,${(1.42 * 25.4) / 4.4482216152605}\n`,
+      'csv',
+    );
+    const plainUs = inputFile(
+      `part_number,material,wire_diameter,outer_diameter,free_length,total_coils,ends,rate\nA,music-wire,${1 / 25.4},${10 / 25.4},${47.05 / 25.4},12,squared-ground,${(1.42 * 25.4) / 4.4482216152605}\n`,
+      'csv',
+    );
     const a = JSON.parse((await cli('stock', REQS, mm, '--json')).stdout);
     const b = JSON.parse((await cli('stock', REQS, inch, '--json')).stdout);
     const c = JSON.parse((await cli('stock', REQS, plainUs, '--json', '--units', 'us')).stdout);
@@ -134,43 +151,69 @@ envelope: { max_outer_diameter: 16 }
     expect(text.stdout).toMatch(/OD in/);
   });
 
-  it('takes the trade\'s end words and the material_map, and refuses unknown ones by row', async () => {
+  it("takes the trade's end words and the material_map, and refuses unknown ones by row", async () => {
     const req = inputFile(`units: si
 material: [music-wire, stainless-302]
 material_map: { "Piano wire": music-wire }
 load: { force: 10, length: 40 }
 envelope: {}
 `);
-    const table = inputFile([
-      'part_number,material,wire_diameter_mm,mean_diameter_mm,free_length_mm,active_coils,ends',
-      'A,Piano wire,1,9,47.05,10,Closed and ground',
-      'B,music-wire,1,9,47.05,10,closed',
-      'C,Unobtainium,1,9,47.05,10,closed',
-      'D,music-wire,1,9,47.05,10,hooked',
-      'E,music-wire,1,9,,10,closed',
-      'F,music-wire,one,9,47,10,closed',
-      'G,music-wire,1,9,10,10,closed',
-    ].join('\n'), 'csv');
+    const table = inputFile(
+      [
+        'part_number,material,wire_diameter_mm,mean_diameter_mm,free_length_mm,active_coils,ends',
+        'A,Piano wire,1,9,47.05,10,Closed and ground',
+        'B,music-wire,1,9,47.05,10,closed',
+        'C,Unobtainium,1,9,47.05,10,closed',
+        'D,music-wire,1,9,47.05,10,hooked',
+        'E,music-wire,1,9,,10,closed',
+        'F,music-wire,one,9,47,10,closed',
+        'G,music-wire,1,9,10,10,closed',
+      ].join('\n'),
+      'csv',
+    );
     const r = await cli('stock', req, table, '--json');
     const j = JSON.parse(r.stdout);
     expect(j.table).toMatchObject({ rows: 7, checked: 2, bad: 5 });
     expect(j.bad_rows.map((b: { line: number; field: string }) => [b.line, b.field])).toEqual([
-      [4, 'material'], [5, 'ends'], [6, 'free_length_mm'], [7, 'wire_diameter_mm'], [8, 'free_length_mm'],
+      [4, 'material'],
+      [5, 'ends'],
+      [6, 'free_length_mm'],
+      [7, 'wire_diameter_mm'],
+      [8, 'free_length_mm'],
     ]);
     expect(j.bad_rows[0].message).toMatch(/material_map/);
     expect(j.bad_rows[4].message).toMatch(/above the solid length/);
     expect(r.stderr).toMatch(/line 7 \(F\), wire_diameter_mm: expected a length/);
     const springs = [...j.passing, ...j.near_misses].map((p: { part_number: string; spring: { ends: string } }) => [p.part_number, p.spring.ends]).sort();
-    expect(springs).toEqual([['A', 'squared-ground'], ['B', 'squared']]);
+    expect(springs).toEqual([
+      ['A', 'squared-ground'],
+      ['B', 'squared'],
+    ]);
   });
 
   it('rejects a table with no usable row, a missing column or a bad material_map with exit 2 and one message', async () => {
     const cases: [string, string, RegExp][] = [
-      [REQS, 'part_number,material,wire_diameter_mm,outer_diameter_mm,free_length_mm,total_coils,ends\nA,steel,1,10,40,12,closed\n', /expected at least one usable row; all 1 data rows are bad \(line 2, material:/],
-      [REQS, 'part_number,material,wire_diameter_mm,free_length_mm,total_coils,ends\nA,music-wire,1,40,12,closed\n', /header: expected a column outer_diameter or mean_diameter or inner_diameter/],
-      [REQS, 'part_number,material,wire_diameter_N,outer_diameter_mm,free_length_mm,total_coils,ends\n', /column "wire_diameter_N": expected a unit that fits wire_diameter \(a length\), not N/],
+      [
+        REQS,
+        'part_number,material,wire_diameter_mm,outer_diameter_mm,free_length_mm,total_coils,ends\nA,steel,1,10,40,12,closed\n',
+        /expected at least one usable row; all 1 data rows are bad \(line 2, material:/,
+      ],
+      [
+        REQS,
+        'part_number,material,wire_diameter_mm,free_length_mm,total_coils,ends\nA,music-wire,1,40,12,closed\n',
+        /header: expected a column outer_diameter or mean_diameter or inner_diameter/,
+      ],
+      [
+        REQS,
+        'part_number,material,wire_diameter_N,outer_diameter_mm,free_length_mm,total_coils,ends\n',
+        /column "wire_diameter_N": expected a unit that fits wire_diameter \(a length\), not N/,
+      ],
       [REQS, '', /expected a CSV table with a header row and at least one data row/],
-      [inputFile('units: si\nmaterial: music-wire\nmaterial_map: { steel: unobtainium }\nload: { force: 10, length: 40 }\nenvelope: {}\n'), 'part_number,material,wire_diameter_mm,outer_diameter_mm,free_length_mm,total_coils,ends\nA,steel,1,10,40,12,closed\n', /material_map\.steel: expected a known material/],
+      [
+        inputFile('units: si\nmaterial: music-wire\nmaterial_map: { steel: unobtainium }\nload: { force: 10, length: 40 }\nenvelope: {}\n'),
+        'part_number,material,wire_diameter_mm,outer_diameter_mm,free_length_mm,total_coils,ends\nA,steel,1,10,40,12,closed\n',
+        /material_map\.steel: expected a known material/,
+      ],
     ];
     for (const [req, table, pattern] of cases) {
       const r = await cli('stock', req, inputFile(table, 'csv'));
@@ -184,10 +227,15 @@ envelope: {}
   });
 
   it('accepts a kind column with compression, refuses extension rows by row (they run against an extension requirement)', async () => {
-    const t = inputFile('part_number,material,wire_diameter_mm,outer_diameter_mm,free_length_mm,total_coils,ends,kind\nA,music-wire,1,10,47.05,12,closed & ground,compression\nB,music-wire,1,10,47.05,12,closed & ground,extension\nC,music-wire,1,10,47.05,12,closed & ground,torsion\n', 'csv');
+    const t = inputFile(
+      'part_number,material,wire_diameter_mm,outer_diameter_mm,free_length_mm,total_coils,ends,kind\nA,music-wire,1,10,47.05,12,closed & ground,compression\nB,music-wire,1,10,47.05,12,closed & ground,extension\nC,music-wire,1,10,47.05,12,closed & ground,torsion\n',
+      'csv',
+    );
     const j = JSON.parse((await cli('stock', REQS, t, '--json')).stdout);
     expect(j.table.checked).toBe(1);
-    expect(j.bad_rows[0].message).toMatch(/the requirements are for compression springs: run the extension rows against an extension requirements file, kind: extension/);
+    expect(j.bad_rows[0].message).toMatch(
+      /the requirements are for compression springs: run the extension rows against an extension requirements file, kind: extension/,
+    );
     expect(j.bad_rows[1].message).toMatch(/compression or extension, got "torsion"/);
   });
 

@@ -24,13 +24,15 @@ describe('sig', () => {
   });
 
   it('always shows exactly the asked significant figures (property)', () => {
-    fc.assert(fc.property(fc.integer({ min: 2, max: 6 }), fc.double({ min: 1e-3, max: 1, noNaN: true }), fc.boolean(), (digits, frac, neg) => {
-      const v = (neg ? -1 : 1) * frac * 10 ** (digits - 1) * 0.999;
-      if (Math.abs(v) < 1e-3) return;
-      const s = sig(v, digits);
-      expect(significantDigits(s), `${v} -> ${s}`).toBe(digits);
-      expect(Math.abs(Number(s) - v)).toBeLessThanOrEqual(Math.abs(v) * 10 ** (1 - digits));
-    }));
+    fc.assert(
+      fc.property(fc.integer({ min: 2, max: 6 }), fc.double({ min: 1e-3, max: 1, noNaN: true }), fc.boolean(), (digits, frac, neg) => {
+        const v = (neg ? -1 : 1) * frac * 10 ** (digits - 1) * 0.999;
+        if (Math.abs(v) < 1e-3) return;
+        const s = sig(v, digits);
+        expect(significantDigits(s), `${v} -> ${s}`).toBe(digits);
+        expect(Math.abs(Number(s) - v)).toBeLessThanOrEqual(Math.abs(v) * 10 ** (1 - digits));
+      }),
+    );
   });
 });
 

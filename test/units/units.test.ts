@@ -5,7 +5,7 @@ import { displayUnit } from '../../src/units/systems.js';
 import type { Kind } from '../../src/units/kinds.js';
 
 describe('parsing quantities', () => {
-  it('reads plain numbers in the file\'s system and strings in their own unit (1 in = 25.4 mm, 1 lbf = 4.4482216152605 N by definition)', () => {
+  it("reads plain numbers in the file's system and strings in their own unit (1 in = 25.4 mm, 1 lbf = 4.4482216152605 N by definition)", () => {
     expect(parseQuantity(1.6, 'length', 'si', 'x')).toBe(1.6);
     expect(parseQuantity(1, 'length', 'us', 'x')).toBeCloseTo(25.4, 12);
     expect(parseQuantity('0.063 in', 'length', 'si', 'x')).toBeCloseTo(1.6002, 10);
@@ -39,15 +39,21 @@ describe('parsing quantities', () => {
     // Values inside the range a spring quantity can have (SANE_RANGE); outside it parseQuantity refuses them.
     const kindAndValue = fc.constantFrom(...kinds).chain((kind) => {
       const r = SANE_RANGE[kind];
-      const v = r.floor !== undefined ? fc.double({ min: r.floor, max: r.max, noNaN: true })
-        : fc.tuple(fc.boolean(), fc.double({ min: Math.max(r.min * 10, 1e-2), max: Math.min(r.max / 10, 1e6), noNaN: true })).map(([neg, a]) => (neg ? -a : a));
+      const v =
+        r.floor !== undefined
+          ? fc.double({ min: r.floor, max: r.max, noNaN: true })
+          : fc
+              .tuple(fc.boolean(), fc.double({ min: Math.max(r.min * 10, 1e-2), max: Math.min(r.max / 10, 1e6), noNaN: true }))
+              .map(([neg, a]) => (neg ? -a : a));
       return fc.tuple(fc.constant(kind), v);
     });
-    fc.assert(fc.property(kindAndValue, ([kind, v]) => {
-      const us = displayUnit('us', kind);
-      expect(us.toCore(us.fromCore(v))).toBeCloseTo(v, 6);
-      const parsed = parseQuantity(`${us.fromCore(v)} ${us.symbol}`, kind, 'si', 'x');
-      expect(parsed).toBeCloseTo(v, 6);
-    }));
+    fc.assert(
+      fc.property(kindAndValue, ([kind, v]) => {
+        const us = displayUnit('us', kind);
+        expect(us.toCore(us.fromCore(v))).toBeCloseTo(v, 6);
+        const parsed = parseQuantity(`${us.fromCore(v)} ${us.symbol}`, kind, 'si', 'x');
+        expect(parsed).toBeCloseTo(v, 6);
+      }),
+    );
   });
 });

@@ -10,10 +10,14 @@ export type Seating = (typeof SEATINGS)[number];
 /** End-condition constant alpha (Shigley Table 10-2). */
 export function endConditionConstant(seating: Seating): number {
   switch (seating) {
-    case 'fixed-fixed': return 0.5;
-    case 'fixed-pivoted': return 0.707;
-    case 'pivoted-pivoted': return 1;
-    case 'fixed-free': return 2;
+    case 'fixed-fixed':
+      return 0.5;
+    case 'fixed-pivoted':
+      return 0.707;
+    case 'pivoted-pivoted':
+      return 1;
+    case 'fixed-free':
+      return 2;
   }
 }
 
@@ -41,5 +45,11 @@ export function criticalDeflectionFrom(freeLength: number, meanDiameter: number,
 
 /** Critical deflection in mm, or NaN when the spring is absolutely stable. */
 export function criticalDeflection(freeLength: number, meanDiameter: number, elasticModulus: number, shearModulus: number, alpha: number): number {
-  return criticalDeflectionFrom(freeLength, meanDiameter, bucklingConstant1(elasticModulus, shearModulus), bucklingConstant2(elasticModulus, shearModulus), alpha);
+  return criticalDeflectionFrom(
+    freeLength,
+    meanDiameter,
+    bucklingConstant1(elasticModulus, shearModulus),
+    bucklingConstant2(elasticModulus, shearModulus),
+    alpha,
+  );
 }

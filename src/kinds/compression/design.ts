@@ -83,7 +83,8 @@ export function candidateAt(problem: SpringProblem, x: ArrayLike<number>, object
  * defect of ours, and no spring that fails it is ever printed. */
 export function assertVerified(c: Candidate): void {
   const worst = Math.max(...c.checks);
-  if (worst > 1e-6) throw new Error(`a reported spring failed re-verification (${CHECKS[c.checks.indexOf(worst)]} by ${worst.toExponential(2)}); please report this`);
+  if (worst > 1e-6)
+    throw new Error(`a reported spring failed re-verification (${CHECKS[c.checks.indexOf(worst)]} by ${worst.toExponential(2)}); please report this`);
 }
 
 /** Above this many combinations the automatic choice is the genetic search: the grid's own limit. */
@@ -102,7 +103,13 @@ export function chooseStrategy(req: Requirements, problem: SpringProblem, opts: 
   const forced = opts.strategy === 'grid' || (grouping && req.bestPerWireAsked === true);
   const strategy = opts.strategy === 'genetic' || (!forced && cells > AUTO_GRID_CELL_LIMIT) ? 'genetic' : 'grid';
   if (strategy === 'grid' && cells > LIMITS.gridCombinations) {
-    const why = opts.gridReason ?? (grouping ? 'the best spring of each material, wire size and end type needs every combination looked at (--variants or --strategy genetic lists the best found instead)' : opts.strategy === 'grid' ? 'asked for by --strategy grid' : 'this command looks at every combination');
+    const why =
+      opts.gridReason ??
+      (grouping
+        ? 'the best spring of each material, wire size and end type needs every combination looked at (--variants or --strategy genetic lists the best found instead)'
+        : opts.strategy === 'grid'
+          ? 'asked for by --strategy grid'
+          : 'this command looks at every combination');
     const sizes = problem.stock.length;
     const refusal = gridWorkError(req, why, { sizes, coilCounts: Math.round(cells / Math.max(1, sizes * req.ends.length)), combinations: cells });
     if (refusal) throw refusal;
@@ -119,11 +126,23 @@ export function runDesign(req: Requirements, opts: DesignOptions = {}): DesignRu
   // The LP bound comes first: the genetic search stops once its incumbent reaches it.
   const lp: LpBound = opts.skipBound ? { value: null, status: 'not-applicable', models: 0 } : lpLowerBound(problem);
   const t0 = performance.now();
-  const result = problem.stock.length === 0
-    ? emptyResult()
-    : strategy === 'grid'
-      ? gridSearch(problem, { top: req.top, collectAll: opts.collectAll || grouped, everyFeasiblePoint: opts.everyFeasiblePoint, maxScanPoints: 40, onProgress: opts.onProgress })
-      : geneticSearch(problem, { seed: req.seed, maxEvaluations: 0, top: req.top, termination: geneticTermination(opts.maxEvaluations ?? LIMITS.geneticEvaluations, lp.value) });
+  const result =
+    problem.stock.length === 0
+      ? emptyResult()
+      : strategy === 'grid'
+        ? gridSearch(problem, {
+            top: req.top,
+            collectAll: opts.collectAll || grouped,
+            everyFeasiblePoint: opts.everyFeasiblePoint,
+            maxScanPoints: 40,
+            onProgress: opts.onProgress,
+          })
+        : geneticSearch(problem, {
+            seed: req.seed,
+            maxEvaluations: 0,
+            top: req.top,
+            termination: geneticTermination(opts.maxEvaluations ?? LIMITS.geneticEvaluations, lp.value),
+          });
   const searchMs = performance.now() - t0;
   // Grouped: the best of each material, wire size and end type, each with the count of feasible springs
   // (coil counts) it stands for; the cloud is dropped again (nobody asked for it).
@@ -134,7 +153,11 @@ export function runDesign(req: Requirements, opts: DesignOptions = {}): DesignRu
   }
   const candidates = result.best.map((b, i) => ({ ...candidateAt(problem, b.x, b.f), ...(groups ? { variants: groups[i].feasible } : {}) }));
   candidates.forEach(assertVerified);
-  const bestValue = candidates.length ? (req.rank === 'mass' ? candidates[0].objectives[Objective.mass] : candidates[0].objectives[Objective.wire_volume]) : NaN;
+  const bestValue = candidates.length
+    ? req.rank === 'mass'
+      ? candidates[0].objectives[Objective.mass]
+      : candidates[0].objectives[Objective.wire_volume]
+    : NaN;
   const gap = lp.value !== null && Number.isFinite(bestValue) ? (bestValue - lp.value) / bestValue : null;
   return { req, problem, result, candidates, lp, gap, cells, searchMs, document: opts.document, grouped: groups !== null };
 }
@@ -159,7 +182,19 @@ export function admitsSpring(req: Requirements): boolean {
 function emptyResult(): SearchResult {
   const zeros = Object.fromEntries(CHECKS.map((c) => [c, 0]));
   const inf = Object.fromEntries(CHECKS.map((c) => [c, Infinity]));
-  return { strategy: 'grid', stoppedBy: 'complete', best: [], cloud: null, evaluations: 0, cells: 0, feasibleCells: 0, prunedCells: 0, cutBy: zeros, soleViolation: inf, nearestMisses: [] };
+  return {
+    strategy: 'grid',
+    stoppedBy: 'complete',
+    best: [],
+    cloud: null,
+    evaluations: 0,
+    cells: 0,
+    feasibleCells: 0,
+    prunedCells: 0,
+    cutBy: zeros,
+    soleViolation: inf,
+    nearestMisses: [],
+  };
 }
 
 /** Checks that apply, in report order. */

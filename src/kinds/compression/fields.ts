@@ -55,8 +55,20 @@ const ALL: readonly Field[] = [
   { name: 'working_force', unit: 'force', digits: 6, read: (c) => c.analysis.points[0].force },
   { name: 'operating_force', unit: 'force', digits: 6, read: (c) => (c.analysis.points.length > 1 ? last(c).force : null) },
   // The forces at every point the requirement names, in one cell.
-  { name: 'forces', unit: 'force', digits: 0, read: structured, column: { head: 'forces', digits: 3, cell: (c, system) => c.analysis.points.map((p) => sig(inUnit(p.force, 'force', system), 3)).join(' / ') } },
-  { name: 'points', unit: null, digits: 0, read: structured, json: (c) => c.analysis.points.map((p) => ({ length: p.length, force: p.force, stress: p.stress })) },
+  {
+    name: 'forces',
+    unit: 'force',
+    digits: 0,
+    read: structured,
+    column: { head: 'forces', digits: 3, cell: (c, system) => c.analysis.points.map((p) => sig(inUnit(p.force, 'force', system), 3)).join(' / ') },
+  },
+  {
+    name: 'points',
+    unit: null,
+    digits: 0,
+    read: structured,
+    json: (c) => c.analysis.points.map((p) => ({ length: p.length, force: p.force, stress: p.stress })),
+  },
   { name: 'max_stress', unit: 'stress', digits: 6, read: maxStress, column: { head: 'tau max', digits: 4 } },
   { name: 'solid_force', unit: 'force', digits: 6, read: (c) => c.analysis.solid.force },
   { name: 'solid_stress', unit: 'stress', digits: 6, read: (c) => c.analysis.solid.stress },
@@ -65,22 +77,47 @@ const ALL: readonly Field[] = [
   { name: 'strength_source', unit: null, digits: 0, read: (c) => strengthBasisOf(c.item.choice).source },
   { name: 'allowable_stress', unit: 'stress', digits: 6, read: (c) => c.analysis.material.allowableStress },
   { name: 'static_safety_factor', unit: null, digits: 5, read: (c) => c.analysis.staticSafetyFactor, column: { head: 'SF static', digits: 3 } },
-  { name: 'fatigue_safety_factor', unit: null, digits: 5, read: (c) => (c.analysis.fatigue ? c.analysis.fatigue.safetyFactor : null), column: { head: 'SF fatigue', digits: 3 } },
+  {
+    name: 'fatigue_safety_factor',
+    unit: null,
+    digits: 5,
+    read: (c) => (c.analysis.fatigue ? c.analysis.fatigue.safetyFactor : null),
+    column: { head: 'SF fatigue', digits: 3 },
+  },
   { name: 'natural_frequency', unit: 'frequency', digits: 5, read: (c) => c.analysis.surge.relevant },
   { name: 'surge_ends', unit: null, digits: 0, read: (c) => c.analysis.surge.ends },
   { name: 'absolutely_stable', unit: null, digits: 0, read: structured, json: (c) => c.analysis.buckling.absolutelyStable },
-  { name: 'critical_deflection', unit: 'length', digits: 6, read: (c) => (c.analysis.buckling.absolutelyStable ? null : c.analysis.buckling.criticalDeflection) },
+  {
+    name: 'critical_deflection',
+    unit: 'length',
+    digits: 6,
+    read: (c) => (c.analysis.buckling.absolutelyStable ? null : c.analysis.buckling.criticalDeflection),
+  },
   { name: 'buckling_margin', unit: null, digits: 5, read: bucklingMargin, column: { head: 'buckling', digits: 3, cell: bucklingCell } },
   { name: 'mass', unit: 'mass', digits: 6, read: (c) => c.analysis.geometry.mass, column: { head: 'mass', digits: 3 } },
   { name: 'wire_volume', unit: 'volume', digits: 6, read: (c) => c.analysis.geometry.wireVolume },
   { name: 'relative_cost', unit: null, digits: 6, read: (c) => c.analysis.geometry.mass * c.item.choice.material.relativeCost.value, note: RELATIVE_COST_NOTE },
   { name: 'checks', unit: null, digits: 0, read: structured, json: checksRecord },
   // The yield at the tolerances, where the run was confirmed (the design command and API).
-  { name: 'yield', unit: null, digits: 6, present: hasYield, read: (c) => c.yield?.monteCarlo.yield ?? null, column: { head: 'yield', digits: 0, cell: (c) => yieldPercent(c.yield!.monteCarlo.yield) } },
+  {
+    name: 'yield',
+    unit: null,
+    digits: 6,
+    present: hasYield,
+    read: (c) => c.yield?.monteCarlo.yield ?? null,
+    column: { head: 'yield', digits: 0, cell: (c) => yieldPercent(c.yield!.monteCarlo.yield) },
+  },
   { name: 'yield_samples', unit: null, digits: 0, present: hasYield, read: (c) => c.yield?.monteCarlo.samples ?? null },
   { name: 'yield_standard_error', unit: null, digits: 6, present: hasYield, read: (c) => c.yield?.monteCarlo.standardError ?? null },
   { name: 'yield_estimate', unit: null, digits: 6, present: hasYield, read: (c) => c.yield?.estimate ?? null },
-  { name: 'yield_limited_by', unit: null, digits: 0, present: hasYield, read: (c) => c.yield?.limiting ?? null, column: { head: 'yield limited by', digits: 0 } },
+  {
+    name: 'yield_limited_by',
+    unit: null,
+    digits: 0,
+    present: hasYield,
+    read: (c) => c.yield?.limiting ?? null,
+    column: { head: 'yield limited by', digits: 0 },
+  },
   { name: 'tolerance_grade', unit: null, digits: 0, present: hasYield, read: (c) => c.yield?.tolerances.grade ?? null },
   { name: 'tolerances', unit: null, digits: 0, present: hasYield, read: structured, json: (c) => tolerancesJson(c.yield!.tolerances) },
   // In the grouped list: the feasible springs (coil counts) this row stands for.
@@ -91,7 +128,9 @@ const ALL: readonly Field[] = [
 /** The checks that apply, by name: their signed margins (negative passes). */
 function checksRecord(c: Candidate): Record<string, number> {
   const checks: Record<string, number> = {};
-  CHECKS.forEach((name, i) => { if (c.checks[i] !== -1) checks[name] = c.checks[i]; });
+  CHECKS.forEach((name, i) => {
+    if (c.checks[i] !== -1) checks[name] = c.checks[i];
+  });
   return checks;
 }
 
@@ -105,26 +144,100 @@ function pick(names: readonly string[]): readonly Field[] {
 
 /** CSV columns (frontier, sweep): flat figures, each with its unit in the column name. */
 export const COMPRESSION_FIELDS = pick([
-  'material', 'ends', 'wire_diameter', 'mean_diameter', 'outer_diameter', 'inner_diameter', 'spring_index', 'active_coils', 'total_coils',
-  'free_length', 'solid_length', 'rate', 'working_force', 'operating_force', 'max_stress', 'solid_stress', 'static_safety_factor',
-  'fatigue_safety_factor', 'buckling_margin', 'natural_frequency', 'mass', 'relative_cost',
+  'material',
+  'ends',
+  'wire_diameter',
+  'mean_diameter',
+  'outer_diameter',
+  'inner_diameter',
+  'spring_index',
+  'active_coils',
+  'total_coils',
+  'free_length',
+  'solid_length',
+  'rate',
+  'working_force',
+  'operating_force',
+  'max_stress',
+  'solid_stress',
+  'static_safety_factor',
+  'fatigue_safety_factor',
+  'buckling_margin',
+  'natural_frequency',
+  'mass',
+  'relative_cost',
 ]);
 
 /** The JSON record of a candidate (SI), in its key order. */
 export const COMPRESSION_JSON_FIELDS = pick([
-  'material', 'material_name', 'ends', 'wire_diameter', 'mean_diameter', 'outer_diameter', 'inner_diameter', 'spring_index', 'active_coils',
-  'total_coils', 'free_length', 'solid_length', 'pitch', 'rate', 'mass', 'wire_volume', 'relative_cost', 'points', 'solid_force', 'solid_stress',
-  'solid_outer_diameter', 'tensile_strength', 'strength_source', 'allowable_stress', 'static_safety_factor', 'fatigue_safety_factor',
-  'natural_frequency', 'surge_ends', 'absolutely_stable', 'critical_deflection', 'buckling_margin', 'checks',
-  'yield', 'yield_samples', 'yield_standard_error', 'yield_estimate', 'yield_limited_by', 'tolerance_grade', 'tolerances', 'variants', 'warnings',
+  'material',
+  'material_name',
+  'ends',
+  'wire_diameter',
+  'mean_diameter',
+  'outer_diameter',
+  'inner_diameter',
+  'spring_index',
+  'active_coils',
+  'total_coils',
+  'free_length',
+  'solid_length',
+  'pitch',
+  'rate',
+  'mass',
+  'wire_volume',
+  'relative_cost',
+  'points',
+  'solid_force',
+  'solid_stress',
+  'solid_outer_diameter',
+  'tensile_strength',
+  'strength_source',
+  'allowable_stress',
+  'static_safety_factor',
+  'fatigue_safety_factor',
+  'natural_frequency',
+  'surge_ends',
+  'absolutely_stable',
+  'critical_deflection',
+  'buckling_margin',
+  'checks',
+  'yield',
+  'yield_samples',
+  'yield_standard_error',
+  'yield_estimate',
+  'yield_limited_by',
+  'tolerance_grade',
+  'tolerances',
+  'variants',
+  'warnings',
 ]);
 
 /** The columns of the ranked text and HTML tables. */
 export const COMPRESSION_TABLE_FIELDS = pick([
-  'material', 'wire_diameter', 'mean_diameter', 'outer_diameter', 'inner_diameter', 'spring_index', 'active_coils', 'total_coils', 'ends',
-  'free_length', 'solid_length', 'rate', 'forces', 'max_stress', 'static_safety_factor', 'fatigue_safety_factor', 'buckling_margin', 'mass',
-  'yield', 'yield_limited_by', 'variants',
+  'material',
+  'wire_diameter',
+  'mean_diameter',
+  'outer_diameter',
+  'inner_diameter',
+  'spring_index',
+  'active_coils',
+  'total_coils',
+  'ends',
+  'free_length',
+  'solid_length',
+  'rate',
+  'forces',
+  'max_stress',
+  'static_safety_factor',
+  'fatigue_safety_factor',
+  'buckling_margin',
+  'mass',
+  'yield',
+  'yield_limited_by',
+  'variants',
 ]);
 
 /** What the columns of the ranked table that are not plain figures mean, under the table. */
-export const TABLE_NOTE = 'C: spring index D/d. buckling: how much further than its largest working deflection the spring may deflect before it buckles (the buckling check\'s margin); stable: absolutely stable at any deflection; guided: on a rod or in a bore (not checked).';
+export const TABLE_NOTE =
+  "C: spring index D/d. buckling: how much further than its largest working deflection the spring may deflect before it buckles (the buckling check's margin); stable: absolutely stable at any deflection; guided: on a rod or in a bore (not checked).";

@@ -9,9 +9,12 @@ export type EndType = (typeof END_TYPES)[number];
 /** Inactive (dead) coils added to the active coils: Nt = Na + Q. */
 export function inactiveCoils(ends: EndType): number {
   switch (ends) {
-    case 'plain': return 0;
-    case 'plain-ground': return 1;
-    default: return 2;
+    case 'plain':
+      return 0;
+    case 'plain-ground':
+      return 1;
+    default:
+      return 2;
   }
 }
 
@@ -24,10 +27,14 @@ export function solidLength(wireDiameter: number, totalCoils: number, ends: EndT
 /** Length taken by the ends beyond p * Na (free length = p * Na + endAllowance). */
 function endAllowance(wireDiameter: number, pitch: number, ends: EndType): number {
   switch (ends) {
-    case 'plain': return wireDiameter;
-    case 'plain-ground': return pitch;
-    case 'squared': return 3 * wireDiameter;
-    case 'squared-ground': return 2 * wireDiameter;
+    case 'plain':
+      return wireDiameter;
+    case 'plain-ground':
+      return pitch;
+    case 'squared':
+      return 3 * wireDiameter;
+    case 'squared-ground':
+      return 2 * wireDiameter;
   }
 }
 
@@ -38,10 +45,14 @@ export function freeLengthFromPitch(pitch: number, activeCoils: number, wireDiam
 /** Pitch of the active coils at free length. */
 export function pitch(freeLength: number, activeCoils: number, wireDiameter: number, ends: EndType): number {
   switch (ends) {
-    case 'plain': return (freeLength - wireDiameter) / activeCoils;
-    case 'plain-ground': return freeLength / (activeCoils + 1);
-    case 'squared': return (freeLength - 3 * wireDiameter) / activeCoils;
-    case 'squared-ground': return (freeLength - 2 * wireDiameter) / activeCoils;
+    case 'plain':
+      return (freeLength - wireDiameter) / activeCoils;
+    case 'plain-ground':
+      return freeLength / (activeCoils + 1);
+    case 'squared':
+      return (freeLength - 3 * wireDiameter) / activeCoils;
+    case 'squared-ground':
+      return (freeLength - 2 * wireDiameter) / activeCoils;
   }
 }
 
@@ -60,7 +71,6 @@ export function wireLength(meanDiameter: number, totalCoils: number): number {
 export function wireVolume(wireDiameter: number, meanDiameter: number, totalCoils: number): number {
   return (Math.PI * Math.PI * wireDiameter * wireDiameter * meanDiameter * totalCoils) / 4;
 }
-
 
 /** Mass in kg from the coil's dimensions and density (kg/m^3). */
 export function springMass(wireDiameter: number, meanDiameter: number, totalCoils: number, density: number): number {

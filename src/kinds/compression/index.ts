@@ -29,7 +29,8 @@ export const compression: CompressionKind = {
     return Object.assign(p, { candidateAt: (x: ArrayLike<number>, f: Float64Array) => candidateAt(p, x, f) });
   },
   // Every reported spring's yield by the seeded Monte Carlo; under min_yield, the ones it refutes leave the list.
-  design: (req, _catalog, request = {}) => confirmRun(runDesign(req, { strategy: request.strategy, onProgress: request.onProgress, document: request.document })),
+  design: (req, _catalog, request = {}) =>
+    confirmRun(runDesign(req, { strategy: request.strategy, onProgress: request.onProgress, document: request.document })),
   search: (req, _catalog, request = {}) => runDesign(req, { strategy: request.strategy, onProgress: request.onProgress }),
   found: (run) => run.candidates.length > 0,
   // The axes are checked against the objectives registry before this is called (frontierAxis()).
@@ -70,9 +71,10 @@ export const compression: CompressionKind = {
       return { text, notes };
     },
     listed: (run) => run.candidates.length,
-    requirementNotes: (req) => (req.cycles !== undefined && req.cycles < STATIC_SERVICE_CYCLES
-      ? [`cycles ${req.cycles} is below ${STATIC_SERVICE_CYCLES.toExponential(0).replace('+', '')}: judged as static service (no fatigue check)`]
-      : []),
+    requirementNotes: (req) =>
+      req.cycles !== undefined && req.cycles < STATIC_SERVICE_CYCLES
+        ? [`cycles ${req.cycles} is below ${STATIC_SERVICE_CYCLES.toExponential(0).replace('+', '')}: judged as static service (no fatigue check)`]
+        : [],
   },
   cautions: [],
 };

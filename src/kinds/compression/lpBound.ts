@@ -24,7 +24,11 @@ function logPoints(a: number, b: number, count = 8): number[] {
   return Array.from({ length: count }, (_, i) => a * Math.pow(b / a, i / (count - 1)));
 }
 
-export interface LpBound { value: number | null; status: 'bound' | 'infeasible' | 'not-applicable'; models: number }
+export interface LpBound {
+  value: number | null;
+  status: 'bound' | 'infeasible' | 'not-applicable';
+  models: number;
+}
 
 /** Group stock items by material and strength segment: within a group, strength is one monomial in d. */
 function groups(stock: StockItem[]): StockItem[][] {
@@ -91,11 +95,17 @@ export function lpLowerBound(problem: SpringProblem): LpBound {
     const s0 = group[0];
     const law = s0.choice.material.strength;
     // The group shares one strength piece (groups()), so its power-law segment is the one at dLo.
-    const seg = req.allowableStress === undefined && law.law === 'power' && s0.choice.tensileStrength === undefined
-      ? law.segments[strengthPiece(s0.choice.material, dLo)] : undefined;
+    const seg =
+      req.allowableStress === undefined && law.law === 'power' && s0.choice.tensileStrength === undefined
+        ? law.segments[strengthPiece(s0.choice.material, dLo)]
+        : undefined;
     const fraction = s0.figures.allowableStress / s0.figures.tensileStrength;
     // Allowable as A' d^-m: exact for a power-law segment; otherwise bounded above by its largest value.
-    const allowCoefficient = req.allowableStress ?? (seg ? fraction * seg.coefficient : fraction * Math.max(...group.map((s) => s.choice.tensileStrength ?? tensileStrength(s.choice.material, s.wireDiameter))));
+    const allowCoefficient =
+      req.allowableStress ??
+      (seg
+        ? fraction * seg.coefficient
+        : fraction * Math.max(...group.map((s) => s.choice.tensileStrength ?? tensileStrength(s.choice.material, s.wireDiameter))));
     const allowExponent = seg ? seg.exponent : 0;
     for (const c0 of indexPoints) {
       const k0 = Math.log(stressFactorOf(c0));
@@ -136,7 +146,7 @@ export function lpLowerBound(problem: SpringProblem): LpBound {
     // Mass >= rho pi^2 d^2 D (Na + Q) / 4: minimise 2u + v + t.
     const r = minimiseLinear<V>(['u', 'v', 'w', 't'], { u: 2, v: 1, t: 1 }, rows);
     if (r.status !== 'optimal') continue;
-    const scale = (Math.PI * Math.PI) / 4 * (req.rank === 'mass' ? rhoMin * 1e-9 : 1);
+    const scale = ((Math.PI * Math.PI) / 4) * (req.rank === 'mass' ? rhoMin * 1e-9 : 1);
     best = Math.min(best, scale * Math.exp(r.objective));
   }
   if (!Number.isFinite(best)) return { value: null, status: 'infeasible', models };

@@ -6,7 +6,8 @@ import { indexOf, type ObjectiveDefinition } from '../kind.js';
 
 /** What relative_cost is, wherever it appears (CSV, JSON, the frontier's axis): the objective the
  * search computes, f[Objective.relative_cost] = mass * the material's relativeCost (problem.ts). */
-export const RELATIVE_COST_NOTE = "the spring's mass in kg times its material's relative wire cost (hard-drawn carbon steel = 1.0; music wire 2.6, stainless 302 7.6; each material's factor and its source are in catalogs/materials.yaml, after Shigley Table 10-4, and `coilfront materials` lists them): the mass of hard-drawn wire that would cost as much. It compares materials and sizes; coiling, finishing and quantity are left out.";
+export const RELATIVE_COST_NOTE =
+  "the spring's mass in kg times its material's relative wire cost (hard-drawn carbon steel = 1.0; music wire 2.6, stainless 302 7.6; each material's factor and its source are in catalogs/materials.yaml, after Shigley Table 10-4, and `coilfront materials` lists them): the mass of hard-drawn wire that would cost as much. It compares materials and sizes; coiling, finishing and quantity are left out.";
 
 export const COMPRESSION_OBJECTIVES = [
   { key: 'mass', label: 'mass', unit: 'mass', sign: 1, trend: 1, rankable: true, frontierAxis: true, lpBound: true },
@@ -16,7 +17,16 @@ export const COMPRESSION_OBJECTIVES = [
   // Not a rank key: a cost index is a trade-off axis (mass x the catalog's relative cost factor), too
   // coarse a figure to pick one spring by.
   { key: 'relative_cost', label: 'relative cost (mass x cost factor)', unit: null, sign: 1, trend: 1, rankable: false, frontierAxis: true, lpBound: false },
-  { key: 'safety_factor', label: 'safety factor (lowest of static and fatigue)', unit: null, sign: -1, trend: 0, rankable: true, frontierAxis: true, lpBound: false },
+  {
+    key: 'safety_factor',
+    label: 'safety factor (lowest of static and fatigue)',
+    unit: null,
+    sign: -1,
+    trend: 0,
+    rankable: true,
+    frontierAxis: true,
+    lpBound: false,
+  },
   { key: 'static_safety', label: 'static safety factor', unit: null, sign: -1, trend: 0, rankable: false, frontierAxis: true, lpBound: false },
   { key: 'fatigue_safety', label: 'fatigue safety factor', unit: null, sign: -1, trend: 0, rankable: false, frontierAxis: true, lpBound: false },
 ] as const satisfies readonly ObjectiveDefinition[];

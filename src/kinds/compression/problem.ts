@@ -23,7 +23,6 @@ import { CHECKS, activeChecks, figuresUnder, forceBand, shortestLength, staticLi
 import { loadToleranceCatalog, type ToleranceCatalog } from './tolerance/catalog.js';
 import { inSearchYield } from './tolerance/inSearch.js';
 
-
 /** See bracketBounds. */
 const BOUND_EASE = 1 - 1e-12;
 
@@ -34,7 +33,11 @@ function leastLoadArm(lo: number, hi: number, F1: number, q: number): number {
   return D * F1 + q / (D * D);
 }
 
-export interface StockItem { choice: MaterialChoice; wireDiameter: number; figures: MaterialFigures }
+export interface StockItem {
+  choice: MaterialChoice;
+  wireDiameter: number;
+  figures: MaterialFigures;
+}
 
 export interface SpringProblem extends Problem {
   readonly req: Requirements;
@@ -49,9 +52,18 @@ export interface SpringProblem extends Problem {
 export function springServiceConditions(req: Requirements): ServiceConditions {
   return {
     lengths: req.operatingLength !== undefined ? [req.workingLength, req.operatingLength] : [req.workingLength],
-    cycles: req.cycles, peened: req.peened, criterion: req.criterion, correction: req.correction,
-    directShear: req.directShear, seating: req.seating, surgeEnds: req.surgeEnds, temperature: req.temperature,
-    forcingFrequency: req.forcingFrequency, clashAllowance: req.clashAllowance, gapRule: req.gapRule, surgeMargin: req.safety.surge,
+    cycles: req.cycles,
+    peened: req.peened,
+    criterion: req.criterion,
+    correction: req.correction,
+    directShear: req.directShear,
+    seating: req.seating,
+    surgeEnds: req.surgeEnds,
+    temperature: req.temperature,
+    forcingFrequency: req.forcingFrequency,
+    clashAllowance: req.clashAllowance,
+    gapRule: req.gapRule,
+    surgeMargin: req.safety.surge,
   };
 }
 
@@ -88,7 +100,14 @@ export function buildSpringProblem(req: Requirements, tolerances?: ToleranceCata
     sSsu[i] = ultimateShearStrength(s.figures.tensileStrength);
     sTmax[i] = s.figures.maxTemperature;
     sCost[i] = s.choice.material.relativeCost.value;
-    const { point } = endurancePoint(req.cycles ?? INFINITE_LIFE_CYCLES, req.peened, s.figures.zimmerli, s.figures.finiteLife, s.figures.tensileStrength, req.criterion);
+    const { point } = endurancePoint(
+      req.cycles ?? INFINITE_LIFE_CYCLES,
+      req.peened,
+      s.figures.zimmerli,
+      s.figures.finiteLife,
+      s.figures.tensileStrength,
+      req.criterion,
+    );
     sPoint.push(point);
     sSse[i] = fullyReversedEndurance(point, sSsu[i], req.criterion);
     sC1[i] = bucklingConstant1(sE[i], sG[i]);
@@ -154,7 +173,12 @@ export function buildSpringProblem(req: Requirements, tolerances?: ToleranceCata
     let Dhi = Cmax * d;
     if (activeMask[Check.outer_diameter] === 1) Dhi = Math.min(Dhi, ODmax - d);
     if (activeMask[Check.inner_diameter] === 1) Dlo = Math.max(Dlo, IDmin + d);
-    if (Dlo > Dhi * (1 + 1e-12)) return ODmax - d < Cmin * d || activeMask[Check.inner_diameter] === 0 ? Check.outer_diameter : IDmin + d > Cmax * d ? Check.inner_diameter : Check.outer_diameter;
+    if (Dlo > Dhi * (1 + 1e-12))
+      return ODmax - d < Cmin * d || activeMask[Check.inner_diameter] === 0
+        ? Check.outer_diameter
+        : IDmin + d > Cmax * d
+          ? Check.inner_diameter
+          : Check.outer_diameter;
     const kMax = springRate(sG[i], d, Dlo, NaLo, directShear);
     const kMin = springRate(sG[i], d, Dhi, NaHi, directShear);
     let LsMin = Infinity;
@@ -191,7 +215,10 @@ export function buildSpringProblem(req: Requirements, tolerances?: ToleranceCata
 
   const problem: SpringProblem = {
     name: 'helical compression spring',
-    req, stock, ends, active,
+    req,
+    stock,
+    ends,
+    active,
     variables: [
       { kind: 'list', name: 'stock', values: stock.map((_, i) => i) },
       { kind: 'list', name: 'ends', values: ends.map((_, i) => i) },
@@ -216,11 +243,16 @@ export function buildSpringProblem(req: Requirements, tolerances?: ToleranceCata
       const d = sd[i];
       const Nt = x[2] + endQ[x[1]];
       switch (req.rank) {
-        case 'mass': return bound / massOfVolume(wireVolume(d, 1, Nt), sRho[i]);
-        case 'wire_volume': return bound / wireVolume(d, 1, Nt);
-        case 'outer_diameter': return bound - d;
-        case 'free_length': return bound > L1 ? Math.cbrt(((bound - L1) * sG[i] * d * d * d * d) / (8 * F1 * x[2])) : -Infinity;
-        default: return Infinity;
+        case 'mass':
+          return bound / massOfVolume(wireVolume(d, 1, Nt), sRho[i]);
+        case 'wire_volume':
+          return bound / wireVolume(d, 1, Nt);
+        case 'outer_diameter':
+          return bound - d;
+        case 'free_length':
+          return bound > L1 ? Math.cbrt(((bound - L1) * sG[i] * d * d * d * d) / (8 * F1 * x[2])) : -Infinity;
+        default:
+          return Infinity;
       }
     },
 
@@ -281,7 +313,8 @@ export function buildSpringProblem(req: Requirements, tolerances?: ToleranceCata
         // The solid force F1 + k (L1 - Ls) is least at the softest rate. (With L1 < Ls the coils would
         // be solid before the working length: no bound is offered, the clash check rules that out.)
         const room = L1 - solidLength(d, Na + endQ[e], ends[e]);
-        if (room >= 0) out[Check.solid_stress] = (Math.max(tauF1 + tauPerDeflection * room, KhiEased * leastLoadArm(lo, hi, F1, qPerDeflection * room)) - limit) * invLimit;
+        if (room >= 0)
+          out[Check.solid_stress] = (Math.max(tauF1 + tauPerDeflection * room, KhiEased * leastLoadArm(lo, hi, F1, qPerDeflection * room)) - limit) * invLimit;
       }
       if (activeMask[Check.fatigue] === 1 && travel > 0) {
         // Every criterion's safety factor falls as the alternating or the mean stress rises (the load
@@ -334,7 +367,8 @@ export function buildSpringProblem(req: Requirements, tolerances?: ToleranceCata
         const minGap = minimumGapSum(D, d, Na);
         g[Check.coil_gaps] = (minGap - (Lmin - Ls)) / minGap;
       } else g[Check.coil_gaps] = -1;
-      g[Check.outer_diameter_at_solid] = activeMask[Check.outer_diameter_at_solid] === 1 ? (solidOuterDiameter(D, d, pitch(L0, Na, d, endType)) - ODmax) * invODmax : -1;
+      g[Check.outer_diameter_at_solid] =
+        activeMask[Check.outer_diameter_at_solid] === 1 ? (solidOuterDiameter(D, d, pitch(L0, Na, d, endType)) - ODmax) * invODmax : -1;
       const staticSafety = limit / tauMax;
       const invLimit = sInvLimit[i];
       g[Check.static_stress] = (tauMax * staticFactor - limit) * invLimit;
@@ -356,12 +390,19 @@ export function buildSpringProblem(req: Requirements, tolerances?: ToleranceCata
       if (activeMask[Check.operating_force_min] === 1) {
         g[Check.operating_force_min] = (F2req * (1 - tol) - F2) * invF2req;
         g[Check.operating_force_max] = (F2 - F2req * (1 + tol)) * invF2req;
-      } else { g[Check.operating_force_min] = -1; g[Check.operating_force_max] = -1; }
+      } else {
+        g[Check.operating_force_min] = -1;
+        g[Check.operating_force_max] = -1;
+      }
       g[Check.temperature] = activeMask[Check.temperature] === 1 ? (temperature - sTmax[i]) / Math.max(Math.abs(sTmax[i]), 1) : -1;
       g[YIELD] = -1;
       if (yieldOf !== null) {
         let nominalPasses = true;
-        for (let j = 0; j < YIELD; j++) if (!(g[j] <= 0)) { nominalPasses = false; break; }
+        for (let j = 0; j < YIELD; j++)
+          if (!(g[j] <= 0)) {
+            nominalPasses = false;
+            break;
+          }
         // A nominal failure is the verdict already: the yield is left unjudged (-1) there.
         if (nominalPasses) {
           const y = yieldOf.estimate(i, e, D, Na);
@@ -385,7 +426,16 @@ export function buildSpringProblem(req: Requirements, tolerances?: ToleranceCata
 
     decode(x) {
       const item = stock[x[0]];
-      return { item, geometry: { wireDiameter: item.wireDiameter, meanDiameter: x[3], activeCoils: x[2], ends: ends[x[1]], freeLength: L1 + F1 / springRate(item.figures.shearModulus, item.wireDiameter, x[3], x[2], directShear) } };
+      return {
+        item,
+        geometry: {
+          wireDiameter: item.wireDiameter,
+          meanDiameter: x[3],
+          activeCoils: x[2],
+          ends: ends[x[1]],
+          freeLength: L1 + F1 / springRate(item.figures.shearModulus, item.wireDiameter, x[3], x[2], directShear),
+        },
+      };
     },
     service: () => springServiceConditions(req),
   };

@@ -99,13 +99,29 @@ export const outward = (v: number, direction: 1 | -1, digits = 4): number => {
   return Number((n * scale).toPrecision(digits + 1));
 };
 
-function linear(path: string, group: RelaxGroup, eases: CheckName[], from: number, direction: 1 | -1, target: number, unit: Unit, opts: { raw?: (v: number) => unknown; fromRaw?: unknown; absolute?: boolean } = {}): NumericKnob | null {
+function linear(
+  path: string,
+  group: RelaxGroup,
+  eases: CheckName[],
+  from: number,
+  direction: 1 | -1,
+  target: number,
+  unit: Unit,
+  opts: { raw?: (v: number) => unknown; fromRaw?: unknown; absolute?: boolean } = {},
+): NumericKnob | null {
   // r is the relative change (or, for a fraction, the absolute one); target the most relaxed value tried.
   const scale = opts.absolute ? 1 : Math.abs(from);
   const maxR = (direction * (target - from)) / scale;
   if (!(maxR > 1e-9) || !Number.isFinite(maxR)) return null;
   return {
-    kind: 'number', path, group, eases, from, maxR, direction, unit,
+    kind: 'number',
+    path,
+    group,
+    eases,
+    from,
+    maxR,
+    direction,
+    unit,
     at: (r) => outward(from + direction * r * scale, direction, 4),
     raw: opts.raw ?? ((v) => v),
     fromRaw: opts.fromRaw ?? from,
@@ -119,13 +135,27 @@ function knobs(req: Requirements, doc: Record<string, unknown>, catalog: Catalog
   const active = (c: CheckName) => on[CHECKS.indexOf(c)];
   const out: (Knob | null)[] = [];
   const env = 'envelope.';
-  if (req.maxOuterDiameter !== undefined) out.push(linear(`${env}max_outer_diameter`, 'limit', easedBy(`${env}max_outer_diameter`), req.maxOuterDiameter, 1, 2 * req.maxOuterDiameter, 'mm'));
-  if (req.minInnerDiameter !== undefined) out.push(linear(`${env}min_inner_diameter`, 'limit', easedBy(`${env}min_inner_diameter`), req.minInnerDiameter, -1, 0.1 * req.minInnerDiameter, 'mm'));
-  if (req.maxFreeLength !== undefined) out.push(linear(`${env}max_free_length`, 'limit', easedBy(`${env}max_free_length`), req.maxFreeLength, 1, 2 * req.maxFreeLength, 'mm'));
-  if (req.maxSolidLength !== undefined) out.push(linear(`${env}max_solid_length`, 'limit', easedBy(`${env}max_solid_length`), req.maxSolidLength, 1, 2 * req.maxSolidLength, 'mm'));
+  if (req.maxOuterDiameter !== undefined)
+    out.push(linear(`${env}max_outer_diameter`, 'limit', easedBy(`${env}max_outer_diameter`), req.maxOuterDiameter, 1, 2 * req.maxOuterDiameter, 'mm'));
+  if (req.minInnerDiameter !== undefined)
+    out.push(linear(`${env}min_inner_diameter`, 'limit', easedBy(`${env}min_inner_diameter`), req.minInnerDiameter, -1, 0.1 * req.minInnerDiameter, 'mm'));
+  if (req.maxFreeLength !== undefined)
+    out.push(linear(`${env}max_free_length`, 'limit', easedBy(`${env}max_free_length`), req.maxFreeLength, 1, 2 * req.maxFreeLength, 'mm'));
+  if (req.maxSolidLength !== undefined)
+    out.push(linear(`${env}max_solid_length`, 'limit', easedBy(`${env}max_solid_length`), req.maxSolidLength, 1, 2 * req.maxSolidLength, 'mm'));
   if (req.operatingLength !== undefined) {
     // A shorter stroke: the operating length moves toward the working length (it must stay below it).
-    out.push(linear('operating_length', 'limit', easedBy('operating_length'), req.operatingLength, 1, req.operatingLength + 0.9 * (req.workingLength - req.operatingLength), 'mm'));
+    out.push(
+      linear(
+        'operating_length',
+        'limit',
+        easedBy('operating_length'),
+        req.operatingLength,
+        1,
+        req.operatingLength + 0.9 * (req.workingLength - req.operatingLength),
+        'mm',
+      ),
+    );
   }
   if (req.operatingForce !== undefined) {
     const of = req.operatingForce;
@@ -137,7 +167,9 @@ function knobs(req: Requirements, doc: Record<string, unknown>, catalog: Catalog
     // Fewer cycles: log-spaced toward static service; r is the share of the life given up.
     const from = Number.isFinite(req.cycles) ? req.cycles : INFINITE_LIFE_CYCLES;
     if (from > STATIC_SERVICE_CYCLES) {
-      const k = linear('cycles', 'limit', easedBy('cycles'), from, -1, STATIC_SERVICE_CYCLES, null, { fromRaw: Number.isFinite(req.cycles) ? req.cycles : 'infinite' });
+      const k = linear('cycles', 'limit', easedBy('cycles'), from, -1, STATIC_SERVICE_CYCLES, null, {
+        fromRaw: Number.isFinite(req.cycles) ? req.cycles : 'infinite',
+      });
       if (k) out.push({ ...k, at: (r) => outward(from * (1 - r), -1, 3) });
     }
   }
@@ -146,17 +178,22 @@ function knobs(req: Requirements, doc: Record<string, unknown>, catalog: Catalog
   if (hi < 20) out.push(linear('index', 'limit', easedBy('index (higher)'), hi, 1, 20, null, { raw: (v) => [lo, v], fromRaw: [lo, hi] }));
   const [nLo, nHi] = req.activeCoils;
   if (nLo > 2) out.push(linear('active_coils', 'limit', easedBy('active_coils (lower)'), nLo, -1, 2, null, { raw: (v) => [v, nHi], fromRaw: [nLo, nHi] }));
-  out.push(linear('active_coils', 'limit', easedBy('active_coils (higher)'), nHi, 1, Math.max(3 * nHi, nLo + 1), null, { raw: (v) => [nLo, v], fromRaw: [nLo, nHi] }));
+  out.push(
+    linear('active_coils', 'limit', easedBy('active_coils (higher)'), nHi, 1, Math.max(3 * nHi, nLo + 1), null, { raw: (v) => [nLo, v], fromRaw: [nLo, nHi] }),
+  );
 
   // Settings.
   if (active('buckling')) {
     out.push({ kind: 'choice', path: 'guided', group: 'setting', eases: easedBy('guided'), fromRaw: false, toRaw: true });
     const alpha = endConditionConstant(req.seating);
-    for (const s of SEATINGS) if (endConditionConstant(s) < alpha) out.push({ kind: 'choice', path: 'seating', group: 'setting', eases: easedBy('seating'), fromRaw: req.seating, toRaw: s });
+    for (const s of SEATINGS)
+      if (endConditionConstant(s) < alpha)
+        out.push({ kind: 'choice', path: 'seating', group: 'setting', eases: easedBy('seating'), fromRaw: req.seating, toRaw: s });
   }
   // Any other end type (the run's springs show which one).
   const moreEnds = END_TYPES.filter((e) => !req.ends.includes(e));
-  if (moreEnds.length) out.push({ kind: 'choice', path: 'ends', group: 'setting', eases: easedBy('ends'), fromRaw: [...req.ends], toRaw: [...req.ends, ...moreEnds] });
+  if (moreEnds.length)
+    out.push({ kind: 'choice', path: 'ends', group: 'setting', eases: easedBy('ends'), fromRaw: [...req.ends], toRaw: [...req.ends, ...moreEnds] });
   if (active('fatigue') && !req.peened) out.push({ kind: 'choice', path: 'peened', group: 'setting', eases: easedBy('peened'), fromRaw: false, toRaw: true });
   // Another material: the other members of the families chosen, one by one (the closest
   // substitutes), then each other family as a whole.
@@ -173,11 +210,13 @@ function knobs(req: Requirements, doc: Record<string, unknown>, catalog: Catalog
   }
 
   // Margins: last, and never below their floors.
-  if (req.allowableStress === undefined && req.safety.static > 1) out.push(linear('safety.static', 'margin', easedBy('safety.static'), req.safety.static, -1, 1, null));
+  if (req.allowableStress === undefined && req.safety.static > 1)
+    out.push(linear('safety.static', 'margin', easedBy('safety.static'), req.safety.static, -1, 1, null));
   if (active('fatigue') && req.safety.fatigue > 1) out.push(linear('safety.fatigue', 'margin', easedBy('safety.fatigue'), req.safety.fatigue, -1, 1, null));
   // A surge margin of 1 is resonance; 10 is already below the usual 13 to 20 (common practice).
   if (active('surge') && req.safety.surge > 10) out.push(linear('safety.surge', 'margin', easedBy('safety.surge'), req.safety.surge, -1, 10, null));
-  if (req.clashAllowance > 0.1) out.push(linear('clash_allowance', 'margin', easedBy('clash_allowance'), req.clashAllowance, -1, 0.1, null, { absolute: true }));
+  if (req.clashAllowance > 0.1)
+    out.push(linear('clash_allowance', 'margin', easedBy('clash_allowance'), req.clashAllowance, -1, 0.1, null, { absolute: true }));
   if (req.solidSafe) out.push({ kind: 'choice', path: 'solid_safe', group: 'margin', eases: easedBy('solid_safe'), fromRaw: true, toRaw: false });
   if (req.gapRule) out.push({ kind: 'choice', path: 'coil_gap_rule', group: 'margin', eases: easedBy('coil_gap_rule'), fromRaw: true, toRaw: false });
   return out.filter((k): k is Knob => k !== null);
@@ -186,7 +225,10 @@ function knobs(req: Requirements, doc: Record<string, unknown>, catalog: Catalog
 /** A value as YAML text for `--set`. */
 function yamlText(v: unknown): string {
   if (Array.isArray(v)) return `[${v.map(yamlText).join(', ')}]`;
-  if (isRecord(v)) return `{ ${Object.entries(v).map(([k, x]) => `${k}: ${yamlText(x)}`).join(', ')} }`;
+  if (isRecord(v))
+    return `{ ${Object.entries(v)
+      .map(([k, x]) => `${k}: ${yamlText(x)}`)
+      .join(', ')} }`;
   return String(v);
 }
 
@@ -194,7 +236,12 @@ function yamlText(v: unknown): string {
 class Prober {
   runs = 0;
   private readonly seen = new Map<string, boolean>();
-  constructor(readonly doc: Record<string, unknown>, readonly catalog: Catalog, readonly system: Requirements['system'], readonly run: (req: Requirements) => boolean) {}
+  constructor(
+    readonly doc: Record<string, unknown>,
+    readonly catalog: Catalog,
+    readonly system: Requirements['system'],
+    readonly run: (req: Requirements) => boolean,
+  ) {}
 
   /** The value as the document must hold it: in a US-unit file, quantities spell out their SI unit. */
   docValue(k: Knob, raw: unknown): unknown {
@@ -241,7 +288,10 @@ function smallestChange(p: Prober, k: NumericKnob, ladder: number[], others: { p
     if (r >= hi) break;
     const ok = admits(r);
     if (ok === null) return hi;
-    if (ok) { hi = r; break; }
+    if (ok) {
+      hi = r;
+      break;
+    }
     lo = r;
   }
   for (let i = 0; i < RELAX_LIMITS.bisectionSteps; i++) {
@@ -250,7 +300,8 @@ function smallestChange(p: Prober, k: NumericKnob, ladder: number[], others: { p
     if (k.at(mid) === k.at(hi) || k.at(mid) === k.at(lo)) break;
     const ok = admits(mid);
     if (ok === null) break;
-    if (ok) hi = mid; else lo = mid;
+    if (ok) hi = mid;
+    else lo = mid;
   }
   return hi;
 }
@@ -301,7 +352,11 @@ export function relaxAdvice(run: DesignRun, opts: RelaxOptions = {}): RelaxAdvic
   let single = [...limits, ...settings];
   let pair: RelaxChange[] | null = null;
   if (!single.length) {
-    pair = bestPair(p, all.filter((k) => k.group !== 'margin'), run);
+    pair = bestPair(
+      p,
+      all.filter((k) => k.group !== 'margin'),
+      run,
+    );
     const margins: RelaxChange[] = [];
     for (const k of all.filter((k) => k.group === 'margin')) {
       const c = tryKnob(k);
@@ -336,12 +391,22 @@ function bestPair(p: Prober, ks: Knob[], run: DesignRun): RelaxChange[] | null {
 
 function pairChange(p: Prober, a: Knob, b: Knob): { cost: number; changes: RelaxChange[] } | null {
   if (a.kind === 'choice' && b.kind === 'choice') {
-    return p.admits([{ path: a.path, value: a.toRaw }, { path: b.path, value: b.toRaw }]) ? { cost: 0.5, changes: [change(p, a, a.toRaw, null), change(p, b, b.toRaw, null)] } : null;
+    return p.admits([
+      { path: a.path, value: a.toRaw },
+      { path: b.path, value: b.toRaw },
+    ])
+      ? { cost: 0.5, changes: [change(p, a, a.toRaw, null), change(p, b, b.toRaw, null)] }
+      : null;
   }
   if (a.kind === 'choice' || b.kind === 'choice') {
     const c = (a.kind === 'choice' ? a : b) as ChoiceKnob;
     const n = (a.kind === 'choice' ? b : a) as NumericKnob;
-    const r = smallestChange(p, n, [0.08, 0.32].map((x) => x * n.maxR), [{ path: c.path, value: c.toRaw }]);
+    const r = smallestChange(
+      p,
+      n,
+      [0.08, 0.32].map((x) => x * n.maxR),
+      [{ path: c.path, value: c.toRaw }],
+    );
     if (r === null) return null;
     const v = n.at(r);
     return { cost: 0.25 + relativeOf(n, v), changes: [change(p, n, n.raw(v), relativeOf(n, v)), change(p, c, c.toRaw, null)] };
@@ -360,18 +425,25 @@ function pairChange(p: Prober, a: Knob, b: Knob): { cost: number; changes: Relax
   for (const r of [0.08, 0.32].map((x) => x * maxR)) {
     const ok = p.admits(both(r));
     if (ok === null) break;
-    if (ok) { hi = r; break; }
+    if (ok) {
+      hi = r;
+      break;
+    }
     lo = r;
   }
   for (let i = 0; i < RELAX_LIMITS.bisectionSteps; i++) {
     const mid = (lo + hi) / 2;
     const ok = p.admits(both(mid));
     if (ok === null) break;
-    if (ok) hi = mid; else lo = mid;
+    if (ok) hi = mid;
+    else lo = mid;
   }
   const va = na.at(Math.min(hi, na.maxR));
   const vb = nb.at(Math.min(hi, nb.maxR));
-  return { cost: relativeOf(na, va) + relativeOf(nb, vb), changes: [change(p, na, na.raw(va), relativeOf(na, va)), change(p, nb, nb.raw(vb), relativeOf(nb, vb))] };
+  return {
+    cost: relativeOf(na, va) + relativeOf(nb, vb),
+    changes: [change(p, na, na.raw(va), relativeOf(na, va)), change(p, nb, nb.raw(vb), relativeOf(nb, vb))],
+  };
 }
 
 /** The check that limits an infeasible run, cheaply (no extra runs): the one that alone failed by

@@ -91,7 +91,6 @@ export const COMPRESSION_DEFAULTS = {
   rank: DEFAULTS.rank as RankKey,
 };
 
-
 /** The size of a search: material wire sizes x end types x coil counts, with its factors. */
 export function searchSize(req: Requirements): { sizes: number; coilCounts: number; combinations: number } {
   const coilCounts = Math.floor((req.activeCoils[1] - req.activeCoils[0]) / req.coilStep + 1e-9) + 1;
@@ -106,9 +105,13 @@ export function searchSize(req: Requirements): { sizes: number; coilCounts: numb
 export function gridWorkError(req: Requirements, why: string, size = searchSize(req)): InputError | null {
   const { sizes, coilCounts, combinations } = size;
   if (combinations <= LIMITS.gridCombinations) return null;
-  return new InputError('coil_step', `a grid search (${why}) of at most ${LIMITS.gridCombinations.toLocaleString('en-US')} combinations; this one has ${combinations.toLocaleString('en-US')} `
-    + `(${sizes} material wire sizes x ${req.ends.length} end types x ${coilCounts} coil counts): use a larger coil_step, a narrower active_coils, or fewer materials, end types or wire_sizes`
-    + (why.includes('--strategy') ? ', or --strategy auto (the genetic search takes spaces this large)' : ''), req.coilStep);
+  return new InputError(
+    'coil_step',
+    `a grid search (${why}) of at most ${LIMITS.gridCombinations.toLocaleString('en-US')} combinations; this one has ${combinations.toLocaleString('en-US')} ` +
+      `(${sizes} material wire sizes x ${req.ends.length} end types x ${coilCounts} coil counts): use a larger coil_step, a narrower active_coils, or fewer materials, end types or wire_sizes` +
+      (why.includes('--strategy') ? ', or --strategy auto (the genetic search takes spaces this large)' : ''),
+    req.coilStep,
+  );
 }
 
 export function readRequirements(raw: unknown, catalog: Catalog): Requirements {
@@ -122,12 +125,16 @@ export function readRequirements(raw: unknown, catalog: Catalog): Requirements {
   materials = applyStrengthBasis(materials, strengthBasis, 'strength_basis', catalog);
 
   const endsRaw = f.get('ends');
-  if (Array.isArray(endsRaw) && endsRaw.length === 0) throw new InputError('ends', `one end type or a non-empty list of them (${END_TYPES.join(' | ')})`, endsRaw);
-  const ends: EndType[] = endsRaw === undefined ? [COMPRESSION_DEFAULTS.ends]
-    : (Array.isArray(endsRaw) ? endsRaw : [endsRaw]).map((e, i) => {
-      if (typeof e !== 'string' || !(END_TYPES as readonly string[]).includes(e)) throw new InputError(Array.isArray(endsRaw) ? `ends[${i}]` : 'ends', `one of ${END_TYPES.join(' | ')}`, e);
-      return END_TYPES[(END_TYPES as readonly string[]).indexOf(e)];
-    });
+  if (Array.isArray(endsRaw) && endsRaw.length === 0)
+    throw new InputError('ends', `one end type or a non-empty list of them (${END_TYPES.join(' | ')})`, endsRaw);
+  const ends: EndType[] =
+    endsRaw === undefined
+      ? [COMPRESSION_DEFAULTS.ends]
+      : (Array.isArray(endsRaw) ? endsRaw : [endsRaw]).map((e, i) => {
+          if (typeof e !== 'string' || !(END_TYPES as readonly string[]).includes(e))
+            throw new InputError(Array.isArray(endsRaw) ? `ends[${i}]` : 'ends', `one of ${END_TYPES.join(' | ')}`, e);
+          return END_TYPES[(END_TYPES as readonly string[]).indexOf(e)];
+        });
 
   const load = Fields.of(f.require('load', 'the force at the working length: { force, length }'), 'load', system);
   const workingForce = load.requiredQuantity('force', 'force', { positive: true });
@@ -136,11 +143,18 @@ export function readRequirements(raw: unknown, catalog: Catalog): Requirements {
 
   const operatingLength = f.quantity('operating_length', 'length', { positive: true });
   const operatingForce = f.quantity('operating_force', 'force', { positive: true });
-  if (operatingLength !== undefined && operatingLength >= workingLength) throw new InputError('operating_length', `a length shorter than the working length (the end of the stroke)`, f.get('operating_length'));
-  if (operatingForce !== undefined && operatingLength === undefined) throw new InputError('operating_length', 'a value: operating_force needs the length it acts at (the field is missing)');
-  if (operatingForce !== undefined && operatingForce <= workingForce) throw new InputError('operating_force', 'a force above the working force (the spring is compressed further)', f.get('operating_force'));
+  if (operatingLength !== undefined && operatingLength >= workingLength)
+    throw new InputError('operating_length', `a length shorter than the working length (the end of the stroke)`, f.get('operating_length'));
+  if (operatingForce !== undefined && operatingLength === undefined)
+    throw new InputError('operating_length', 'a value: operating_force needs the length it acts at (the field is missing)');
+  if (operatingForce !== undefined && operatingForce <= workingForce)
+    throw new InputError('operating_force', 'a force above the working force (the spring is compressed further)', f.get('operating_force'));
 
-  const env = Fields.of(f.require('envelope', 'a mapping of envelope limits (max_outer_diameter, min_inner_diameter, max_free_length, max_solid_length)'), 'envelope', system);
+  const env = Fields.of(
+    f.require('envelope', 'a mapping of envelope limits (max_outer_diameter, min_inner_diameter, max_free_length, max_solid_length)'),
+    'envelope',
+    system,
+  );
   const maxOuterDiameter = env.quantity('max_outer_diameter', 'length', { positive: true });
   const minInnerDiameter = env.quantity('min_inner_diameter', 'length', { positive: true });
   const maxFreeLength = env.quantity('max_free_length', 'length', { positive: true });
@@ -149,7 +163,8 @@ export function readRequirements(raw: unknown, catalog: Catalog): Requirements {
   if (maxOuterDiameter !== undefined && minInnerDiameter !== undefined && minInnerDiameter >= maxOuterDiameter) {
     throw new InputError('envelope.min_inner_diameter', 'a diameter below envelope.max_outer_diameter', env.get('min_inner_diameter'));
   }
-  if (maxFreeLength !== undefined && maxFreeLength <= workingLength) throw new InputError('envelope.max_free_length', 'a length above the working length', env.get('max_free_length'));
+  if (maxFreeLength !== undefined && maxFreeLength <= workingLength)
+    throw new InputError('envelope.max_free_length', 'a length above the working length', env.get('max_free_length'));
 
   // Wire sizes: a series id for every material, or an explicit list of diameters.
   const sizes = readWireSizes(f, catalog);
@@ -163,14 +178,22 @@ export function readRequirements(raw: unknown, catalog: Catalog): Requirements {
 
   const safety = readSafety(f, COMPRESSION_DEFAULTS.safety);
   const req: Requirements = {
-    system, materials, strengthBasis, ends,
+    system,
+    materials,
+    strengthBasis,
+    ends,
     seating: (f.choice('seating', SEATINGS) ?? COMPRESSION_DEFAULTS.seating) as Seating,
     surgeEnds: (f.choice('surge_ends', SURGE_ENDS) ?? 'plates') as SurgeEnds,
-    workingForce, workingLength,
+    workingForce,
+    workingLength,
     loadTolerance: f.fraction('load_tolerance') ?? COMPRESSION_DEFAULTS.loadTolerance,
     workingTolerance: f.fraction('working_tolerance'),
-    operatingLength, operatingForce,
-    maxOuterDiameter, minInnerDiameter, maxFreeLength, maxSolidLength,
+    operatingLength,
+    operatingForce,
+    maxOuterDiameter,
+    minInnerDiameter,
+    maxFreeLength,
+    maxSolidLength,
     cycles: parseCycles(f.get('cycles'), 'cycles'),
     peened: f.bool('peened') ?? false,
     criterion: (f.choice('fatigue_criterion', FATIGUE_CRITERIA) ?? 'gerber') as FatigueCriterion,
@@ -179,8 +202,11 @@ export function readRequirements(raw: unknown, catalog: Catalog): Requirements {
     setRemoved: f.bool('set_removed') ?? false,
     temperature: f.quantity('temperature', 'temperature'),
     forcingFrequency: f.quantity('forcing_frequency', 'frequency', { nonNegative: true }),
-    wireSizes, wireSizesLabel,
-    activeCoils, coilStep, index,
+    wireSizes,
+    wireSizesLabel,
+    activeCoils,
+    coilStep,
+    index,
     allowableStress: f.quantity('allowable_stress', 'stress', { positive: true }),
     safety,
     clashAllowance: f.fraction('clash_allowance', LIMITS.clashAllowanceMax) ?? COMPRESSION_DEFAULTS.clashAllowance,
@@ -189,7 +215,7 @@ export function readRequirements(raw: unknown, catalog: Catalog): Requirements {
     guided: f.bool('guided') ?? false,
     // The ranked list holds the best spring of each material, wire size and end type unless `variants`
     // asks for every feasible spring (best_per_wire: false, the older spelling, means the same).
-    bestPerWire: !(f.bool('variants') ?? (f.bool('best_per_wire') === false)),
+    bestPerWire: !(f.bool('variants') ?? f.bool('best_per_wire') === false),
     bestPerWireAsked: f.bool('best_per_wire') === true && f.bool('variants') !== true,
     rank: (f.choice('rank', RANK_KEYS) ?? COMPRESSION_DEFAULTS.rank) as RankKey,
     top: f.number('top', { integer: true, positive: true, max: 1000 }) ?? COMPRESSION_DEFAULTS.top,
@@ -198,10 +224,15 @@ export function readRequirements(raw: unknown, catalog: Catalog): Requirements {
     ...readToleranceRequirements(f),
   };
   if (req.diameterResolution < LIMITS.diameterResolution[0] || req.diameterResolution > LIMITS.diameterResolution[1]) {
-    throw new InputError('diameter_resolution', `a length from ${formatQuantity(LIMITS.diameterResolution[0], 'length', system)} to ${formatQuantity(LIMITS.diameterResolution[1], 'length', system)} (finer than a wire maker can hold is no more exact, only slower)`, f.get('diameter_resolution'));
+    throw new InputError(
+      'diameter_resolution',
+      `a length from ${formatQuantity(LIMITS.diameterResolution[0], 'length', system)} to ${formatQuantity(LIMITS.diameterResolution[1], 'length', system)} (finer than a wire maker can hold is no more exact, only slower)`,
+      f.get('diameter_resolution'),
+    );
   }
   if (req.loadTolerance >= 1) throw new InputError('load_tolerance', 'a fraction below 1 (such as 0.1 or "10%")', f.get('load_tolerance'));
-  if (req.workingTolerance !== undefined && req.workingTolerance >= 1) throw new InputError('working_tolerance', 'a fraction below 1 (such as 0.02 or "2%")', f.get('working_tolerance'));
+  if (req.workingTolerance !== undefined && req.workingTolerance >= 1)
+    throw new InputError('working_tolerance', 'a fraction below 1 (such as 0.02 or "2%")', f.get('working_tolerance'));
   f.get('material_map'); // the stock table's material words; read and checked by src/stock/materialMap.ts
   f.rejectUnknown();
   return req;

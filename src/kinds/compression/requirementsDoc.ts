@@ -5,16 +5,26 @@ import type { MaterialChoice } from '../../input/material.js';
 import type { Requirements } from './requirements.js';
 
 function materialValue(ch: MaterialChoice): unknown {
-  const overrides = { shear_modulus: ch.shearModulus, elastic_modulus: ch.elasticModulus, density: ch.density, tensile_strength: ch.tensileStrength, allowable_stress: ch.allowableStress };
+  const overrides = {
+    shear_modulus: ch.shearModulus,
+    elastic_modulus: ch.elasticModulus,
+    density: ch.density,
+    tensile_strength: ch.tensileStrength,
+    allowable_stress: ch.allowableStress,
+  };
   const given = Object.entries(overrides).filter(([, v]) => v !== undefined);
   return given.length ? { like: ch.material.id, ...Object.fromEntries(given) } : ch.material.id;
 }
 
 export function requirementsDocument(req: Requirements): Record<string, unknown> {
-  const envelope = Object.fromEntries(Object.entries({
-    max_outer_diameter: req.maxOuterDiameter, min_inner_diameter: req.minInnerDiameter,
-    max_free_length: req.maxFreeLength, max_solid_length: req.maxSolidLength,
-  }).filter(([, v]) => v !== undefined));
+  const envelope = Object.fromEntries(
+    Object.entries({
+      max_outer_diameter: req.maxOuterDiameter,
+      min_inner_diameter: req.minInnerDiameter,
+      max_free_length: req.maxFreeLength,
+      max_solid_length: req.maxSolidLength,
+    }).filter(([, v]) => v !== undefined),
+  );
   const doc: Record<string, unknown> = {
     units: 'si',
     material: req.materials.length === 1 ? materialValue(req.materials[0]) : req.materials.map(materialValue),
@@ -50,6 +60,6 @@ export function requirementsDocument(req: Requirements): Record<string, unknown>
   if (req.forcingFrequency !== undefined) doc.forcing_frequency = req.forcingFrequency;
   if (req.allowableStress !== undefined) doc.allowable_stress = req.allowableStress;
   if (req.wireSizesLabel === 'the listed diameters') doc.wire_sizes = req.wireSizes(req.materials[0]);
-  else if (req.wireSizesLabel !== 'each material\'s own series') doc.wire_sizes = req.wireSizesLabel;
+  else if (req.wireSizesLabel !== "each material's own series") doc.wire_sizes = req.wireSizesLabel;
   return doc;
 }

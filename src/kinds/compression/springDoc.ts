@@ -34,8 +34,23 @@ export function springDocument(c: Candidate, req: Requirements): Record<string, 
   const ch = c.item.choice;
   // A requirement-level allowable_stress is the one the search judged by (figuresUnder).
   const allowable = req.allowableStress ?? ch.allowableStress;
-  if (ch.shearModulus !== undefined || ch.elasticModulus !== undefined || ch.density !== undefined || ch.tensileStrength !== undefined || allowable !== undefined) {
-    doc.material = Object.fromEntries(Object.entries({ like: ch.material.id, shear_modulus: ch.shearModulus, elastic_modulus: ch.elasticModulus, density: ch.density, tensile_strength: ch.tensileStrength, allowable_stress: allowable }).filter(([, v]) => v !== undefined));
+  if (
+    ch.shearModulus !== undefined ||
+    ch.elasticModulus !== undefined ||
+    ch.density !== undefined ||
+    ch.tensileStrength !== undefined ||
+    allowable !== undefined
+  ) {
+    doc.material = Object.fromEntries(
+      Object.entries({
+        like: ch.material.id,
+        shear_modulus: ch.shearModulus,
+        elastic_modulus: ch.elasticModulus,
+        density: ch.density,
+        tensile_strength: ch.tensileStrength,
+        allowable_stress: allowable,
+      }).filter(([, v]) => v !== undefined),
+    );
   }
   if (req.cycles !== undefined) doc.cycles = Number.isFinite(req.cycles) ? req.cycles : 'infinite';
   if (req.temperature !== undefined) doc.temperature = req.temperature;

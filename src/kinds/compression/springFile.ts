@@ -10,7 +10,15 @@ import { formatQuantity } from '../../units/format.js';
 import { InputError, parseQuantity } from '../../units/parse.js';
 import type { UnitSystem } from '../../units/systems.js';
 import { Fields } from '../../units/fields.js';
-import { applyStrengthBasis, materialFigures, parseMaterialChoice, STRENGTH_BASES, strengthRangeNote, type MaterialChoice, type StrengthBasis } from '../../input/material.js';
+import {
+  applyStrengthBasis,
+  materialFigures,
+  parseMaterialChoice,
+  STRENGTH_BASES,
+  strengthRangeNote,
+  type MaterialChoice,
+  type StrengthBasis,
+} from '../../input/material.js';
 import { SURGE_ENDS, type SurgeEnds } from '../../model/surge.js';
 import { checkMaterialChoice } from '../../input/materialChecks.js';
 import { LIMITS } from '../../input/limits.js';
@@ -31,12 +39,18 @@ export function readSpringCase(raw: unknown, catalog: Catalog): SpringCase {
   f.expectKind('compression');
   const system = f.system;
   const strengthBasis = (f.choice('strength_basis', STRENGTH_BASES) ?? 'law') as StrengthBasis;
-  const [choice] = applyStrengthBasis([parseMaterialChoice(f.require('material', 'a material id or { like: <id>, ... }'), system, catalog, 'material')], strengthBasis, 'strength_basis', catalog);
+  const [choice] = applyStrengthBasis(
+    [parseMaterialChoice(f.require('material', 'a material id or { like: <id>, ... }'), system, catalog, 'material')],
+    strengthBasis,
+    'strength_basis',
+    catalog,
+  );
   const d = f.requiredQuantity('wire_diameter', 'length', { positive: true });
   const which = f.exactlyOne(['mean_diameter', 'outer_diameter', 'inner_diameter']);
   const given = f.requiredQuantity(which, 'length', { positive: true });
   const D = which === 'mean_diameter' ? given : which === 'outer_diameter' ? given - d : given + d;
-  if (!(D > d)) throw new InputError(which, `a diameter that leaves a mean diameter above the wire diameter ${formatQuantity(d, 'length', system)}`, f.get(which));
+  if (!(D > d))
+    throw new InputError(which, `a diameter that leaves a mean diameter above the wire diameter ${formatQuantity(d, 'length', system)}`, f.get(which));
   const ends = (f.choice('ends', END_TYPES) ?? 'squared-ground') as EndType;
   const coilsKey = f.exactlyOne(['active_coils', 'total_coils']);
   const coils = f.number(coilsKey, { positive: true }) as number;
@@ -44,7 +58,12 @@ export function readSpringCase(raw: unknown, catalog: Catalog): SpringCase {
   if (!(Na > 0)) throw new InputError(coilsKey, `more total coils than the ${inactiveCoils(ends)} inactive coils of ${ends} ends`, coils);
   const L0 = f.requiredQuantity('free_length', 'length', { positive: true });
   const Ls = solidLength(d, Na + inactiveCoils(ends), ends);
-  if (L0 <= Ls) throw new InputError('free_length', `a free length above the solid length ${formatQuantity(Ls, 'length', system)} (the coils overlap at free length)`, f.get('free_length'));
+  if (L0 <= Ls)
+    throw new InputError(
+      'free_length',
+      `a free length above the solid length ${formatQuantity(Ls, 'length', system)} (the coils overlap at free length)`,
+      f.get('free_length'),
+    );
   const seating = (f.choice('seating', SEATINGS) ?? 'fixed-fixed') as Seating;
   const criterion = (f.choice('fatigue_criterion', FATIGUE_CRITERIA) ?? 'gerber') as FatigueCriterion;
   const correction = (f.choice('stress_factor', ['bergstrasser', 'wahl'] as const) ?? 'bergstrasser') as StressCorrection;
@@ -58,21 +77,24 @@ export function readSpringCase(raw: unknown, catalog: Catalog): SpringCase {
   const forcesRaw = f.has('forces') ? 'forces' : undefined;
   if (lengthsRaw && forcesRaw) throw new InputError('lengths, forces', 'only one of lengths | forces (both given)');
   for (const key of [lengthsRaw, forcesRaw]) {
-    if (key && (f.list(key) ?? []).length === 0) throw new InputError(key, 'a non-empty list (leave the field out to analyse the spring at no working point)', f.get(key));
+    if (key && (f.list(key) ?? []).length === 0)
+      throw new InputError(key, 'a non-empty list (leave the field out to analyse the spring at no working point)', f.get(key));
   }
   let lengths: number[] = [];
   if (lengthsRaw) {
     lengths = (f.list('lengths') ?? []).map((v, i) => {
       const L = parseQuantity(v, 'length', system, `lengths[${i}]`, { positive: true });
       if (L < Ls - 1e-9) throw new InputError(`lengths[${i}]`, `a length at or above the solid length ${formatQuantity(Ls, 'length', system)}`, v);
-      if (L > L0) throw new InputError(`lengths[${i}]`, `a length at or below the free length ${formatQuantity(L0, 'length', system)} (a compression spring)`, v);
+      if (L > L0)
+        throw new InputError(`lengths[${i}]`, `a length at or below the free length ${formatQuantity(L0, 'length', system)} (a compression spring)`, v);
       return L;
     });
   } else if (forcesRaw) {
     lengths = (f.list('forces') ?? []).map((v, i) => {
       const F = parseQuantity(v, 'force', system, `forces[${i}]`, { nonNegative: true });
       const L = L0 - F / k;
-      if (L < Ls - 1e-9) throw new InputError(`forces[${i}]`, `a force the spring can carry before it is solid (at most ${formatQuantity(k * (L0 - Ls), 'force', system)})`, v);
+      if (L < Ls - 1e-9)
+        throw new InputError(`forces[${i}]`, `a force the spring can carry before it is solid (at most ${formatQuantity(k * (L0 - Ls), 'force', system)})`, v);
       return L;
     });
   }
@@ -97,5 +119,13 @@ export function readSpringCase(raw: unknown, catalog: Catalog): SpringCase {
   const range = strengthRangeNote(choice, d);
   if (range) notes.push(range);
   if (cycles !== undefined && cycles < 1e4) notes.push(`${cycles} cycles is below 1e4: judged as static service`);
-  return { system, materialChoice: choice, figures, geometry: { wireDiameter: d, meanDiameter: D, activeCoils: Na, ends, freeLength: L0 }, service, setRemoved, notes };
+  return {
+    system,
+    materialChoice: choice,
+    figures,
+    geometry: { wireDiameter: d, meanDiameter: D, activeCoils: Na, ends, freeLength: L0 },
+    service,
+    setRemoved,
+    notes,
+  };
 }

@@ -32,7 +32,10 @@ export function bestPerGroup(cloud: PointBuffer, top: number): Group[] {
     if (key !== lastKey || x[2] !== lastCoils) g.feasible++;
     lastKey = key;
     lastCoils = x[2];
-    if (value < g.value) { g.value = value; g.index = i; }
+    if (value < g.value) {
+      g.value = value;
+      g.index = i;
+    }
   }
   return [...groups.values()]
     .sort((a, b) => a.value - b.value || a.index - b.index)

@@ -47,7 +47,9 @@ export function checkAnalysis(a: SpringAnalysis, req: Requirements): Float64Arra
   const on = activeChecks(req);
   const geo = a.geometry;
   const Lmin = shortestLength(req);
-  const set = (name: CheckName, v: number) => { if (on[CHECK[name]]) g[CHECK[name]] = v; };
+  const set = (name: CheckName, v: number) => {
+    if (on[CHECK[name]]) g[CHECK[name]] = v;
+  };
   set('index_min', (req.index[0] - geo.springIndex) / req.index[0]);
   set('index_max', (geo.springIndex - req.index[1]) / req.index[1]);
   if (req.maxOuterDiameter !== undefined) {

@@ -2,8 +2,13 @@
 // composed from the shared wire mechanics (src/model) and this folder's loop and load-line formulas.
 // Inputs and outputs SI (mm, N, MPa, kg, Hz, degC). No I/O.
 import {
-  INFINITE_LIFE_CYCLES, STATIC_SERVICE_CYCLES, endurancePoint, fullyReversedEndurance,
-  type EndurancePoint, type EnduranceSource, type FatigueCriterion,
+  INFINITE_LIFE_CYCLES,
+  STATIC_SERVICE_CYCLES,
+  endurancePoint,
+  fullyReversedEndurance,
+  type EndurancePoint,
+  type EnduranceSource,
+  type FatigueCriterion,
 } from '../../model/fatigue.js';
 import { springRate } from '../../model/rate.js';
 import { shearStress } from '../../model/stress.js';
@@ -87,9 +92,24 @@ export interface ExtensionFatigue {
 export interface ExtensionAnalysis {
   kind: 'extension';
   geometry: {
-    wireDiameter: number; meanDiameter: number; outerDiameter: number; innerDiameter: number; springIndex: number;
-    bodyCoils: number; activeCoils: number; loop: string; loopHeight: number; loopRadius: number; bendRadius: number;
-    loopIndex: number; bendIndex: number; bodyLength: number; freeLength: number; wireLength: number; wireVolume: number; mass: number;
+    wireDiameter: number;
+    meanDiameter: number;
+    outerDiameter: number;
+    innerDiameter: number;
+    springIndex: number;
+    bodyCoils: number;
+    activeCoils: number;
+    loop: string;
+    loopHeight: number;
+    loopRadius: number;
+    bendRadius: number;
+    loopIndex: number;
+    bendIndex: number;
+    bodyLength: number;
+    freeLength: number;
+    wireLength: number;
+    wireVolume: number;
+    mass: number;
   };
   factors: { body: number; loopBending: number; loopTorsion: number };
   rate: number;
@@ -106,7 +126,13 @@ export interface ExtensionAnalysis {
 }
 
 /** Stress per newton at each site (every stress here is proportional to the force). */
-export function stressPerNewton(d: number, D: number, factorBody: number, factorA: number, factorB: number): { body: number; loopBending: number; loopTorsion: number } {
+export function stressPerNewton(
+  d: number,
+  D: number,
+  factorBody: number,
+  factorA: number,
+  factorB: number,
+): { body: number; loopBending: number; loopTorsion: number } {
   return { body: shearStress(1, D, d, factorBody), loopBending: loopBendingStress(1, D, d, factorA), loopTorsion: loopTorsionStress(1, D, d, factorB) };
 }
 
@@ -116,7 +142,13 @@ function governingOf(v: Record<ExtensionSite, number>, low: boolean): ExtensionS
   return best;
 }
 
-interface SiteData { sse: number; sinesAlternating: number; point: EndurancePoint; source: EnduranceSource; ultimate: number }
+interface SiteData {
+  sse: number;
+  sinesAlternating: number;
+  point: EndurancePoint;
+  source: EnduranceSource;
+  ultimate: number;
+}
 
 /** The endurance data of a site: its point on the life curve and the criterion's line through it. */
 function siteData(point: EndurancePoint, source: EnduranceSource, ultimate: number, criterion: FatigueCriterion): SiteData {
@@ -126,7 +158,11 @@ function siteData(point: EndurancePoint, source: EnduranceSource, ultimate: numb
 function siteFatigue(cycle: CycleOnLine, site: SiteData, criterion: FatigueCriterion): SiteFatigue {
   const strength = offsetAlternatingStrength(cycle.slope, cycle.initialStress, site.sse, site.sinesAlternating, site.ultimate, criterion);
   return {
-    ...cycle, endurance: site.point, enduranceSource: site.source, ultimate: site.ultimate, alternatingStrength: strength,
+    ...cycle,
+    endurance: site.point,
+    enduranceSource: site.source,
+    ultimate: site.ultimate,
+    alternatingStrength: strength,
     safetyFactor: cycle.alternatingStress > 0 ? strength / cycle.alternatingStress : NaN,
   };
 }
@@ -154,7 +190,14 @@ export function analyzeExtension(g: ExtensionGeometry, m: ExtensionMaterial, s: 
 
   const points: ExtensionPoint[] = s.lengths.map((length) => {
     const force = Fi + k * (length - L0);
-    return { length, extension: length - L0, force, bodyStress: per.body * force, loopBendingStress: per.loopBending * force, loopTorsionStress: per.loopTorsion * force };
+    return {
+      length,
+      extension: length - L0,
+      force,
+      bodyStress: per.body * force,
+      loopBendingStress: per.loopBending * force,
+      loopTorsionStress: per.loopTorsion * force,
+    };
   });
   const forces = points.map((p) => p.force);
   const maxForce = forces.length ? Math.max(...forces) : Fi;
@@ -182,8 +225,15 @@ export function analyzeExtension(g: ExtensionGeometry, m: ExtensionMaterial, s: 
     const loopTorsion = siteFatigue(bCycle, siteData(b.point, b.source, ssu, s.criterion), s.criterion);
     const nf = { body: body.safetyFactor, loopBending: loopBending.safetyFactor, loopTorsion: loopTorsion.safetyFactor };
     fatigue = {
-      life: cycles >= INFINITE_LIFE_CYCLES ? 'infinite' : 'finite', cycles, minForce, maxForce, criterion: s.criterion,
-      body, loopBending, loopTorsion, bodyYieldSafetyFactor: yieldAlongLoadLine(bodyCycle, allow.bodyTorsion),
+      life: cycles >= INFINITE_LIFE_CYCLES ? 'infinite' : 'finite',
+      cycles,
+      minForce,
+      maxForce,
+      criterion: s.criterion,
+      body,
+      loopBending,
+      loopTorsion,
+      bodyYieldSafetyFactor: yieldAlongLoadLine(bodyCycle, allow.bodyTorsion),
       governing: governingOf({ body: nan(nf.body), loopBending: nan(nf.loopBending), loopTorsion: nan(nf.loopTorsion) }, true),
     };
   }
@@ -194,10 +244,24 @@ export function analyzeExtension(g: ExtensionGeometry, m: ExtensionMaterial, s: 
   const a: ExtensionAnalysis = {
     kind: 'extension',
     geometry: {
-      wireDiameter: d, meanDiameter: D, outerDiameter: D + d, innerDiameter: D - d, springIndex: C,
-      bodyCoils: g.bodyCoils, activeCoils: Na, loop: g.loop.id, loopHeight: g.loopHeight, loopRadius: g.loopRadius, bendRadius: g.bendRadius,
-      loopIndex: C1, bendIndex: C2, bodyLength: bodyLength(d, g.bodyCoils), freeLength: L0, wireLength,
-      wireVolume: wireVolumeOfLength(d, wireLength), mass: extensionMass(d, wireLength, f.density),
+      wireDiameter: d,
+      meanDiameter: D,
+      outerDiameter: D + d,
+      innerDiameter: D - d,
+      springIndex: C,
+      bodyCoils: g.bodyCoils,
+      activeCoils: Na,
+      loop: g.loop.id,
+      loopHeight: g.loopHeight,
+      loopRadius: g.loopRadius,
+      bendRadius: g.bendRadius,
+      loopIndex: C1,
+      bendIndex: C2,
+      bodyLength: bodyLength(d, g.bodyCoils),
+      freeLength: L0,
+      wireLength,
+      wireVolume: wireVolumeOfLength(d, wireLength),
+      mass: extensionMass(d, wireLength, f.density),
     },
     factors: { body: K, loopBending: KA, loopTorsion: KB },
     rate: k,
@@ -217,11 +281,20 @@ export function analyzeExtension(g: ExtensionGeometry, m: ExtensionMaterial, s: 
 /** A NaN safety factor (no alternation) never governs. */
 const nan = (v: number) => (Number.isNaN(v) ? Infinity : v);
 
-const SITE_WORDS: Record<ExtensionSite, string> = { body: 'the body', loopBending: 'the loop in bending (point A)', loopTorsion: 'the loop\'s bend in torsion (point B)' };
-export function siteWords(site: ExtensionSite): string { return SITE_WORDS[site]; }
+const SITE_WORDS: Record<ExtensionSite, string> = {
+  body: 'the body',
+  loopBending: 'the loop in bending (point A)',
+  loopTorsion: "the loop's bend in torsion (point B)",
+};
+export function siteWords(site: ExtensionSite): string {
+  return SITE_WORDS[site];
+}
 
 /** How a warning writes its stresses and temperatures (the report passes its unit system's writer). */
-export interface WarningWriter { stress(v: number): string; temperature(v: number): string }
+export interface WarningWriter {
+  stress(v: number): string;
+  temperature(v: number): string;
+}
 const n = (v: number, p = 4) => Number(v.toPrecision(p)).toString();
 const SI_WRITER: WarningWriter = { stress: (v) => `${n(v)} MPa`, temperature: (v) => `${n(v)} degC` };
 
@@ -230,30 +303,67 @@ const SI_WRITER: WarningWriter = { stress: (v) => `${n(v)} MPa`, temperature: (v
 export function extensionWarnings(a: ExtensionAnalysis, s: ExtensionService, q: WarningWriter = SI_WRITER): Warning[] {
   const w: Warning[] = [];
   const g = a.geometry;
-  if (g.springIndex < 4 || g.springIndex > 12) w.push({ code: 'index', message: `spring index ${n(g.springIndex)} is outside 4 to 12 (common practice): ${g.springIndex < 4 ? 'hard to coil, high curvature stress' : 'prone to tangling, poor tolerances'}` });
-  if (g.bendIndex < 4) w.push({ code: 'bend-index', message: `bend index C2 = 2 r2 / d = ${n(g.bendIndex)} is below 4: the tight bend into the loop raises the torsion there (Shigley sec. 10-11)` });
+  if (g.springIndex < 4 || g.springIndex > 12)
+    w.push({
+      code: 'index',
+      message: `spring index ${n(g.springIndex)} is outside 4 to 12 (common practice): ${g.springIndex < 4 ? 'hard to coil, high curvature stress' : 'prone to tangling, poor tolerances'}`,
+    });
+  if (g.bendIndex < 4)
+    w.push({
+      code: 'bend-index',
+      message: `bend index C2 = 2 r2 / d = ${n(g.bendIndex)} is below 4: the tight bend into the loop raises the torsion there (Shigley sec. 10-11)`,
+    });
   const it = a.initialTension;
-  if (it.position === 'above') w.push({ code: 'initial-tension', message: `initial-tension stress ${q.stress(it.stress)} is above the preferred range ${q.stress(it.band.low)} to ${q.stress(it.band.high)} for index ${n(g.springIndex)}: hard to make` });
-  if (it.position === 'below') w.push({ code: 'initial-tension', message: `initial-tension stress ${q.stress(it.stress)} is below the preferred range ${q.stress(it.band.low)} to ${q.stress(it.band.high)} for index ${n(g.springIndex)}: hard to hold to tolerance` });
+  if (it.position === 'above')
+    w.push({
+      code: 'initial-tension',
+      message: `initial-tension stress ${q.stress(it.stress)} is above the preferred range ${q.stress(it.band.low)} to ${q.stress(it.band.high)} for index ${n(g.springIndex)}: hard to make`,
+    });
+  if (it.position === 'below')
+    w.push({
+      code: 'initial-tension',
+      message: `initial-tension stress ${q.stress(it.stress)} is below the preferred range ${q.stress(it.band.low)} to ${q.stress(it.band.high)} for index ${n(g.springIndex)}: hard to hold to tolerance`,
+    });
   for (const site of EXTENSION_SITES) {
     const v = a.staticSafety[site];
-    if (Number.isFinite(v) && v < 1) w.push({ code: 'overstress', message: `at the longest evaluated length the stress in ${SITE_WORDS[site]} is ${n(1 / v)} times its static allowable: the spring will take a set or break there` });
+    if (Number.isFinite(v) && v < 1)
+      w.push({
+        code: 'overstress',
+        message: `at the longest evaluated length the stress in ${SITE_WORDS[site]} is ${n(1 / v)} times its static allowable: the spring will take a set or break there`,
+      });
   }
   if (a.fatigue) {
     for (const site of EXTENSION_SITES) {
       const v = a.fatigue[site].safetyFactor;
-      if (Number.isFinite(v) && v < 1) w.push({ code: 'fatigue', message: `fatigue safety factor of ${SITE_WORDS[site]} is ${n(v)}, below 1: expect it to break before ${a.fatigue.life === 'infinite' ? 'infinite life' : `${a.fatigue.cycles.toExponential(0)} cycles`}` });
+      if (Number.isFinite(v) && v < 1)
+        w.push({
+          code: 'fatigue',
+          message: `fatigue safety factor of ${SITE_WORDS[site]} is ${n(v)}, below 1: expect it to break before ${a.fatigue.life === 'infinite' ? 'infinite life' : `${a.fatigue.cycles.toExponential(0)} cycles`}`,
+        });
     }
-    if (!a.material.loopFatigueStated) w.push({ code: 'loop-fatigue-data', message: 'the loops\' fatigue fractions are published for music wire and 302 stainless: for this material they are an estimate' });
+    if (!a.material.loopFatigueStated)
+      w.push({
+        code: 'loop-fatigue-data',
+        message: "the loops' fatigue fractions are published for music wire and 302 stainless: for this material they are an estimate",
+      });
     if (s.peened) w.push({ code: 'loops-unpeened', message: 'peening is credited to the body only: the loops are judged with unpeened data' });
   }
-  if (s.forcingFrequency && s.forcingFrequency > 0 && a.surge.frequency < s.surgeMargin * s.forcingFrequency) w.push({ code: 'surge', message: `surge frequency ${n(a.surge.frequency)} Hz is less than ${s.surgeMargin} times the forcing frequency ${n(s.forcingFrequency)} Hz (common practice)` });
-  if (s.temperature !== undefined && s.temperature > a.material.figures.maxTemperature) w.push({ code: 'temperature', message: `service temperature ${q.temperature(s.temperature)} exceeds the material's maximum ${q.temperature(a.material.figures.maxTemperature)}: expect relaxation, and the initial tension is the first to go` });
+  if (s.forcingFrequency && s.forcingFrequency > 0 && a.surge.frequency < s.surgeMargin * s.forcingFrequency)
+    w.push({
+      code: 'surge',
+      message: `surge frequency ${n(a.surge.frequency)} Hz is less than ${s.surgeMargin} times the forcing frequency ${n(s.forcingFrequency)} Hz (common practice)`,
+    });
+  if (s.temperature !== undefined && s.temperature > a.material.figures.maxTemperature)
+    w.push({
+      code: 'temperature',
+      message: `service temperature ${q.temperature(s.temperature)} exceeds the material's maximum ${q.temperature(a.material.figures.maxTemperature)}: expect relaxation, and the initial tension is the first to go`,
+    });
   return w;
 }
 
 /** The caution an extension spring needs wherever users see its results. */
-export const EXTENSION_CAUTION = 'An extension spring that breaks lets go of its load. Where a failure could hurt someone, use a compression spring in a draw-bar arrangement or fit a guard, follow the applicable codes and licensed engineering practice, verify the design with the spring maker and test prototypes.';
+export const EXTENSION_CAUTION =
+  'An extension spring that breaks lets go of its load. Where a failure could hurt someone, use a compression spring in a draw-bar arrangement or fit a guard, follow the applicable codes and licensed engineering practice, verify the design with the spring maker and test prototypes.';
 
 /** The extension kind as the cautions see it (src/report/cautions.ts): its id and its own caution. */
 export const EXTENSION_CAUTIONS = { id: 'extension', cautions: [EXTENSION_CAUTION] } as const;

@@ -93,13 +93,19 @@ export function parseExtensionCatalog(doc: unknown, materials: readonly Material
       const fams = f.list('families');
       if (!fams || fams.length === 0) throw new InputError(f.name('families'), `a non-empty list of ${FAMILIES.join(' | ')}`);
       const families = fams.map((x, j) => {
-        if (typeof x !== 'string' || !(FAMILIES as readonly string[]).includes(x)) throw new InputError(`${f.name('families')}[${j}]`, `one of ${FAMILIES.join(' | ')}`, x);
+        if (typeof x !== 'string' || !(FAMILIES as readonly string[]).includes(x))
+          throw new InputError(`${f.name('families')}[${j}]`, `one of ${FAMILIES.join(' | ')}`, x);
         if (covered.has(x as Family)) throw new InputError(`${f.name('families')}[${j}]`, `a family not already covered by ${covered.get(x as Family)}`, x);
         covered.set(x as Family, id);
         return x as Family;
       });
       const a: StaticAllowables = {
-        id, families, bodyTorsion: fraction(f, 'body_torsion'), loopTorsion: fraction(f, 'loop_torsion'), loopBending: fraction(f, 'loop_bending'), source: source(f),
+        id,
+        families,
+        bodyTorsion: fraction(f, 'body_torsion'),
+        loopTorsion: fraction(f, 'loop_torsion'),
+        loopBending: fraction(f, 'loop_bending'),
+        source: source(f),
       };
       f.rejectUnknown();
       return a;
@@ -109,10 +115,11 @@ export function parseExtensionCatalog(doc: unknown, materials: readonly Material
   if (missing.length) throw new CatalogError(`${FILE}: static_allowables: expected every material family to be covered, missing ${missing.join(', ')}`);
 
   const loopFatigue = inRecord('loop_fatigue', () => {
-    const f = Fields.of(top.require('loop_fatigue', 'the loops\' fatigue fractions'), 'loop_fatigue', 'si');
+    const f = Fields.of(top.require('loop_fatigue', "the loops' fatigue fractions"), 'loop_fatigue', 'si');
     const statedFor = (f.list('stated_for') ?? []).map((x, j) => {
       if (typeof x !== 'string') throw new InputError(`loop_fatigue.stated_for[${j}]`, 'a material id', x);
-      if (materials.length && !materials.some((m) => m.id === x)) throw new InputError(`loop_fatigue.stated_for[${j}]`, `a material of catalogs/materials.yaml (${materials.map((m) => m.id).join(' | ')})`, x);
+      if (materials.length && !materials.some((m) => m.id === x))
+        throw new InputError(`loop_fatigue.stated_for[${j}]`, `a material of catalogs/materials.yaml (${materials.map((m) => m.id).join(' | ')})`, x);
       return x;
     });
     const lf: LoopFatigue = { loopTorsion: falling(f, 'loop_torsion'), loopBending: falling(f, 'loop_bending'), statedFor, source: source(f) };

@@ -7,9 +7,24 @@ import { initialTensionHalfWidth, initialTensionMiddle } from './initialTension.
 import type { ExtensionRequirements } from './requirements.js';
 
 export const EXTENSION_CHECKS = [
-  'index_min', 'index_max', 'outer_diameter', 'free_length', 'working_extension', 'initial_tension_min', 'initial_tension_max',
-  'body_stress', 'loop_bending_stress', 'loop_torsion_stress', 'body_fatigue', 'loop_bending_fatigue', 'loop_torsion_fatigue',
-  'operating_force_min', 'operating_force_max', 'extended_stress', 'surge', 'temperature',
+  'index_min',
+  'index_max',
+  'outer_diameter',
+  'free_length',
+  'working_extension',
+  'initial_tension_min',
+  'initial_tension_max',
+  'body_stress',
+  'loop_bending_stress',
+  'loop_torsion_stress',
+  'body_fatigue',
+  'loop_bending_fatigue',
+  'loop_torsion_fatigue',
+  'operating_force_min',
+  'operating_force_max',
+  'extended_stress',
+  'surge',
+  'temperature',
 ] as const;
 export type ExtensionCheck = (typeof EXTENSION_CHECKS)[number];
 export const XC = Object.fromEntries(EXTENSION_CHECKS.map((c, i) => [c, i])) as Record<ExtensionCheck, number>;
@@ -32,7 +47,7 @@ export const EXTENSION_CHECK_LABELS: Record<ExtensionCheck, string> = {
   operating_force_max: 'operating force too high (rate too stiff)',
   extended_stress: 'takes a set when stretched to the largest extended length',
   surge: 'surge frequency too close to the forcing frequency',
-  temperature: 'service temperature above the material\'s maximum',
+  temperature: "service temperature above the material's maximum",
 };
 
 export function extensionFatigueApplies(req: ExtensionRequirements): boolean {
@@ -43,13 +58,19 @@ export function extensionFatigueApplies(req: ExtensionRequirements): boolean {
 export function activeExtensionChecks(req: ExtensionRequirements): boolean[] {
   const fatigue = extensionFatigueApplies(req);
   const on: Record<ExtensionCheck, boolean> = {
-    index_min: true, index_max: true,
+    index_min: true,
+    index_max: true,
     outer_diameter: req.maxOuterDiameter !== undefined,
     free_length: req.maxFreeLength !== undefined,
     working_extension: true,
-    initial_tension_min: true, initial_tension_max: true,
-    body_stress: true, loop_bending_stress: true, loop_torsion_stress: true,
-    body_fatigue: fatigue, loop_bending_fatigue: fatigue, loop_torsion_fatigue: fatigue,
+    initial_tension_min: true,
+    initial_tension_max: true,
+    body_stress: true,
+    loop_bending_stress: true,
+    loop_torsion_stress: true,
+    body_fatigue: fatigue,
+    loop_bending_fatigue: fatigue,
+    loop_torsion_fatigue: fatigue,
     operating_force_min: req.operatingForce !== undefined,
     operating_force_max: req.operatingForce !== undefined,
     extended_stress: req.maxExtendedLength !== undefined,
@@ -63,8 +84,13 @@ export function activeExtensionChecks(req: ExtensionRequirements): boolean[] {
 export function extensionService(req: ExtensionRequirements): ExtensionService {
   return {
     lengths: req.operatingLength !== undefined ? [req.workingLength, req.operatingLength] : [req.workingLength],
-    cycles: req.cycles, peened: req.peened, criterion: req.criterion, correction: req.correction,
-    temperature: req.temperature, forcingFrequency: req.forcingFrequency, surgeMargin: req.safety.surge,
+    cycles: req.cycles,
+    peened: req.peened,
+    criterion: req.criterion,
+    correction: req.correction,
+    temperature: req.temperature,
+    forcingFrequency: req.forcingFrequency,
+    surgeMargin: req.safety.surge,
   };
 }
 
@@ -72,7 +98,9 @@ export function extensionService(req: ExtensionRequirements): ExtensionService {
 export function checkExtension(a: ExtensionAnalysis, req: ExtensionRequirements): Float64Array {
   const g = new Float64Array(EXTENSION_CHECKS.length).fill(-1);
   const on = activeExtensionChecks(req);
-  const set = (name: ExtensionCheck, v: number) => { if (on[XC[name]]) g[XC[name]] = v; };
+  const set = (name: ExtensionCheck, v: number) => {
+    if (on[XC[name]]) g[XC[name]] = v;
+  };
   const geo = a.geometry;
   const C = geo.springIndex;
   set('index_min', (req.index[0] - C) / req.index[0]);
@@ -107,10 +135,15 @@ export function checkExtension(a: ExtensionAnalysis, req: ExtensionRequirements)
   if (req.maxExtendedLength !== undefined) {
     const per = stressPerNewton(geo.wireDiameter, geo.meanDiameter, a.factors.body, a.factors.loopBending, a.factors.loopTorsion);
     const F = a.initialTension.force + a.rate * (req.maxExtendedLength - geo.freeLength);
-    const over = { body: per.body * F / allow.bodyTorsion, loopBending: per.loopBending * F / allow.loopBending, loopTorsion: per.loopTorsion * F / allow.loopTorsion };
+    const over = {
+      body: (per.body * F) / allow.bodyTorsion,
+      loopBending: (per.loopBending * F) / allow.loopBending,
+      loopTorsion: (per.loopTorsion * F) / allow.loopTorsion,
+    };
     set('extended_stress', Math.max(...EXTENSION_SITES.map((s) => over[s])) - 1);
   }
   if (req.forcingFrequency) set('surge', (req.safety.surge * req.forcingFrequency - a.surge.frequency) / (req.safety.surge * req.forcingFrequency));
-  if (req.temperature !== undefined) set('temperature', (req.temperature - a.material.figures.maxTemperature) / Math.max(Math.abs(a.material.figures.maxTemperature), 1));
+  if (req.temperature !== undefined)
+    set('temperature', (req.temperature - a.material.figures.maxTemperature) / Math.max(Math.abs(a.material.figures.maxTemperature), 1));
   return g;
 }

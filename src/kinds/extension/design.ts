@@ -48,7 +48,9 @@ export function assertExtensionVerified(c: ExtensionCandidate): void {
   let worst = 0;
   for (let j = 1; j < c.checks.length; j++) if (c.checks[j] > c.checks[worst]) worst = j;
   if (c.checks[worst] > REVERIFY_TOLERANCE) {
-    throw new Error(`a reported extension spring failed re-verification (${EXTENSION_CHECKS[worst]} by ${c.checks[worst].toExponential(2)}); please report this`);
+    throw new Error(
+      `a reported extension spring failed re-verification (${EXTENSION_CHECKS[worst]} by ${c.checks[worst].toExponential(2)}); please report this`,
+    );
   }
 }
 
@@ -69,15 +71,34 @@ export interface ExtensionDesignOptions {
 /** The strategy that will run. The grid visits every combination, so a grid too large is refused naming
  * the settings that size it; the genetic search's work is its budget, whatever the size of the space.
  * The best spring per wire size needs every wire looked at: that is the grid's job. */
-export function chooseExtensionStrategy(req: ExtensionRequirements, problem: ExtensionProblem, opts: Pick<ExtensionDesignOptions, 'strategy' | 'gridReason' | 'collectAll'> = {}): 'grid' | 'genetic' {
+export function chooseExtensionStrategy(
+  req: ExtensionRequirements,
+  problem: ExtensionProblem,
+  opts: Pick<ExtensionDesignOptions, 'strategy' | 'gridReason' | 'collectAll'> = {},
+): 'grid' | 'genetic' {
   const cells = combinations(problem);
-  const grid = problem.stock.length === 0 || req.bestPerWire || !!opts.collectAll || opts.strategy === 'grid' || (opts.strategy !== 'genetic' && cells <= LIMITS.gridCombinations);
+  const grid =
+    problem.stock.length === 0 ||
+    req.bestPerWire ||
+    !!opts.collectAll ||
+    opts.strategy === 'grid' ||
+    (opts.strategy !== 'genetic' && cells <= LIMITS.gridCombinations);
   if (grid && cells > LIMITS.gridCombinations) {
-    const why = opts.gridReason ?? (req.bestPerWire ? 'best_per_wire looks at every wire size' : opts.strategy === 'grid' ? 'asked for by --strategy grid' : 'this command looks at every combination');
+    const why =
+      opts.gridReason ??
+      (req.bestPerWire
+        ? 'best_per_wire looks at every wire size'
+        : opts.strategy === 'grid'
+          ? 'asked for by --strategy grid'
+          : 'this command looks at every combination');
     const coilCounts = Math.round(cells / Math.max(1, problem.stock.length));
-    throw new InputError('coil_step', `a grid search (${why}) of at most ${LIMITS.gridCombinations.toLocaleString('en-US')} combinations; this one has ${cells.toLocaleString('en-US')} `
-      + `(${problem.stock.length} material wire sizes x ${coilCounts} body-coil counts): use a larger coil_step, a narrower body_coils, or fewer materials or wire_sizes`
-      + (opts.strategy === 'grid' ? ', or --strategy auto (the genetic search takes spaces this large)' : ''), req.coilStep);
+    throw new InputError(
+      'coil_step',
+      `a grid search (${why}) of at most ${LIMITS.gridCombinations.toLocaleString('en-US')} combinations; this one has ${cells.toLocaleString('en-US')} ` +
+        `(${problem.stock.length} material wire sizes x ${coilCounts} body-coil counts): use a larger coil_step, a narrower body_coils, or fewer materials or wire_sizes` +
+        (opts.strategy === 'grid' ? ', or --strategy auto (the genetic search takes spaces this large)' : ''),
+      req.coilStep,
+    );
   }
   return grid ? 'grid' : 'genetic';
 }
@@ -88,13 +109,24 @@ export function extensionTermination(maxEvaluations: number): Termination {
   return termination({ maxEvaluations, stallEvaluations: 0.6 * maxEvaluations });
 }
 
-export function designExtension(req: ExtensionRequirements, catalog: Catalog, opts: ExtensionDesignOptions = {}, ext: ExtensionCatalog = loadExtensionCatalog(catalog.materials)): ExtensionDesignRun {
+export function designExtension(
+  req: ExtensionRequirements,
+  catalog: Catalog,
+  opts: ExtensionDesignOptions = {},
+  ext: ExtensionCatalog = loadExtensionCatalog(catalog.materials),
+): ExtensionDesignRun {
   const t0 = performance.now();
   const problem = opts.problem ?? buildExtensionProblem(req, catalog, ext);
   // One spring per stock item (material and wire size) when asked: the grid keeps the best of each value of variable 0.
-  const result = chooseExtensionStrategy(req, problem, opts) === 'grid'
-    ? gridSearch(problem, { top: req.top, collectAll: opts.collectAll, onProgress: opts.onProgress, bestPerValueOf: req.bestPerWire ? 0 : undefined })
-    : geneticSearch(problem, { seed: req.seed, maxEvaluations: 0, top: req.top, termination: extensionTermination(opts.maxEvaluations ?? LIMITS.geneticEvaluations) });
+  const result =
+    chooseExtensionStrategy(req, problem, opts) === 'grid'
+      ? gridSearch(problem, { top: req.top, collectAll: opts.collectAll, onProgress: opts.onProgress, bestPerValueOf: req.bestPerWire ? 0 : undefined })
+      : geneticSearch(problem, {
+          seed: req.seed,
+          maxEvaluations: 0,
+          top: req.top,
+          termination: extensionTermination(opts.maxEvaluations ?? LIMITS.geneticEvaluations),
+        });
   const candidates = result.best.map((b) => extensionCandidateAt(problem, b.x, b.f));
   candidates.forEach(assertExtensionVerified);
   return { req, problem, result, candidates, searchMs: performance.now() - t0, document: opts.document };

@@ -20,7 +20,14 @@ export const TORSION_TO_TENSION = 0.577;
  * `sse`: fully reversed endurance for the criterion; `sinesAlternating`: the endurance point's
  * alternating strength; `ultimate`: Ssu for torsion, Sut for bending.
  */
-export function offsetAlternatingStrength(slope: number, initialStress: number, sse: number, sinesAlternating: number, ultimate: number, criterion: FatigueCriterion): number {
+export function offsetAlternatingStrength(
+  slope: number,
+  initialStress: number,
+  sse: number,
+  sinesAlternating: number,
+  ultimate: number,
+  criterion: FatigueCriterion,
+): number {
   if (criterion === 'sines') return sinesAlternating;
   const q = initialStress / ultimate;
   if (!(q < 1)) return 0;
@@ -76,7 +83,14 @@ export function yieldAlongLoadLine(cycle: CycleOnLine, yieldStrength: number): n
  * (Sut taken as 0.577 Sut, so the table's bending fractions become torsional strengths) and scaled back;
  * its ultimate is then Sut.
  */
-export function loopLifeCurve(cycles: number, zimmerli: boolean, table: FiniteLifeTable, tensileStrength: number, bending: boolean, criterion: FatigueCriterion): LifeCurvePoint {
+export function loopLifeCurve(
+  cycles: number,
+  zimmerli: boolean,
+  table: FiniteLifeTable,
+  tensileStrength: number,
+  bending: boolean,
+  criterion: FatigueCriterion,
+): LifeCurvePoint {
   const ssu = ultimateShearStrength(tensileStrength);
   if (!bending) return lifeCurve(cycles, false, zimmerli, table, tensileStrength, ssu, criterion);
   const c = lifeCurve(cycles, false, zimmerli, table, TORSION_TO_TENSION * tensileStrength, ssu, criterion);

@@ -30,21 +30,71 @@ const ALL: readonly ExtensionField[] = [
   { name: 'initial_tension', unit: 'force', digits: 6, read: (c) => c.analysis.initialTension.force, column: { head: 'Fi', digits: 3 } },
   { name: 'initial_tension_stress', unit: 'stress', digits: 6, read: (c) => c.analysis.initialTension.stress },
   { name: 'initial_tension_band_position', unit: null, digits: 0, read: (c) => c.analysis.initialTension.position },
-  { name: 'initial_tension_band_fraction', unit: null, digits: 4, read: (c) => finite(bandFraction(c.analysis)), column: { head: 'Fi band', digits: 2, cell: (c) => { const f = bandFraction(c.analysis); return Number.isFinite(f) ? `${sig(f * 100, 2)}%` : '-'; } } },
+  {
+    name: 'initial_tension_band_fraction',
+    unit: null,
+    digits: 4,
+    read: (c) => finite(bandFraction(c.analysis)),
+    column: {
+      head: 'Fi band',
+      digits: 2,
+      cell: (c) => {
+        const f = bandFraction(c.analysis);
+        return Number.isFinite(f) ? `${sig(f * 100, 2)}%` : '-';
+      },
+    },
+  },
   { name: 'rate', unit: 'rate', digits: 6, read: (c) => c.analysis.rate, column: { head: 'k', digits: 4 } },
   // The forces at every point the requirement names, in one cell (tables only).
-  { name: 'forces', unit: 'force', digits: 0, read: () => null, column: { head: 'forces', digits: 3, cell: (c, system) => c.analysis.points.map((p) => sig(inUnit(p.force, 'force', system), 3)).join(' / ') } },
+  {
+    name: 'forces',
+    unit: 'force',
+    digits: 0,
+    read: () => null,
+    column: { head: 'forces', digits: 3, cell: (c, system) => c.analysis.points.map((p) => sig(inUnit(p.force, 'force', system), 3)).join(' / ') },
+  },
   { name: 'working_force', unit: 'force', digits: 6, read: (c) => c.analysis.points[0]?.force ?? null },
-  { name: 'operating_force', unit: 'force', digits: 6, read: (c) => (c.analysis.points.length > 1 ? c.analysis.points[c.analysis.points.length - 1].force : null) },
+  {
+    name: 'operating_force',
+    unit: 'force',
+    digits: 6,
+    read: (c) => (c.analysis.points.length > 1 ? c.analysis.points[c.analysis.points.length - 1].force : null),
+  },
   { name: 'body_stress', unit: 'stress', digits: 6, read: (c) => longest(c)?.bodyStress ?? null, column: { head: 'body', digits: 4 } },
   { name: 'loop_bending_stress', unit: 'stress', digits: 6, read: (c) => longest(c)?.loopBendingStress ?? null, column: { head: 'loop A', digits: 4 } },
   { name: 'loop_torsion_stress', unit: 'stress', digits: 6, read: (c) => longest(c)?.loopTorsionStress ?? null, column: { head: 'loop B', digits: 4 } },
   // The three static safety factors in one cell (tables only).
-  { name: 'static_safety_factors', unit: null, digits: 0, read: () => null, column: { head: 'SF body/A/B', digits: 3, cell: (c) => { const s = c.analysis.staticSafety; return `${sig(s.body, 3)}/${sig(s.loopBending, 3)}/${sig(s.loopTorsion, 3)}`; } } },
+  {
+    name: 'static_safety_factors',
+    unit: null,
+    digits: 0,
+    read: () => null,
+    column: {
+      head: 'SF body/A/B',
+      digits: 3,
+      cell: (c) => {
+        const s = c.analysis.staticSafety;
+        return `${sig(s.body, 3)}/${sig(s.loopBending, 3)}/${sig(s.loopTorsion, 3)}`;
+      },
+    },
+  },
   { name: 'body_safety_factor', unit: null, digits: 5, read: (c) => finite(c.analysis.staticSafety.body) },
   { name: 'loop_bending_safety_factor', unit: null, digits: 5, read: (c) => finite(c.analysis.staticSafety.loopBending) },
   { name: 'loop_torsion_safety_factor', unit: null, digits: 5, read: (c) => finite(c.analysis.staticSafety.loopTorsion) },
-  { name: 'fatigue_safety_factor', unit: null, digits: 5, read: (c) => fatigueSafety(c.analysis), column: { head: 'SF fatigue', digits: 3, cell: (c) => { const nf = fatigueSafety(c.analysis); return nf === null ? '-' : `${sig(nf, 3)} ${c.analysis.fatigue ? shortSite(c.analysis.fatigue.governing) : ''}`.trim(); } } },
+  {
+    name: 'fatigue_safety_factor',
+    unit: null,
+    digits: 5,
+    read: (c) => fatigueSafety(c.analysis),
+    column: {
+      head: 'SF fatigue',
+      digits: 3,
+      cell: (c) => {
+        const nf = fatigueSafety(c.analysis);
+        return nf === null ? '-' : `${sig(nf, 3)} ${c.analysis.fatigue ? shortSite(c.analysis.fatigue.governing) : ''}`.trim();
+      },
+    },
+  },
   { name: 'natural_frequency_Hz', unit: null, digits: 5, read: (c) => c.analysis.surge.frequency },
   { name: 'mass', unit: 'mass', digits: 6, read: (c) => c.analysis.geometry.mass, column: { head: 'mass', digits: 3 } },
   { name: 'relative_cost', unit: null, digits: 6, read: (c) => c.analysis.geometry.mass * c.item.choice.material.relativeCost.value },
@@ -63,9 +113,23 @@ export const EXTENSION_FIELDS = ALL.filter((f) => f.name !== 'forces' && f.name 
 
 /** The columns of the ranked text and HTML tables. */
 export const EXTENSION_TABLE_FIELDS = pick([
-  'material', 'wire_diameter', 'mean_diameter', 'outer_diameter', 'body_coils', 'active_coils', 'free_length', 'initial_tension',
-  'initial_tension_band_fraction', 'rate', 'forces', 'body_stress', 'loop_bending_stress', 'loop_torsion_stress', 'static_safety_factors',
-  'fatigue_safety_factor', 'mass',
+  'material',
+  'wire_diameter',
+  'mean_diameter',
+  'outer_diameter',
+  'body_coils',
+  'active_coils',
+  'free_length',
+  'initial_tension',
+  'initial_tension_band_fraction',
+  'rate',
+  'forces',
+  'body_stress',
+  'loop_bending_stress',
+  'loop_torsion_stress',
+  'static_safety_factors',
+  'fatigue_safety_factor',
+  'mass',
 ]);
 
 /** CSV column names in a unit system (the unit symbol in each name). */

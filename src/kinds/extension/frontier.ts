@@ -8,7 +8,14 @@ import { gridSearch } from '../../search/grid.js';
 import { paretoFront2 } from '../../search/pareto.js';
 import type { Kind } from '../../units/kinds.js';
 import { loadExtensionCatalog, type ExtensionCatalog } from './catalog.js';
-import { assertExtensionVerified, chooseExtensionStrategy, designExtension, extensionCandidateAt, type ExtensionCandidate, type ExtensionDesignRun } from './design.js';
+import {
+  assertExtensionVerified,
+  chooseExtensionStrategy,
+  designExtension,
+  extensionCandidateAt,
+  type ExtensionCandidate,
+  type ExtensionDesignRun,
+} from './design.js';
 import { XO, buildExtensionProblem, combinations, type ExtensionProblem } from './problem.js';
 import type { SearchRequest } from '../kind.js';
 import type { ExtensionRequirements } from './requirements.js';
@@ -39,9 +46,16 @@ export function frontierValue(c: ExtensionCandidate, k: ExtensionFrontierKey): n
   return def.sign * c.objectives[def.objective];
 }
 
-export function computeExtensionFrontier(req: ExtensionRequirements, catalog: Catalog, x: ExtensionFrontierKey, y: ExtensionFrontierKey,
-  onProgress?: (done: number, total: number) => void, built?: ExtensionProblem, ext: ExtensionCatalog = loadExtensionCatalog(catalog.materials),
-  strategy: SearchRequest['strategy'] = 'auto'): ExtensionFrontier {
+export function computeExtensionFrontier(
+  req: ExtensionRequirements,
+  catalog: Catalog,
+  x: ExtensionFrontierKey,
+  y: ExtensionFrontierKey,
+  onProgress?: (done: number, total: number) => void,
+  built?: ExtensionProblem,
+  ext: ExtensionCatalog = loadExtensionCatalog(catalog.materials),
+  strategy: SearchRequest['strategy'] = 'auto',
+): ExtensionFrontier {
   const t0 = performance.now();
   const problem = built ?? buildExtensionProblem(req, catalog, ext);
   // Mass, volume, outer diameter, free length and cost grow with the mean diameter within a cell (a loop's
@@ -49,9 +63,13 @@ export function computeExtensionFrontier(req: ExtensionRequirements, catalog: Ca
   // dominates the rest; a safety factor does not, so then every feasible step is kept, and only the grid
   // samples it.
   const everyFeasiblePoint = EXTENSION_FRONTIER_KEYS[x].sign < 0 || EXTENSION_FRONTIER_KEYS[y].sign < 0 || problem.objectiveTrend?.[0] !== 1;
-  const genetic = !everyFeasiblePoint && problem.stock.length > 0 && (strategy === 'genetic' || (strategy === 'auto' && combinations(problem) > LIMITS.gridCombinations));
+  const genetic =
+    !everyFeasiblePoint && problem.stock.length > 0 && (strategy === 'genetic' || (strategy === 'auto' && combinations(problem) > LIMITS.gridCombinations));
   if (genetic) return geneticExtensionFrontier(req, catalog, problem, x, y, ext);
-  chooseExtensionStrategy(req, problem, { strategy: 'grid', gridReason: strategy === 'grid' ? 'asked for by --strategy grid' : 'a safety-factor axis needs every combination' });
+  chooseExtensionStrategy(req, problem, {
+    strategy: 'grid',
+    gridReason: strategy === 'grid' ? 'asked for by --strategy grid' : 'a safety-factor axis needs every combination',
+  });
   const result = gridSearch(problem, { top: req.top, collectAll: true, everyFeasiblePoint, onProgress });
   const candidates = result.best.map((b) => extensionCandidateAt(problem, b.x, b.f));
   candidates.forEach(assertExtensionVerified);
@@ -74,15 +92,28 @@ export function computeExtensionFrontier(req: ExtensionRequirements, catalog: Ca
 
 /** The front from the two-objective genetic search (the engine's, as for compression springs), for
  * spaces too large to enumerate; the run beside it is the single-objective genetic design. */
-function geneticExtensionFrontier(req: ExtensionRequirements, catalog: Catalog, problem: ExtensionProblem, x: ExtensionFrontierKey, y: ExtensionFrontierKey, ext: ExtensionCatalog): ExtensionFrontier {
+function geneticExtensionFrontier(
+  req: ExtensionRequirements,
+  catalog: Catalog,
+  problem: ExtensionProblem,
+  x: ExtensionFrontierKey,
+  y: ExtensionFrontierKey,
+  ext: ExtensionCatalog,
+): ExtensionFrontier {
   const run = designExtension(req, catalog, { strategy: 'genetic', problem }, ext);
   const ox = EXTENSION_FRONTIER_KEYS[x].objective;
   const oy = EXTENSION_FRONTIER_KEYS[y].objective;
   const r = geneticFront(problem, { seed: req.seed, objectives: [ox, oy], maxEvaluations: 2 * LIMITS.geneticEvaluations });
-  const front = paretoFront2(r.best.map((p) => p.f[ox]), r.best.map((p) => p.f[oy])).map((i) => extensionCandidateAt(problem, r.best[i].x, r.best[i].f));
+  const front = paretoFront2(
+    r.best.map((p) => p.f[ox]),
+    r.best.map((p) => p.f[oy]),
+  ).map((i) => extensionCandidateAt(problem, r.best[i].x, r.best[i].f));
   front.forEach(assertExtensionVerified);
   const all = r.cloud!;
-  const cloud = Array.from({ length: all.size }, (_, i) => ({ x: EXTENSION_FRONTIER_KEYS[x].sign * all.f(i)[ox], y: EXTENSION_FRONTIER_KEYS[y].sign * all.f(i)[oy] }));
+  const cloud = Array.from({ length: all.size }, (_, i) => ({
+    x: EXTENSION_FRONTIER_KEYS[x].sign * all.f(i)[ox],
+    y: EXTENSION_FRONTIER_KEYS[y].sign * all.f(i)[oy],
+  }));
   return { run, x, y, strategy: 'genetic', cloud, front };
 }
 

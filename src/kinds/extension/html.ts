@@ -20,14 +20,29 @@ import type { SweepSummary } from '../kind.js';
 
 /** Methods and sources particular to extension springs (the README's conventions table repeats them). */
 export const EXTENSION_CONVENTIONS: [string, string][] = [
-  ['lengths', 'measured inside the loops; the free length of full loops L0 = (2C - 1 + Nb) d (Shigley eq. 10-39), other loops by their rule in catalogs/extension.yaml or an explicit loop_length'],
+  [
+    'lengths',
+    'measured inside the loops; the free length of full loops L0 = (2C - 1 + Nb) d (Shigley eq. 10-39), other loops by their rule in catalogs/extension.yaml or an explicit loop_length',
+  ],
   ['rate', 'k = G d^4 / (8 D^3 Na) with Na = Nb + G/E: the loops add G/E of a coil (Shigley eq. 10-40)'],
   ['force', 'F = Fi + k (L - L0): the line starts at the initial tension, above zero at the free length'],
-  ['initial tension', 'tau_i = K 8 Fi D / (pi d^3); preferred range 33500 / exp(0.105 C) +- 1000 (4 - (C - 3) / 6.5) psi (Shigley eq. 10-41); in design Fi = F1 - k (L1 - L0) must lie in it (or from zero to its top: initial_tension_range: makeable)'],
-  ['loop bending (A)', 'sigma_A = F [(K)A 16 D / (pi d^3) + 4 / (pi d^2)], (K)A = (4 C1^2 - C1 - 1) / (4 C1 (C1 - 1)), C1 = 2 r1 / d (Shigley eqs. 10-34, 10-35)'],
+  [
+    'initial tension',
+    'tau_i = K 8 Fi D / (pi d^3); preferred range 33500 / exp(0.105 C) +- 1000 (4 - (C - 3) / 6.5) psi (Shigley eq. 10-41); in design Fi = F1 - k (L1 - L0) must lie in it (or from zero to its top: initial_tension_range: makeable)',
+  ],
+  [
+    'loop bending (A)',
+    'sigma_A = F [(K)A 16 D / (pi d^3) + 4 / (pi d^2)], (K)A = (4 C1^2 - C1 - 1) / (4 C1 (C1 - 1)), C1 = 2 r1 / d (Shigley eqs. 10-34, 10-35)',
+  ],
   ['loop torsion (B)', 'tau_B = (K)B 8 F D / (pi d^3), (K)B = (4 C2 - 1) / (4 C2 - 4), C2 = 2 r2 / d, default 4 (Shigley eqs. 10-36, 10-37, sec. 10-11)'],
-  ['static allowables', 'body torsion, loop torsion and loop bending as fractions of Sut per material class (Shigley Table 10-7); safety.static divides all three'],
-  ['loop fatigue', 'repeated-stress fractions of Sut for the loops at 1e5/1e6/1e7 cycles (Shigley Table 10-8, after Associated Spring; from memory); load lines start at the initial-tension stress of each point'],
+  [
+    'static allowables',
+    'body torsion, loop torsion and loop bending as fractions of Sut per material class (Shigley Table 10-7); safety.static divides all three',
+  ],
+  [
+    'loop fatigue',
+    'repeated-stress fractions of Sut for the loops at 1e5/1e6/1e7 cycles (Shigley Table 10-8, after Associated Spring; from memory); load lines start at the initial-tension stress of each point',
+  ],
   ['mass', 'body coils plus one coil of wire per full loop (common practice); other loops by their rule'],
 ];
 
@@ -36,7 +51,11 @@ const SHARED = new Set(['stress correction', 'tensile strength', 'fatigue', 'sur
 /** The conventions of an extension-spring page, shared methods first. */
 export function extensionConventionsSection(): string {
   const rows = [...CONVENTIONS.filter(([k]) => SHARED.has(k)), ...EXTENSION_CONVENTIONS];
-  return `<h2>Conventions</h2>${htmlTable(['item', 'method and source'], rows.map(([a, b]) => [a, b]), { cls: 'kv' })}`;
+  return `<h2>Conventions</h2>${htmlTable(
+    ['item', 'method and source'],
+    rows.map(([a, b]) => [a, b]),
+    { cls: 'kv' },
+  )}`;
 }
 
 /** The caution every extension-spring page carries. */
@@ -57,20 +76,31 @@ export function extensionForcePlot(a: ExtensionAnalysis, system: UnitSystem): st
   const showSafe = Number.isFinite(safe.length) && safe.length <= longest + 1.5 * Math.max(longest - g.freeLength, g.freeLength * 0.1);
   const end = Math.max(longest, showSafe ? safe.length : longest) + 0.08 * Math.max(longest - g.freeLength, g.freeLength * 0.1);
   const fAt = (len: number) => Fi + a.rate * (len - g.freeLength);
-  const ax = axes([L(g.freeLength) * 0.96, L(end)], [0, F(fAt(end)) * 1.05], `length inside the loops (${unitSymbol('length', system)})`, `force (${unitSymbol('force', system)})`);
+  const ax = axes(
+    [L(g.freeLength) * 0.96, L(end)],
+    [0, F(fAt(end)) * 1.05],
+    `length inside the loops (${unitSymbol('length', system)})`,
+    `force (${unitSymbol('force', system)})`,
+  );
   const out = [svgOpen('plot-force', 'force against length inside the loops'), ...ax.svg];
   out.push(`<line class="solid-line" x1="${r2(ax.x(L(g.freeLength)))}" y1="${ax.y.range[0]}" x2="${r2(ax.x(L(g.freeLength)))}" y2="${ax.y.range[1]}"/>`);
   out.push(`<text class="note" x="${r2(ax.x(L(g.freeLength)) + 4)}" y="${ax.y.range[1] + 12}">free length ${sig(L(g.freeLength), 4)}</text>`);
-  out.push(`<polyline id="force-line" class="curve" data-start-force="${Fi}" data-free-length="${g.freeLength}" points="${r2(ax.x(L(g.freeLength)))},${r2(ax.y(F(Fi)))} ${r2(ax.x(L(end)))},${r2(ax.y(F(fAt(end))))}"/>`);
+  out.push(
+    `<polyline id="force-line" class="curve" data-start-force="${Fi}" data-free-length="${g.freeLength}" points="${r2(ax.x(L(g.freeLength)))},${r2(ax.y(F(Fi)))} ${r2(ax.x(L(end)))},${r2(ax.y(F(fAt(end))))}"/>`,
+  );
   out.push(`<circle id="initial-tension-point" class="endurance" data-force="${Fi}" cx="${r2(ax.x(L(g.freeLength)))}" cy="${r2(ax.y(F(Fi)))}" r="5"/>`);
-  out.push(`<text class="note" x="${r2(ax.x(L(g.freeLength)) + 8)}" y="${r2(ax.y(F(Fi)) + 14)}">initial tension ${formatQuantity(Fi, 'force', system, 3)}</text>`);
+  out.push(
+    `<text class="note" x="${r2(ax.x(L(g.freeLength)) + 8)}" y="${r2(ax.y(F(Fi)) + 14)}">initial tension ${formatQuantity(Fi, 'force', system, 3)}</text>`,
+  );
   if (showSafe) {
     out.push(`<line class="clash-line" x1="${ax.x.range[0]}" y1="${r2(ax.y(F(safe.force)))}" x2="${ax.x.range[1]}" y2="${r2(ax.y(F(safe.force)))}"/>`);
     out.push(`<text class="note" x="${ax.x.range[0] + 4}" y="${r2(ax.y(F(safe.force)) - 4)}">set begins: ${siteWords(safe.governing)} at its allowable</text>`);
   }
   a.points.forEach((p, i) => {
     out.push(`<circle class="point" data-length="${p.length}" data-force="${p.force}" cx="${r2(ax.x(L(p.length)))}" cy="${r2(ax.y(F(p.force)))}" r="5"/>`);
-    out.push(`<text class="note" x="${r2(ax.x(L(p.length)) + 8)}" y="${r2(ax.y(F(p.force)) + 4)}">${i === 0 ? 'working' : i === a.points.length - 1 ? 'operating' : `point ${i + 1}`}</text>`);
+    out.push(
+      `<text class="note" x="${r2(ax.x(L(p.length)) + 8)}" y="${r2(ax.y(F(p.force)) + 4)}">${i === 0 ? 'working' : i === a.points.length - 1 ? 'operating' : `point ${i + 1}`}</text>`,
+    );
   });
   out.push('</svg>');
   return out.join('');
@@ -92,14 +122,21 @@ export function extensionSideView(a: ExtensionAnalysis, system: UnitSystem): str
   const X = (v: number) => x0 + v * k;
   const Y = (v: number) => cy - v * k;
   const sw = r2(Math.max(1, d * k));
-  const out = [`<svg id="plot-drawing" class="plot" viewBox="0 0 ${W} ${H}" role="img" aria-label="side view to scale, with the loops" xmlns="http://www.w3.org/2000/svg" data-scale="${r2(k)}" data-body-coils="${g.bodyCoils}"><title>side view to scale, with the loops</title>`];
+  const out = [
+    `<svg id="plot-drawing" class="plot" viewBox="0 0 ${W} ${H}" role="img" aria-label="side view to scale, with the loops" xmlns="http://www.w3.org/2000/svg" data-scale="${r2(k)}" data-body-coils="${g.bodyCoils}"><title>side view to scale, with the loops</title>`,
+  ];
   // Each loop: the wire's centre line an ellipse whose inside edge is the loop's inside (x = 0 or L0),
   // as tall as the coil's mean diameter.
   const rx = (h + d) / 2;
   const ry = g.meanDiameter / 2;
   out.push('<g class="wire">');
-  for (const [id, cx] of [['loop-left', h / 2], ['loop-right', g.freeLength - h / 2]] as const) {
-    out.push(`<ellipse id="${id}" class="loop" cx="${r2(X(cx))}" cy="${r2(cy)}" rx="${r2(rx * k)}" ry="${r2(ry * k)}" fill="none" stroke="currentColor" style="stroke: var(--front)" stroke-width="${sw}"/>`);
+  for (const [id, cx] of [
+    ['loop-left', h / 2],
+    ['loop-right', g.freeLength - h / 2],
+  ] as const) {
+    out.push(
+      `<ellipse id="${id}" class="loop" cx="${r2(X(cx))}" cy="${r2(cy)}" rx="${r2(rx * k)}" ry="${r2(ry * k)}" fill="none" stroke="currentColor" style="stroke: var(--front)" stroke-width="${sw}"/>`,
+    );
   }
   // The body, close-wound: (Nb + 1) wire diameters long, a section at the top and one at the bottom per coil.
   const start = h + d / 2;
@@ -118,12 +155,16 @@ export function extensionSideView(a: ExtensionAnalysis, system: UnitSystem): str
   out.push('</g>');
   const Ls = (v: number) => `${Number(inUnit(v, 'length', system).toPrecision(4))} ${unitSymbol('length', system)}`;
   const yDim = Y(-g.outerDiameter / 2) + 26;
-  out.push(`<g class="dim"><line x1="${r2(X(0))}" y1="${r2(yDim)}" x2="${r2(X(g.freeLength))}" y2="${r2(yDim)}"/><line x1="${r2(X(0))}" y1="${r2(yDim - 6)}" x2="${r2(X(0))}" y2="${r2(yDim + 6)}"/><line x1="${r2(X(g.freeLength))}" y1="${r2(yDim - 6)}" x2="${r2(X(g.freeLength))}" y2="${r2(yDim + 6)}"/>`);
+  out.push(
+    `<g class="dim"><line x1="${r2(X(0))}" y1="${r2(yDim)}" x2="${r2(X(g.freeLength))}" y2="${r2(yDim)}"/><line x1="${r2(X(0))}" y1="${r2(yDim - 6)}" x2="${r2(X(0))}" y2="${r2(yDim + 6)}"/><line x1="${r2(X(g.freeLength))}" y1="${r2(yDim - 6)}" x2="${r2(X(g.freeLength))}" y2="${r2(yDim + 6)}"/>`,
+  );
   out.push(`<text x="${r2(X(g.freeLength / 2))}" y="${r2(yDim + 16)}" text-anchor="middle">free length inside the loops ${Ls(g.freeLength)}</text>`);
   const xDim = X(g.freeLength) + 22;
   out.push(`<line x1="${r2(xDim)}" y1="${r2(Y(g.outerDiameter / 2))}" x2="${r2(xDim)}" y2="${r2(Y(-g.outerDiameter / 2))}"/>`);
   out.push(`<text transform="translate(${r2(xDim + 14)} ${r2(cy)}) rotate(-90)" text-anchor="middle">OD ${Ls(g.outerDiameter)}</text>`);
-  out.push(`<text x="${r2(X(0))}" y="${r2(Y(g.outerDiameter / 2) - 10)}">wire ${Ls(g.wireDiameter)}, ${sig(g.bodyCoils, 4)} body coils, ${g.loop} loops ${Ls(h)} high</text></g>`);
+  out.push(
+    `<text x="${r2(X(0))}" y="${r2(Y(g.outerDiameter / 2) - 10)}">wire ${Ls(g.wireDiameter)}, ${sig(g.bodyCoils, 4)} body coils, ${g.loop} loops ${Ls(h)} high</text></g>`,
+  );
   out.push('</svg>');
   return out.join('');
 }
@@ -137,15 +178,37 @@ function stressTable(a: ExtensionAnalysis, system: UnitSystem): string {
   const per = stressPerNewton(g.wireDiameter, g.meanDiameter, a.factors.body, a.factors.loopBending, a.factors.loopTorsion);
   const allow = a.material.allowables;
   const rows = [
-    ['free length (initial tension)', L(g.freeLength), F(a.initialTension.force), S(per.body * a.initialTension.force), S(per.loopBending * a.initialTension.force), S(per.loopTorsion * a.initialTension.force)],
-    ...a.points.map((p, i) => [i === 0 ? 'working' : i === a.points.length - 1 ? 'operating' : `point ${i + 1}`, L(p.length), F(p.force), S(p.bodyStress), S(p.loopBendingStress), S(p.loopTorsionStress)]),
+    [
+      'free length (initial tension)',
+      L(g.freeLength),
+      F(a.initialTension.force),
+      S(per.body * a.initialTension.force),
+      S(per.loopBending * a.initialTension.force),
+      S(per.loopTorsion * a.initialTension.force),
+    ],
+    ...a.points.map((p, i) => [
+      i === 0 ? 'working' : i === a.points.length - 1 ? 'operating' : `point ${i + 1}`,
+      L(p.length),
+      F(p.force),
+      S(p.bodyStress),
+      S(p.loopBendingStress),
+      S(p.loopTorsionStress),
+    ]),
     ['allowable (static)', '', '', S(allow.bodyTorsion), S(allow.loopBending), S(allow.loopTorsion)],
   ];
-  if (a.points.length) rows.push(['static safety factor', '', '', sig(a.staticSafety.body, 3), sig(a.staticSafety.loopBending, 3), sig(a.staticSafety.loopTorsion, 3)]);
+  if (a.points.length)
+    rows.push(['static safety factor', '', '', sig(a.staticSafety.body, 3), sig(a.staticSafety.loopBending, 3), sig(a.staticSafety.loopTorsion, 3)]);
   if (a.fatigue) {
     const fa = a.fatigue;
     const nf = (v: number) => (Number.isFinite(v) ? sig(v, 3) : 'n/a');
-    rows.push([`fatigue safety factor (${fa.life === 'infinite' ? 'infinite life' : `${sig(fa.cycles, 3)} cycles`}, ${fa.criterion})`, '', '', nf(fa.body.safetyFactor), nf(fa.loopBending.safetyFactor), nf(fa.loopTorsion.safetyFactor)]);
+    rows.push([
+      `fatigue safety factor (${fa.life === 'infinite' ? 'infinite life' : `${sig(fa.cycles, 3)} cycles`}, ${fa.criterion})`,
+      '',
+      '',
+      nf(fa.body.safetyFactor),
+      nf(fa.loopBending.safetyFactor),
+      nf(fa.loopTorsion.safetyFactor),
+    ]);
   }
   return `<div id="loop-stresses">${htmlTable(['', 'length', 'force', 'body (torsion)', 'loop, A (bending)', 'loop, B (torsion)'], rows)}</div>`;
 }
@@ -164,8 +227,14 @@ export function extensionSpringSections(a: ExtensionAnalysis, service: Extension
     ['loops', `${g.loop}, ${L(g.loopHeight)} high; r1 ${L(g.loopRadius)} (C1 ${sig(g.loopIndex, 3)}), r2 ${L(g.bendRadius)} (C2 ${sig(g.bendIndex, 3)})`],
     ['free length inside the loops', L(g.freeLength)],
     ['rate', formatQuantity(a.rate, 'rate', system)],
-    ['initial tension', `${formatQuantity(it.force, 'force', system)}, stress ${S(it.stress)}; preferred ${S(it.band.low)} to ${S(it.band.high)}: ${it.position}${Number.isFinite(frac) ? ` (${sig(frac * 100, 3)}% up the range)` : ''}`],
-    ['largest pull before a set', `${formatQuantity(a.safeExtension.force, 'force', system)} at ${L(a.safeExtension.length)} (${siteWords(a.safeExtension.governing)})`],
+    [
+      'initial tension',
+      `${formatQuantity(it.force, 'force', system)}, stress ${S(it.stress)}; preferred ${S(it.band.low)} to ${S(it.band.high)}: ${it.position}${Number.isFinite(frac) ? ` (${sig(frac * 100, 3)}% up the range)` : ''}`,
+    ],
+    [
+      'largest pull before a set',
+      `${formatQuantity(a.safeExtension.force, 'force', system)} at ${L(a.safeExtension.length)} (${siteWords(a.safeExtension.governing)})`,
+    ],
     ['natural frequency', `${sig(a.surge.frequency, 4)} Hz`],
     ['mass', formatQuantity(g.mass, 'mass', system)],
   ];
@@ -175,7 +244,12 @@ export function extensionSpringSections(a: ExtensionAnalysis, service: Extension
   out.push('<h2>Body and loop stresses</h2>');
   out.push(stressTable(a, system));
   out.push('<div class="grid2">');
-  out.push(figure(extensionForcePlot(a, system), 'Force against length inside the loops: the line starts at the initial tension at the free length (an extension spring pulls before it stretches), through the working and operating points; the dashed level is where the first site reaches its static allowable.'));
+  out.push(
+    figure(
+      extensionForcePlot(a, system),
+      'Force against length inside the loops: the line starts at the initial tension at the free length (an extension spring pulls before it stretches), through the working and operating points; the dashed level is where the first site reaches its static allowable.',
+    ),
+  );
   out.push(figure(extensionSideView(a, system), 'Side view at free length, to scale: the close-wound body and its two loops.'));
   out.push('</div>');
   return out;
@@ -196,7 +270,12 @@ function requirementRows(req: ExtensionRequirements, system: UnitSystem): string
     ['material', req.materials.map((m) => m.material.id).join(', ')],
     ['loops', `${req.loop.id}${req.loopLength !== undefined ? `, ${L(req.loopLength)} high` : ''}; bend index C2 ${req.bendIndex}`],
     ['working load', `${F(req.workingForce)} at ${L(req.workingLength)} inside the loops`],
-    ['operating point', req.operatingLength === undefined ? '-' : `${req.operatingForce === undefined ? 'free force' : F(req.operatingForce)} at ${L(req.operatingLength)}${req.loadTolerance ? `, tolerance ${sig(req.loadTolerance * 100, 3)}%` : ''}`],
+    [
+      'operating point',
+      req.operatingLength === undefined
+        ? '-'
+        : `${req.operatingForce === undefined ? 'free force' : F(req.operatingForce)} at ${L(req.operatingLength)}${req.loadTolerance ? `, tolerance ${sig(req.loadTolerance * 100, 3)}%` : ''}`,
+    ],
     ['largest outer diameter (bore)', L(req.maxOuterDiameter)],
     ['largest free length', L(req.maxFreeLength)],
     ['largest extended length', L(req.maxExtendedLength)],
@@ -204,7 +283,7 @@ function requirementRows(req: ExtensionRequirements, system: UnitSystem): string
     ['wire sizes', req.wireSizesLabel],
     ['body coils', `${req.bodyCoils[0]} to ${req.bodyCoils[1]} by ${req.coilStep}`],
     ['spring index', `${req.index[0]} to ${req.index[1]}`],
-    ['initial tension range', req.initialTensionRange === 'preferred' ? 'preferred (the published band)' : 'makeable (from zero to the band\'s top)'],
+    ['initial tension range', req.initialTensionRange === 'preferred' ? 'preferred (the published band)' : "makeable (from zero to the band's top)"],
     ['safety factors', `static ${req.safety.static}, fatigue ${req.safety.fatigue}, surge ${req.safety.surge}`],
     ['ranked by', req.rank.replace('_', ' ')],
   ];
@@ -219,16 +298,30 @@ export function extensionDesignHtml(run: ExtensionDesignRun, system: UnitSystem,
   const r = run.result;
   const sections: string[] = ['<h2>Requirements</h2>', htmlTable(['requirement', 'value'], requirementRows(req, system), { cls: 'kv' })];
   const counts = [
-    ['strategy', r.strategy], ['combinations', String(r.cells)], ['candidate evaluations', String(r.evaluations)], ['feasible combinations', String(r.feasibleCells)],
+    ['strategy', r.strategy],
+    ['combinations', String(r.cells)],
+    ['candidate evaluations', String(r.evaluations)],
+    ['feasible combinations', String(r.feasibleCells)],
     ['pruned by the incumbent bound', String(r.prunedCells)],
-    ...reportedExtensionChecks(req).filter((c) => (r.cutBy[c] ?? 0) > 0).map((c) => [`cut: ${EXTENSION_CHECK_LABELS[c as keyof typeof EXTENSION_CHECK_LABELS]}`, String(r.cutBy[c])]),
+    ...reportedExtensionChecks(req)
+      .filter((c) => (r.cutBy[c] ?? 0) > 0)
+      .map((c) => [`cut: ${EXTENSION_CHECK_LABELS[c as keyof typeof EXTENSION_CHECK_LABELS]}`, String(r.cutBy[c])]),
   ];
   sections.push(htmlTable(['count', 'value'], counts, { cls: 'kv' }));
   const best = run.candidates[0];
   if (!best) {
     sections.push('<h2>No feasible spring</h2>');
     const lines = extensionRelaxLines(run);
-    sections.push(`<p>${esc(lines[0])}</p>${lines.length > 1 ? `<ul>${lines.slice(1).map((l) => `<li>${esc(l.slice(4))}</li>`).join('')}</ul>` : ''}`);
+    sections.push(
+      `<p>${esc(lines[0])}</p>${
+        lines.length > 1
+          ? `<ul>${lines
+              .slice(1)
+              .map((l) => `<li>${esc(l.slice(4))}</li>`)
+              .join('')}</ul>`
+          : ''
+      }`,
+    );
   } else {
     const fr = frontier;
     if (!fr) throw new Error('extensionDesignHtml: a run with springs is drawn with its frontier (extensionReportFrontier); please report this');
@@ -239,9 +332,17 @@ export function extensionDesignHtml(run: ExtensionDesignRun, system: UnitSystem,
     const pt = (c: ExtensionCandidate) => ({ x: conv(kx, frontierValue(c, fr.x)), y: conv(ky, frontierValue(c, fr.y)) });
     const cloud = fr.cloud.map((p) => ({ x: conv(kx, p.x), y: conv(ky, p.y) }));
     sections.push('<h2>Feasible springs and the trade-off front</h2>');
-    sections.push(figure(cloudPlot(cloud, fr.front.map(pt), pt(best), label(kx), label(ky), {
-      material: best.item.choice.material.id, wire: String(best.geometry.wireDiameter), 'mean-diameter': String(best.geometry.meanDiameter), 'body-coils': String(best.geometry.bodyCoils),
-    }), `${cloud.length} feasible springs (each combination of material, wire and body coils at its smallest feasible mean diameter); the line joins the ${fr.front.length} non-dominated ones; the ring marks the chosen spring, first in the table below.`));
+    sections.push(
+      figure(
+        cloudPlot(cloud, fr.front.map(pt), pt(best), label(kx), label(ky), {
+          material: best.item.choice.material.id,
+          wire: String(best.geometry.wireDiameter),
+          'mean-diameter': String(best.geometry.meanDiameter),
+          'body-coils': String(best.geometry.bodyCoils),
+        }),
+        `${cloud.length} feasible springs (each combination of material, wire and body coils at its smallest feasible mean diameter); the line joins the ${fr.front.length} non-dominated ones; the ring marks the chosen spring, first in the table below.`,
+      ),
+    );
     sections.push('<h2>Ranked candidates</h2>');
     const t = extensionCandidateGrid(run.candidates, system);
     sections.push(htmlTable(t.header, t.rows, { bestFirst: true }));
@@ -252,10 +353,23 @@ export function extensionDesignHtml(run: ExtensionDesignRun, system: UnitSystem,
     const ok = pts.filter((p) => p.y !== null) as { x: number; y: number }[];
     sections.push('<h2>Envelope sweep</h2>');
     if (ok.length) {
-      const ax = axes([Math.min(...pts.map((p) => p.x)), Math.max(...pts.map((p) => p.x))], [Math.min(...ok.map((p) => p.y)) * 0.95, Math.max(...ok.map((p) => p.y)) * 1.05], `${sweep.name} (as given)`, `best mass (${unitSymbol('mass', system)})`);
-      const svg = [svgOpen('plot-sweep', `best mass against ${sweep.name}`), ...ax.svg, polyline(ok.map((p) => [ax.x(p.x), ax.y(p.y)]), 'curve'),
+      const ax = axes(
+        [Math.min(...pts.map((p) => p.x)), Math.max(...pts.map((p) => p.x))],
+        [Math.min(...ok.map((p) => p.y)) * 0.95, Math.max(...ok.map((p) => p.y)) * 1.05],
+        `${sweep.name} (as given)`,
+        `best mass (${unitSymbol('mass', system)})`,
+      );
+      const svg = [
+        svgOpen('plot-sweep', `best mass against ${sweep.name}`),
+        ...ax.svg,
+        polyline(
+          ok.map((p) => [ax.x(p.x), ax.y(p.y)]),
+          'curve',
+        ),
         ...ok.map((p) => `<circle class="point" cx="${r2(ax.x(p.x))}" cy="${r2(ax.y(p.y))}" r="4"/>`),
-        ...pts.filter((p) => p.y === null).map((p) => `<text class="none" x="${r2(ax.x(p.x))}" y="${ax.y.range[0] - 6}" text-anchor="middle">none</text>`), '</svg>'].join('');
+        ...pts.filter((p) => p.y === null).map((p) => `<text class="none" x="${r2(ax.x(p.x))}" y="${ax.y.range[0] - 6}" text-anchor="middle">none</text>`),
+        '</svg>',
+      ].join('');
       sections.push(figure(svg, 'The lightest feasible spring for each value; "none" where nothing fits.'));
     } else sections.push('<p>No value of the sweep admits a spring.</p>');
   }

@@ -12,7 +12,13 @@ import { EXTENSION_FIELDS } from './fields.js';
 import { computeExtensionFrontier, extensionReportFrontier, type ExtensionFrontier, type ExtensionFrontierKey } from './frontier.js';
 import { buildExtensionProblem, combinations } from './problem.js';
 import {
-  extensionAnalysisJson, extensionAnalysisText, extensionCandidateRecord, extensionCountsRecord, extensionDesignJson, extensionDesignText, extensionLimitingText,
+  extensionAnalysisJson,
+  extensionAnalysisText,
+  extensionCandidateRecord,
+  extensionCountsRecord,
+  extensionDesignJson,
+  extensionDesignText,
+  extensionLimitingText,
 } from './report.js';
 import { readExtensionRequirements, type ExtensionRequirements } from './requirements.js';
 import { readExtensionSpring, type ExtensionCase } from './springFile.js';
@@ -24,27 +30,55 @@ const unk: Trend = 0;
 const stressTrend = (r: ExtensionRequirements): Trend => (r.operatingLength === undefined ? inc : unk);
 
 const CHECK_TRENDS: Record<ExtensionCheck, (r: ExtensionRequirements) => Trend> = {
-  index_min: () => dec, index_max: () => inc, outer_diameter: () => inc, free_length: () => inc, working_extension: () => inc,
-  initial_tension_min: () => unk, initial_tension_max: () => unk,
-  body_stress: stressTrend, loop_bending_stress: stressTrend, loop_torsion_stress: stressTrend,
-  body_fatigue: () => unk, loop_bending_fatigue: () => unk, loop_torsion_fatigue: () => unk,
-  operating_force_min: () => inc, operating_force_max: () => dec, extended_stress: () => unk, surge: () => inc, temperature: () => inc,
+  index_min: () => dec,
+  index_max: () => inc,
+  outer_diameter: () => inc,
+  free_length: () => inc,
+  working_extension: () => inc,
+  initial_tension_min: () => unk,
+  initial_tension_max: () => unk,
+  body_stress: stressTrend,
+  loop_bending_stress: stressTrend,
+  loop_torsion_stress: stressTrend,
+  body_fatigue: () => unk,
+  loop_bending_fatigue: () => unk,
+  loop_torsion_fatigue: () => unk,
+  operating_force_min: () => inc,
+  operating_force_max: () => dec,
+  extended_stress: () => unk,
+  surge: () => inc,
+  temperature: () => inc,
 };
 
 const stressRelief = ['operating_length', 'operating_force', 'body_coils', 'material', 'safety.static'];
 const CHECK_RELAXED_BY: Record<ExtensionCheck, readonly string[]> = {
-  index_min: ['index'], index_max: ['index'], outer_diameter: ['envelope.max_outer_diameter'], free_length: ['envelope.max_free_length', 'loop'],
-  working_extension: ['load', 'body_coils', 'loop'], initial_tension_min: ['initial_tension_range', 'load'], initial_tension_max: ['load', 'body_coils'],
-  body_stress: stressRelief, loop_bending_stress: stressRelief, loop_torsion_stress: [...stressRelief, 'bend_index'],
-  body_fatigue: ['cycles', 'operating_length', 'material', 'safety.fatigue'], loop_bending_fatigue: ['cycles', 'operating_length', 'material', 'safety.fatigue'],
+  index_min: ['index'],
+  index_max: ['index'],
+  outer_diameter: ['envelope.max_outer_diameter'],
+  free_length: ['envelope.max_free_length', 'loop'],
+  working_extension: ['load', 'body_coils', 'loop'],
+  initial_tension_min: ['initial_tension_range', 'load'],
+  initial_tension_max: ['load', 'body_coils'],
+  body_stress: stressRelief,
+  loop_bending_stress: stressRelief,
+  loop_torsion_stress: [...stressRelief, 'bend_index'],
+  body_fatigue: ['cycles', 'operating_length', 'material', 'safety.fatigue'],
+  loop_bending_fatigue: ['cycles', 'operating_length', 'material', 'safety.fatigue'],
   loop_torsion_fatigue: ['cycles', 'operating_length', 'bend_index', 'material', 'safety.fatigue'],
-  operating_force_min: ['operating_force', 'load_tolerance', 'body_coils'], operating_force_max: ['operating_force', 'load_tolerance', 'body_coils'],
-  extended_stress: ['envelope.max_extended_length', 'material'], surge: ['safety.surge'], temperature: ['material'],
+  operating_force_min: ['operating_force', 'load_tolerance', 'body_coils'],
+  operating_force_max: ['operating_force', 'load_tolerance', 'body_coils'],
+  extended_stress: ['envelope.max_extended_length', 'material'],
+  surge: ['safety.surge'],
+  temperature: ['material'],
 };
 
 /** The checks of an extension spring, in the order of the search's g[] (checks.ts, XC). */
 export const EXTENSION_CHECK_DEFINITIONS: readonly CheckDefinition<ExtensionRequirements>[] = EXTENSION_CHECKS.map((name, i) => ({
-  name, label: EXTENSION_CHECK_LABELS[name], trend: CHECK_TRENDS[name], active: (r: ExtensionRequirements) => activeExtensionChecks(r)[i], relaxedBy: CHECK_RELAXED_BY[name],
+  name,
+  label: EXTENSION_CHECK_LABELS[name],
+  trend: CHECK_TRENDS[name],
+  active: (r: ExtensionRequirements) => activeExtensionChecks(r)[i],
+  relaxedBy: CHECK_RELAXED_BY[name],
 }));
 
 /** The objectives, in the order of the search's f[1..] (problem.ts, XO). */
@@ -53,12 +87,20 @@ export const EXTENSION_OBJECTIVE_DEFINITIONS = [
   { key: 'wire_volume', label: 'wire volume', unit: 'volume', sign: 1, trend: 1, rankable: true, frontierAxis: true, lpBound: false },
   { key: 'outer_diameter', label: 'outer diameter', unit: 'length', sign: 1, trend: 1, rankable: true, frontierAxis: true, lpBound: false },
   { key: 'free_length', label: 'free length inside the loops', unit: 'length', sign: 1, trend: 1, rankable: true, frontierAxis: true, lpBound: false },
-  { key: 'safety_factor', label: 'safety factor (lowest of body, loops, static and fatigue)', unit: null, sign: -1, trend: 0, rankable: true, frontierAxis: true, lpBound: false },
+  {
+    key: 'safety_factor',
+    label: 'safety factor (lowest of body, loops, static and fatigue)',
+    unit: null,
+    sign: -1,
+    trend: 0,
+    rankable: true,
+    frontierAxis: true,
+    lpBound: false,
+  },
   { key: 'relative_cost', label: 'relative cost (mass x cost factor)', unit: null, sign: 1, trend: 1, rankable: false, frontierAxis: true, lpBound: false },
 ] as const satisfies readonly ObjectiveDefinition[];
 
 export type ExtensionKind = SpringKind<ExtensionCase, ExtensionAnalysis, ExtensionRequirements, ExtensionDesignRun, ExtensionCandidate, ExtensionFrontier>;
-
 
 export const extension: ExtensionKind = {
   id: 'extension',
@@ -71,12 +113,27 @@ export const extension: ExtensionKind = {
     return Object.assign(p, { candidateAt: (x: ArrayLike<number>, f: Float64Array) => extensionCandidateAt(p, x, f) });
   },
   design: (req, catalog, request = {}) =>
-    designExtension(req, catalog, { strategy: request.strategy, onProgress: request.onProgress, document: request.document }, loadExtensionCatalog(catalog.materials)),
-  search: (req, catalog, request = {}) => designExtension(req, catalog, { strategy: request.strategy, onProgress: request.onProgress }, loadExtensionCatalog(catalog.materials)),
+    designExtension(
+      req,
+      catalog,
+      { strategy: request.strategy, onProgress: request.onProgress, document: request.document },
+      loadExtensionCatalog(catalog.materials),
+    ),
+  search: (req, catalog, request = {}) =>
+    designExtension(req, catalog, { strategy: request.strategy, onProgress: request.onProgress }, loadExtensionCatalog(catalog.materials)),
   found: (run) => run.candidates.length > 0,
   // The axes are checked against the objectives registry before this is called (frontierAxis()).
   frontier: (req, catalog, x, y, request = {}) =>
-    computeExtensionFrontier(req, catalog, x as ExtensionFrontierKey, y as ExtensionFrontierKey, request.onProgress, undefined, loadExtensionCatalog(catalog.materials), request.strategy),
+    computeExtensionFrontier(
+      req,
+      catalog,
+      x as ExtensionFrontierKey,
+      y as ExtensionFrontierKey,
+      request.onProgress,
+      undefined,
+      loadExtensionCatalog(catalog.materials),
+      request.strategy,
+    ),
   searchSize: (req, catalog) => combinations(buildExtensionProblem(req, catalog, loadExtensionCatalog(catalog.materials))),
   checks: EXTENSION_CHECK_DEFINITIONS,
   objectives: EXTENSION_OBJECTIVE_DEFINITIONS,
@@ -100,8 +157,10 @@ export const extension: ExtensionKind = {
     jsonFrame: { head: { kind: 'extension' }, tail: {} },
     requirementNotes(req) {
       const notes: string[] = [];
-      if (req.cycles !== undefined && req.cycles < STATIC_SERVICE_CYCLES) notes.push(`cycles ${req.cycles} is below ${STATIC_SERVICE_CYCLES.toExponential(0).replace('+', '')}: judged as static service (no fatigue check)`);
-      if (req.cycles !== undefined && req.cycles >= STATIC_SERVICE_CYCLES && req.operatingLength === undefined) notes.push('cycles given without operating_length: one working length is no load cycle (no fatigue check)');
+      if (req.cycles !== undefined && req.cycles < STATIC_SERVICE_CYCLES)
+        notes.push(`cycles ${req.cycles} is below ${STATIC_SERVICE_CYCLES.toExponential(0).replace('+', '')}: judged as static service (no fatigue check)`);
+      if (req.cycles !== undefined && req.cycles >= STATIC_SERVICE_CYCLES && req.operatingLength === undefined)
+        notes.push('cycles given without operating_length: one working length is no load cycle (no fatigue check)');
       return notes;
     },
   },

@@ -5,7 +5,11 @@
 // Above the band a coiler can hardly wind it; below it the initial tension is hard to hold to tolerance.
 import { PSI_MPA } from '../../units/kinds.js';
 
-export interface InitialTensionBand { low: number; middle: number; high: number }
+export interface InitialTensionBand {
+  low: number;
+  middle: number;
+  high: number;
+}
 
 /** The middle of the preferred range of tau_i (MPa) at spring index C. */
 export function initialTensionMiddle(springIndex: number): number {

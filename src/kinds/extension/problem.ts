@@ -26,7 +26,11 @@ import type { ExtensionRequirements } from './requirements.js';
 export const EXTENSION_OBJECTIVES = ['rank', 'mass', 'wire_volume', 'outer_diameter', 'free_length', 'neg_safety_factor', 'relative_cost'] as const;
 export const XO = Object.fromEntries(EXTENSION_OBJECTIVES.map((o, i) => [o, i])) as Record<(typeof EXTENSION_OBJECTIVES)[number], number>;
 
-export interface ExtensionStock { choice: MaterialChoice; wireDiameter: number; material: ExtensionMaterial }
+export interface ExtensionStock {
+  choice: MaterialChoice;
+  wireDiameter: number;
+  material: ExtensionMaterial;
+}
 
 export interface ExtensionProblem extends Problem {
   readonly req: ExtensionRequirements;
@@ -42,7 +46,11 @@ export function combinations(p: ExtensionProblem): number {
   return p.variables.reduce((n, v) => (v.kind === 'continuous' ? n : n * valueCount(v)), 1);
 }
 
-export function buildExtensionProblem(req: ExtensionRequirements, catalog: Catalog, ext: ExtensionCatalog = loadExtensionCatalog(catalog.materials)): ExtensionProblem {
+export function buildExtensionProblem(
+  req: ExtensionRequirements,
+  catalog: Catalog,
+  ext: ExtensionCatalog = loadExtensionCatalog(catalog.materials),
+): ExtensionProblem {
   const stock: ExtensionStock[] = [];
   for (const choice of req.materials) {
     for (const d of req.wireSizes(choice)) {
@@ -53,12 +61,24 @@ export function buildExtensionProblem(req: ExtensionRequirements, catalog: Catal
   }
   const n = stock.length;
   const arr = () => new Float64Array(n);
-  const sd = arr(); const sG = arr(); const sGE = arr(); const sRho = arr(); const sCost = arr(); const sTmax = arr();
-  const sAllowBody = arr(); const sAllowA = arr(); const sAllowB = arr(); const sSut = arr(); const sSsu = arr();
-  const sBodySse = arr(); const sBodySines = arr();
+  const sd = arr();
+  const sG = arr();
+  const sGE = arr();
+  const sRho = arr();
+  const sCost = arr();
+  const sTmax = arr();
+  const sAllowBody = arr();
+  const sAllowA = arr();
+  const sAllowB = arr();
+  const sSut = arr();
+  const sSsu = arr();
+  const sBodySse = arr();
+  const sBodySines = arr();
   // Loops: their points on their own life curves (bending at A against Sut, torsion at B against Ssu).
-  const sASse = arr(); const sASines = arr();
-  const sBSse = arr(); const sBSines = arr();
+  const sASse = arr();
+  const sASines = arr();
+  const sBSse = arr();
+  const sBSines = arr();
   const cycles = req.cycles ?? INFINITE_LIFE_CYCLES;
   const criterion = req.criterion;
   stock.forEach((s, i) => {
@@ -129,12 +149,25 @@ export function buildExtensionProblem(req: ExtensionRequirements, catalog: Catal
   // softer rate and are monotone only when the force is fixed (no stroke). The initial tension
   // (F1 - k (L1 - L0)) and its band move both ways: those are scanned.
   const trends: Record<(typeof EXTENSION_CHECKS)[number], number> = {
-    index_min: dec, index_max: inc, outer_diameter: inc, free_length: inc, working_extension: inc,
-    initial_tension_min: unk, initial_tension_max: unk,
+    index_min: dec,
+    index_max: inc,
+    outer_diameter: inc,
+    free_length: inc,
+    working_extension: inc,
+    initial_tension_min: unk,
+    initial_tension_max: unk,
     // (K)_A C = (4C^2 - C - 1) / (4 (C - 1)) grows for C above 1.71, which the index bound ensures.
-    body_stress: noStroke ? inc : unk, loop_bending_stress: noStroke ? inc : unk, loop_torsion_stress: noStroke ? inc : unk,
-    body_fatigue: unk, loop_bending_fatigue: unk, loop_torsion_fatigue: unk,
-    operating_force_min: inc, operating_force_max: dec, extended_stress: unk, surge: inc, temperature: inc,
+    body_stress: noStroke ? inc : unk,
+    loop_bending_stress: noStroke ? inc : unk,
+    loop_torsion_stress: noStroke ? inc : unk,
+    body_fatigue: unk,
+    loop_bending_fatigue: unk,
+    loop_torsion_fatigue: unk,
+    operating_force_min: inc,
+    operating_force_max: dec,
+    extended_stress: unk,
+    surge: inc,
+    temperature: inc,
   };
   // Mass grows with D when a loop's wire (wire_coils pi D) grows faster than its reach shrinks.
   const massInc = rule.wireCoils * Math.PI >= rule.innerHeight;
@@ -145,7 +178,9 @@ export function buildExtensionProblem(req: ExtensionRequirements, catalog: Catal
 
   const problem: ExtensionProblem = {
     name: 'helical extension spring',
-    req, stock, active,
+    req,
+    stock,
+    active,
     variables: [
       { kind: 'list', name: 'stock', values: stock.map((_, i) => i) },
       { kind: 'range', name: 'body_coils', min: req.bodyCoils[0], max: req.bodyCoils[1], step: req.coilStep },
@@ -179,7 +214,8 @@ export function buildExtensionProblem(req: ExtensionRequirements, catalog: Catal
       out[XC.loop_torsion_stress] = (shearStress(F, lo, d, KB) * sf - sAllowB[i]) / sAllowB[i];
       if (on[XC.extended_stress] === 1) {
         const Fx = F1 + kMin * (Lx - L1);
-        out[XC.extended_stress] = Math.max(shearStress(Fx, lo, d, K) / sAllowBody[i], loopBendingStress(Fx, lo, d, KA) / sAllowA[i], shearStress(Fx, lo, d, KB) / sAllowB[i]) - 1;
+        out[XC.extended_stress] =
+          Math.max(shearStress(Fx, lo, d, K) / sAllowBody[i], loopBendingStress(Fx, lo, d, KA) / sAllowA[i], shearStress(Fx, lo, d, KB) / sAllowB[i]) - 1;
       }
     },
 
@@ -249,7 +285,7 @@ export function buildExtensionProblem(req: ExtensionRequirements, catalog: Catal
       g[7] = (cBody * F2 * sf - sAllowBody[i]) / sAllowBody[i];
       g[8] = (cA * F2 * sf - sAllowA[i]) / sAllowA[i];
       g[9] = (cB * F2 * sf - sAllowB[i]) / sAllowB[i];
-      let nMin = nBody < nA ? (nBody < nB ? nBody : nB) : (nA < nB ? nA : nB);
+      let nMin = nBody < nA ? (nBody < nB ? nBody : nB) : nA < nB ? nA : nB;
       if (fatigueOn) {
         const fb = nfAt(cBody, Fi, F1, F2, sBodySse[i], sBodySines[i], sSsu[i]);
         const fa = nfAt(cA, Fi, F1, F2, sASse[i], sASines[i], sSut[i]);
@@ -260,17 +296,24 @@ export function buildExtensionProblem(req: ExtensionRequirements, catalog: Catal
         if (fb < nMin) nMin = fb;
         if (fa < nMin) nMin = fa;
         if (ft < nMin) nMin = ft;
-      } else { g[10] = -1; g[11] = -1; g[12] = -1; }
+      } else {
+        g[10] = -1;
+        g[11] = -1;
+        g[12] = -1;
+      }
       if (on[13] === 1) {
         g[13] = (F2req * (1 - tol) - F2) * invF2req;
         g[14] = (F2 - F2req * (1 + tol)) * invF2req;
-      } else { g[13] = -1; g[14] = -1; }
+      } else {
+        g[13] = -1;
+        g[14] = -1;
+      }
       if (on[15] === 1) {
         const Fx = F1 + k * (Lx - L1);
         const rb = (cBody * Fx) / sAllowBody[i];
         const ra = (cA * Fx) / sAllowA[i];
         const rt = (cB * Fx) / sAllowB[i];
-        g[15] = (rb > ra ? (rb > rt ? rb : rt) : (ra > rt ? ra : rt)) - 1;
+        g[15] = (rb > ra ? (rb > rt ? rb : rt) : ra > rt ? ra : rt) - 1;
       } else g[15] = -1;
       g[16] = surgeNeed > 0 ? (surgeNeed - surgeFrequency(k, activeCoilMass(d, D, Nb + sGE[i], sRho[i]), false)) / surgeNeed : -1;
       g[17] = on[17] === 1 ? (temperature - sTmax[i]) / Math.max(Math.abs(sTmax[i]), 1) : -1;
@@ -297,7 +340,16 @@ export function buildExtensionProblem(req: ExtensionRequirements, catalog: Catal
       const L0 = (Nb + 1) * d + 2 * h;
       return {
         item,
-        geometry: { wireDiameter: d, meanDiameter: D, bodyCoils: Nb, loop: rule, loopHeight: h, loopRadius: D / 2, bendRadius: (req.bendIndex * d) / 2, initialTension: F1 - k * (L1 - L0) },
+        geometry: {
+          wireDiameter: d,
+          meanDiameter: D,
+          bodyCoils: Nb,
+          loop: rule,
+          loopHeight: h,
+          loopRadius: D / 2,
+          bendRadius: (req.bendIndex * d) / 2,
+          initialTension: F1 - k * (L1 - L0),
+        },
       };
     },
     service: () => extensionService(req),

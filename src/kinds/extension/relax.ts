@@ -20,14 +20,24 @@ export interface ExtensionRelaxChange {
   unit: Kind | null;
 }
 
-interface NumericLimit { path: string; unit: Kind | null; current(r: ExtensionRequirements): number | undefined; loosest(r: ExtensionRequirements, v: number): number }
+interface NumericLimit {
+  path: string;
+  unit: Kind | null;
+  current(r: ExtensionRequirements): number | undefined;
+  loosest(r: ExtensionRequirements, v: number): number;
+}
 
 const NUMERIC: NumericLimit[] = [
   { path: 'envelope.max_outer_diameter', unit: 'length', current: (r) => r.maxOuterDiameter, loosest: (_r, v) => v * 3 },
   { path: 'envelope.max_free_length', unit: 'length', current: (r) => r.maxFreeLength, loosest: (_r, v) => v * 3 },
   { path: 'envelope.max_extended_length', unit: 'length', current: (r) => r.maxExtendedLength, loosest: (r) => r.operatingLength ?? r.workingLength },
   { path: 'load_tolerance', unit: null, current: (r) => (r.operatingForce !== undefined ? r.loadTolerance : undefined), loosest: () => 0.5 },
-  { path: 'cycles', unit: null, current: (r) => (r.cycles !== undefined && Number.isFinite(r.cycles) && r.cycles >= 1e4 ? r.cycles : undefined), loosest: () => 1e4 },
+  {
+    path: 'cycles',
+    unit: null,
+    current: (r) => (r.cycles !== undefined && Number.isFinite(r.cycles) && r.cycles >= 1e4 ? r.cycles : undefined),
+    loosest: () => 1e4,
+  },
 ];
 
 /** Round v to 4 significant figures away from the requirement (so the printed value admits a spring too). */

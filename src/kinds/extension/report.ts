@@ -8,7 +8,17 @@ import { SI_UNITS } from '../../report/json.js';
 import { table } from '../../report/table.js';
 import { formatQuantity, quantityWriter, sig, unitSymbol } from '../../units/format.js';
 import type { UnitSystem } from '../../units/systems.js';
-import { EXTENSION_CAUTIONS, EXTENSION_SITES, extensionWarnings, siteWords, stressPerNewton, type ExtensionAnalysis, type ExtensionService, type ExtensionSite, type SiteFatigue } from './analysis.js';
+import {
+  EXTENSION_CAUTIONS,
+  EXTENSION_SITES,
+  extensionWarnings,
+  siteWords,
+  stressPerNewton,
+  type ExtensionAnalysis,
+  type ExtensionService,
+  type ExtensionSite,
+  type SiteFatigue,
+} from './analysis.js';
 import { EXTENSION_CHECKS, EXTENSION_CHECK_LABELS, activeExtensionChecks } from './checks.js';
 import { extensionCandidateAt, type ExtensionCandidate, type ExtensionDesignRun } from './design.js';
 import type { ExtensionRequirements } from './requirements.js';
@@ -30,9 +40,17 @@ export { bandFraction, fatigueSafety, staticSafety };
 
 function siteFatigueJson(s: SiteFatigue): Record<string, unknown> {
   return {
-    initial_stress: s.initialStress, min_stress: s.minStress, max_stress: s.maxStress, alternating_stress: s.alternatingStress, mean_stress: s.meanStress,
-    endurance_source: s.enduranceSource, endurance_alternating: s.endurance.alternating, endurance_mean: s.endurance.mean,
-    ultimate_strength: s.ultimate, alternating_strength: s.alternatingStrength, safety_factor: orNull(s.safetyFactor),
+    initial_stress: s.initialStress,
+    min_stress: s.minStress,
+    max_stress: s.maxStress,
+    alternating_stress: s.alternatingStress,
+    mean_stress: s.meanStress,
+    endurance_source: s.enduranceSource,
+    endurance_alternating: s.endurance.alternating,
+    endurance_mean: s.endurance.mean,
+    ultimate_strength: s.ultimate,
+    alternating_strength: s.alternatingStrength,
+    safety_factor: orNull(s.safetyFactor),
   };
 }
 
@@ -40,10 +58,23 @@ function materialJson(c: { materialChoice: ExtensionCase['materialChoice'] }, a:
   const m = c.materialChoice.material;
   const f = a.material.figures;
   return {
-    id: m.id, name: m.name, standard: m.standard, tensile_strength: f.tensileStrength, ultimate_shear_strength: a.material.ultimateShear,
-    shear_modulus: f.shearModulus, elastic_modulus: f.elasticModulus, density: f.density, max_temperature: f.maxTemperature,
-    allowable_stress: { body_torsion: a.material.allowables.bodyTorsion, loop_bending: a.material.allowables.loopBending, loop_torsion: a.material.allowables.loopTorsion },
-    allowable_source: a.material.allowableSource, loop_fatigue_source: a.material.loopFatigue.source, loop_fatigue_stated: a.material.loopFatigueStated,
+    id: m.id,
+    name: m.name,
+    standard: m.standard,
+    tensile_strength: f.tensileStrength,
+    ultimate_shear_strength: a.material.ultimateShear,
+    shear_modulus: f.shearModulus,
+    elastic_modulus: f.elasticModulus,
+    density: f.density,
+    max_temperature: f.maxTemperature,
+    allowable_stress: {
+      body_torsion: a.material.allowables.bodyTorsion,
+      loop_bending: a.material.allowables.loopBending,
+      loop_torsion: a.material.allowables.loopTorsion,
+    },
+    allowable_source: a.material.allowableSource,
+    loop_fatigue_source: a.material.loopFatigue.source,
+    loop_fatigue_stated: a.material.loopFatigueStated,
     strength_source: m.strength.source,
   };
 }
@@ -55,28 +86,72 @@ export function extensionAnalysisRecord(a: ExtensionAnalysis, correction: string
   const fa = a.fatigue;
   return {
     geometry: {
-      wire_diameter: g.wireDiameter, mean_diameter: g.meanDiameter, outer_diameter: g.outerDiameter, inner_diameter: g.innerDiameter,
-      spring_index: g.springIndex, body_coils: g.bodyCoils, active_coils: g.activeCoils, loop: g.loop, loop_height: g.loopHeight,
-      loop_radius: g.loopRadius, bend_radius: g.bendRadius, loop_index: g.loopIndex, bend_index: g.bendIndex, body_length: g.bodyLength,
-      free_length: g.freeLength, wire_length: g.wireLength, wire_volume: g.wireVolume,
+      wire_diameter: g.wireDiameter,
+      mean_diameter: g.meanDiameter,
+      outer_diameter: g.outerDiameter,
+      inner_diameter: g.innerDiameter,
+      spring_index: g.springIndex,
+      body_coils: g.bodyCoils,
+      active_coils: g.activeCoils,
+      loop: g.loop,
+      loop_height: g.loopHeight,
+      loop_radius: g.loopRadius,
+      bend_radius: g.bendRadius,
+      loop_index: g.loopIndex,
+      bend_index: g.bendIndex,
+      body_length: g.bodyLength,
+      free_length: g.freeLength,
+      wire_length: g.wireLength,
+      wire_volume: g.wireVolume,
     },
     rate: a.rate,
     mass: g.mass,
     stress_factors: { method: correction, body: a.factors.body, loop_bending: a.factors.loopBending, loop_torsion: a.factors.loopTorsion },
     initial_tension: {
-      force: it.force, stress: it.stress, preferred_low: it.band.low, preferred_middle: it.band.middle, preferred_high: it.band.high,
-      position: it.position, band_fraction: orNull(bandFraction(a)),
+      force: it.force,
+      stress: it.stress,
+      preferred_low: it.band.low,
+      preferred_middle: it.band.middle,
+      preferred_high: it.band.high,
+      position: it.position,
+      band_fraction: orNull(bandFraction(a)),
     },
-    points: a.points.map((p) => ({ length: p.length, extension: p.extension, force: p.force, body_stress: p.bodyStress, loop_bending_stress: p.loopBendingStress, loop_torsion_stress: p.loopTorsionStress })),
+    points: a.points.map((p) => ({
+      length: p.length,
+      extension: p.extension,
+      force: p.force,
+      body_stress: p.bodyStress,
+      loop_bending_stress: p.loopBendingStress,
+      loop_torsion_stress: p.loopTorsionStress,
+    })),
     safety_factors: {
-      static: { body: orNull(a.staticSafety.body), loop_bending: orNull(a.staticSafety.loopBending), loop_torsion: orNull(a.staticSafety.loopTorsion), governing: a.points.length ? SITE_KEYS[a.staticSafety.governing] : null },
-      fatigue: fa ? { body: orNull(fa.body.safetyFactor), loop_bending: orNull(fa.loopBending.safetyFactor), loop_torsion: orNull(fa.loopTorsion.safetyFactor), governing: SITE_KEYS[fa.governing] } : null,
+      static: {
+        body: orNull(a.staticSafety.body),
+        loop_bending: orNull(a.staticSafety.loopBending),
+        loop_torsion: orNull(a.staticSafety.loopTorsion),
+        governing: a.points.length ? SITE_KEYS[a.staticSafety.governing] : null,
+      },
+      fatigue: fa
+        ? {
+            body: orNull(fa.body.safetyFactor),
+            loop_bending: orNull(fa.loopBending.safetyFactor),
+            loop_torsion: orNull(fa.loopTorsion.safetyFactor),
+            governing: SITE_KEYS[fa.governing],
+          }
+        : null,
     },
     safe_extension: { force: a.safeExtension.force, length: a.safeExtension.length, governing: SITE_KEYS[a.safeExtension.governing] },
     fatigue: fa && {
-      life: fa.life, cycles: cyclesValue(fa.cycles), criterion: fa.criterion, min_force: fa.minForce, max_force: fa.maxForce,
-      body: siteFatigueJson(fa.body), loop_bending: siteFatigueJson(fa.loopBending), loop_torsion: siteFatigueJson(fa.loopTorsion),
-      body_yield_safety_factor: orNull(fa.bodyYieldSafetyFactor), governing: SITE_KEYS[fa.governing],
+      life: fa.life,
+      cycles: cyclesValue(fa.cycles),
+      criterion: fa.criterion,
+      min_force: fa.minForce,
+      max_force: fa.maxForce,
+      body: siteFatigueJson(fa.body),
+      loop_bending: siteFatigueJson(fa.loopBending),
+      loop_torsion: siteFatigueJson(fa.loopTorsion),
+      body_yield_safety_factor: orNull(fa.bodyYieldSafetyFactor),
+      governing: SITE_KEYS[fa.governing],
     },
     natural_frequency: a.surge.frequency,
   };
@@ -93,7 +168,11 @@ export function extensionAnalysisJson(c: ExtensionCase, a: ExtensionAnalysis): R
   };
 }
 
-const positionWords = { inside: 'inside the preferred range', above: 'ABOVE the preferred range (hard to wind)', below: 'below the preferred range (hard to hold to tolerance)' } as const;
+const positionWords = {
+  inside: 'inside the preferred range',
+  above: 'ABOVE the preferred range (hard to wind)',
+  below: 'below the preferred range (hard to hold to tolerance)',
+} as const;
 
 /** The lines that show one analysed spring (shared by `analyze` and the chosen spring of `design`). */
 export function extensionAnalysisLines(a: ExtensionAnalysis, service: ExtensionService, correction: string, system: UnitSystem): string[] {
@@ -103,33 +182,49 @@ export function extensionAnalysisLines(a: ExtensionAnalysis, service: ExtensionS
   const S = (v: number) => formatQuantity(v, 'stress', system);
   const out: string[] = [];
   out.push('Geometry (lengths inside the loops)');
-  out.push(table([
-    ['wire diameter d', L(g.wireDiameter), 'mean diameter D', L(g.meanDiameter)],
-    ['outer diameter', L(g.outerDiameter), 'inner diameter', L(g.innerDiameter)],
-    ['spring index C', sig(g.springIndex), 'body stress factor', `${sig(a.factors.body)} (${correction})`],
-    ['body coils Nb', sig(g.bodyCoils), 'active coils Na = Nb + G/E', sig(g.activeCoils)],
-    ['body length (Nb + 1) d', L(g.bodyLength), 'free length L0', L(g.freeLength)],
-    [`${g.loop} loops: height each`, L(g.loopHeight), 'loop radius r1', `${L(g.loopRadius)} (C1 = ${sig(g.loopIndex, 3)}, (K)A = ${sig(a.factors.loopBending)})`],
-    ['bend radius r2', `${L(g.bendRadius)} (C2 = ${sig(g.bendIndex, 3)}, (K)B = ${sig(a.factors.loopTorsion)})`, 'wire length', L(g.wireLength)],
-    ['rate k', formatQuantity(a.rate, 'rate', system), 'mass', formatQuantity(g.mass, 'mass', system)],
-    ['natural frequency', `${sig(a.surge.frequency)} Hz (both ends fixed)`, '', ''],
-  ]));
+  out.push(
+    table([
+      ['wire diameter d', L(g.wireDiameter), 'mean diameter D', L(g.meanDiameter)],
+      ['outer diameter', L(g.outerDiameter), 'inner diameter', L(g.innerDiameter)],
+      ['spring index C', sig(g.springIndex), 'body stress factor', `${sig(a.factors.body)} (${correction})`],
+      ['body coils Nb', sig(g.bodyCoils), 'active coils Na = Nb + G/E', sig(g.activeCoils)],
+      ['body length (Nb + 1) d', L(g.bodyLength), 'free length L0', L(g.freeLength)],
+      [
+        `${g.loop} loops: height each`,
+        L(g.loopHeight),
+        'loop radius r1',
+        `${L(g.loopRadius)} (C1 = ${sig(g.loopIndex, 3)}, (K)A = ${sig(a.factors.loopBending)})`,
+      ],
+      ['bend radius r2', `${L(g.bendRadius)} (C2 = ${sig(g.bendIndex, 3)}, (K)B = ${sig(a.factors.loopTorsion)})`, 'wire length', L(g.wireLength)],
+      ['rate k', formatQuantity(a.rate, 'rate', system), 'mass', formatQuantity(g.mass, 'mass', system)],
+      ['natural frequency', `${sig(a.surge.frequency)} Hz (both ends fixed)`, '', ''],
+    ]),
+  );
   out.push('');
   const it = a.initialTension;
   out.push('Initial tension');
-  out.push(table([
-    ['initial tension Fi', F(it.force), 'its stress tau_i', S(it.stress)],
-    ['preferred range at this index', `${S(it.band.low)} to ${S(it.band.high)}`, 'position', `${positionWords[it.position]}${Number.isFinite(bandFraction(a)) ? `, ${sig(bandFraction(a) * 100, 3)}% of the way up` : ''}`],
-  ]));
+  out.push(
+    table([
+      ['initial tension Fi', F(it.force), 'its stress tau_i', S(it.stress)],
+      [
+        'preferred range at this index',
+        `${S(it.band.low)} to ${S(it.band.high)}`,
+        'position',
+        `${positionWords[it.position]}${Number.isFinite(bandFraction(a)) ? `, ${sig(bandFraction(a) * 100, 3)}% of the way up` : ''}`,
+      ],
+    ]),
+  );
   out.push('');
   const m = a.material;
   out.push('Material at this diameter');
-  out.push(table([
-    ['tensile strength Sut', S(m.figures.tensileStrength), 'ultimate shear Ssu', S(m.ultimateShear)],
-    ['allowable, body torsion', S(m.allowables.bodyTorsion), 'shear modulus G', S(m.figures.shearModulus)],
-    ['allowable, loop bending (A)', S(m.allowables.loopBending), 'elastic modulus E', S(m.figures.elasticModulus)],
-    ['allowable, loop torsion (B)', S(m.allowables.loopTorsion), 'max temperature', formatQuantity(m.figures.maxTemperature, 'temperature', system)],
-  ]));
+  out.push(
+    table([
+      ['tensile strength Sut', S(m.figures.tensileStrength), 'ultimate shear Ssu', S(m.ultimateShear)],
+      ['allowable, body torsion', S(m.allowables.bodyTorsion), 'shear modulus G', S(m.figures.shearModulus)],
+      ['allowable, loop bending (A)', S(m.allowables.loopBending), 'elastic modulus E', S(m.figures.elasticModulus)],
+      ['allowable, loop torsion (B)', S(m.allowables.loopTorsion), 'max temperature', formatQuantity(m.figures.maxTemperature, 'temperature', system)],
+    ]),
+  );
   out.push(`  allowables: ${m.allowableSource}`);
   out.push('');
   out.push('Working points');
@@ -137,21 +232,36 @@ export function extensionAnalysisLines(a: ExtensionAnalysis, service: ExtensionS
   // At the free length the spring already carries its initial tension.
   const per = stressPerNewton(g.wireDiameter, g.meanDiameter, a.factors.body, a.factors.loopBending, a.factors.loopTorsion);
   rows.push(['free', L(g.freeLength), L(0), F(it.force), S(per.body * it.force), S(per.loopBending * it.force), S(per.loopTorsion * it.force)]);
-  a.points.forEach((p, i) => rows.push([`point ${i + 1}`, L(p.length), L(p.extension), F(p.force), S(p.bodyStress), S(p.loopBendingStress), S(p.loopTorsionStress)]));
+  a.points.forEach((p, i) =>
+    rows.push([`point ${i + 1}`, L(p.length), L(p.extension), F(p.force), S(p.bodyStress), S(p.loopBendingStress), S(p.loopTorsionStress)]),
+  );
   out.push(table(rows));
   if (a.points.length) {
     const s = a.staticSafety;
-    out.push(`  static safety factors at the longest length: body ${sig(s.body, 3)}, loop bending ${sig(s.loopBending, 3)}, loop torsion ${sig(s.loopTorsion, 3)} (${siteWords(s.governing)} governs)`);
+    out.push(
+      `  static safety factors at the longest length: body ${sig(s.body, 3)}, loop bending ${sig(s.loopBending, 3)}, loop torsion ${sig(s.loopTorsion, 3)} (${siteWords(s.governing)} governs)`,
+    );
   }
-  out.push(`  largest pull before a set: ${F(a.safeExtension.force)} at ${L(a.safeExtension.length)} (${siteWords(a.safeExtension.governing)} reaches its allowable first)`);
+  out.push(
+    `  largest pull before a set: ${F(a.safeExtension.force)} at ${L(a.safeExtension.length)} (${siteWords(a.safeExtension.governing)} reaches its allowable first)`,
+  );
   out.push('');
   const fa = a.fatigue;
   if (fa) {
-    out.push(`Fatigue (${fa.life === 'infinite' ? 'infinite life' : `${sig(fa.cycles, 3)} cycles`}, ${fa.criterion}; load line from the initial-tension stress; body: ${enduranceSourceLabel(fa.body.enduranceSource, service.peened)})`);
+    out.push(
+      `Fatigue (${fa.life === 'infinite' ? 'infinite life' : `${sig(fa.cycles, 3)} cycles`}, ${fa.criterion}; load line from the initial-tension stress; body: ${enduranceSourceLabel(fa.body.enduranceSource, service.peened)})`,
+    );
     const fr: string[][] = [['site', 'initial stress', 'alternating', 'mean', 'alternating strength', 'safety factor']];
     for (const site of EXTENSION_SITES) {
       const x = fa[site];
-      fr.push([SITE_SHORT[site], S(x.initialStress), S(x.alternatingStress), S(x.meanStress), S(x.alternatingStrength), Number.isFinite(x.safetyFactor) ? sig(x.safetyFactor, 3) : 'n/a (no alternation)']);
+      fr.push([
+        SITE_SHORT[site],
+        S(x.initialStress),
+        S(x.alternatingStress),
+        S(x.meanStress),
+        S(x.alternatingStrength),
+        Number.isFinite(x.safetyFactor) ? sig(x.safetyFactor, 3) : 'n/a (no alternation)',
+      ]);
     }
     out.push(table(fr));
     out.push(`  ${siteWords(fa.governing)} governs; body yield along the load line: safety factor ${sig(fa.bodyYieldSafetyFactor, 3)}`);
@@ -187,7 +297,9 @@ export function extensionCandidateRecord(c: ExtensionCandidate): Record<string, 
   const a = c.analysis;
   const g = a.geometry;
   const checks: Record<string, number> = {};
-  EXTENSION_CHECKS.forEach((name, i) => { if (c.checks[i] !== -1) checks[name] = c.checks[i]; });
+  EXTENSION_CHECKS.forEach((name, i) => {
+    if (c.checks[i] !== -1) checks[name] = c.checks[i];
+  });
   const fa = a.fatigue;
   return {
     material: c.item.choice.material.id,
@@ -206,16 +318,37 @@ export function extensionCandidateRecord(c: ExtensionCandidate): Record<string, 
     bend_radius: g.bendRadius,
     initial_tension: a.initialTension.force,
     initial_tension_stress: a.initialTension.stress,
-    initial_tension_band: { low: a.initialTension.band.low, high: a.initialTension.band.high, position: a.initialTension.position, fraction: orNull(bandFraction(a)) },
+    initial_tension_band: {
+      low: a.initialTension.band.low,
+      high: a.initialTension.band.high,
+      position: a.initialTension.position,
+      fraction: orNull(bandFraction(a)),
+    },
     rate: a.rate,
     mass: g.mass,
     wire_volume: g.wireVolume,
     relative_cost: g.mass * c.item.choice.material.relativeCost.value,
-    points: a.points.map((p) => ({ length: p.length, force: p.force, body_stress: p.bodyStress, loop_bending_stress: p.loopBendingStress, loop_torsion_stress: p.loopTorsionStress })),
+    points: a.points.map((p) => ({
+      length: p.length,
+      force: p.force,
+      body_stress: p.bodyStress,
+      loop_bending_stress: p.loopBendingStress,
+      loop_torsion_stress: p.loopTorsionStress,
+    })),
     tensile_strength: a.material.figures.tensileStrength,
-    allowable_stress: { body_torsion: a.material.allowables.bodyTorsion, loop_bending: a.material.allowables.loopBending, loop_torsion: a.material.allowables.loopTorsion },
-    static_safety_factors: { body: orNull(a.staticSafety.body), loop_bending: orNull(a.staticSafety.loopBending), loop_torsion: orNull(a.staticSafety.loopTorsion) },
-    fatigue_safety_factors: fa ? { body: orNull(fa.body.safetyFactor), loop_bending: orNull(fa.loopBending.safetyFactor), loop_torsion: orNull(fa.loopTorsion.safetyFactor) } : null,
+    allowable_stress: {
+      body_torsion: a.material.allowables.bodyTorsion,
+      loop_bending: a.material.allowables.loopBending,
+      loop_torsion: a.material.allowables.loopTorsion,
+    },
+    static_safety_factors: {
+      body: orNull(a.staticSafety.body),
+      loop_bending: orNull(a.staticSafety.loopBending),
+      loop_torsion: orNull(a.staticSafety.loopTorsion),
+    },
+    fatigue_safety_factors: fa
+      ? { body: orNull(fa.body.safetyFactor), loop_bending: orNull(fa.loopBending.safetyFactor), loop_torsion: orNull(fa.loopTorsion.safetyFactor) }
+      : null,
     static_safety_factor: orNull(staticSafety(a)),
     fatigue_safety_factor: fatigueSafety(a),
     natural_frequency: a.surge.frequency,
@@ -226,13 +359,31 @@ export function extensionCandidateRecord(c: ExtensionCandidate): Record<string, 
 
 export function extensionRequirementsRecord(req: ExtensionRequirements): Record<string, unknown> {
   return {
-    kind: 'extension', materials: req.materials.map((m) => m.material.id), loop: req.loop.id, loop_length: req.loopLength ?? null, bend_index: req.bendIndex,
-    working_force: req.workingForce, working_length: req.workingLength, operating_length: req.operatingLength ?? null,
-    operating_force: req.operatingForce ?? null, load_tolerance: req.loadTolerance,
-    max_outer_diameter: req.maxOuterDiameter ?? null, max_free_length: req.maxFreeLength ?? null, max_extended_length: req.maxExtendedLength ?? null,
-    cycles: cyclesValue(req.cycles), wire_sizes: req.wireSizesLabel, body_coils: req.bodyCoils, coil_step: req.coilStep, index: req.index,
-    initial_tension_range: req.initialTensionRange, safety: req.safety, peened: req.peened, fatigue_criterion: req.criterion, stress_factor: req.correction,
-    rank: req.rank, best_per_wire: req.bestPerWire,
+    kind: 'extension',
+    materials: req.materials.map((m) => m.material.id),
+    loop: req.loop.id,
+    loop_length: req.loopLength ?? null,
+    bend_index: req.bendIndex,
+    working_force: req.workingForce,
+    working_length: req.workingLength,
+    operating_length: req.operatingLength ?? null,
+    operating_force: req.operatingForce ?? null,
+    load_tolerance: req.loadTolerance,
+    max_outer_diameter: req.maxOuterDiameter ?? null,
+    max_free_length: req.maxFreeLength ?? null,
+    max_extended_length: req.maxExtendedLength ?? null,
+    cycles: cyclesValue(req.cycles),
+    wire_sizes: req.wireSizesLabel,
+    body_coils: req.bodyCoils,
+    coil_step: req.coilStep,
+    index: req.index,
+    initial_tension_range: req.initialTensionRange,
+    safety: req.safety,
+    peened: req.peened,
+    fatigue_criterion: req.criterion,
+    stress_factor: req.correction,
+    rank: req.rank,
+    best_per_wire: req.bestPerWire,
   };
 }
 
@@ -252,13 +403,16 @@ export function extensionCountsRecord(run: ExtensionDesignRun): Record<string, u
 /** The check that cut the most combinations of an infeasible run, in a few words. */
 export function extensionLimitingText(run: ExtensionDesignRun): string {
   let best: string | null = null;
-  for (const c of reportedExtensionChecks(run.req)) if ((run.result.cutBy[c] ?? 0) > 0 && (best === null || run.result.cutBy[c] > run.result.cutBy[best])) best = c;
+  for (const c of reportedExtensionChecks(run.req))
+    if ((run.result.cutBy[c] ?? 0) > 0 && (best === null || run.result.cutBy[c] > run.result.cutBy[best])) best = c;
   return best ? `${best}: ${EXTENSION_CHECK_LABELS[best as keyof typeof EXTENSION_CHECK_LABELS]}` : 'no wire stock fits';
 }
 
 function failingChecks(c: ExtensionCandidate): Record<string, number> {
   const out: Record<string, number> = {};
-  EXTENSION_CHECKS.forEach((name, i) => { if (c.checks[i] > 1e-9) out[name] = c.checks[i]; });
+  EXTENSION_CHECKS.forEach((name, i) => {
+    if (c.checks[i] > 1e-9) out[name] = c.checks[i];
+  });
   return out;
 }
 
@@ -295,15 +449,28 @@ export function extensionRelaxLines(run: ExtensionDesignRun): string[] {
   if (run.document === undefined) return [`Limiting check: ${extensionLimitingText(run)}.`];
   const a = extensionAdviceFor(run);
   if (!a.changes.length && a.pair) {
-    return [`Limiting check: ${extensionLimitingText(run)}. No single change of a limit or setting admits a spring; these two together do (run together; neither alone does; values in the file's units):`,
-      ...a.pair.map((c) => `  - ${describeExtensionChange(c, run.req.system)}`)];
+    return [
+      `Limiting check: ${extensionLimitingText(run)}. No single change of a limit or setting admits a spring; these two together do (run together; neither alone does; values in the file's units):`,
+      ...a.pair.map((c) => `  - ${describeExtensionChange(c, run.req.system)}`),
+    ];
   }
-  if (!a.changes.length) return [`Limiting check: ${extensionLimitingText(run)}. No single change of a limit or setting tried, and no pair of them (${a.runs} runs), admits a spring: reconsider the loads, the stroke or the space.`];
-  return [`Limiting check: ${extensionLimitingText(run)}. The smallest single changes that admit a spring (each was run; values in the file's units):`,
-    ...a.changes.map((c) => `  - ${describeExtensionChange(c, run.req.system)}`)];
+  if (!a.changes.length)
+    return [
+      `Limiting check: ${extensionLimitingText(run)}. No single change of a limit or setting tried, and no pair of them (${a.runs} runs), admits a spring: reconsider the loads, the stroke or the space.`,
+    ];
+  return [
+    `Limiting check: ${extensionLimitingText(run)}. The smallest single changes that admit a spring (each was run; values in the file's units):`,
+    ...a.changes.map((c) => `  - ${describeExtensionChange(c, run.req.system)}`),
+  ];
 }
 
-const adviceRecord = (c: ExtensionRelaxChange, system: UnitSystem) => ({ path: c.path, from: c.from, to: c.to, set: c.set, suggestion: describeExtensionChange(c, system) });
+const adviceRecord = (c: ExtensionRelaxChange, system: UnitSystem) => ({
+  path: c.path,
+  from: c.from,
+  to: c.to,
+  set: c.set,
+  suggestion: describeExtensionChange(c, system),
+});
 
 // Wall-clock figures break byte-for-byte reproducibility, so they appear only when asked for (--timing).
 export function extensionDesignJson(run: ExtensionDesignRun, showTiming = false): Record<string, unknown> {
@@ -315,15 +482,21 @@ export function extensionDesignJson(run: ExtensionDesignRun, showTiming = false)
     ...extensionCountsRecord(run),
     ...(showTiming ? { search_ms: run.searchMs } : {}),
     candidates: run.candidates.map(extensionCandidateRecord),
-    ...(run.candidates.length === 0 ? {
-      infeasible: {
-        limiting_check: extensionLimitingText(run),
-        relax: run.document === undefined ? null : extensionAdviceFor(run).changes.map((c) => adviceRecord(c, run.req.system)),
-        relax_pair: run.document === undefined ? null : extensionAdviceFor(run).pair?.map((c) => adviceRecord(c, run.req.system)) ?? null,
-        relax_runs: run.document === undefined ? 0 : extensionAdviceFor(run).runs,
-        nearest_misses: misses.map((c, i) => ({ ...extensionCandidateRecord(c), violation: run.result.nearestMisses[i].violation, failing_checks: failingChecks(c) })),
-      },
-    } : {}),
+    ...(run.candidates.length === 0
+      ? {
+          infeasible: {
+            limiting_check: extensionLimitingText(run),
+            relax: run.document === undefined ? null : extensionAdviceFor(run).changes.map((c) => adviceRecord(c, run.req.system)),
+            relax_pair: run.document === undefined ? null : (extensionAdviceFor(run).pair?.map((c) => adviceRecord(c, run.req.system)) ?? null),
+            relax_runs: run.document === undefined ? 0 : extensionAdviceFor(run).runs,
+            nearest_misses: misses.map((c, i) => ({
+              ...extensionCandidateRecord(c),
+              violation: run.result.nearestMisses[i].violation,
+              failing_checks: failingChecks(c),
+            })),
+          },
+        }
+      : {}),
   };
 }
 
@@ -336,9 +509,15 @@ export function extensionCandidateGrid(cands: ExtensionCandidate[], system: Unit
 export function extensionCountsText(run: ExtensionDesignRun, showTiming = false): string {
   const r = run.result;
   const lines: string[] = [];
-  lines.push(`Searched ${r.cells} combinations of material, wire and body coil count (${run.problem.stock.length} wire stock items) with the ${r.strategy} strategy: ${r.evaluations} candidate evaluations${showTiming ? ` in ${sig(run.searchMs, 3)} ms` : ''}.`);
-  lines.push(`Feasible combinations: ${r.feasibleCells}${r.prunedCells ? `; ${r.prunedCells} skipped because their lightest possible spring ${run.req.bestPerWire ? 'could not beat the best found for its wire' : `could not enter the top ${run.req.top}`}` : ''}.`);
-  const cut = reportedExtensionChecks(run.req).filter((c) => (r.cutBy[c] ?? 0) > 0).map((c) => [c, String(r.cutBy[c]), EXTENSION_CHECK_LABELS[c as keyof typeof EXTENSION_CHECK_LABELS]]);
+  lines.push(
+    `Searched ${r.cells} combinations of material, wire and body coil count (${run.problem.stock.length} wire stock items) with the ${r.strategy} strategy: ${r.evaluations} candidate evaluations${showTiming ? ` in ${sig(run.searchMs, 3)} ms` : ''}.`,
+  );
+  lines.push(
+    `Feasible combinations: ${r.feasibleCells}${r.prunedCells ? `; ${r.prunedCells} skipped because their lightest possible spring ${run.req.bestPerWire ? 'could not beat the best found for its wire' : `could not enter the top ${run.req.top}`}` : ''}.`,
+  );
+  const cut = reportedExtensionChecks(run.req)
+    .filter((c) => (r.cutBy[c] ?? 0) > 0)
+    .map((c) => [c, String(r.cutBy[c]), EXTENSION_CHECK_LABELS[c as keyof typeof EXTENSION_CHECK_LABELS]]);
   if (cut.length) {
     lines.push('Combinations cut, by the check that failed worst:');
     lines.push(table(cut.sort((a, b) => Number(b[1]) - Number(a[1]))));
@@ -349,9 +528,13 @@ export function extensionCountsText(run: ExtensionDesignRun, showTiming = false)
 export function extensionDesignHeading(req: ExtensionRequirements, system: UnitSystem): string {
   const F = (v: number) => formatQuantity(v, 'force', system);
   const L = (v: number) => formatQuantity(v, 'length', system);
-  return `Extension spring design: ${F(req.workingForce)} at ${L(req.workingLength)} inside the loops` +
-    (req.operatingLength !== undefined ? `, stretched to ${L(req.operatingLength)}${req.operatingForce !== undefined ? ` at ${F(req.operatingForce)}` : ''}` : '') +
-    `; ${req.loop.id} loops; ranked by ${req.rank.replace('_', ' ')}${req.bestPerWire ? ', the best spring of each material and wire size' : ''}`;
+  return (
+    `Extension spring design: ${F(req.workingForce)} at ${L(req.workingLength)} inside the loops` +
+    (req.operatingLength !== undefined
+      ? `, stretched to ${L(req.operatingLength)}${req.operatingForce !== undefined ? ` at ${F(req.operatingForce)}` : ''}`
+      : '') +
+    `; ${req.loop.id} loops; ranked by ${req.rank.replace('_', ' ')}${req.bestPerWire ? ', the best spring of each material and wire size' : ''}`
+  );
 }
 
 export function extensionDesignText(run: ExtensionDesignRun, system: UnitSystem, showTiming = false): string {
@@ -368,7 +551,11 @@ export function extensionDesignText(run: ExtensionDesignRun, system: UnitSystem,
     out.push('');
     const best = run.candidates[0];
     out.push('The best spring');
-    out.push(...extensionAnalysisLines(best.analysis, run.problem.service(), run.req.correction, system).flatMap((l) => l.split('\n')).map((l) => (l ? `  ${l}` : l)));
+    out.push(
+      ...extensionAnalysisLines(best.analysis, run.problem.service(), run.req.correction, system)
+        .flatMap((l) => l.split('\n'))
+        .map((l) => (l ? `  ${l}` : l)),
+    );
     const warn = extensionWarnings(best.analysis, run.problem.service(), quantityWriter(system));
     if (warn.length) {
       out.push('');
@@ -386,7 +573,9 @@ export function extensionDesignText(run: ExtensionDesignRun, system: UnitSystem,
       const t = extensionCandidateGrid(misses, system);
       out.push(table([t.header, ...t.rows]));
       misses.forEach((c, i) => {
-        const f = Object.entries(failingChecks(c)).map(([k, v]) => `${k} by ${sig(v * 100, 3)}%`).join(', ');
+        const f = Object.entries(failingChecks(c))
+          .map(([k, v]) => `${k} by ${sig(v * 100, 3)}%`)
+          .join(', ');
         out.push(`  #${i + 1} fails: ${f}`);
       });
     }

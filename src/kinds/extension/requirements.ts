@@ -69,7 +69,11 @@ export const EXTENSION_DEFAULTS = {
   initialTensionRange: 'preferred' as InitialTensionRange,
 };
 
-export function readExtensionRequirements(raw: unknown, catalog: Catalog, ext: ExtensionCatalog = loadExtensionCatalog(catalog.materials)): ExtensionRequirements {
+export function readExtensionRequirements(
+  raw: unknown,
+  catalog: Catalog,
+  ext: ExtensionCatalog = loadExtensionCatalog(catalog.materials),
+): ExtensionRequirements {
   const f = Fields.document(raw);
   readKind(f, 'extension');
   const system = f.system;
@@ -80,7 +84,8 @@ export function readExtensionRequirements(raw: unknown, catalog: Catalog, ext: E
   const loop = loopRule(ext, loopId);
   if (!loop) throw new InputError('loop', `one of ${ext.loopTypes.map((t) => t.id).join(' | ')}`, f.get('loop'));
   const loopLength = f.quantity('loop_length', 'length', { positive: true });
-  if (loop.needsLength && loopLength === undefined) throw new InputError('loop_length', `the height of each ${loop.id} loop from the end of the body to the inside of the loop (the field is missing)`);
+  if (loop.needsLength && loopLength === undefined)
+    throw new InputError('loop_length', `the height of each ${loop.id} loop from the end of the body to the inside of the loop (the field is missing)`);
   const bendIndex = f.number('bend_index', { min: 1.5, max: 50 }) ?? ext.bendIndex.value;
 
   const load = Fields.of(f.require('load', 'the pull at the working length: { force, length }'), 'load', system);
@@ -89,9 +94,12 @@ export function readExtensionRequirements(raw: unknown, catalog: Catalog, ext: E
   load.rejectUnknown();
   const operatingLength = f.quantity('operating_length', 'length', { positive: true });
   const operatingForce = f.quantity('operating_force', 'force', { positive: true });
-  if (operatingLength !== undefined && operatingLength <= workingLength) throw new InputError('operating_length', 'a length longer than the working length (the end of the pull)', f.get('operating_length'));
-  if (operatingForce !== undefined && operatingLength === undefined) throw new InputError('operating_length', 'a value: operating_force needs the length it acts at (the field is missing)');
-  if (operatingForce !== undefined && operatingForce <= workingForce) throw new InputError('operating_force', 'a force above the working force (the spring is stretched further)', f.get('operating_force'));
+  if (operatingLength !== undefined && operatingLength <= workingLength)
+    throw new InputError('operating_length', 'a length longer than the working length (the end of the pull)', f.get('operating_length'));
+  if (operatingForce !== undefined && operatingLength === undefined)
+    throw new InputError('operating_length', 'a value: operating_force needs the length it acts at (the field is missing)');
+  if (operatingForce !== undefined && operatingForce <= workingForce)
+    throw new InputError('operating_force', 'a force above the working force (the spring is stretched further)', f.get('operating_force'));
 
   const envRaw = f.get('envelope');
   const env = envRaw === undefined || envRaw === null ? Fields.of({}, 'envelope', system) : Fields.of(envRaw, 'envelope', system);
@@ -100,7 +108,12 @@ export function readExtensionRequirements(raw: unknown, catalog: Catalog, ext: E
   const maxExtendedLength = env.quantity('max_extended_length', 'length', { positive: true });
   env.rejectUnknown();
   const longest = operatingLength ?? workingLength;
-  if (maxExtendedLength !== undefined && maxExtendedLength < longest) throw new InputError('envelope.max_extended_length', `a length at or beyond the longest working length ${formatQuantity(longest, 'length', system)}`, env.get('max_extended_length'));
+  if (maxExtendedLength !== undefined && maxExtendedLength < longest)
+    throw new InputError(
+      'envelope.max_extended_length',
+      `a length at or beyond the longest working length ${formatQuantity(longest, 'length', system)}`,
+      env.get('max_extended_length'),
+    );
 
   const bodyCoils = readRange(f, 'body_coils', EXTENSION_DEFAULTS.bodyCoils, { positive: true });
   const coilStep = f.number('coil_step', { positive: true }) ?? EXTENSION_DEFAULTS.coilStep;
@@ -110,11 +123,26 @@ export function readExtensionRequirements(raw: unknown, catalog: Catalog, ext: E
 
   const safety = readSafety(f, DEFAULTS.safety);
   const req: ExtensionRequirements = {
-    kind: 'extension', system, materials, wireSizes, wireSizesLabel: label, loop, loopLength, bendIndex,
-    workingForce, workingLength, operatingLength, operatingForce,
+    kind: 'extension',
+    system,
+    materials,
+    wireSizes,
+    wireSizesLabel: label,
+    loop,
+    loopLength,
+    bendIndex,
+    workingForce,
+    workingLength,
+    operatingLength,
+    operatingForce,
     loadTolerance: f.fraction('load_tolerance') ?? DEFAULTS.loadTolerance,
     workingTolerance: f.fraction('working_tolerance'),
-    maxOuterDiameter, maxFreeLength, maxExtendedLength, bodyCoils, coilStep, index,
+    maxOuterDiameter,
+    maxFreeLength,
+    maxExtendedLength,
+    bodyCoils,
+    coilStep,
+    index,
     initialTensionRange: (f.choice('initial_tension_range', INITIAL_TENSION_RANGES) ?? EXTENSION_DEFAULTS.initialTensionRange) as InitialTensionRange,
     cycles: parseCycles(f.get('cycles'), 'cycles'),
     peened: f.bool('peened') ?? false,
@@ -130,7 +158,8 @@ export function readExtensionRequirements(raw: unknown, catalog: Catalog, ext: E
     diameterResolution: f.quantity('diameter_resolution', 'length', { positive: true }) ?? DEFAULTS.diameterResolution,
   };
   if (req.loadTolerance >= 1) throw new InputError('load_tolerance', 'a fraction below 1 (such as 0.1 or "10%")', f.get('load_tolerance'));
-  if (req.workingTolerance !== undefined && req.workingTolerance >= 1) throw new InputError('working_tolerance', 'a fraction below 1 (such as 0.02 or "2%")', f.get('working_tolerance'));
+  if (req.workingTolerance !== undefined && req.workingTolerance >= 1)
+    throw new InputError('working_tolerance', 'a fraction below 1 (such as 0.02 or "2%")', f.get('working_tolerance'));
   if (req.diameterResolution < 1e-4) throw new InputError('diameter_resolution', 'a scan step of at least 0.0001 mm', f.get('diameter_resolution'));
   f.get('material_map'); // a stock table's material words; read and checked by src/stock/materialMap.ts
   f.rejectUnknown();

@@ -54,14 +54,19 @@ export function readExtensionSpring(raw: unknown, catalog: Catalog, ext: Extensi
   if (!rule) throw new InputError('loop', `one of ${ext.loopTypes.map((t) => t.id).join(' | ')}`, f.get('loop'));
   const explicitLoop = f.quantity('loop_length', 'length', { positive: true });
   const L0given = f.quantity('free_length', 'length', { positive: true });
-  if (explicitLoop !== undefined && L0given !== undefined) throw new InputError('loop_length, free_length', 'only one of loop_length | free_length (the other follows from it)');
+  if (explicitLoop !== undefined && L0given !== undefined)
+    throw new InputError('loop_length, free_length', 'only one of loop_length | free_length (the other follows from it)');
   const body = bodyLength(d, Nb);
   let h: number;
   if (L0given !== undefined) {
     if (!(L0given > body)) throw new InputError('free_length', `a free length inside the loops above the body length ${q(body)}`, f.get('free_length'));
     h = (L0given - body) / 2;
   } else {
-    if (rule.needsLength && explicitLoop === undefined) throw new InputError('loop_length', `the height of each ${rule.id} loop from the end of the body to the inside of the loop (the field is missing), or free_length`);
+    if (rule.needsLength && explicitLoop === undefined)
+      throw new InputError(
+        'loop_length',
+        `the height of each ${rule.id} loop from the end of the body to the inside of the loop (the field is missing), or free_length`,
+      );
     h = loopHeight(rule, d, D, explicitLoop);
   }
   const r1 = f.quantity('loop_radius', 'length', { positive: true }) ?? D / 2;
@@ -93,7 +98,11 @@ export function readExtensionSpring(raw: unknown, catalog: Catalog, ext: Extensi
   }
   const cycles = parseCycles(f.get('cycles'), 'cycles');
   const service: ExtensionService = {
-    lengths, cycles, peened: f.bool('peened') ?? false, criterion, correction,
+    lengths,
+    cycles,
+    peened: f.bool('peened') ?? false,
+    criterion,
+    correction,
     temperature: f.quantity('temperature', 'temperature'),
     forcingFrequency: f.quantity('forcing_frequency', 'frequency', { nonNegative: true }),
     surgeMargin: f.number('surge_margin', { min: LIMITS.safetyMin, max: LIMITS.surgeMarginMax }) ?? 15,
@@ -105,8 +114,12 @@ export function readExtensionSpring(raw: unknown, catalog: Catalog, ext: Extensi
   if (r2given === undefined) notes.push(`bend_radius not given: r2 = ${q(r2)} assumed (bend index C2 = ${ext.bendIndex.value}; ${ext.bendIndex.source})`);
   if (cycles !== undefined && cycles < 1e4) notes.push(`${cycles} cycles is below 1e4: judged as static service`);
   return {
-    kind: 'extension', system, materialChoice: choice, material,
+    kind: 'extension',
+    system,
+    materialChoice: choice,
+    material,
     geometry: { wireDiameter: d, meanDiameter: D, bodyCoils: Nb, loop: rule, loopHeight: h, loopRadius: r1, bendRadius: r2, initialTension: Fi },
-    service, notes,
+    service,
+    notes,
   };
 }

@@ -100,9 +100,15 @@ export function figure(svg: string, caption: string): string {
 export const CONVENTIONS: [string, string][] = [
   ['stress correction', 'Bergstrasser K = (4C+2)/(4C-3) by default, Wahl on request (EN 13906-1 uses the Bergstrasser form)'],
   ['rate', 'k = G d^4 / (8 D^3 Na), Castigliano; optional direct-shear factor'],
-  ['tensile strength', 'Sut = A / d^m per material and diameter range (Shigley Table 10-4) or tabulated (EN 10270-1); with strength_basis: minimum the standard\'s tabulated minimum (ASTM A228 for music wire)'],
+  [
+    'tensile strength',
+    "Sut = A / d^m per material and diameter range (Shigley Table 10-4) or tabulated (EN 10270-1); with strength_basis: minimum the standard's tabulated minimum (ASTM A228 for music wire)",
+  ],
   ['static allowable', 'fraction of Sut per material class (Shigley Table 10-6), times the static safety factor'],
-  ['fatigue', 'one continuous, non-increasing life curve per material: finite-life fractions of Sut at 1e5/1e6/1e7 cycles (Associated Spring design handbook, from memory), knee at 1e7 the lower of that and Zimmerli\'s endurance for spring steels; Gerber, Goodman or Sines criterion; Ssu = 0.67 Sut'],
+  [
+    'fatigue',
+    "one continuous, non-increasing life curve per material: finite-life fractions of Sut at 1e5/1e6/1e7 cycles (Associated Spring design handbook, from memory), knee at 1e7 the lower of that and Zimmerli's endurance for spring steels; Gerber, Goodman or Sines criterion; Ssu = 0.67 Sut",
+  ],
   ['buckling', 'critical deflection after Shigley eqs. 10-10 to 10-13 with end constant alpha'],
   ['surge', 'f = 1/2 sqrt(k / m_active) (both ends on plates) or 1/4 (one end free), chosen by surge_ends, not by the buckling seating'],
   ['clash', 'solid force at least (1 + clash allowance) times the largest working force; optional EN 13906-1 coil-gap sum'],

@@ -30,7 +30,11 @@ export function ticks(a: number, b: number, count = 5): number[] {
 export function niceDomain(a: number, b: number, count = 5): [number, number] {
   let lo = Math.min(a, b);
   let hi = Math.max(a, b);
-  if (hi === lo) { const pad = Math.abs(lo) > 0 ? Math.abs(lo) * 0.1 : 1; lo -= pad; hi += pad; }
+  if (hi === lo) {
+    const pad = Math.abs(lo) > 0 ? Math.abs(lo) * 0.1 : 1;
+    lo -= pad;
+    hi += pad;
+  }
   const step = tickStep(lo, hi, count);
   return [Math.floor(lo / step) * step, Math.ceil(hi / step) * step];
 }

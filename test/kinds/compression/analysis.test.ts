@@ -7,12 +7,26 @@ import { SEATINGS } from '../../../src/kinds/compression/buckling.js';
 import { sanitize } from '../../../src/report/json.js';
 
 const steel: MaterialFigures = {
-  tensileStrength: 1800, allowableStress: 810, shearModulus: 81500, elasticModulus: 206000, density: 7850,
-  zimmerli: true, finiteLife: { unpeened: [0.36, 0.33, 0.3], peened: [0.42, 0.39, 0.36] }, maxTemperature: 120,
+  tensileStrength: 1800,
+  allowableStress: 810,
+  shearModulus: 81500,
+  elasticModulus: 206000,
+  density: 7850,
+  zimmerli: true,
+  finiteLife: { unpeened: [0.36, 0.33, 0.3], peened: [0.42, 0.39, 0.36] },
+  maxTemperature: 120,
 };
 const service = (lengths: number[], extra: Partial<ServiceConditions> = {}): ServiceConditions => ({
-  lengths, peened: false, criterion: 'gerber', correction: 'bergstrasser', directShear: false, seating: 'fixed-fixed',
-  clashAllowance: 0.15, gapRule: false, surgeMargin: 15, ...extra,
+  lengths,
+  peened: false,
+  criterion: 'gerber',
+  correction: 'bergstrasser',
+  directShear: false,
+  seating: 'fixed-fixed',
+  clashAllowance: 0.15,
+  gapRule: false,
+  surgeMargin: 15,
+  ...extra,
 });
 
 const springArb = fc.record({
@@ -30,42 +44,54 @@ const springArb = fc.record({
 
 describe('single-spring analysis invariants (property)', () => {
   it('every output is finite or an explicit "not applicable" for every valid spring', () => {
-    fc.assert(fc.property(springArb, (s) => {
-      const Ls = solidLength(s.d, s.na + inactiveCoils(s.ends), s.ends);
-      const L0 = Ls * s.open + s.d;
-      const lengths = [Ls + (L0 - Ls) * s.a, Ls + (L0 - Ls) * s.b];
-      const a = analyzeSpring({ wireDiameter: s.d, meanDiameter: s.c * s.d, activeCoils: s.na, ends: s.ends, freeLength: L0 }, steel,
-        service(lengths, { cycles: s.cycles, criterion: s.criterion, seating: s.seating, forcingFrequency: 10 }));
-      const text = JSON.stringify(sanitize(a));
-      expect(text).not.toMatch(/NaN|Infinity/);
-      for (const v of [a.rate, a.geometry.mass, a.geometry.solidLength, a.solid.force, a.solid.stress, a.surge.relevant, a.buckling.stableFreeLengthLimit]) {
-        expect(Number.isFinite(v)).toBe(true);
-      }
-      expect(a.buckling.absolutelyStable || Number.isFinite(a.buckling.criticalDeflection)).toBe(true);
-    }));
+    fc.assert(
+      fc.property(springArb, (s) => {
+        const Ls = solidLength(s.d, s.na + inactiveCoils(s.ends), s.ends);
+        const L0 = Ls * s.open + s.d;
+        const lengths = [Ls + (L0 - Ls) * s.a, Ls + (L0 - Ls) * s.b];
+        const a = analyzeSpring(
+          { wireDiameter: s.d, meanDiameter: s.c * s.d, activeCoils: s.na, ends: s.ends, freeLength: L0 },
+          steel,
+          service(lengths, { cycles: s.cycles, criterion: s.criterion, seating: s.seating, forcingFrequency: 10 }),
+        );
+        const text = JSON.stringify(sanitize(a));
+        expect(text).not.toMatch(/NaN|Infinity/);
+        for (const v of [a.rate, a.geometry.mass, a.geometry.solidLength, a.solid.force, a.solid.stress, a.surge.relevant, a.buckling.stableFreeLengthLimit]) {
+          expect(Number.isFinite(v)).toBe(true);
+        }
+        expect(a.buckling.absolutelyStable || Number.isFinite(a.buckling.criticalDeflection)).toBe(true);
+      }),
+    );
   });
 
   it('stress grows with force: shorter lengths mean higher stress', () => {
-    fc.assert(fc.property(springArb, (s) => {
-      const Ls = solidLength(s.d, s.na + inactiveCoils(s.ends), s.ends);
-      const L0 = Ls * s.open + s.d;
-      const lo = Math.min(s.a, s.b);
-      const hi = Math.max(s.a, s.b);
-      fc.pre(hi - lo > 1e-6);
-      const a = analyzeSpring({ wireDiameter: s.d, meanDiameter: s.c * s.d, activeCoils: s.na, ends: s.ends, freeLength: L0 }, steel,
-        service([Ls + (L0 - Ls) * hi, Ls + (L0 - Ls) * lo]));
-      expect(a.points[1].force).toBeGreaterThan(a.points[0].force);
-      expect(a.points[1].stress).toBeGreaterThan(a.points[0].stress);
-      expect(a.solid.stress).toBeGreaterThanOrEqual(a.points[1].stress);
-    }));
+    fc.assert(
+      fc.property(springArb, (s) => {
+        const Ls = solidLength(s.d, s.na + inactiveCoils(s.ends), s.ends);
+        const L0 = Ls * s.open + s.d;
+        const lo = Math.min(s.a, s.b);
+        const hi = Math.max(s.a, s.b);
+        fc.pre(hi - lo > 1e-6);
+        const a = analyzeSpring(
+          { wireDiameter: s.d, meanDiameter: s.c * s.d, activeCoils: s.na, ends: s.ends, freeLength: L0 },
+          steel,
+          service([Ls + (L0 - Ls) * hi, Ls + (L0 - Ls) * lo]),
+        );
+        expect(a.points[1].force).toBeGreaterThan(a.points[0].force);
+        expect(a.points[1].stress).toBeGreaterThan(a.points[0].stress);
+        expect(a.solid.stress).toBeGreaterThanOrEqual(a.points[1].stress);
+      }),
+    );
   });
 
   it('mass grows with the number of coils', () => {
-    fc.assert(fc.property(springArb, fc.double({ min: 0.25, max: 10, noNaN: true }), (s, extra) => {
-      const geom = (na: number) => ({ wireDiameter: s.d, meanDiameter: s.c * s.d, activeCoils: na, ends: s.ends, freeLength: 10 * s.d * (na + 3) });
-      const a = analyzeSpring(geom(s.na), steel, service([]));
-      const b = analyzeSpring(geom(s.na + extra), steel, service([]));
-      expect(b.geometry.mass).toBeGreaterThan(a.geometry.mass);
-    }));
+    fc.assert(
+      fc.property(springArb, fc.double({ min: 0.25, max: 10, noNaN: true }), (s, extra) => {
+        const geom = (na: number) => ({ wireDiameter: s.d, meanDiameter: s.c * s.d, activeCoils: na, ends: s.ends, freeLength: 10 * s.d * (na + 3) });
+        const a = analyzeSpring(geom(s.na), steel, service([]));
+        const b = analyzeSpring(geom(s.na + extra), steel, service([]));
+        expect(b.geometry.mass).toBeGreaterThan(a.geometry.mass);
+      }),
+    );
   });
 });

@@ -34,11 +34,19 @@ type ReqCase = typeof reqArb extends fc.Arbitrary<infer T> ? T : never;
 
 function requirementsDoc(r: ReqCase): Record<string, unknown> {
   const doc: Record<string, unknown> = {
-    units: 'si', material: r.material, ends: r.ends, seating: r.seating,
+    units: 'si',
+    material: r.material,
+    ends: r.ends,
+    seating: r.seating,
     load: { force: r.force, length: r.length },
     operating_length: r.length * (1 - r.stroke),
     envelope: { max_outer_diameter: r.od, max_free_length: r.length * 3 },
-    peened: r.peened, solid_safe: r.solidSafe, guided: r.guided, load_tolerance: r.tolerance, coil_step: 0.5, top: 5,
+    peened: r.peened,
+    solid_safe: r.solidSafe,
+    guided: r.guided,
+    load_tolerance: r.tolerance,
+    coil_step: 0.5,
+    top: 5,
   };
   if (r.rateFixed) doc.operating_force = r.force * r.forceRise;
   if (r.cycles !== undefined) doc.cycles = r.cycles;
@@ -48,81 +56,110 @@ function requirementsDoc(r: ReqCase): Record<string, unknown> {
 describe('spring search invariants (property)', () => {
   it('every spring the search reports re-verifies through the single-spring analysis, read from its own spring file', () => {
     let withSprings = 0;
-    fc.assert(fc.property(reqArb, (r) => {
-      const req = readRequirements(requirementsDoc(r), catalog);
-      const run = runDesign(req, { strategy: 'grid' });
-      for (const c of run.candidates) {
-        const springCase = readSpringCase(springDocument(c, req), catalog);
-        const a = analyzeSpring(springCase.geometry, springCase.figures, springCase.service);
-        const g = checkAnalysis(a, req);
-        for (let i = 0; i < g.length; i++) expect(g[i]).toBeLessThanOrEqual(1e-6);
-        expect(a.geometry.mass).toBeCloseTo(c.analysis.geometry.mass, 12);
-        // Sorted best first.
-      }
-      for (let i = 1; i < run.candidates.length; i++) expect(run.candidates[i].objectives[0]).toBeGreaterThanOrEqual(run.candidates[i - 1].objectives[0]);
-      if (run.candidates.length) withSprings++;
-    }), { numRuns: 40, seed: 7 });
+    fc.assert(
+      fc.property(reqArb, (r) => {
+        const req = readRequirements(requirementsDoc(r), catalog);
+        const run = runDesign(req, { strategy: 'grid' });
+        for (const c of run.candidates) {
+          const springCase = readSpringCase(springDocument(c, req), catalog);
+          const a = analyzeSpring(springCase.geometry, springCase.figures, springCase.service);
+          const g = checkAnalysis(a, req);
+          for (let i = 0; i < g.length; i++) expect(g[i]).toBeLessThanOrEqual(1e-6);
+          expect(a.geometry.mass).toBeCloseTo(c.analysis.geometry.mass, 12);
+          // Sorted best first.
+        }
+        for (let i = 1; i < run.candidates.length; i++) expect(run.candidates[i].objectives[0]).toBeGreaterThanOrEqual(run.candidates[i - 1].objectives[0]);
+        if (run.candidates.length) withSprings++;
+      }),
+      { numRuns: 40, seed: 7 },
+    );
     expect(withSprings).toBeGreaterThan(5);
   });
 
-  it('the LP bound is never above the grid\'s best, and the genetic search never beats the grid', () => {
-    fc.assert(fc.property(reqArb, fc.integer({ min: 1, max: 1000 }), (r, seed) => {
-      const req = readRequirements({ ...requirementsDoc(r), seed }, catalog);
-      const grid = runDesign(req, { strategy: 'grid' });
-      const ga = runDesign(req, { strategy: 'genetic', maxEvaluations: 20000 });
-      if (grid.candidates.length === 0) {
-        expect(ga.candidates).toHaveLength(0);
-        return;
-      }
-      const best = grid.candidates[0].objectives[0];
-      if (grid.lp.value !== null) expect(grid.lp.value).toBeLessThanOrEqual(best * (1 + 1e-9));
-      if (ga.candidates.length) expect(ga.candidates[0].objectives[0]).toBeGreaterThanOrEqual(best * (1 - 1e-9));
-    }), { numRuns: 25, seed: 11 });
+  it("the LP bound is never above the grid's best, and the genetic search never beats the grid", () => {
+    fc.assert(
+      fc.property(reqArb, fc.integer({ min: 1, max: 1000 }), (r, seed) => {
+        const req = readRequirements({ ...requirementsDoc(r), seed }, catalog);
+        const grid = runDesign(req, { strategy: 'grid' });
+        const ga = runDesign(req, { strategy: 'genetic', maxEvaluations: 20000 });
+        if (grid.candidates.length === 0) {
+          expect(ga.candidates).toHaveLength(0);
+          return;
+        }
+        const best = grid.candidates[0].objectives[0];
+        if (grid.lp.value !== null) expect(grid.lp.value).toBeLessThanOrEqual(best * (1 + 1e-9));
+        if (ga.candidates.length) expect(ga.candidates[0].objectives[0]).toBeGreaterThanOrEqual(best * (1 - 1e-9));
+      }),
+      { numRuns: 25, seed: 11 },
+    );
   });
 
   it('the LP bound stays below the best spring across envelopes, end-type lists, rods, surge and solid limits', () => {
     let compared = 0;
-    fc.assert(fc.property(reqArb, fc.record({
-      id: fc.option(fc.double({ min: 0.3, max: 0.8, noNaN: true })),
-      solid: fc.option(fc.double({ min: 0.3, max: 0.9, noNaN: true })),
-      forcing: fc.option(fc.double({ min: 5, max: 60, noNaN: true })),
-      allowable: fc.option(fc.double({ min: 300, max: 900, noNaN: true })),
-      ends: fc.subarray(['plain', 'plain-ground', 'squared', 'squared-ground'], { minLength: 1 }),
-      rank: fc.constantFrom('mass', 'wire_volume'),
-    }), (r, extra) => {
-      const doc = requirementsDoc(r);
-      const env = doc.envelope as Record<string, number>;
-      if (extra.id !== null) env.min_inner_diameter = r.od * extra.id * 0.5;
-      if (extra.solid !== null) env.max_solid_length = r.length * (1 - r.stroke) * extra.solid;
-      if (extra.forcing !== null) doc.forcing_frequency = extra.forcing;
-      if (extra.allowable !== null) doc.allowable_stress = extra.allowable;
-      doc.ends = extra.ends;
-      doc.rank = extra.rank;
-      const run = runDesign(readRequirements(doc, catalog), { strategy: 'grid' });
-      if (run.candidates.length && run.lp.value !== null) {
-        expect(run.lp.value).toBeLessThanOrEqual(run.candidates[0].objectives[0] * (1 + 1e-9));
-        compared++;
-      }
-      if (run.candidates.length) expect(run.lp.status).toBe('bound');
-    }), { numRuns: 60, seed: 5 });
+    fc.assert(
+      fc.property(
+        reqArb,
+        fc.record({
+          id: fc.option(fc.double({ min: 0.3, max: 0.8, noNaN: true })),
+          solid: fc.option(fc.double({ min: 0.3, max: 0.9, noNaN: true })),
+          forcing: fc.option(fc.double({ min: 5, max: 60, noNaN: true })),
+          allowable: fc.option(fc.double({ min: 300, max: 900, noNaN: true })),
+          ends: fc.subarray(['plain', 'plain-ground', 'squared', 'squared-ground'], { minLength: 1 }),
+          rank: fc.constantFrom('mass', 'wire_volume'),
+        }),
+        (r, extra) => {
+          const doc = requirementsDoc(r);
+          const env = doc.envelope as Record<string, number>;
+          if (extra.id !== null) env.min_inner_diameter = r.od * extra.id * 0.5;
+          if (extra.solid !== null) env.max_solid_length = r.length * (1 - r.stroke) * extra.solid;
+          if (extra.forcing !== null) doc.forcing_frequency = extra.forcing;
+          if (extra.allowable !== null) doc.allowable_stress = extra.allowable;
+          doc.ends = extra.ends;
+          doc.rank = extra.rank;
+          const run = runDesign(readRequirements(doc, catalog), { strategy: 'grid' });
+          if (run.candidates.length && run.lp.value !== null) {
+            expect(run.lp.value).toBeLessThanOrEqual(run.candidates[0].objectives[0] * (1 + 1e-9));
+            compared++;
+          }
+          if (run.candidates.length) expect(run.lp.status).toBe('bound');
+        },
+      ),
+      { numRuns: 60, seed: 5 },
+    );
     expect(compared).toBeGreaterThan(10);
   });
 
   it('tightening the bore never lowers the best mass', () => {
-    fc.assert(fc.property(reqArb, fc.double({ min: 0.6, max: 0.98, noNaN: true }), (r, shrink) => {
-      const wide = runDesign(readRequirements(requirementsDoc(r), catalog), { strategy: 'grid' });
-      const narrow = runDesign(readRequirements(requirementsDoc({ ...r, od: r.od * shrink }), catalog), { strategy: 'grid' });
-      if (narrow.candidates.length) {
-        expect(wide.candidates.length).toBeGreaterThan(0);
-        expect(narrow.candidates[0].objectives[0]).toBeGreaterThanOrEqual(wide.candidates[0].objectives[0] * (1 - 1e-9));
-      }
-    }), { numRuns: 20, seed: 3 });
+    fc.assert(
+      fc.property(reqArb, fc.double({ min: 0.6, max: 0.98, noNaN: true }), (r, shrink) => {
+        const wide = runDesign(readRequirements(requirementsDoc(r), catalog), { strategy: 'grid' });
+        const narrow = runDesign(readRequirements(requirementsDoc({ ...r, od: r.od * shrink }), catalog), { strategy: 'grid' });
+        if (narrow.candidates.length) {
+          expect(wide.candidates.length).toBeGreaterThan(0);
+          expect(narrow.candidates[0].objectives[0]).toBeGreaterThanOrEqual(wide.candidates[0].objectives[0] * (1 - 1e-9));
+        }
+      }),
+      { numRuns: 20, seed: 3 },
+    );
   });
 
   it('the frontier is non-dominated and every feasible spring is dominated by or on it', () => {
-    const req = readRequirements({ units: 'si', material: ['music-wire', 'stainless-302'], load: { force: 30, length: 40 }, operating_length: 30,
-      envelope: { max_outer_diameter: 22, max_free_length: 90 }, cycles: 1e6, coil_step: 0.5 }, catalog);
-    for (const [x, y] of [['mass', 'outer_diameter'], ['mass', 'fatigue_safety']] as const) {
+    const req = readRequirements(
+      {
+        units: 'si',
+        material: ['music-wire', 'stainless-302'],
+        load: { force: 30, length: 40 },
+        operating_length: 30,
+        envelope: { max_outer_diameter: 22, max_free_length: 90 },
+        cycles: 1e6,
+        coil_step: 0.5,
+      },
+      catalog,
+    );
+    for (const [x, y] of [
+      ['mass', 'outer_diameter'],
+      ['mass', 'fatigue_safety'],
+    ] as const) {
       const fr = computeFrontier(req, x, y);
       expect(fr.front.length).toBeGreaterThan(1);
       const xs = fr.cloud.map((p) => p.x);
@@ -136,9 +173,21 @@ describe('spring search invariants (property)', () => {
     }
   });
 
-  it('the two-objective genetic search finds a front that never beats the grid\'s and covers most of it', () => {
-    const req = readRequirements({ units: 'si', material: 'stainless-302', load: { force: 20, length: 35 }, operating_length: 25, operating_force: 32,
-      load_tolerance: '5%', envelope: { max_outer_diameter: 16, min_inner_diameter: 6.5, max_free_length: 60 }, cycles: 5e5, wire_sizes: 'metric' }, catalog);
+  it("the two-objective genetic search finds a front that never beats the grid's and covers most of it", () => {
+    const req = readRequirements(
+      {
+        units: 'si',
+        material: 'stainless-302',
+        load: { force: 20, length: 35 },
+        operating_length: 25,
+        operating_force: 32,
+        load_tolerance: '5%',
+        envelope: { max_outer_diameter: 16, min_inner_diameter: 6.5, max_free_length: 60 },
+        cycles: 5e5,
+        wire_sizes: 'metric',
+      },
+      catalog,
+    );
     const grid = computeFrontier(req, 'mass', 'outer_diameter', undefined, 'grid');
     const ga = computeFrontier(req, 'mass', 'outer_diameter', undefined, 'genetic');
     expect(ga.strategy).toBe('genetic');

@@ -15,14 +15,18 @@ import { formatQuantity, sig } from '../../../src/units/format.js';
 
 const catalog = loadCatalog();
 // A long return spring on pivoted ends with a long stroke: it buckles unless guided (guided: true).
-const slender = (extra = '') => readRequirements(parse(`units: si
+const slender = (extra = '') =>
+  readRequirements(
+    parse(`units: si
 material: music-wire
 seating: pivoted-pivoted
 load: { force: 10, length: 80 }
 operating_length: 40
 operating_force: 30
 envelope: { max_outer_diameter: 14 }
-${extra}`), catalog);
+${extra}`),
+    catalog,
+  );
 const demo = readRequirements(parse(readFileSync('examples/washer-trigger.yaml', 'utf8')), catalog);
 
 describe('buckling margin', () => {

@@ -17,7 +17,16 @@ import { requirementsDocument } from '../../../src/kinds/compression/requirement
 import { readFileSync } from 'node:fs';
 import { cli, inputFile, tempPath } from '../../helpers.js';
 
-interface Entry { path: string; from: unknown; to: unknown; set: string; relative_change: number | null; group: string; eases: string[]; suggestion: string }
+interface Entry {
+  path: string;
+  from: unknown;
+  to: unknown;
+  set: string;
+  relative_change: number | null;
+  group: string;
+  eases: string[];
+  suggestion: string;
+}
 
 const demo = 'examples/washer-trigger.yaml';
 
@@ -44,7 +53,8 @@ envelope: { max_outer_diameter: 12 }
 `);
 
 // The trigger spring of our demo (stainless 302, 20 N at 35 mm, 32 N +-5% at 25 mm), varied below.
-const trigger = (rest: string) => inputFile(`units: si
+const trigger = (rest: string) =>
+  inputFile(`units: si
 material: stainless-302
 load: { force: 20, length: 35 }
 operating_length: 25
@@ -81,7 +91,7 @@ const cases: { name: string; args: string[]; si: boolean }[] = [
   { name: 'a slender spring that buckles', args: [slender], si: true },
   { name: 'a peened spring short of its fatigue target', args: [peened], si: true },
   { name: 'a spring in inches too wide for its bore', args: [inches], si: false },
-  { name: 'a spring under the user\'s own allowable stress', args: [ownAllowable], si: true },
+  { name: "a spring under the user's own allowable stress", args: [ownAllowable], si: true },
 ];
 
 type Infeasible = { relax: Entry[]; relax_pair: Entry[] | null; relax_runs: number };
@@ -121,7 +131,12 @@ describe('relax advice', () => {
       if (inf.relax_pair) {
         expect(inf.relax.filter((e) => e.group !== 'margin')).toHaveLength(0);
         expect(inf.relax_pair).toHaveLength(2);
-        expect(await admits(c.args, inf.relax_pair.map((e) => (c.si ? setOf(e) : e.set)))).toBe(true);
+        expect(
+          await admits(
+            c.args,
+            inf.relax_pair.map((e) => (c.si ? setOf(e) : e.set)),
+          ),
+        ).toBe(true);
         // Each of the pair alone is not enough (else it would be listed alone).
         for (const e of inf.relax_pair) expect(await admits(c.args, [e.set])).toBe(false);
       }
@@ -129,7 +144,7 @@ describe('relax advice', () => {
     });
   }
 
-  it('each change eases the checks the checks registry ties to it (relaxedBy), in the advice\'s order', async () => {
+  it("each change eases the checks the checks registry ties to it (relaxedBy), in the advice's order", async () => {
     // A change of operating_force, index or active_coils is named with its way, as relaxedBy names it.
     const changeOf = (e: Entry): string => {
       if (!['operating_force', 'index', 'active_coils'].includes(e.path)) return e.path;
@@ -148,7 +163,7 @@ describe('relax advice', () => {
     expect(n).toBeGreaterThan(5);
   });
 
-  it('the advice\'s order of checks names every check once, and relaxedBy names --set paths, with a way where a value eases different checks down and up', () => {
+  it("the advice's order of checks names every check once, and relaxedBy names --set paths, with a way where a value eases different checks down and up", () => {
     expect([...ADVICE_ORDER].sort()).toEqual(COMPRESSION_CHECKS.map((c) => c.name).sort());
     for (const c of COMPRESSION_CHECKS) {
       for (const r of c.relaxedBy) {
@@ -168,7 +183,11 @@ describe('relax advice', () => {
         if (e.path === 'clash_allowance') expect(Number(e.to)).toBeGreaterThanOrEqual(0.1);
       }
       const groups = inf.relax.map((e) => e.group);
-      if (groups.includes('margin')) expect(groups.every((g) => g === 'margin'), c.name).toBe(true);
+      if (groups.includes('margin'))
+        expect(
+          groups.every((g) => g === 'margin'),
+          c.name,
+        ).toBe(true);
     }
   });
 
@@ -240,13 +259,36 @@ safety: { fatigue: 2.2 }
   it('against buckling: guided: true or a seating, settings that exist, never a "buckling limit"', async () => {
     const inf = await infeasible([slender]);
     expect(inf.relax.some((e) => e.path === 'guided' && e.to === true)).toBe(true);
-    for (const e of inf.relax) expect(['envelope.max_outer_diameter', 'envelope.min_inner_diameter', 'envelope.max_free_length', 'envelope.max_solid_length', 'operating_length', 'operating_force', 'load_tolerance', 'index', 'active_coils', 'cycles', 'guided', 'seating', 'ends', 'peened', 'material', 'safety.static', 'safety.fatigue', 'safety.surge', 'clash_allowance', 'solid_safe', 'coil_gap_rule']).toContain(e.path);
+    for (const e of inf.relax)
+      expect([
+        'envelope.max_outer_diameter',
+        'envelope.min_inner_diameter',
+        'envelope.max_free_length',
+        'envelope.max_solid_length',
+        'operating_length',
+        'operating_force',
+        'load_tolerance',
+        'index',
+        'active_coils',
+        'cycles',
+        'guided',
+        'seating',
+        'ends',
+        'peened',
+        'material',
+        'safety.static',
+        'safety.fatigue',
+        'safety.surge',
+        'clash_allowance',
+        'solid_safe',
+        'coil_gap_rule',
+      ]).toContain(e.path);
     const text = (await cli('design', slender)).stdout;
     expect(text).toMatch(/guided: true/);
     expect(text).not.toMatch(/buckling limit/);
   });
 
-  it('with the user\'s own allowable_stress, never advises safety.static (it does not apply)', async () => {
+  it("with the user's own allowable_stress, never advises safety.static (it does not apply)", async () => {
     const inf = await infeasible([ownAllowable]);
     expect(inf.relax.some((e) => e.path === 'safety.static')).toBe(false);
   });
@@ -288,7 +330,12 @@ describe('the advice as a library', () => {
   it('the run budget bounds the work: a run that admits nothing spends at most maxRuns runs', () => {
     const { req } = read(clamp);
     let runs = 0;
-    const a = relaxAdvice(runDesign(req), { admits: (r) => { runs++; return admitsSpring(r) && false; } });
+    const a = relaxAdvice(runDesign(req), {
+      admits: (r) => {
+        runs++;
+        return admitsSpring(r) && false;
+      },
+    });
     expect(runs).toBeLessThanOrEqual(RELAX_LIMITS.maxRuns);
     expect(a.single).toHaveLength(0);
     expect(a.pair).toBeNull();

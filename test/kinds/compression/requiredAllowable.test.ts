@@ -16,7 +16,13 @@ const allowable = 90 * KPSI;
 const demo = 'examples/washer-trigger.yaml';
 const set = ['--set', 'allowable_stress=90 kpsi', '--top', '5'];
 
-interface JsonCandidate { allowable_stress: number; static_safety_factor: number; points: { stress: number }[]; solid_stress: number; warnings: string[] }
+interface JsonCandidate {
+  allowable_stress: number;
+  static_safety_factor: number;
+  points: { stress: number }[];
+  solid_stress: number;
+  warnings: string[];
+}
 
 describe('a requirement-level allowable_stress', () => {
   it('is the allowable in the JSON of every candidate, and the static safety factor is allowable / highest stress', async () => {
@@ -51,7 +57,7 @@ describe('a requirement-level allowable_stress', () => {
       // Counted from the end: ... tau max (kpsi), SF static, SF fatigue, buckling, mass, yield, yield limited by, of.
       const tauKpsi = Number(cells[cells.length - 8]);
       const sf = Number(cells[cells.length - 7]);
-      expect(sf).toBeCloseTo((90 / tauKpsi), 2);
+      expect(sf).toBeCloseTo(90 / tauKpsi, 2);
     }
     // The catalog allowable of this wire (0.35 Sut, about 92.3 kpsi) must not appear; 90 kpsi does.
     const notes = r.stdout.slice(r.stdout.indexOf('Notes on the best spring'));

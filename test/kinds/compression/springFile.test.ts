@@ -32,13 +32,34 @@ const variation = fc.record({
 });
 
 /** The demo with a varied bore, band, yield and duty; in US units the same requirement written in inches. */
-interface Variation { od: number; loadTolerance: string; minYield?: number; grade: number; cycles: unknown; units: string }
+interface Variation {
+  od: number;
+  loadTolerance: string;
+  minYield?: number;
+  grade: number;
+  cycles: unknown;
+  units: string;
+}
 
 function requirementDoc(v: Variation): Record<string, unknown> {
-  const doc: Record<string, unknown> = { ...demoDoc, envelope: { ...(demoDoc.envelope as object), max_outer_diameter: `${v.od} mm` }, load_tolerance: v.loadTolerance, tolerance_grade: v.grade, cycles: v.cycles, top: 4 };
+  const doc: Record<string, unknown> = {
+    ...demoDoc,
+    envelope: { ...(demoDoc.envelope as object), max_outer_diameter: `${v.od} mm` },
+    load_tolerance: v.loadTolerance,
+    tolerance_grade: v.grade,
+    cycles: v.cycles,
+    top: 4,
+  };
   if (v.minYield !== undefined) doc.min_yield = v.minYield;
   if (v.units === 'us') {
-    Object.assign(doc, { units: 'us', load: { force: '20 N', length: '35 mm' }, operating_length: '25 mm', operating_force: '32 N', temperature: '104 degF', wire_sizes: 'music-wire-inch' });
+    Object.assign(doc, {
+      units: 'us',
+      load: { force: '20 N', length: '35 mm' },
+      operating_length: '25 mm',
+      operating_force: '32 N',
+      temperature: '104 degF',
+      wire_sizes: 'music-wire-inch',
+    });
     doc.envelope = { max_outer_diameter: `${v.od} mm`, min_inner_diameter: '6.5 mm', max_free_length: '60 mm' };
   }
   return doc;
@@ -48,35 +69,40 @@ const failingNames = (names: string[]) => names.filter((n) => (CHECKS as readonl
 
 describe('the exported spring file (property)', () => {
   it('re-analyses to the drawn spring exactly and to the design within drawing precision; check passes every reported spring', () => {
-    fc.assert(fc.property(variation, (v) => {
-      const raw = requirementDoc(v);
-      const req = readRequirements(raw, catalog);
-      const run = compression.design(req, catalog);
-      for (const [i, c] of run.candidates.entries()) {
-        const { doc, drawn } = drawnSpringDocument(c, req);
-        const back = readSpringCase(parse(springFileText(c, req, i + 1).text), catalog);
-        const a = analyzeSpring(back.geometry, back.figures, back.service);
-        const rel = (x: number, y: number) => Math.abs(x - y) / Math.max(Math.abs(y), 1e-12);
-        expect(rel(a.rate, drawn.analysis.rate)).toBeLessThan(1e-9);
-        expect(rel(a.geometry.freeLength, drawn.geometry.freeLength)).toBeLessThan(1e-9);
-        a.points.forEach((p, k) => {
-          expect(rel(p.force, drawn.analysis.points[k].force)).toBeLessThan(1e-9);
-          expect(rel(p.stress, drawn.analysis.points[k].stress)).toBeLessThan(1e-9);
-        });
-        // Drawing precision moves the rate by well under 1%; a force by at most the rate times the free-length
-        // step (0.1 mm, or 0.01 in) plus the rate's own change.
-        expect(rel(a.rate, c.analysis.rate)).toBeLessThan(0.01);
-        const step = req.system === 'us' ? 0.254 : 0.1;
-        a.points.forEach((p, k) => expect(Math.abs(p.force - c.analysis.points[k].force)).toBeLessThanOrEqual(c.analysis.rate * step + 0.01 * c.analysis.points[k].force));
-        // check on the drawn file names the same failing design checks as the re-check at drawing precision.
-        const drawnVerdict = checkDocuments(doc, raw, catalog).verdict;
-        expect(failingNames(drawnVerdict.failingNames.filter((n) => n !== 'yield'))).toEqual([...drawn.failing].sort());
-        // The reported spring itself (exact figures) passes every check, the yield included: design listed it.
-        const exact = checkDocuments(springDocument(c, req), raw, catalog).verdict;
-        expect(exact.failingNames).toEqual([]);
-        if (req.minYield !== undefined) expect(exact.lines.find((l) => l.name === 'yield')!.value).toBe(run.yields![i].monteCarlo.yield);
-      }
-    }), { numRuns: 8 });
+    fc.assert(
+      fc.property(variation, (v) => {
+        const raw = requirementDoc(v);
+        const req = readRequirements(raw, catalog);
+        const run = compression.design(req, catalog);
+        for (const [i, c] of run.candidates.entries()) {
+          const { doc, drawn } = drawnSpringDocument(c, req);
+          const back = readSpringCase(parse(springFileText(c, req, i + 1).text), catalog);
+          const a = analyzeSpring(back.geometry, back.figures, back.service);
+          const rel = (x: number, y: number) => Math.abs(x - y) / Math.max(Math.abs(y), 1e-12);
+          expect(rel(a.rate, drawn.analysis.rate)).toBeLessThan(1e-9);
+          expect(rel(a.geometry.freeLength, drawn.geometry.freeLength)).toBeLessThan(1e-9);
+          a.points.forEach((p, k) => {
+            expect(rel(p.force, drawn.analysis.points[k].force)).toBeLessThan(1e-9);
+            expect(rel(p.stress, drawn.analysis.points[k].stress)).toBeLessThan(1e-9);
+          });
+          // Drawing precision moves the rate by well under 1%; a force by at most the rate times the free-length
+          // step (0.1 mm, or 0.01 in) plus the rate's own change.
+          expect(rel(a.rate, c.analysis.rate)).toBeLessThan(0.01);
+          const step = req.system === 'us' ? 0.254 : 0.1;
+          a.points.forEach((p, k) =>
+            expect(Math.abs(p.force - c.analysis.points[k].force)).toBeLessThanOrEqual(c.analysis.rate * step + 0.01 * c.analysis.points[k].force),
+          );
+          // check on the drawn file names the same failing design checks as the re-check at drawing precision.
+          const drawnVerdict = checkDocuments(doc, raw, catalog).verdict;
+          expect(failingNames(drawnVerdict.failingNames.filter((n) => n !== 'yield'))).toEqual([...drawn.failing].sort());
+          // The reported spring itself (exact figures) passes every check, the yield included: design listed it.
+          const exact = checkDocuments(springDocument(c, req), raw, catalog).verdict;
+          expect(exact.failingNames).toEqual([]);
+          if (req.minYield !== undefined) expect(exact.lines.find((l) => l.name === 'yield')!.value).toBe(run.yields![i].monteCarlo.yield);
+        }
+      }),
+      { numRuns: 8 },
+    );
   }, 240_000);
 
   it('check fails every nearest miss of an infeasible run, naming the checks design names', () => {

@@ -22,16 +22,26 @@ async function forceLine(page: Page) {
     const line = svg.querySelector('#force-line') as SVGPolylineElement;
     const first = line.points.getItem(0);
     const zero = Array.from(svg.querySelectorAll('.axis text')).find((t) => t.textContent === '0' && t.getAttribute('text-anchor') === 'end') as SVGTextElement;
-    return { startForce: Number(line.dataset.startForce), y: first.y, zeroY: Number(zero.getAttribute('y')) - 4, drawnWidth: svg.getBoundingClientRect().width };
+    return {
+      startForce: Number(line.dataset.startForce),
+      y: first.y,
+      zeroY: Number(zero.getAttribute('y')) - 4,
+      drawnWidth: svg.getBoundingClientRect().width,
+    };
   });
 }
 
 async function loops(page: Page) {
-  return page.$$eval('#plot-drawing ellipse.loop', (es) => es.map((e) => { const b = e.getBoundingClientRect(); return { id: e.id, width: b.width, height: b.height }; }));
+  return page.$$eval('#plot-drawing ellipse.loop', (es) =>
+    es.map((e) => {
+      const b = e.getBoundingClientRect();
+      return { id: e.id, width: b.width, height: b.height };
+    }),
+  );
 }
 
 describe('extension design report in headless Chromium', () => {
-  it('loads offline; the force line starts above zero; both loops drawn; the loop stresses and the CLI\'s best spring shown', async () => {
+  it("loads offline; the force line starts above zero; both loops drawn; the loop stresses and the CLI's best spring shown", async () => {
     const file = join(OUT, 'extension-design-report.html');
     rmSync(file, { force: true });
     const r = await cli('design', DEMO, '--report', file);
@@ -51,7 +61,10 @@ describe('extension design report in headless Chromium', () => {
     expect(fl.drawnWidth).toBeGreaterThan(100);
     const ls = await loops(page);
     expect(ls.map((l) => l.id).sort()).toEqual(['loop-left', 'loop-right']);
-    for (const l of ls) { expect(l.width).toBeGreaterThan(5); expect(l.height).toBeGreaterThan(5); }
+    for (const l of ls) {
+      expect(l.width).toBeGreaterThan(5);
+      expect(l.height).toBeGreaterThan(5);
+    }
     const stressHeader = await page.$$eval('#loop-stresses th', (th) => th.map((t) => t.textContent));
     expect(stressHeader).toEqual(expect.arrayContaining(['body (torsion)', 'loop, A (bending)', 'loop, B (torsion)']));
     const chosen = await page.$eval('#chosen-spring', (c) => ({ ...(c as HTMLElement).dataset }));

@@ -23,24 +23,37 @@ const analyze = (doc: Record<string, unknown>) => {
 const spring = { kind: 'extension', material: 'music-wire', wire_diameter: 1, mean_diameter: 8, body_coils: 12, initial_tension: 6 };
 
 describe('load line from the initial-tension stress', () => {
-  it('is the shared model\'s load line through the origin when there is no initial stress', () => {
-    fc.assert(fc.property(fc.double({ min: 0.05, max: 5, noNaN: true }), fc.double({ min: 600, max: 1500, noNaN: true }), fc.constantFrom<FatigueCriterion>('gerber', 'goodman', 'sines'), (r, ssu, criterion) => {
-      const point = { alternating: 241, mean: 379 };
-      const sse = fullyReversedEndurance(point, ssu, criterion);
-      expect(relClose(offsetAlternatingStrength(r, 0, sse, point.alternating, ssu, criterion), alternatingStrengthFrom(r, point, ssu, sse, criterion), 1e-12)).toBe(true);
-    }), { numRuns: 200, seed: 1 });
+  it("is the shared model's load line through the origin when there is no initial stress", () => {
+    fc.assert(
+      fc.property(
+        fc.double({ min: 0.05, max: 5, noNaN: true }),
+        fc.double({ min: 600, max: 1500, noNaN: true }),
+        fc.constantFrom<FatigueCriterion>('gerber', 'goodman', 'sines'),
+        (r, ssu, criterion) => {
+          const point = { alternating: 241, mean: 379 };
+          const sse = fullyReversedEndurance(point, ssu, criterion);
+          expect(
+            relClose(offsetAlternatingStrength(r, 0, sse, point.alternating, ssu, criterion), alternatingStrengthFrom(r, point, ssu, sse, criterion), 1e-12),
+          ).toBe(true);
+        },
+      ),
+      { numRuns: 200, seed: 1 },
+    );
   });
 
   it('meets the criterion curve where it says (the Goodman line and the Gerber parabola)', () => {
-    fc.assert(fc.property(fc.double({ min: 0.05, max: 1, noNaN: true }), fc.double({ min: 0, max: 300, noNaN: true }), (r, si) => {
-      const ssu = 1000;
-      const sse = 280;
-      const good = offsetAlternatingStrength(r, si, sse, 241, ssu, 'goodman');
-      expect(good / sse + (si + good / r) / ssu).toBeCloseTo(1, 12);
-      const ger = offsetAlternatingStrength(r, si, sse, 241, ssu, 'gerber');
-      expect(ger / sse + ((si + ger / r) / ssu) ** 2).toBeCloseTo(1, 12);
-      expect(ger).toBeGreaterThanOrEqual(good);
-    }), { numRuns: 200, seed: 2 });
+    fc.assert(
+      fc.property(fc.double({ min: 0.05, max: 1, noNaN: true }), fc.double({ min: 0, max: 300, noNaN: true }), (r, si) => {
+        const ssu = 1000;
+        const sse = 280;
+        const good = offsetAlternatingStrength(r, si, sse, 241, ssu, 'goodman');
+        expect(good / sse + (si + good / r) / ssu).toBeCloseTo(1, 12);
+        const ger = offsetAlternatingStrength(r, si, sse, 241, ssu, 'gerber');
+        expect(ger / sse + ((si + ger / r) / ssu) ** 2).toBeCloseTo(1, 12);
+        expect(ger).toBeGreaterThanOrEqual(good);
+      }),
+      { numRuns: 200, seed: 2 },
+    );
   });
 
   it('a longer life is never easier, at the body or at either loop', () => {
@@ -136,12 +149,48 @@ describe('catalogs/extension.yaml', () => {
     for (const m of catalog.materials) expect(ext.allowables.some((a) => a.families.includes(m.family))).toBe(true);
   });
   const broken: [string, (d: any) => void, RegExp][] = [
-    ['a record without a source', (d) => { delete d.static_allowables[0].source; }, /carbon-alloy-steels: static_allowables\[0\]\.source/],
-    ['a family covered twice', (d) => { d.static_allowables[1].families.push('alloy-steel'); }, /families\[2\]/],
-    ['a family not covered', (d) => { d.static_allowables[1].families = ['stainless']; }, /missing copper-alloy/],
-    ['a fraction that rises with the cycles', (d) => { d.loop_fatigue.loop_bending = [0.45, 0.47, 0.51]; }, /loop_fatigue\.loop_bending/],
-    ['an unknown material in stated_for', (d) => { d.loop_fatigue.stated_for = ['unobtainium']; }, /stated_for\[0\]/],
-    ['an unknown field', (d) => { d.loop_types[0].height = 1; }, /loop_types\[0\]\.height/],
+    [
+      'a record without a source',
+      (d) => {
+        delete d.static_allowables[0].source;
+      },
+      /carbon-alloy-steels: static_allowables\[0\]\.source/,
+    ],
+    [
+      'a family covered twice',
+      (d) => {
+        d.static_allowables[1].families.push('alloy-steel');
+      },
+      /families\[2\]/,
+    ],
+    [
+      'a family not covered',
+      (d) => {
+        d.static_allowables[1].families = ['stainless'];
+      },
+      /missing copper-alloy/,
+    ],
+    [
+      'a fraction that rises with the cycles',
+      (d) => {
+        d.loop_fatigue.loop_bending = [0.45, 0.47, 0.51];
+      },
+      /loop_fatigue\.loop_bending/,
+    ],
+    [
+      'an unknown material in stated_for',
+      (d) => {
+        d.loop_fatigue.stated_for = ['unobtainium'];
+      },
+      /stated_for\[0\]/,
+    ],
+    [
+      'an unknown field',
+      (d) => {
+        d.loop_types[0].height = 1;
+      },
+      /loop_types\[0\]\.height/,
+    ],
   ];
   for (const [what, edit, message] of broken) {
     it(`refuses ${what}, naming the record and field`, () => {

@@ -21,7 +21,10 @@ describe('extension advice: the best pair when no single change works', () => {
   it('gives two changes that admit a spring together, neither alone, each one run, written as --set takes it, in JSON and text', { timeout: 120_000 }, () => {
     // One run and its advice (worked out once per run), read by the JSON and the text alike.
     const run = extension.design(extension.readRequirements(squeezed, catalog), catalog, { document: squeezed });
-    const r = extension.report.designJson(run, false) as { candidates: unknown[]; infeasible: { relax: Advice[]; relax_pair: Advice[] | null; relax_runs: number } };
+    const r = extension.report.designJson(run, false) as {
+      candidates: unknown[];
+      infeasible: { relax: Advice[]; relax_pair: Advice[] | null; relax_runs: number };
+    };
     expect(r.candidates).toEqual([]);
     expect(r.infeasible.relax).toEqual([]);
     const pair = r.infeasible.relax_pair!;

@@ -18,7 +18,10 @@ import { toJson } from '../../../src/report/json.js';
 const catalog = loadCatalog();
 const demo = parse(readFileSync('examples/extension-pedal-bin.yaml', 'utf8'));
 const run = designExtension(readExtensionRequirements(demo, catalog), catalog);
-const spring = readExtensionSpring({ kind: 'extension', material: 'music-wire', wire_diameter: 1.2, mean_diameter: 8, body_coils: 20, initial_tension: 6, lengths: [45, 55] }, catalog);
+const spring = readExtensionSpring(
+  { kind: 'extension', material: 'music-wire', wire_diameter: 1.2, mean_diameter: 8, body_coils: 20, initial_tension: 6, lengths: [45, 55] },
+  catalog,
+);
 const analysis = analyzeExtension(spring.geometry, spring.material, spring.service);
 
 /** Every leaf of a JSON value (no NaN, Infinity or undefined can survive JSON.parse of our output). */
@@ -38,7 +41,13 @@ describe('extension outputs', () => {
       const text = toJson(doc);
       expect(text).not.toMatch(/NaN|Infinity|undefined/);
       for (const [path, v] of leaves(JSON.parse(text))) {
-        expect(path.split('.').pop()!.replace(/\[\d+\]/g, ''), path).toMatch(/^[a-z0-9_]+$/);
+        expect(
+          path
+            .split('.')
+            .pop()!
+            .replace(/\[\d+\]/g, ''),
+          path,
+        ).toMatch(/^[a-z0-9_]+$/);
         expect(['number', 'string', 'boolean'].includes(typeof v) || v === null, path).toBe(true);
       }
     }
@@ -60,7 +69,12 @@ describe('extension outputs', () => {
     const us = extensionAnalysisText(spring, analysis, 'us');
     expect(us).toMatch(/initial tension Fi\s+1\.349 lbf/);
     // Notes on how the file was read keep the file's own units; every figure is in the system asked.
-    expect(us.split('\n').filter((l) => !l.startsWith('  ! ')).join('\n')).not.toMatch(/\bMPa\b|\bmm\b/);
+    expect(
+      us
+        .split('\n')
+        .filter((l) => !l.startsWith('  ! '))
+        .join('\n'),
+    ).not.toMatch(/\bMPa\b|\bmm\b/);
     const d = extensionDesignText(run, 'si');
     expect(d).toMatch(/Fi band/);
     expect(d).toMatch(/draw-bar/);
@@ -99,12 +113,15 @@ describe('extension outputs', () => {
   it('the frontier on mass and outer diameter: each point re-verified, none dominated by another', () => {
     const fr = computeExtensionFrontier(run.req, catalog, 'mass', 'outer_diameter', undefined, run.problem);
     expect(fr.front.length).toBeGreaterThan(1);
-    for (const a of fr.front) for (const b of fr.front) {
-      if (a === b) continue;
-      const dom = b.analysis.geometry.mass <= a.analysis.geometry.mass && b.analysis.geometry.outerDiameter <= a.analysis.geometry.outerDiameter
-        && (b.analysis.geometry.mass < a.analysis.geometry.mass || b.analysis.geometry.outerDiameter < a.analysis.geometry.outerDiameter);
-      expect(dom).toBe(false);
-    }
+    for (const a of fr.front)
+      for (const b of fr.front) {
+        if (a === b) continue;
+        const dom =
+          b.analysis.geometry.mass <= a.analysis.geometry.mass &&
+          b.analysis.geometry.outerDiameter <= a.analysis.geometry.outerDiameter &&
+          (b.analysis.geometry.mass < a.analysis.geometry.mass || b.analysis.geometry.outerDiameter < a.analysis.geometry.outerDiameter);
+        expect(dom).toBe(false);
+      }
     // The lightest spring of the frontier is the design's best.
     expect(Math.min(...fr.front.map((c) => c.analysis.geometry.mass))).toBeCloseTo(run.candidates[0].analysis.geometry.mass, 12);
   });

@@ -14,7 +14,11 @@ const catalog = loadCatalog();
 const demo = () => parse(readFileSync('examples/extension-pedal-bin.yaml', 'utf8')) as Record<string, unknown>;
 
 describe('extension safety factors below 1', () => {
-  it.each([['static', 0.8], ['fatigue', 0.99], ['surge', 0.5]] as const)('refuses safety.%s = %s, naming the field', (key, value) => {
+  it.each([
+    ['static', 0.8],
+    ['fatigue', 0.99],
+    ['surge', 0.5],
+  ] as const)('refuses safety.%s = %s, naming the field', (key, value) => {
     const doc = { ...demo(), safety: { [key]: value } };
     expect(() => readExtensionRequirements(doc, catalog)).toThrow(InputError);
     expect(() => readExtensionRequirements(doc, catalog)).toThrow(`safety.${key}: expected a number of at least 1`);
@@ -27,12 +31,19 @@ describe('extension safety factors below 1', () => {
 
   it('refuses a spring file surge_margin below 1', () => {
     const spring = {
-      kind: 'extension', units: 'si', material: 'music-wire', wire_diameter: 1.2, outer_diameter: 10, body_coils: 20, loop: 'full',
-      initial_tension: 5, lengths: [60, 75], surge_margin: 0.5,
+      kind: 'extension',
+      units: 'si',
+      material: 'music-wire',
+      wire_diameter: 1.2,
+      outer_diameter: 10,
+      body_coils: 20,
+      loop: 'full',
+      initial_tension: 5,
+      lengths: [60, 75],
+      surge_margin: 0.5,
     };
     expect(() => readExtensionSpring(spring, catalog)).toThrow('surge_margin: expected a number of at least 1');
   });
-
 
   it('the CLI refuses it with exit 2 and one line naming the field, nothing on stdout', async () => {
     const r = await cli('design', inputFile(readFileSync('examples/extension-pedal-bin.yaml', 'utf8') + 'safety: { static: 0.8 }\n'));

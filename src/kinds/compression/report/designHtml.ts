@@ -20,7 +20,10 @@ import { surgeEndsLabel } from '../../../model/surge.js';
 import { strengthBasisSummary } from '../../../input/material.js';
 import { esc } from '../../../report/html/svg.js';
 
-export interface SweepSummary { name: string; rows: { value: number; best: Candidate | null }[] }
+export interface SweepSummary {
+  name: string;
+  rows: { value: number; best: Candidate | null }[];
+}
 
 function requirementRows(req: Requirements, system: UnitSystem): string[][] {
   const L = (v: number | undefined) => (v === undefined ? '-' : formatQuantity(v, 'length', system));
@@ -31,7 +34,12 @@ function requirementRows(req: Requirements, system: UnitSystem): string[][] {
     ['seating (buckling)', req.seating],
     ['tensile strength', strengthBasisSummary(req.materials).replace(/^tensile strength: /, '')],
     ['working load', `${F(req.workingForce)} at ${L(req.workingLength)}`],
-    ['operating point', req.operatingLength === undefined ? '-' : `${req.operatingForce === undefined ? 'free force' : F(req.operatingForce)} at ${L(req.operatingLength)}${req.loadTolerance ? `, tolerance ${sig(req.loadTolerance * 100, 3)}%` : ''}`],
+    [
+      'operating point',
+      req.operatingLength === undefined
+        ? '-'
+        : `${req.operatingForce === undefined ? 'free force' : F(req.operatingForce)} at ${L(req.operatingLength)}${req.loadTolerance ? `, tolerance ${sig(req.loadTolerance * 100, 3)}%` : ''}`,
+    ],
     ['largest outer diameter (bore)', L(req.maxOuterDiameter)],
     ['smallest inner diameter (rod)', L(req.minInnerDiameter)],
     ['largest free length', L(req.maxFreeLength)],
@@ -45,7 +53,6 @@ function requirementRows(req: Requirements, system: UnitSystem): string[][] {
     ['ranked by', req.rank.replace('_', ' ')],
   ];
 }
-
 
 /** The sections that show one spring: its figures, force-length, fatigue and drawing. */
 export function springSections(a: SpringAnalysis, system: UnitSystem, service: ServiceConditions, heading: string): string[] {
@@ -61,7 +68,12 @@ export function springSections(a: SpringAnalysis, system: UnitSystem, service: S
     ['stress at solid', `${S(a.solid.stress)} (${a.solid.solidSafe ? 'solid-safe' : 'not solid-safe'})`],
     ['static safety factor', sig(a.staticSafetyFactor, 3)],
     ['fatigue safety factor', a.fatigue ? sig(a.fatigue.safetyFactor, 3) : 'static service'],
-    ['buckling', a.buckling.absolutelyStable ? 'absolutely stable' : `critical deflection ${L(a.buckling.criticalDeflection)}${a.buckling.buckles ? ' (buckles: guide it)' : ''}`],
+    [
+      'buckling',
+      a.buckling.absolutelyStable
+        ? 'absolutely stable'
+        : `critical deflection ${L(a.buckling.criticalDeflection)}${a.buckling.buckles ? ' (buckles: guide it)' : ''}`,
+    ],
     ['surge frequency', `${sig(a.surge.relevant, 4)} Hz (${surgeEndsLabel(a.surge.ends)})`],
     ['mass', formatQuantity(g.mass, 'mass', system)],
   ];
@@ -69,8 +81,18 @@ export function springSections(a: SpringAnalysis, system: UnitSystem, service: S
   const warnings = rulesOfThumb(a, service, quantityWriter(system));
   if (warnings.length) out.push(`<ul class="warn">${warnings.map((w) => `<li>${esc(w.message)}</li>`).join('')}</ul>`);
   out.push('<div class="grid2">');
-  out.push(figure(forceLengthPlot(a, system, clashAllowance), 'Force against length from free length to solid; the working and operating points, the solid length and the clash allowance.'));
-  out.push(figure(fatiguePlot(a, system), a.fatigue ? `Fatigue diagram (${a.fatigue.criterion}): the criterion through the endurance point, the load line and the operating point.` : ''));
+  out.push(
+    figure(
+      forceLengthPlot(a, system, clashAllowance),
+      'Force against length from free length to solid; the working and operating points, the solid length and the clash allowance.',
+    ),
+  );
+  out.push(
+    figure(
+      fatiguePlot(a, system),
+      a.fatigue ? `Fatigue diagram (${a.fatigue.criterion}): the criterion through the endurance point, the load line and the operating point.` : '',
+    ),
+  );
   out.push('</div>');
   out.push(figure(sideView(a, system), 'Side view at free length, to scale.'));
   return out;
@@ -91,9 +113,14 @@ export function designHtml(run: DesignRun, system: UnitSystem, frontier: Frontie
   sections.push(htmlTable(['requirement', 'value'], requirementRows(req, system), { cls: 'kv' }));
   const r = run.result;
   const counts = [
-    ['strategy', r.strategy], ['combinations', String(r.cells)], ['candidate evaluations', String(r.evaluations)], ['feasible combinations', String(r.feasibleCells)],
+    ['strategy', r.strategy],
+    ['combinations', String(r.cells)],
+    ['candidate evaluations', String(r.evaluations)],
+    ['feasible combinations', String(r.feasibleCells)],
     ['pruned by the incumbent bound', String(r.prunedCells)],
-    ...reportedChecks(req).filter((c) => r.cutBy[c] > 0).map((c) => [`cut: ${CHECK_LABELS[c as CheckName]}`, String(r.cutBy[c])]),
+    ...reportedChecks(req)
+      .filter((c) => r.cutBy[c] > 0)
+      .map((c) => [`cut: ${CHECK_LABELS[c as CheckName]}`, String(r.cutBy[c])]),
     ['LP lower bound', run.lp.value !== null ? formatQuantity(run.lp.value, req.rank === 'mass' ? 'mass' : 'volume', system) : run.lp.status],
     ['gap of the best spring to the bound', run.gap !== null ? `${sig(run.gap * 100, 3)}%` : '-'],
   ];
@@ -103,8 +130,12 @@ export function designHtml(run: DesignRun, system: UnitSystem, frontier: Frontie
     sections.push('<h2>No feasible spring</h2>');
     const lines = relaxLines(run, system);
     // Paragraphs for the headings, one list per run of items.
-    sections.push(lines.map((l) => (l.startsWith('  - ') ? `<li>${esc(l.slice(4))}</li>` : `<p>${esc(l)}</p>`)).join('\n')
-      .replace(/(<li>[\s\S]*?<\/li>)(?=\n<p>|$)/g, '<ul>$1</ul>'));
+    sections.push(
+      lines
+        .map((l) => (l.startsWith('  - ') ? `<li>${esc(l.slice(4))}</li>` : `<p>${esc(l)}</p>`))
+        .join('\n')
+        .replace(/(<li>[\s\S]*?<\/li>)(?=\n<p>|$)/g, '<ul>$1</ul>'),
+    );
   } else {
     const fr = frontier;
     if (!fr) throw new Error('designHtml: a run with springs is drawn with its frontier (reportFrontier); please report this');
@@ -115,9 +146,18 @@ export function designHtml(run: DesignRun, system: UnitSystem, frontier: Frontie
     const pt = (c: Candidate) => ({ x: conv(kx, kx.sign * c.objectives[kx.objective]), y: conv(ky, ky.sign * c.objectives[ky.objective]) });
     const cloud = fr.cloud.map((p) => ({ x: conv(kx, p.x), y: conv(ky, p.y) }));
     sections.push('<h2>Feasible springs and the trade-off front</h2>');
-    sections.push(figure(cloudPlot(cloud, fr.front.map(pt), pt(best), label(kx, fr.x), label(ky, fr.y), {
-      material: best.item.choice.material.id, wire: String(best.geometry.wireDiameter), 'mean-diameter': String(best.geometry.meanDiameter), 'active-coils': String(best.geometry.activeCoils), ends: best.geometry.ends,
-    }), `${cloud.length} feasible springs (each combination of material, wire, ends and coils at its smallest feasible mean diameter); the line joins the ${fr.front.length} non-dominated ones; the ring marks the chosen spring, first in the table below.`));
+    sections.push(
+      figure(
+        cloudPlot(cloud, fr.front.map(pt), pt(best), label(kx, fr.x), label(ky, fr.y), {
+          material: best.item.choice.material.id,
+          wire: String(best.geometry.wireDiameter),
+          'mean-diameter': String(best.geometry.meanDiameter),
+          'active-coils': String(best.geometry.activeCoils),
+          ends: best.geometry.ends,
+        }),
+        `${cloud.length} feasible springs (each combination of material, wire, ends and coils at its smallest feasible mean diameter); the line joins the ${fr.front.length} non-dominated ones; the ring marks the chosen spring, first in the table below.`,
+      ),
+    );
     sections.push('<h2>Ranked candidates</h2>');
     // With the yield at the tolerances where the run was confirmed (design and its API), as the text has it.
     const t = candidateGrid(run.candidates, system, run.yields);
@@ -132,7 +172,12 @@ export function designHtml(run: DesignRun, system: UnitSystem, frontier: Frontie
   if (sweep) {
     const pts = sweep.rows.map((row) => ({ x: row.value, y: row.best ? inUnit(row.best.analysis.geometry.mass, 'mass', system) : null }));
     sections.push('<h2>Envelope sweep</h2>');
-    sections.push(figure(sweepPlot(pts, `${sweep.name} (as given)`, `best mass (${unitSymbol('mass', system)})`), 'The lightest feasible spring for each value; "none" where nothing fits.'));
+    sections.push(
+      figure(
+        sweepPlot(pts, `${sweep.name} (as given)`, `best mass (${unitSymbol('mass', system)})`),
+        'The lightest feasible spring for each value; "none" where nothing fits.',
+      ),
+    );
   }
   sections.push(...extra);
   sections.push(conventionsSection());

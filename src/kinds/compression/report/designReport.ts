@@ -24,17 +24,34 @@ export function candidateRecord(c: Candidate, y?: CandidateYield): Record<string
 
 export function requirementsRecord(req: Requirements): Record<string, unknown> {
   return {
-    materials: req.materials.map((m) => m.material.id), ends: req.ends, seating: req.seating, surge_ends: req.surgeEnds,
-    strength_basis: req.strengthBasis, strength_sources: Object.fromEntries(req.materials.map((m) => [m.material.id, strengthBasisOf(m).source])),
-    working_force: req.workingForce, working_length: req.workingLength, operating_length: req.operatingLength ?? null,
-    operating_force: req.operatingForce ?? null, load_tolerance: req.loadTolerance,
-    max_outer_diameter: req.maxOuterDiameter ?? null, min_inner_diameter: req.minInnerDiameter ?? null,
-    max_free_length: req.maxFreeLength ?? null, max_solid_length: req.maxSolidLength ?? null,
+    materials: req.materials.map((m) => m.material.id),
+    ends: req.ends,
+    seating: req.seating,
+    surge_ends: req.surgeEnds,
+    strength_basis: req.strengthBasis,
+    strength_sources: Object.fromEntries(req.materials.map((m) => [m.material.id, strengthBasisOf(m).source])),
+    working_force: req.workingForce,
+    working_length: req.workingLength,
+    operating_length: req.operatingLength ?? null,
+    operating_force: req.operatingForce ?? null,
+    load_tolerance: req.loadTolerance,
+    max_outer_diameter: req.maxOuterDiameter ?? null,
+    min_inner_diameter: req.minInnerDiameter ?? null,
+    max_free_length: req.maxFreeLength ?? null,
+    max_solid_length: req.maxSolidLength ?? null,
     cycles: req.cycles === undefined ? null : Number.isFinite(req.cycles) ? req.cycles : 'infinite',
-    wire_sizes: req.wireSizesLabel, active_coils: req.activeCoils, coil_step: req.coilStep, index: req.index,
-    safety: req.safety, allowable_stress: req.allowableStress ?? null, peened: req.peened, guided: req.guided,
-    clash_allowance: req.clashAllowance, rank: req.rank,
-    tolerance_grade: req.tolerance.grade, min_yield: req.minYield ?? null,
+    wire_sizes: req.wireSizesLabel,
+    active_coils: req.activeCoils,
+    coil_step: req.coilStep,
+    index: req.index,
+    safety: req.safety,
+    allowable_stress: req.allowableStress ?? null,
+    peened: req.peened,
+    guided: req.guided,
+    clash_allowance: req.clashAllowance,
+    rank: req.rank,
+    tolerance_grade: req.tolerance.grade,
+    min_yield: req.minYield ?? null,
   };
 }
 
@@ -82,8 +99,12 @@ export function adviceFor(run: DesignRun): RelaxAdvice {
 }
 
 const UNIT_KIND: Record<string, Kind> = {
-  'envelope.max_outer_diameter': 'length', 'envelope.min_inner_diameter': 'length', 'envelope.max_free_length': 'length',
-  'envelope.max_solid_length': 'length', operating_length: 'length', operating_force: 'force',
+  'envelope.max_outer_diameter': 'length',
+  'envelope.min_inner_diameter': 'length',
+  'envelope.max_free_length': 'length',
+  'envelope.max_solid_length': 'length',
+  operating_length: 'length',
+  operating_force: 'force',
 };
 
 const pct = (r: number) => `${sig(r * 100, 3)}%`;
@@ -96,11 +117,22 @@ export function describeChange(c: RelaxChange, system: UnitSystem): string {
   if (typeof c.to === 'number' && typeof c.from === 'number') {
     const up = c.to > c.from;
     const fraction = c.path === 'load_tolerance' || c.path === 'clash_allowance';
-    const show = (v: number) => (kind ? formatQuantity(v, kind, system) : fraction ? pct(v) : c.path === 'cycles' ? String(Number(v.toPrecision(4))) : sig(v, 4));
+    const show = (v: number) =>
+      kind ? formatQuantity(v, kind, system) : fraction ? pct(v) : c.path === 'cycles' ? String(Number(v.toPrecision(4))) : sig(v, 4);
     // The new value is shown rounded in the relaxing direction, so the figure read off the screen
     // admits a spring too (the --set value is exact).
-    const showTo = (v: number) => (kind ? `${sig(outward(inUnit(v, kind, system), up ? 1 : -1, 4), 4)} ${unitSymbol(kind, system)}` : fraction ? `${sig(outward(v * 100, up ? 1 : -1, 4), 4)}%` : c.path === 'cycles' ? String(v) : sig(v, 6));
-    const notes = [...(fraction ? [] : [`${up ? '+' : '-'}${pct(c.relative ?? 0)}`]), ...(c.path === 'operating_length' ? ['a shorter stroke'] : c.path === 'cycles' ? ['a shorter service life'] : [])];
+    const showTo = (v: number) =>
+      kind
+        ? `${sig(outward(inUnit(v, kind, system), up ? 1 : -1, 4), 4)} ${unitSymbol(kind, system)}`
+        : fraction
+          ? `${sig(outward(v * 100, up ? 1 : -1, 4), 4)}%`
+          : c.path === 'cycles'
+            ? String(v)
+            : sig(v, 6);
+    const notes = [
+      ...(fraction ? [] : [`${up ? '+' : '-'}${pct(c.relative ?? 0)}`]),
+      ...(c.path === 'operating_length' ? ['a shorter stroke'] : c.path === 'cycles' ? ['a shorter service life'] : []),
+    ];
     return `${up ? 'raise' : 'lower'} ${c.path} from ${show(c.from)} to ${showTo(c.to)}${notes.length ? ` (${notes.join(', ')})` : ''}${tail}`;
   }
   if (c.path === 'cycles' && typeof c.to === 'number') return `lower cycles from infinite life to ${c.to} (a finite service life)${tail}`;
@@ -110,14 +142,22 @@ export function describeChange(c: RelaxChange, system: UnitSystem): string {
     return `${b > a ? 'raise' : 'lower'} ${c.path}[${i}] from ${sig(a, 4)} to ${sig(b, 4)} (${b > a ? '+' : '-'}${pct(c.relative ?? 0)})${tail}`;
   }
   switch (c.path) {
-    case 'guided': return `guide the spring on a rod or in a bore so it cannot buckle (guided: true)${tail}`;
-    case 'seating': return `seat the ends ${String(c.to)} instead of ${String(c.from)} (more stable against buckling)${tail}`;
-    case 'ends': return `allow other end types too (ends: ${(c.to as string[]).join(', ')})${tail}`;
-    case 'peened': return `shot-peen the spring (peened: true)${tail}`;
-    case 'material': return typeof c.to === 'string' ? `use ${c.to} instead${tail}` : `use a material of the ${(c.to as { family: string }).family} family${tail}`;
-    case 'solid_safe': return `accept a spring that takes a set when closed solid (solid_safe: false)${tail}`;
-    case 'coil_gap_rule': return `drop the EN 13906-1 coil-gap rule (coil_gap_rule: false)${tail}`;
-    default: return `set ${c.path} to ${JSON.stringify(c.to)}${tail}`;
+    case 'guided':
+      return `guide the spring on a rod or in a bore so it cannot buckle (guided: true)${tail}`;
+    case 'seating':
+      return `seat the ends ${String(c.to)} instead of ${String(c.from)} (more stable against buckling)${tail}`;
+    case 'ends':
+      return `allow other end types too (ends: ${(c.to as string[]).join(', ')})${tail}`;
+    case 'peened':
+      return `shot-peen the spring (peened: true)${tail}`;
+    case 'material':
+      return typeof c.to === 'string' ? `use ${c.to} instead${tail}` : `use a material of the ${(c.to as { family: string }).family} family${tail}`;
+    case 'solid_safe':
+      return `accept a spring that takes a set when closed solid (solid_safe: false)${tail}`;
+    case 'coil_gap_rule':
+      return `drop the EN 13906-1 coil-gap rule (coil_gap_rule: false)${tail}`;
+    default:
+      return `set ${c.path} to ${JSON.stringify(c.to)}${tail}`;
   }
 }
 
@@ -146,7 +186,16 @@ export function relaxLines(run: DesignRun, system: UnitSystem): string[] {
 
 function infeasibleRecord(run: DesignRun): Record<string, unknown> {
   const a = adviceFor(run);
-  const entry = (c: RelaxChange) => ({ path: c.path, from: c.from, to: c.to, set: c.set, relative_change: c.relative, group: c.group, eases: c.eases, suggestion: describeChange(c, 'si') });
+  const entry = (c: RelaxChange) => ({
+    path: c.path,
+    from: c.from,
+    to: c.to,
+    set: c.set,
+    relative_change: c.relative,
+    group: c.group,
+    eases: c.eases,
+    suggestion: describeChange(c, 'si'),
+  });
   return {
     nearest_misses: run.result.nearestMisses.map((m) => {
       const c = candidateAt(run.problem, m.x, m.f);
@@ -166,7 +215,9 @@ export function limitingText(run: DesignRun): string {
 
 function failing(c: Candidate): Record<string, number> {
   const out: Record<string, number> = {};
-  CHECKS.forEach((name, i) => { if (c.checks[i] > 1e-9) out[name] = c.checks[i]; });
+  CHECKS.forEach((name, i) => {
+    if (c.checks[i] > 1e-9) out[name] = c.checks[i];
+  });
   return out;
 }
 
@@ -183,10 +234,16 @@ export function yieldNote(run: DesignRun): string[] {
   if (!run.yields) return [];
   const req = run.req;
   const n = run.yields[0]?.monteCarlo.samples ?? 0;
-  const lines = [`Yield: the share of made springs that pass every check, EN 15800 grade ${req.tolerance.grade}${Object.keys(req.tolerance.overrides).length ? ' with the given tolerances' : ''}, each tolerance taken as 3 sigma, the free length adjusted to the working force; seeded Monte Carlo of ${groupedCount(n)} springs (seed ${req.seed}).`
-    + (req.minYield !== undefined ? ` min_yield ${yieldPercent(req.minYield)}: the search required it by its estimate; the Monte Carlo confirms each listed spring to within its standard error (about ${sig(Math.sqrt(req.minYield * (1 - req.minYield) / Math.max(n, 1)) * 100, 2)}%).` : ' Add min_yield (such as 0.99) to design for it.')];
+  const lines = [
+    `Yield: the share of made springs that pass every check, EN 15800 grade ${req.tolerance.grade}${Object.keys(req.tolerance.overrides).length ? ' with the given tolerances' : ''}, each tolerance taken as 3 sigma, the free length adjusted to the working force; seeded Monte Carlo of ${groupedCount(n)} springs (seed ${req.seed}).` +
+      (req.minYield !== undefined
+        ? ` min_yield ${yieldPercent(req.minYield)}: the search required it by its estimate; the Monte Carlo confirms each listed spring to within its standard error (about ${sig(Math.sqrt((req.minYield * (1 - req.minYield)) / Math.max(n, 1)) * 100, 2)}%).`
+        : ' Add min_yield (such as 0.99) to design for it.'),
+  ];
   for (const r of run.refused ?? []) {
-    lines.push(`Refused: a ${r.candidate.item.choice.material.id} spring of d ${formatQuantity(r.candidate.geometry.wireDiameter, 'length', req.system)}, Na ${r.candidate.geometry.activeCoils} passed the search by its yield estimate (${yieldPercent(r.yield.estimate)}) but the Monte Carlo gives ${yieldPercent(r.yield.monteCarlo.yield)} +- ${sig(r.yield.monteCarlo.standardError * 100, 2)}%, below min_yield by more than its standard error: it is left out.`);
+    lines.push(
+      `Refused: a ${r.candidate.item.choice.material.id} spring of d ${formatQuantity(r.candidate.geometry.wireDiameter, 'length', req.system)}, Na ${r.candidate.geometry.activeCoils} passed the search by its yield estimate (${yieldPercent(r.yield.estimate)}) but the Monte Carlo gives ${yieldPercent(r.yield.monteCarlo.yield)} +- ${sig(r.yield.monteCarlo.standardError * 100, 2)}%, below min_yield by more than its standard error: it is left out.`,
+    );
   }
   return lines;
 }
@@ -199,19 +256,29 @@ export function candidateTable(cands: Candidate[], system: UnitSystem, yields?: 
 export function countsText(run: DesignRun, system: UnitSystem, showTiming = false): string {
   const r = run.result;
   const lines: string[] = [];
-  lines.push(`Searched ${r.cells} combinations of material, wire, ends and coil count (${run.problem.stock.length} wire stock items) with the ${r.strategy} strategy: ${r.evaluations} candidate evaluations${showTiming ? ` in ${sig(run.searchMs, 3)} ms` : ''}.`);
+  lines.push(
+    `Searched ${r.cells} combinations of material, wire, ends and coil count (${run.problem.stock.length} wire stock items) with the ${r.strategy} strategy: ${r.evaluations} candidate evaluations${showTiming ? ` in ${sig(run.searchMs, 3)} ms` : ''}.`,
+  );
   const skipped = `could not enter the top ${run.req.top}`;
-  lines.push(`Feasible combinations: ${r.feasibleCells}${r.prunedCells ? `; ${r.prunedCells} skipped because their lightest possible spring ${skipped}` : ''}.`);
-  const cut = reportedChecks(run.req).filter((c) => r.cutBy[c] > 0).map((c) => [c, String(r.cutBy[c]), CHECK_LABELS[c as CheckName]]);
+  lines.push(
+    `Feasible combinations: ${r.feasibleCells}${r.prunedCells ? `; ${r.prunedCells} skipped because their lightest possible spring ${skipped}` : ''}.`,
+  );
+  const cut = reportedChecks(run.req)
+    .filter((c) => r.cutBy[c] > 0)
+    .map((c) => [c, String(r.cutBy[c]), CHECK_LABELS[c as CheckName]]);
   if (cut.length) {
     lines.push('Combinations cut, by the check that failed worst:');
     lines.push(table(cut.sort((a, b) => Number(b[1]) - Number(a[1]))));
   }
   if (run.lp.status === 'bound' && run.lp.value !== null) {
     const bound = formatQuantity(run.lp.value, run.req.rank === 'mass' ? 'mass' : 'volume', system);
-    lines.push(`LP lower bound on ${run.req.rank.replace('_', ' ')} (log-space relaxation): ${bound}${run.gap !== null ? `; the best spring is ${sig(run.gap * 100, 3)}% above it` : ''}.`);
+    lines.push(
+      `LP lower bound on ${run.req.rank.replace('_', ' ')} (log-space relaxation): ${bound}${run.gap !== null ? `; the best spring is ${sig(run.gap * 100, 3)}% above it` : ''}.`,
+    );
   } else if (run.lp.status === 'infeasible') {
-    lines.push('LP relaxation: infeasible. Even with continuous wire sizes and coil counts no spring meets the stress, rate, envelope and solid-length relations together.');
+    lines.push(
+      'LP relaxation: infeasible. Even with continuous wire sizes and coil counts no spring meets the stress, rate, envelope and solid-length relations together.',
+    );
   }
   return lines.join('\n');
 }
@@ -226,9 +293,13 @@ function groupedHeader(run: DesignRun): string {
 export function designText(run: DesignRun, system: UnitSystem, showTiming = false): string {
   const out: string[] = [];
   const req = run.req;
-  out.push(`Spring design: ${formatQuantity(req.workingForce, 'force', system)} at ${formatQuantity(req.workingLength, 'length', system)}` +
-    (req.operatingLength !== undefined ? `, stroke to ${formatQuantity(req.operatingLength, 'length', system)}${req.operatingForce !== undefined ? ` at ${formatQuantity(req.operatingForce, 'force', system)}` : ''}` : '') +
-    `; ranked by ${req.rank.replace('_', ' ')}${run.grouped ? groupedHeader(run) : req.bestPerWire ? ', the best springs the genetic search found (not grouped)' : ', every feasible spring (--variants)'}`);
+  out.push(
+    `Spring design: ${formatQuantity(req.workingForce, 'force', system)} at ${formatQuantity(req.workingLength, 'length', system)}` +
+      (req.operatingLength !== undefined
+        ? `, stroke to ${formatQuantity(req.operatingLength, 'length', system)}${req.operatingForce !== undefined ? ` at ${formatQuantity(req.operatingForce, 'force', system)}` : ''}`
+        : '') +
+      `; ranked by ${req.rank.replace('_', ' ')}${run.grouped ? groupedHeader(run) : req.bestPerWire ? ', the best springs the genetic search found (not grouped)' : ', every feasible spring (--variants)'}`,
+  );
   if (req.strengthBasis === 'minimum') out.push(strengthBasisSummary(req.materials));
   out.push('');
   if (run.candidates.length) {
@@ -264,7 +335,9 @@ export function infeasibleText(run: DesignRun, system: UnitSystem): string {
     out.push('Nearest misses (least total violation) and the checks they fail:');
     out.push(candidateTable(misses, system));
     misses.forEach((c, i) => {
-      const f = Object.entries(failing(c)).map(([k, v]) => `${k} by ${sig(v * 100, 3)}%`).join(', ');
+      const f = Object.entries(failing(c))
+        .map(([k, v]) => `${k} by ${sig(v * 100, 3)}%`)
+        .join(', ');
       out.push(`  #${i + 1} fails: ${f}`);
     });
   }
@@ -272,4 +345,3 @@ export function infeasibleText(run: DesignRun, system: UnitSystem): string {
   out.push(...relaxLines(run, system));
   return out.join('\n');
 }
-

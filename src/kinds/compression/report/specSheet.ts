@@ -103,9 +103,14 @@ export function specSideView(a: SpringAnalysis, controlled: 'outer' | 'inner', w
   const cy = 26 + (g.outerDiameter * k) / 2;
   const X = (v: number) => x0 + v * k;
   const Y = (v: number) => cy - v * k;
-  const out = [`<svg id="spec-view" viewBox="0 0 ${W} ${H}" role="img" aria-label="side view at free length" xmlns="http://www.w3.org/2000/svg"><title>side view at free length</title><g class="wire">`];
+  const out = [
+    `<svg id="spec-view" viewBox="0 0 ${W} ${H}" role="img" aria-label="side view at free length" xmlns="http://www.w3.org/2000/svg"><title>side view at free length</title><g class="wire">`,
+  ];
   const s = dwg.sections;
-  for (let i = 0; i + 1 < s.length; i++) out.push(`<line x1="${r2(X(s[i].x))}" y1="${r2(Y(s[i].y))}" x2="${r2(X(s[i + 1].x))}" y2="${r2(Y(s[i + 1].y))}" stroke-width="${r2(Math.max(1, g.wireDiameter * k))}"/>`);
+  for (let i = 0; i + 1 < s.length; i++)
+    out.push(
+      `<line x1="${r2(X(s[i].x))}" y1="${r2(Y(s[i].y))}" x2="${r2(X(s[i + 1].x))}" y2="${r2(Y(s[i + 1].y))}" stroke-width="${r2(Math.max(1, g.wireDiameter * k))}"/>`,
+    );
   out.push('</g><g class="section">');
   for (const p of s) out.push(`<circle cx="${r2(X(p.x))}" cy="${r2(Y(p.y))}" r="${r2(Math.max(0.8, (g.wireDiameter * k) / 2))}"/>`);
   out.push('</g><g class="dim">');
@@ -113,14 +118,23 @@ export function specSideView(a: SpringAnalysis, controlled: 'outer' | 'inner', w
   const yL = Y(-g.outerDiameter / 2) + 18;
   const xa = X(0);
   const xb = X(g.freeLength);
-  out.push(`<line x1="${r2(xa)}" y1="${r2(yL)}" x2="${r2(xb)}" y2="${r2(yL)}"/><line x1="${r2(xa)}" y1="${r2(yL - 5)}" x2="${r2(xa)}" y2="${r2(yL + 5)}"/><line x1="${r2(xb)}" y1="${r2(yL - 5)}" x2="${r2(xb)}" y2="${r2(yL + 5)}"/>`);
+  out.push(
+    `<line x1="${r2(xa)}" y1="${r2(yL)}" x2="${r2(xb)}" y2="${r2(yL)}"/><line x1="${r2(xa)}" y1="${r2(yL - 5)}" x2="${r2(xa)}" y2="${r2(yL + 5)}"/><line x1="${r2(xb)}" y1="${r2(yL - 5)}" x2="${r2(xb)}" y2="${r2(yL + 5)}"/>`,
+  );
   out.push(`<text x="${r2((xa + xb) / 2)}" y="${r2(yL + 13)}" text-anchor="middle">L0 (${w.free(g.freeLength)}) reference</text>`);
   // Controlled diameter at the right end: outer edges for OD, inner edges for ID.
   const half = controlled === 'outer' ? g.outerDiameter / 2 : g.innerDiameter / 2;
   const xd = xb + 16;
-  out.push(`<line x1="${r2(xd)}" y1="${r2(Y(half))}" x2="${r2(xd)}" y2="${r2(Y(-half))}"/><line x1="${r2(xd - 5)}" y1="${r2(Y(half))}" x2="${r2(xd + 5)}" y2="${r2(Y(half))}"/><line x1="${r2(xd - 5)}" y1="${r2(Y(-half))}" x2="${r2(xd + 5)}" y2="${r2(Y(-half))}"/>`);
-  if (controlled === 'inner') out.push(`<line x1="${r2(xb)}" y1="${r2(Y(half))}" x2="${r2(xd)}" y2="${r2(Y(half))}" stroke-dasharray="2 2"/><line x1="${r2(xb)}" y1="${r2(Y(-half))}" x2="${r2(xd)}" y2="${r2(Y(-half))}" stroke-dasharray="2 2"/>`);
-  out.push(`<text transform="translate(${r2(xd + 12)} ${r2(cy)}) rotate(-90)" text-anchor="middle">${controlled === 'outer' ? 'OD' : 'ID'} ${esc(w.dia(controlled === 'outer' ? g.outerDiameter : g.innerDiameter))} ${esc(diaTol)}</text>`);
+  out.push(
+    `<line x1="${r2(xd)}" y1="${r2(Y(half))}" x2="${r2(xd)}" y2="${r2(Y(-half))}"/><line x1="${r2(xd - 5)}" y1="${r2(Y(half))}" x2="${r2(xd + 5)}" y2="${r2(Y(half))}"/><line x1="${r2(xd - 5)}" y1="${r2(Y(-half))}" x2="${r2(xd + 5)}" y2="${r2(Y(-half))}"/>`,
+  );
+  if (controlled === 'inner')
+    out.push(
+      `<line x1="${r2(xb)}" y1="${r2(Y(half))}" x2="${r2(xd)}" y2="${r2(Y(half))}" stroke-dasharray="2 2"/><line x1="${r2(xb)}" y1="${r2(Y(-half))}" x2="${r2(xd)}" y2="${r2(Y(-half))}" stroke-dasharray="2 2"/>`,
+    );
+  out.push(
+    `<text transform="translate(${r2(xd + 12)} ${r2(cy)}) rotate(-90)" text-anchor="middle">${controlled === 'outer' ? 'OD' : 'ID'} ${esc(w.dia(controlled === 'outer' ? g.outerDiameter : g.innerDiameter))} ${esc(diaTol)}</text>`,
+  );
   out.push(`<text x="${r2(xa)}" y="${r2(Y(g.outerDiameter / 2) - 8)}">d ${esc(w.dia(g.wireDiameter))}, ${g.totalCoils} total coils, ${g.ends} ends</text>`);
   out.push('</g></svg>');
   return out.join('');
@@ -144,15 +158,22 @@ export function specSheetHtml(input: SpecSheetInput): string {
   const operating = req.operatingLength !== undefined ? { length: req.operatingLength, force: F1 + a.rate * (L1 - req.operatingLength) } : undefined;
   const shortest = shortestLength(req);
   const lsMax = largestSolidLength(a, t);
-  const direction = input.coilingDirection === 'left' ? 'left hand' : input.coilingDirection === 'right' ? 'right hand' : 'optional (maker\'s choice)';
-  const envelope = controlled === 'outer'
-    ? (req.maxOuterDiameter !== undefined ? `works in a bore of ${w.dia(req.maxOuterDiameter)}` : 'no bore given')
-    : `works over a rod of ${w.dia(req.minInnerDiameter!)}`;
+  const direction = input.coilingDirection === 'left' ? 'left hand' : input.coilingDirection === 'right' ? 'right hand' : "optional (maker's choice)";
+  const envelope =
+    controlled === 'outer'
+      ? req.maxOuterDiameter !== undefined
+        ? `works in a bore of ${w.dia(req.maxOuterDiameter)}`
+        : 'no bore given'
+      : `works over a rod of ${w.dia(req.minInnerDiameter!)}`;
 
   const spring = [
     row('material', m.name, m.standard),
     row('wire diameter d', `${w.dia(g.wireDiameter)} ± ${w.tol(t.wireDiameter.halfWidth)}`, t.wireDiameter.source),
-    row(controlled === 'outer' ? 'outer diameter OD (controlled)' : 'inner diameter ID (controlled)', `${w.dia(controlled === 'outer' ? g.outerDiameter : g.innerDiameter)} ${diaTol}`, `EN 15800 grade ${t.grade}; ${envelope}`),
+    row(
+      controlled === 'outer' ? 'outer diameter OD (controlled)' : 'inner diameter ID (controlled)',
+      `${w.dia(controlled === 'outer' ? g.outerDiameter : g.innerDiameter)} ${diaTol}`,
+      `EN 15800 grade ${t.grade}; ${envelope}`,
+    ),
     row('mean diameter D', w.dia(g.meanDiameter), `index ${g.springIndex.toFixed(2)}`),
     row('free length L0', `${w.free(g.freeLength)} reference`, `adjusted by the maker to meet the working force (about ± ${w.free(t.freeLength.halfWidth)})`),
     row('total / active coils', `${g.totalCoils} / ${g.activeCoils}`, `active coils ± ${t.activeCoils.halfWidth} held by the coiler`),
@@ -163,7 +184,11 @@ export function specSheetHtml(input: SpecSheetInput): string {
   const loads = [
     row('working force F1', `${w.F(F1)} ± ${pct(band)}`, `at length L1 = ${w.free(L1)}; the toleranced force`),
     operating
-      ? row('operating force F2', `${w.F(operating.force)} ± ${pct(req.loadTolerance > 0 ? req.loadTolerance : band)}`, `at length L2 = ${w.free(operating.length)}${req.operatingForce !== undefined ? `; required ${w.F(req.operatingForce)}` : ''}`)
+      ? row(
+          'operating force F2',
+          `${w.F(operating.force)} ± ${pct(req.loadTolerance > 0 ? req.loadTolerance : band)}`,
+          `at length L2 = ${w.free(operating.length)}${req.operatingForce !== undefined ? `; required ${w.F(req.operatingForce)}` : ''}`,
+        )
       : row('operating force F2', 'none', 'static spring: one working length'),
     row('rate', formatQuantity(a.rate, 'rate', system), 'for information'),
   ];
@@ -171,8 +196,16 @@ export function specSheetHtml(input: SpecSheetInput): string {
     row('set removal', req.setRemoved ? 'yes' : 'no', req.setRemoved ? 'the allowable stress assumes the set is removed' : ''),
     row('shot peening', req.peened ? 'yes' : 'no', req.peened ? 'the fatigue strength assumes peened wire' : ''),
     row('finish', input.finish ?? 'to be agreed', input.finish ? '' : 'state a coating or oil if corrosion matters'),
-    row('temperature', req.temperature !== undefined ? formatQuantity(req.temperature, 'temperature', system) : 'not given', m.maxTemperature ? `material maximum ${formatQuantity(m.maxTemperature.value, 'temperature', system)}` : ''),
-    row('load cycles', req.cycles === undefined ? 'static' : Number.isFinite(req.cycles) ? req.cycles.toExponential(1).replace('e+', 'e') : 'infinite life', a.fatigue ? `fatigue safety factor ${a.fatigue.safetyFactor.toFixed(2)} (${a.fatigue.criterion})` : ''),
+    row(
+      'temperature',
+      req.temperature !== undefined ? formatQuantity(req.temperature, 'temperature', system) : 'not given',
+      m.maxTemperature ? `material maximum ${formatQuantity(m.maxTemperature.value, 'temperature', system)}` : '',
+    ),
+    row(
+      'load cycles',
+      req.cycles === undefined ? 'static' : Number.isFinite(req.cycles) ? req.cycles.toExponential(1).replace('e+', 'e') : 'infinite life',
+      a.fatigue ? `fatigue safety factor ${a.fatigue.safetyFactor.toFixed(2)} (${a.fatigue.criterion})` : '',
+    ),
     row('static safety factor', a.staticSafetyFactor.toFixed(2), `at the shortest working length`),
   ];
   const y = input.yield;
@@ -183,10 +216,18 @@ export function specSheetHtml(input: SpecSheetInput): string {
   ];
   if (y) {
     quality.push(row('yield (estimate)', pct(y.estimate), 'first order, the working force met at adjustment'));
-    if (y.monteCarlo) quality.push(row('yield (Monte Carlo)', pct(y.monteCarlo.yield), `${y.monteCarlo.samples} samples${y.seed !== undefined ? `, seed ${y.seed}` : ''}; limiting: ${CHECK_WORDS(y.monteCarlo.limiting)}`));
+    if (y.monteCarlo)
+      quality.push(
+        row(
+          'yield (Monte Carlo)',
+          pct(y.monteCarlo.yield),
+          `${y.monteCarlo.samples} samples${y.seed !== undefined ? `, seed ${y.seed}` : ''}; limiting: ${CHECK_WORDS(y.monteCarlo.limiting)}`,
+        ),
+      );
   }
   const notes = [...t.notes];
-  if (lsMax >= shortest) notes.push(`the largest solid length ${w.free(lsMax)} reaches the shortest working length ${w.free(shortest)}: agree the solid length with the maker`);
+  if (lsMax >= shortest)
+    notes.push(`the largest solid length ${w.free(lsMax)} reaches the shortest working length ${w.free(shortest)}: agree the solid length with the maker`);
   const title = input.part ? `Compression spring: ${input.part}` : 'Compression spring specification';
   const unitsLine = system === 'us' ? 'Dimensions in inches, forces in lbf' : 'Dimensions in mm, forces in N';
   return `<!doctype html>
@@ -220,9 +261,22 @@ ${notes.length ? `<p class="note warn">${notes.map(esc).join('<br>')}</p>` : ''}
 
 /** Write the sheet of a reported spring (as drawn, at the requirement's tolerance grade and overrides,
  * or grade `grade` when given, seeded Monte Carlo with as many samples as the design's confirmation). */
-export function writeSpecSheet(path: string, c: { geometry: SpringGeometry; item: { figures: MaterialFigures; choice: { material: Material } } }, req: Requirements, system: UnitSystem, force: boolean, grade?: ToleranceGrade): SpecifiedSpring {
+export function writeSpecSheet(
+  path: string,
+  c: { geometry: SpringGeometry; item: { figures: MaterialFigures; choice: { material: Material } } },
+  req: Requirements,
+  system: UnitSystem,
+  force: boolean,
+  grade?: ToleranceGrade,
+): SpecifiedSpring {
   const shown = { ...req, system };
-  const spec = specifySpring(loadToleranceCatalog(), grade === undefined ? req.tolerance : { grade, overrides: {} }, { geometry: c.geometry, figures: c.item.figures, material: c.item.choice.material }, shown, { samples: CONFIRM_SAMPLES });
+  const spec = specifySpring(
+    loadToleranceCatalog(),
+    grade === undefined ? req.tolerance : { grade, overrides: {} },
+    { geometry: c.geometry, figures: c.item.figures, material: c.item.choice.material },
+    shown,
+    { samples: CONFIRM_SAMPLES },
+  );
   writeOutputFile(path, specSheetHtml(spec.sheet), force, '--spec');
   return spec;
 }

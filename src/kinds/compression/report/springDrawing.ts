@@ -4,7 +4,13 @@
 // diameter, the active coils at the spring's pitch.
 import { inactiveCoils, pitch as pitchOf, type EndType } from '../geometry.js';
 
-export interface DrawingInput { wireDiameter: number; meanDiameter: number; activeCoils: number; ends: EndType; freeLength: number }
+export interface DrawingInput {
+  wireDiameter: number;
+  meanDiameter: number;
+  activeCoils: number;
+  ends: EndType;
+  freeLength: number;
+}
 
 export interface SpringDrawing {
   /** Wire cross-sections: x along the axis from 0 to the free length, y = +D/2 (top) or -D/2 (bottom). */
@@ -42,6 +48,6 @@ export function springDrawing(s: DrawingInput): SpringDrawing {
   const span = xs[xs.length - 1] - xs[0];
   const usable = s.freeLength - 2 * start;
   const k = span > 0 ? usable / span : 1;
-  const sections = xs.map((v, t) => ({ x: start + (v - xs[0]) * k, y: (t % 2 === 0 ? 1 : -1) * s.meanDiameter / 2 }));
+  const sections = xs.map((v, t) => ({ x: start + (v - xs[0]) * k, y: ((t % 2 === 0 ? 1 : -1) * s.meanDiameter) / 2 }));
   return { sections, pitch: p, outerDiameter: s.meanDiameter + d, length: s.freeLength };
 }

@@ -9,7 +9,13 @@ import { CONVENTIONS, htmlTable, page } from '../../../report/html/page.js';
 export function springHtml(c: SpringCase, a: SpringAnalysis, system: UnitSystem): string {
   const m = c.materialChoice.material;
   const sections = springSections(a, system, c.service, `${m.name} (${m.standard})`);
-  sections.push(`<h2>Conventions</h2>${htmlTable(['item', 'method and source'], CONVENTIONS.map(([x, y]) => [x, y]), { cls: 'kv' })}`);
+  sections.push(
+    `<h2>Conventions</h2>${htmlTable(
+      ['item', 'method and source'],
+      CONVENTIONS.map(([x, y]) => [x, y]),
+      { cls: 'kv' },
+    )}`,
+  );
   return page('coilfront spring analysis', `${m.name}, ${a.geometry.ends} ends. Written by coilfront.`, sections);
 }
 

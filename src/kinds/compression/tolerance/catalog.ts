@@ -13,8 +13,17 @@ import { InputError, parseQuantity } from '../../../units/parse.js';
 export const GRADES = [1, 2, 3] as const;
 export type ToleranceGrade = (typeof GRADES)[number];
 
-export interface WireToleranceRow { maxDiameter: number; tolerance: number; source: string }
-export interface WireToleranceTable { id: string; standards: string[]; source: string; rows: WireToleranceRow[] }
+export interface WireToleranceRow {
+  maxDiameter: number;
+  tolerance: number;
+  source: string;
+}
+export interface WireToleranceTable {
+  id: string;
+  standards: string[];
+  source: string;
+  rows: WireToleranceRow[];
+}
 
 export interface CoilDiameterRow {
   maxMeanDiameter: number;
@@ -70,34 +79,40 @@ function fraction(f: Fields, key: string): number {
 }
 
 function readWireTables(list: unknown[], file: string): WireToleranceTable[] {
-  return list.map((raw, t) => within(file, `wire_diameter[${t}]`, () => {
-    const f = Fields.of(raw, `wire_diameter[${t}]`, 'si');
-    const id = f.string('id') ?? `table ${t}`;
-    const standards = (f.list('standards') ?? []).map((s, i) => {
-      if (typeof s !== 'string' || !s.trim()) throw new InputError(`${f.name('standards')}[${i}]`, 'the start of a wire standard\'s name', s);
-      return s.trim();
-    });
-    if (standards.length === 0) throw new InputError(f.name('standards'), 'a non-empty list of wire standards');
-    const rowsRaw = f.list('rows');
-    if (!rowsRaw || rowsRaw.length === 0) throw new InputError(f.name('rows'), 'a non-empty list of { max_diameter, tolerance, source }');
-    const rows = rowsRaw.map((r, i) => {
-      const g = Fields.of(r, `${f.name('rows')}[${i}]`, 'si');
-      const maxDiameter = g.requiredQuantity('max_diameter', 'length', { positive: true });
-      const tolerance = g.requiredQuantity('tolerance', 'length', { positive: true });
-      if (tolerance > 0.1 * maxDiameter) throw new InputError(g.name('tolerance'), 'a tolerance under a tenth of the diameter', g.get('tolerance'));
-      const row = { maxDiameter, tolerance, source: source(g) };
-      g.rejectUnknown();
-      return row;
-    });
-    ascending(rows.map((r) => r.maxDiameter), `${f.name('rows')}.max_diameter`);
-    // A larger wire never holds a tighter tolerance in any wire standard seen.
-    rows.forEach((r, i) => {
-      if (i > 0 && r.tolerance < rows[i - 1].tolerance) throw new InputError(`${f.name('rows')}[${i}].tolerance`, 'a tolerance at least that of the smaller sizes', r.tolerance);
-    });
-    const table = { id, standards, source: source(f), rows };
-    f.rejectUnknown();
-    return table;
-  }));
+  return list.map((raw, t) =>
+    within(file, `wire_diameter[${t}]`, () => {
+      const f = Fields.of(raw, `wire_diameter[${t}]`, 'si');
+      const id = f.string('id') ?? `table ${t}`;
+      const standards = (f.list('standards') ?? []).map((s, i) => {
+        if (typeof s !== 'string' || !s.trim()) throw new InputError(`${f.name('standards')}[${i}]`, "the start of a wire standard's name", s);
+        return s.trim();
+      });
+      if (standards.length === 0) throw new InputError(f.name('standards'), 'a non-empty list of wire standards');
+      const rowsRaw = f.list('rows');
+      if (!rowsRaw || rowsRaw.length === 0) throw new InputError(f.name('rows'), 'a non-empty list of { max_diameter, tolerance, source }');
+      const rows = rowsRaw.map((r, i) => {
+        const g = Fields.of(r, `${f.name('rows')}[${i}]`, 'si');
+        const maxDiameter = g.requiredQuantity('max_diameter', 'length', { positive: true });
+        const tolerance = g.requiredQuantity('tolerance', 'length', { positive: true });
+        if (tolerance > 0.1 * maxDiameter) throw new InputError(g.name('tolerance'), 'a tolerance under a tenth of the diameter', g.get('tolerance'));
+        const row = { maxDiameter, tolerance, source: source(g) };
+        g.rejectUnknown();
+        return row;
+      });
+      ascending(
+        rows.map((r) => r.maxDiameter),
+        `${f.name('rows')}.max_diameter`,
+      );
+      // A larger wire never holds a tighter tolerance in any wire standard seen.
+      rows.forEach((r, i) => {
+        if (i > 0 && r.tolerance < rows[i - 1].tolerance)
+          throw new InputError(`${f.name('rows')}[${i}].tolerance`, 'a tolerance at least that of the smaller sizes', r.tolerance);
+      });
+      const table = { id, standards, source: source(f), rows };
+      f.rejectUnknown();
+      return table;
+    }),
+  );
 }
 
 function readCoilTable(raw: unknown, file: string): CoilDiameterTable {
@@ -109,11 +124,11 @@ function readCoilTable(raw: unknown, file: string): CoilDiameterTable {
       if (typeof v !== 'number' || !(v > 1)) throw new InputError(`${f.name('index_columns')}[${i}]`, 'a spring index above 1', v);
       return v;
     });
-    if (indexColumns.length === 0) throw new InputError(f.name('index_columns'), 'a non-empty list of the index columns\' upper ends');
+    if (indexColumns.length === 0) throw new InputError(f.name('index_columns'), "a non-empty list of the index columns' upper ends");
     ascending(indexColumns, f.name('index_columns'));
     const minMeanDiameter = f.requiredQuantity('min_mean_diameter', 'length', { positive: true });
     const minIndex = f.number('min_index', { positive: true }) ?? NaN;
-    if (!(minIndex < indexColumns[0])) throw new InputError(f.name('min_index'), 'a spring index below the first column\'s upper end', f.get('min_index'));
+    if (!(minIndex < indexColumns[0])) throw new InputError(f.name('min_index'), "a spring index below the first column's upper end", f.get('min_index'));
     const rowsRaw = f.list('rows');
     if (!rowsRaw || rowsRaw.length === 0) throw new InputError(f.name('rows'), 'a non-empty list of rows');
     const rows = rowsRaw.map((r, i): CoilDiameterRow => {
@@ -122,24 +137,33 @@ function readCoilTable(raw: unknown, file: string): CoilDiameterTable {
       const grades = GRADES.map((grade) => {
         const key = `grade_${grade}`;
         const list = g.list(key);
-        if (!list || list.length !== indexColumns.length) throw new InputError(g.name(key), `a list of ${indexColumns.length} tolerances (one per index column)`, g.get(key));
+        if (!list || list.length !== indexColumns.length)
+          throw new InputError(g.name(key), `a list of ${indexColumns.length} tolerances (one per index column)`, g.get(key));
         return list.map((v, j) => parseQuantity(v, 'length', 'si', `${g.name(key)}[${j}]`, { positive: true }));
       }) as [number[], number[], number[]];
       // The table's own logic: a finer grade is never looser, a slenderer coil (larger index) never tighter.
-      grades.forEach((cols, k) => cols.forEach((v, j) => {
-        if (j > 0 && v < cols[j - 1]) throw new InputError(`${g.name(`grade_${k + 1}`)}[${j}]`, 'a tolerance at least that of the smaller index', v);
-        if (k > 0 && v < grades[k - 1][j]) throw new InputError(`${g.name(`grade_${k + 1}`)}[${j}]`, `a tolerance at least grade ${k}'s`, v);
-      }));
+      grades.forEach((cols, k) =>
+        cols.forEach((v, j) => {
+          if (j > 0 && v < cols[j - 1]) throw new InputError(`${g.name(`grade_${k + 1}`)}[${j}]`, 'a tolerance at least that of the smaller index', v);
+          if (k > 0 && v < grades[k - 1][j]) throw new InputError(`${g.name(`grade_${k + 1}`)}[${j}]`, `a tolerance at least grade ${k}'s`, v);
+        }),
+      );
       const row = { maxMeanDiameter, grades, source: source(g) };
       g.rejectUnknown();
       return row;
     });
-    ascending(rows.map((r) => r.maxMeanDiameter), `${f.name('rows')}.max_mean_diameter`);
+    ascending(
+      rows.map((r) => r.maxMeanDiameter),
+      `${f.name('rows')}.max_mean_diameter`,
+    );
     rows.forEach((r, i) => {
       if (i === 0) return;
-      r.grades.forEach((cols, k) => cols.forEach((v, j) => {
-        if (v < rows[i - 1].grades[k][j]) throw new InputError(`${f.name('rows')}[${i}].grade_${k + 1}[${j}]`, 'a tolerance at least that of the smaller diameters', v);
-      }));
+      r.grades.forEach((cols, k) =>
+        cols.forEach((v, j) => {
+          if (v < rows[i - 1].grades[k][j])
+            throw new InputError(`${f.name('rows')}[${i}].grade_${k + 1}[${j}]`, 'a tolerance at least that of the smaller diameters', v);
+        }),
+      );
     });
     f.rejectUnknown();
     return { standard, defaultGrade: defaultGrade ?? 2, indexColumns, minMeanDiameter, minIndex, rows };
@@ -166,12 +190,13 @@ export function parseToleranceCatalog(doc: unknown, file: string): ToleranceCata
     if (missing.length) throw new InputError('shear_modulus', `a row for every material family (missing: ${missing.join(', ')})`);
     return rows;
   });
-  const single = (key: string, read: (g: Fields) => number) => within(file, key, () => {
-    const g = Fields.of(top.get(key), key, 'si');
-    const out = { tolerance: read(g), source: source(g) };
-    g.rejectUnknown();
-    return out;
-  });
+  const single = (key: string, read: (g: Fields) => number) =>
+    within(file, key, () => {
+      const g = Fields.of(top.get(key), key, 'si');
+      const out = { tolerance: read(g), source: source(g) };
+      g.rejectUnknown();
+      return out;
+    });
   const activeCoils = single('active_coils', (g) => g.number('tolerance', { nonNegative: true, max: 2 }) ?? NaN);
   if (Number.isNaN(activeCoils.tolerance)) throw new CatalogError(`${file}: active_coils: tolerance: expected a number of coils (the field is missing)`);
   const workingForce = single('working_force', (g) => fraction(g, 'tolerance'));

@@ -28,7 +28,12 @@ export function candidateYield(c: Candidate, req: Requirements, catalog: Toleran
 }
 
 /** The same for any spring (a given one, a stock part, an exported drawing): `check` judges min_yield by it. */
-export function springYieldFigures(spring: DesignedSpring, req: Requirements, catalog: ToleranceCatalog = loadToleranceCatalog(), samples = CONFIRM_SAMPLES): CandidateYield {
+export function springYieldFigures(
+  spring: DesignedSpring,
+  req: Requirements,
+  catalog: ToleranceCatalog = loadToleranceCatalog(),
+  samples = CONFIRM_SAMPLES,
+): CandidateYield {
   const tolerances = designedTolerances(catalog, req.tolerance, spring, req);
   const nominal = nominalQuantities(spring, req);
   const sigma = standardDeviations(tolerances);
@@ -56,12 +61,20 @@ export interface ConfirmedList {
 }
 
 /** Confirm every candidate; the refused ones leave the list (their places are not refilled). */
-export function confirmCandidates(candidates: readonly Candidate[], req: Requirements, catalog: ToleranceCatalog = loadToleranceCatalog(), samples = CONFIRM_SAMPLES): ConfirmedList {
+export function confirmCandidates(
+  candidates: readonly Candidate[],
+  req: Requirements,
+  catalog: ToleranceCatalog = loadToleranceCatalog(),
+  samples = CONFIRM_SAMPLES,
+): ConfirmedList {
   const out: ConfirmedList = { candidates: [], yields: [], refused: [] };
   for (const c of candidates) {
     const y = candidateYield(c, req, catalog, samples);
     if (y.refused) out.refused.push({ candidate: c, yield: y });
-    else { out.candidates.push(c); out.yields.push(y); }
+    else {
+      out.candidates.push(c);
+      out.yields.push(y);
+    }
   }
   return out;
 }

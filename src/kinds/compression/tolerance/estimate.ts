@@ -67,8 +67,7 @@ const INV_SQRT_2PI = 1 / Math.sqrt(2 * Math.PI);
 export function normalCdf(x: number): number {
   if (x !== x) return NaN;
   const t = 1 / (1 + 0.2316419 * Math.abs(x));
-  const tail = INV_SQRT_2PI * Math.exp(-0.5 * x * x)
-    * t * (0.319381530 + t * (-0.356563782 + t * (1.781477937 + t * (-1.821255978 + t * 1.330274429))));
+  const tail = INV_SQRT_2PI * Math.exp(-0.5 * x * x) * t * (0.31938153 + t * (-0.356563782 + t * (1.781477937 + t * (-1.821255978 + t * 1.330274429))));
   return x >= 0 ? 1 - tail : tail;
 }
 
@@ -175,13 +174,19 @@ export function estimateYield(evaluate: CheckEvaluator, nominal: ArrayLike<numbe
           if (refined === refined) beta = refined;
         }
         p = normalCdf(beta);
-        if (beta < SURE) { s.beta[j] = beta; s.order[count++] = j; }
+        if (beta < SURE) {
+          s.beta[j] = beta;
+          s.order[count++] = j;
+        }
       } else p = g <= 0 ? 1 : 0;
     }
     s.pass[j] = p;
     product *= p;
     failSum += 1 - p;
-    if (p < worst) { worst = p; s.limiting = j; }
+    if (p < worst) {
+      worst = p;
+      s.limiting = j;
+    }
   }
   s.independent = product;
   s.lowerBound = failSum < 1 ? 1 - failSum : 0;
@@ -196,7 +201,10 @@ function conditionalMargins(s: YieldScratch, count: number, n: number): number {
   for (let a = 1; a < count; a++) {
     const j = order[a];
     let b = a - 1;
-    while (b >= 0 && beta[order[b]] > beta[j]) { order[b + 1] = order[b]; b--; }
+    while (b >= 0 && beta[order[b]] > beta[j]) {
+      order[b + 1] = order[b];
+      b--;
+    }
     order[b + 1] = j;
   }
   // Correlations of the listed checks, rho[a * count + b]. Two checks with opposite gradients are the

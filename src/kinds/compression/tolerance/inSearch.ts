@@ -12,7 +12,11 @@ import { estimateYield, yieldScratch, type CheckEvaluator, type YieldScratch } f
 import { madeSpringChecks, madeSpringContext, yieldChecks } from './madeSpring.js';
 import { Q, TOLERANCED, meanDiameterHalfWidth, wireDiameterTolerance, type ToleranceOverride } from './model.js';
 
-export interface YieldStockItem { choice: MaterialChoice; wireDiameter: number; figures: MaterialFigures }
+export interface YieldStockItem {
+  choice: MaterialChoice;
+  wireDiameter: number;
+  figures: MaterialFigures;
+}
 
 export interface InSearchYield {
   /** Estimated yield of the spring (stock item i, end type e, mean diameter D, active coils Na). */

@@ -52,11 +52,19 @@ export interface MadeSpringContext {
 
 export function madeSpringContext(req: Requirements, figures: MaterialFigures, ends: EndType): MadeSpringContext {
   const ultimateShear = ultimateShearStrength(figures.tensileStrength);
-  const { point } = endurancePoint(req.cycles ?? INFINITE_LIFE_CYCLES, req.peened, figures.zimmerli, figures.finiteLife, figures.tensileStrength, req.criterion);
+  const { point } = endurancePoint(
+    req.cycles ?? INFINITE_LIFE_CYCLES,
+    req.peened,
+    figures.zimmerli,
+    figures.finiteLife,
+    figures.tensileStrength,
+    req.criterion,
+  );
   const { limit, factor } = staticLimit(req, figures.allowableStress);
   return {
     active: Uint8Array.from(activeChecks(req).map((a) => (a ? 1 : 0))),
-    ends, inactive: inactiveCoils(ends),
+    ends,
+    inactive: inactiveCoils(ends),
     workingLength: req.workingLength,
     shortest: shortestLength(req),
     travel: req.workingLength - shortestLength(req),
@@ -64,7 +72,9 @@ export function madeSpringContext(req: Requirements, figures: MaterialFigures, e
     loadTolerance: forceBand(req),
     correction: req.correction,
     directShear: req.directShear,
-    staticFactor: factor, limit, ultimateShear,
+    staticFactor: factor,
+    limit,
+    ultimateShear,
     endurance: point,
     fullyReversed: fullyReversedEndurance(point, ultimateShear, req.criterion),
     criterion: req.criterion,
@@ -112,7 +122,8 @@ export function madeSpringChecks(c: MadeSpringContext, q: ArrayLike<number>, g: 
     const minGap = minimumGapSum(D, d, Na);
     g[CHECK.coil_gaps] = (minGap - (Lmin - Ls)) / Math.max(minGap, 1e-12);
   }
-  if (on[CHECK.outer_diameter_at_solid] === 1) g[CHECK.outer_diameter_at_solid] = (solidOuterDiameter(D, d, pitch(L0, Na, d, c.ends)) - c.maxOuterDiameter) / c.maxOuterDiameter;
+  if (on[CHECK.outer_diameter_at_solid] === 1)
+    g[CHECK.outer_diameter_at_solid] = (solidOuterDiameter(D, d, pitch(L0, Na, d, c.ends)) - c.maxOuterDiameter) / c.maxOuterDiameter;
   g[CHECK.static_stress] = (tauMax * c.staticFactor - c.limit) / c.limit;
   if (on[CHECK.solid_stress] === 1) g[CHECK.solid_stress] = (shearStress(k * (L0 - Ls), D, d, K) - c.limit) / c.limit;
   if (on[CHECK.fatigue] === 1) {

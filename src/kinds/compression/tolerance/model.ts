@@ -105,7 +105,8 @@ export function meanDiameterTolerance(table: CoilDiameterTable, grade: Tolerance
   if (col < 0) {
     col = table.indexColumns.length - 1;
     notes.push(`spring index ${w.toFixed(2)} is above the ${table.standard} scope (${table.indexColumns[col]}): the last column is used`);
-  } else if (w < table.minIndex * (1 - 1e-9)) notes.push(`spring index ${w.toFixed(2)} is below the ${table.standard} scope (${table.minIndex}): the first column is used`);
+  } else if (w < table.minIndex * (1 - 1e-9))
+    notes.push(`spring index ${w.toFixed(2)} is below the ${table.standard} scope (${table.minIndex}): the first column is used`);
   return { halfWidth: row.grades[grade - 1][col], source: `${table.standard} grade ${grade}: ${row.source}` };
 }
 
@@ -129,18 +130,26 @@ export function springTolerances(catalog: ToleranceCatalog, request: ToleranceRe
   const notes: string[] = [];
   const o = request.overrides;
   const wireDiameter = resolve(o.wire_diameter, n.wireDiameter, () => wireDiameterTolerance(catalog, n.material, n.wireDiameter, notes));
-  const meanDiameter = resolve(o.mean_diameter, n.meanDiameter, () => meanDiameterTolerance(catalog.meanDiameter, request.grade, n.meanDiameter, n.meanDiameter / n.wireDiameter, notes));
+  const meanDiameter = resolve(o.mean_diameter, n.meanDiameter, () =>
+    meanDiameterTolerance(catalog.meanDiameter, request.grade, n.meanDiameter, n.meanDiameter / n.wireDiameter, notes),
+  );
   const shearModulus = resolve(o.shear_modulus, n.shearModulus, () => {
     const row = catalog.shearModulus.find((r) => r.family === n.material.family)!;
     return { halfWidth: row.tolerance * n.shearModulus, source: row.source };
   });
   const activeCoils = resolve(o.active_coils, n.activeCoils, () => ({ halfWidth: catalog.activeCoils.tolerance, source: catalog.activeCoils.source }));
-  const workingForce = resolve(o.working_force, n.workingForce, () => ({ halfWidth: catalog.workingForce.tolerance * n.workingForce, source: catalog.workingForce.source }));
+  const workingForce = resolve(o.working_force, n.workingForce, () => ({
+    halfWidth: catalog.workingForce.tolerance * n.workingForce,
+    source: catalog.workingForce.source,
+  }));
   // L0 = L1 + F1 / k: the deflection F1/k takes the rate's relative spread and the force's.
   const deflection = n.workingForce / n.rate;
   const sk = rateSpread(n, { wireDiameter, meanDiameter, shearModulus, activeCoils });
   const sf = workingForce.halfWidth / (3 * n.workingForce);
-  const freeLength = { halfWidth: 3 * deflection * Math.sqrt(sk * sk + sf * sf), source: 'follows from the spread of the rate, the free length being adjusted to the working force (first order)' };
+  const freeLength = {
+    halfWidth: 3 * deflection * Math.sqrt(sk * sk + sf * sf),
+    source: 'follows from the spread of the rate, the free length being adjusted to the working force (first order)',
+  };
   const wireTable = wireTableFor(catalog, n.material);
   const standards = [catalog.meanDiameter.standard, wireTable.standards.some((s) => s.startsWith('EN')) ? 'EN 10270-1' : n.material.standard].filter((s) => s);
   return { grade: request.grade, wireDiameter, meanDiameter, shearModulus, activeCoils, workingForce, freeLength, notes, standards };

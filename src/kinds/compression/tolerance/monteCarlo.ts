@@ -28,7 +28,13 @@ export interface YieldResult {
  * Sample made springs around `nominal` with standard deviations `sigma`, judge each with `evaluate`
  * (checks marked in `include`; a NaN value fails) and count the passes.
  */
-export function monteCarloYield(evaluate: CheckEvaluator, nominal: ArrayLike<number>, sigma: ArrayLike<number>, include: Uint8Array, opts: MonteCarloOptions = {}): YieldResult {
+export function monteCarloYield(
+  evaluate: CheckEvaluator,
+  nominal: ArrayLike<number>,
+  sigma: ArrayLike<number>,
+  include: Uint8Array,
+  opts: MonteCarloOptions = {},
+): YieldResult {
   const samples = opts.samples ?? DEFAULT_SAMPLES;
   if (!(Number.isInteger(samples) && samples > 0)) throw new RangeError(`samples must be a positive whole number, got ${samples}`);
   const uniform = seedrandom(String(opts.seed ?? 1));
@@ -73,7 +79,10 @@ export function monteCarloYield(evaluate: CheckEvaluator, nominal: ArrayLike<num
     let ok = true;
     for (let m = 0; m < judged; m++) {
       const j = checks[m];
-      if (!(g[j] <= 0)) { ok = false; failed[j]++; }
+      if (!(g[j] <= 0)) {
+        ok = false;
+        failed[j]++;
+      }
     }
     if (ok) passed++;
   }
@@ -84,7 +93,10 @@ export function monteCarloYield(evaluate: CheckEvaluator, nominal: ArrayLike<num
   failed.forEach((count, j) => {
     if (include[j] !== 1) return;
     failures[CHECKS[j]] = count;
-    if (count > most) { most = count; limiting = CHECKS[j]; }
+    if (count > most) {
+      most = count;
+      limiting = CHECKS[j];
+    }
   });
   return { yield: y, samples, standardError: Math.sqrt((y * (1 - y)) / samples), failures, limiting };
 }

@@ -60,9 +60,14 @@ function drawn(geometry: SpringGeometry, controlled: ControlledDiameter, control
   const checks = checkAnalysis(analysis, req);
   const workingForce = analysis.rate * (geometry.freeLength - req.workingLength);
   return {
-    geometry, controlled, controlledValue, analysis, checks,
+    geometry,
+    controlled,
+    controlledValue,
+    analysis,
+    checks,
     failing: CHECKS.filter((_, i) => checks[i] > 1e-9),
-    workingForce, workingForceDeviation: (workingForce - req.workingForce) / req.workingForce,
+    workingForce,
+    workingForceDeviation: (workingForce - req.workingForce) / req.workingForce,
   };
 }
 
@@ -72,7 +77,12 @@ function drawn(geometry: SpringGeometry, controlled: ControlledDiameter, control
  * working force closest to the requirement among those; when none passes, the nearest rounding is
  * returned with its failing checks named.
  */
-export function drawnSpring(geometry: SpringGeometry, figures: MaterialFigures, req: Requirements, precision = drawingPrecision(req.system, req.coilStep)): DrawnSpring {
+export function drawnSpring(
+  geometry: SpringGeometry,
+  figures: MaterialFigures,
+  req: Requirements,
+  precision = drawingPrecision(req.system, req.coilStep),
+): DrawnSpring {
   const d = geometry.wireDiameter;
   const controlled = controlledDiameter(req);
   const sign = controlled === 'outer' ? 1 : -1;
@@ -84,7 +94,12 @@ export function drawnSpring(geometry: SpringGeometry, figures: MaterialFigures, 
   for (const dm of modes) {
     for (const lm of modes) {
       const c = roundToStep(diameter, precision.diameter, dm);
-      const g: SpringGeometry = { ...geometry, meanDiameter: c - sign * d, activeCoils, freeLength: roundToStep(geometry.freeLength, precision.freeLength, lm) };
+      const g: SpringGeometry = {
+        ...geometry,
+        meanDiameter: c - sign * d,
+        activeCoils,
+        freeLength: roundToStep(geometry.freeLength, precision.freeLength, lm),
+      };
       const s = drawn(g, controlled, c, figures, req);
       first ??= s;
       if (s.failing.length === 0 && (!best || Math.abs(s.workingForceDeviation) < Math.abs(best.workingForceDeviation))) best = s;

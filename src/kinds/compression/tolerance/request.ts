@@ -47,7 +47,8 @@ function override(f: Fields, key: TolerancedQuantity): ToleranceOverride | undef
       return { fraction };
     }
     const kind = KINDS[key];
-    const absolute = kind === 'coils' ? parseNumber(raw, field, { nonNegative: true, max: 5 }) : parseQuantity(raw, kind, f.system, field, { nonNegative: true });
+    const absolute =
+      kind === 'coils' ? parseNumber(raw, field, { nonNegative: true, max: 5 }) : parseQuantity(raw, kind, f.system, field, { nonNegative: true });
     return { absolute };
   } catch (e) {
     if (e instanceof InputError) throw new InputError(field, WORDS[key], raw);
@@ -61,7 +62,8 @@ export function readToleranceRequirements(f: Fields): ToleranceRequirements {
   let grade: ToleranceGrade = DEFAULT_GRADE;
   if (gradeRaw !== undefined && gradeRaw !== null) {
     const n = typeof gradeRaw === 'number' ? gradeRaw : typeof gradeRaw === 'string' ? Number(gradeRaw.trim()) : NaN;
-    if (!(GRADES as readonly number[]).includes(n)) throw new InputError(f.name('tolerance_grade'), 'an EN 15800 tolerance grade: 1 (fine), 2 (medium) or 3 (coarse)', gradeRaw);
+    if (!(GRADES as readonly number[]).includes(n))
+      throw new InputError(f.name('tolerance_grade'), 'an EN 15800 tolerance grade: 1 (fine), 2 (medium) or 3 (coarse)', gradeRaw);
     grade = n as ToleranceGrade;
   }
   const overrides: ToleranceRequest['overrides'] = {};
@@ -76,7 +78,8 @@ export function readToleranceRequirements(f: Fields): ToleranceRequirements {
   let minYield: number | undefined;
   if (f.has('min_yield')) {
     minYield = parseFraction(f.get('min_yield'), f.name('min_yield'));
-    if (!(minYield > 0 && minYield < 1)) throw new InputError(f.name('min_yield'), 'a fraction between 0 and 1 such as 0.99 or "99%" (a yield of 1 needs zero tolerances)', f.get('min_yield'));
+    if (!(minYield > 0 && minYield < 1))
+      throw new InputError(f.name('min_yield'), 'a fraction between 0 and 1 such as 0.99 or "99%" (a yield of 1 needs zero tolerances)', f.get('min_yield'));
   }
   return { tolerance: { grade, overrides }, minYield };
 }

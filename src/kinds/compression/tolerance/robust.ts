@@ -65,19 +65,31 @@ export function bestReaching(run: DesignRun, yields: Float64Array, minYield: num
   for (let i = 0; i < yields.length; i++) {
     if (!(yields[i] >= minYield)) continue;
     const value = cloud!.f(i)[Objective.rank];
-    if (value < bestValue) { bestValue = value; best = i; }
+    if (value < bestValue) {
+      bestValue = value;
+      best = i;
+    }
   }
   return best;
 }
 
 /** Run the design collecting every feasible point, then keep the best whose estimated yield reaches
  * minYield; both it and the nominal best are confirmed by the Monte Carlo. */
-export function robustDesign(req: Requirements, catalog: ToleranceCatalog, request: ToleranceRequest, minYield: number, opts: MonteCarloOptions = {}): RobustResult {
+export function robustDesign(
+  req: Requirements,
+  catalog: ToleranceCatalog,
+  request: ToleranceRequest,
+  minYield: number,
+  opts: MonteCarloOptions = {},
+): RobustResult {
   const run = collectingRun(req);
   const yields = cloudYields(run, catalog, request);
   const best = bestReaching(run, yields, minYield);
   const cloud = run.result.cloud;
-  const withYield = (cand: Candidate) => ({ candidate: cand, yield: springYield(catalog, request, { geometry: cand.geometry, figures: cand.item.figures, material: cand.item.choice.material }, req, opts) });
+  const withYield = (cand: Candidate) => ({
+    candidate: cand,
+    yield: springYield(catalog, request, { geometry: cand.geometry, figures: cand.item.figures, material: cand.item.choice.material }, req, opts),
+  });
   const nominal = run.candidates.length ? withYield(run.candidates[0]) : null;
   const robust = best >= 0 ? withYield(candidateAt(run.problem, cloud!.x(best), Float64Array.from(cloud!.f(best)))) : null;
   return { run, nominal, robust, feasible: yields.length, robustCount: yields.filter((y) => y >= minYield).length };

@@ -33,14 +33,23 @@ export interface SpecifiedSpring {
 }
 
 /** The spring at `geometry` (a reported candidate) as drawn, toleranced and with its yield. */
-export function specifySpring(catalog: ToleranceCatalog, request: ToleranceRequest, spring: { geometry: SpringGeometry; figures: MaterialFigures; material: Material }, req: Requirements, opts: MonteCarloOptions = {}): SpecifiedSpring {
+export function specifySpring(
+  catalog: ToleranceCatalog,
+  request: ToleranceRequest,
+  spring: { geometry: SpringGeometry; figures: MaterialFigures; material: Material },
+  req: Requirements,
+  opts: MonteCarloOptions = {},
+): SpecifiedSpring {
   const drawn = drawnSpring(spring.geometry, spring.figures, req);
   const y = springYield(catalog, request, { geometry: drawn.geometry, figures: spring.figures, material: spring.material }, req, opts);
   return {
     drawn,
     yield: y,
     sheet: {
-      analysis: drawn.analysis, requirements: req, material: spring.material, tolerances: y.tolerances,
+      analysis: drawn.analysis,
+      requirements: req,
+      material: spring.material,
+      tolerances: y.tolerances,
       yield: { estimate: y.estimate, monteCarlo: y.monteCarlo, seed: Number(opts.seed ?? req.seed) },
     },
   };

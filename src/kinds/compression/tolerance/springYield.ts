@@ -86,7 +86,6 @@ export interface SpringYield {
   monteCarlo: YieldResult;
 }
 
-
 /** A reported spring's yield as the design carries it: the estimate, the Monte Carlo confirmation and
  * its verdict under min_yield (src/kinds/compression/tolerance/confirm.ts). */
 export interface CandidateYield {
@@ -103,7 +102,13 @@ export interface CandidateYield {
 }
 
 /** Tolerances, estimate and Monte Carlo of one designed spring. */
-export function springYield(catalog: ToleranceCatalog, request: ToleranceRequest, s: DesignedSpring, req: Requirements, opts: MonteCarloOptions = {}): SpringYield {
+export function springYield(
+  catalog: ToleranceCatalog,
+  request: ToleranceRequest,
+  s: DesignedSpring,
+  req: Requirements,
+  opts: MonteCarloOptions = {},
+): SpringYield {
   const tolerances = designedTolerances(catalog, request, s, req);
   const nominal = nominalQuantities(s, req);
   const sigma = standardDeviations(tolerances);
@@ -112,7 +117,9 @@ export function springYield(catalog: ToleranceCatalog, request: ToleranceRequest
   const estimate = estimateYield(fastEvaluator(s, req), nominal, sigma, include, scratch);
   const monteCarlo = monteCarloYield(analysisEvaluator(s, req), nominal, sigma, include, { seed: opts.seed ?? req.seed, samples: opts.samples });
   return {
-    tolerances, estimate, estimateLowerBound: scratch.lowerBound,
+    tolerances,
+    estimate,
+    estimateLowerBound: scratch.lowerBound,
     estimateLimiting: scratch.limiting >= 0 && scratch.pass[scratch.limiting] < 1 ? CHECKS[scratch.limiting] : null,
     monteCarlo,
   };

@@ -27,12 +27,28 @@ const demo = (extra: Record<string, unknown> = {}) => readRequirements({ ...demo
 // Scenarios of our own (invented for these tests): a cabinet-door soft-close return spring in music
 // wire, and a guided pump-valve spring in chrome-silicon with a tight force band.
 const DOOR = {
-  units: 'si', material: 'music-wire', load: { force: 8, length: 30 }, operating_length: 22, operating_force: 14, load_tolerance: '8%',
-  envelope: { max_outer_diameter: 12, max_free_length: 48 }, cycles: 2e5, top: 3,
+  units: 'si',
+  material: 'music-wire',
+  load: { force: 8, length: 30 },
+  operating_length: 22,
+  operating_force: 14,
+  load_tolerance: '8%',
+  envelope: { max_outer_diameter: 12, max_free_length: 48 },
+  cycles: 2e5,
+  top: 3,
 };
 const VALVE = {
-  units: 'si', material: 'chrome-silicon', ends: ['squared-ground', 'squared'], load: { force: 120, length: 40 }, operating_length: 31, operating_force: 190,
-  load_tolerance: '4%', envelope: { max_outer_diameter: 22, min_inner_diameter: 11 }, cycles: 1e7, guided: true, top: 3,
+  units: 'si',
+  material: 'chrome-silicon',
+  ends: ['squared-ground', 'squared'],
+  load: { force: 120, length: 40 },
+  operating_length: 31,
+  operating_force: 190,
+  load_tolerance: '4%',
+  envelope: { max_outer_diameter: 22, min_inner_diameter: 11 },
+  cycles: 1e7,
+  guided: true,
+  top: 3,
 };
 
 describe('reading tolerance_grade, tolerances and min_yield', () => {
@@ -64,11 +80,20 @@ function both(base: Requirements, minYield: number) {
   const searched = runDesign(req).candidates[0] ?? null;
   const run = collectingRun(base);
   const i = bestReaching(run, cloudYields(run, tc, base.tolerance), minYield);
-  return { req, searched, referenceMass: i >= 0 ? run.result.cloud!.f(i)[Objective.mass] : null, referenceX: i >= 0 ? Array.from(run.result.cloud!.x(i)) : null };
+  return {
+    req,
+    searched,
+    referenceMass: i >= 0 ? run.result.cloud!.f(i)[Objective.mass] : null,
+    referenceX: i >= 0 ? Array.from(run.result.cloud!.x(i)) : null,
+  };
 }
 
 describe('the in-search yield check agrees with the exhaustive reference (robust.ts)', () => {
-  for (const [name, base] of [['demo', demo()], ['door closer', readRequirements(DOOR, catalog)], ['pump valve', readRequirements(VALVE, catalog)]] as const) {
+  for (const [name, base] of [
+    ['demo', demo()],
+    ['door closer', readRequirements(DOOR, catalog)],
+    ['pump valve', readRequirements(VALVE, catalog)],
+  ] as const) {
     it(`${name}: same wire, end type and coil count; mean diameter within two scan steps; estimate at min_yield or above`, () => {
       for (const minYield of [0.9, 0.99]) {
         const { req, searched, referenceMass, referenceX } = both(base, minYield);
@@ -89,14 +114,22 @@ describe('the in-search yield check agrees with the exhaustive reference (robust
 
 describe('raising min_yield never lowers the best mass (property)', () => {
   it('over the demo, with random pairs of min_yield and tolerance grades', () => {
-    fc.assert(fc.property(fc.double({ min: 0.05, max: 0.995, noNaN: true }), fc.double({ min: 0.05, max: 0.995, noNaN: true }), fc.constantFrom(1, 2, 3), (a, b, grade) => {
-      const [lo, hi] = a <= b ? [a, b] : [b, a];
-      const best = (y: number) => runDesign(demo({ min_yield: y, tolerance_grade: grade, top: 1 })).candidates[0]?.objectives[Objective.mass] ?? Infinity;
-      const nominal = runDesign(demo({ top: 1 })).candidates[0].objectives[Objective.mass];
-      const mLo = best(lo);
-      expect(mLo).toBeGreaterThanOrEqual(nominal);
-      expect(best(hi)).toBeGreaterThanOrEqual(mLo);
-    }), { numRuns: 12 });
+    fc.assert(
+      fc.property(
+        fc.double({ min: 0.05, max: 0.995, noNaN: true }),
+        fc.double({ min: 0.05, max: 0.995, noNaN: true }),
+        fc.constantFrom(1, 2, 3),
+        (a, b, grade) => {
+          const [lo, hi] = a <= b ? [a, b] : [b, a];
+          const best = (y: number) => runDesign(demo({ min_yield: y, tolerance_grade: grade, top: 1 })).candidates[0]?.objectives[Objective.mass] ?? Infinity;
+          const nominal = runDesign(demo({ top: 1 })).candidates[0].objectives[Objective.mass];
+          const mLo = best(lo);
+          expect(mLo).toBeGreaterThanOrEqual(nominal);
+          expect(best(hi)).toBeGreaterThanOrEqual(mLo);
+        },
+      ),
+      { numRuns: 12 },
+    );
   }, 120_000);
 });
 

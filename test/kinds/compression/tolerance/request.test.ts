@@ -16,16 +16,23 @@ describe('reading tolerance_grade, tolerances and min_yield', () => {
   });
 
   it('reads every override in its unit, or as a percentage of the nominal value', () => {
-    const r = read({ tolerance_grade: 1, min_yield: '99%', tolerances: { wire_diameter: '0.01 mm', mean_diameter: 0.2, shear_modulus: '2%', active_coils: 0.5, working_force: '1 N' } });
+    const r = read({
+      tolerance_grade: 1,
+      min_yield: '99%',
+      tolerances: { wire_diameter: '0.01 mm', mean_diameter: 0.2, shear_modulus: '2%', active_coils: 0.5, working_force: '1 N' },
+    });
     expect(r.tolerance.grade).toBe(1);
     expect(r.minYield).toBeCloseTo(0.99, 12);
     expect(r.tolerance.overrides).toEqual({
-      wire_diameter: { absolute: 0.01 }, mean_diameter: { absolute: 0.2 }, shear_modulus: { fraction: 0.02 },
-      active_coils: { absolute: 0.5 }, working_force: { absolute: 1 },
+      wire_diameter: { absolute: 0.01 },
+      mean_diameter: { absolute: 0.2 },
+      shear_modulus: { fraction: 0.02 },
+      active_coils: { absolute: 0.5 },
+      working_force: { absolute: 1 },
     });
   });
 
-  it('reads plain numbers in the file\'s unit system', () => {
+  it("reads plain numbers in the file's unit system", () => {
     const r = read({ units: 'us', tolerances: { wire_diameter: 0.001, working_force: 0.5 } });
     expect((r.tolerance.overrides.wire_diameter as { absolute: number }).absolute).toBeCloseTo(0.0254, 12);
     expect((r.tolerance.overrides.working_force as { absolute: number }).absolute).toBeCloseTo(2.2241108, 6);
@@ -37,7 +44,10 @@ describe('reading tolerance_grade, tolerances and min_yield', () => {
     [{ tolerances: { mean_diameter: -0.1 } }, /tolerances\.mean_diameter: expected/],
     [{ tolerances: { active_coils: 'many' } }, /tolerances\.active_coils: expected a \+- number of coils/],
     [{ tolerances: { shear_modulus: '80%' } }, /tolerances\.shear_modulus: expected/],
-    [{ tolerances: { free_length: 1 } }, /tolerances\.free_length: no such field; the known fields here are: active_coils, mean_diameter, shear_modulus, wire_diameter, working_force/],
+    [
+      { tolerances: { free_length: 1 } },
+      /tolerances\.free_length: no such field; the known fields here are: active_coils, mean_diameter, shear_modulus, wire_diameter, working_force/,
+    ],
     [{ tolerances: 3 }, /tolerances: expected a mapping/],
     [{ min_yield: 1 }, /min_yield: expected a fraction between 0 and 1/],
     [{ min_yield: 'most' }, /min_yield: expected a number/],

@@ -28,7 +28,10 @@ describe('robust design on the demo (grade 2)', () => {
     let last = 0;
     for (const minYield of [0, 0.5, 0.8, 0.9, 0.95, 0.99, 0.995, 0.999]) {
       const i = bestReaching(run, yields, minYield);
-      if (i < 0) { last = Infinity; continue; }
+      if (i < 0) {
+        last = Infinity;
+        continue;
+      }
       expect(massAt(i)).toBeGreaterThanOrEqual(last);
       last = massAt(i);
     }
@@ -39,7 +42,9 @@ describe('robust design on the demo (grade 2)', () => {
     expect(i).toBeGreaterThanOrEqual(0);
     const c = candidateAt(run.problem, run.result.cloud!.x(i), Float64Array.from(run.result.cloud!.f(i)));
     expect(Math.max(...c.checks)).toBeLessThanOrEqual(0);
-    const y = springYield(tc, { grade: 2, overrides: {} }, { geometry: c.geometry, figures: c.item.figures, material: c.item.choice.material }, req, { samples: 40_000 });
+    const y = springYield(tc, { grade: 2, overrides: {} }, { geometry: c.geometry, figures: c.item.figures, material: c.item.choice.material }, req, {
+      samples: 40_000,
+    });
     expect(y.estimate).toBeGreaterThanOrEqual(0.99);
     expect(Math.abs(y.estimate - y.monteCarlo.yield)).toBeLessThan(4 * y.monteCarlo.standardError);
     expect(c.analysis.geometry.mass).toBeGreaterThan(run.candidates[0].analysis.geometry.mass);

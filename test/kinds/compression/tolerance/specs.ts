@@ -50,8 +50,24 @@ export type Spec = typeof specArb extends fc.Arbitrary<infer T> ? T : never;
 
 /** A stainless spring near its bore, force and free-length limits. */
 export const STAINLESS: Spec = {
-  material: 'stainless-302', d: 1.4, index: 9, na: 8, ends: 'squared-ground', travelShare: 0.4, preloadShare: 0.3, odSlack: 0.005, forceSlack: 0.0,
-  freeSlack: 0.02, cycles: 1e6, grade: 2, loadTolerance: 0.05, guided: true, gapRule: false, solidSafe: false, seating: 'fixed-fixed', forcingFrequency: undefined,
+  material: 'stainless-302',
+  d: 1.4,
+  index: 9,
+  na: 8,
+  ends: 'squared-ground',
+  travelShare: 0.4,
+  preloadShare: 0.3,
+  odSlack: 0.005,
+  forceSlack: 0.0,
+  freeSlack: 0.02,
+  cycles: 1e6,
+  grade: 2,
+  loadTolerance: 0.05,
+  guided: true,
+  gapRule: false,
+  solidSafe: false,
+  seating: 'fixed-fixed',
+  forcingFrequency: undefined,
 };
 
 /** A spec drawn uniformly from the same ranges (fast-check leans to the ends of each range, which is
@@ -61,13 +77,23 @@ export function uniformSpec(u: () => number): Spec {
   const between = (a: number, b: number) => a + (b - a) * u();
   return {
     material: pick(['music-wire', 'hard-drawn', 'stainless-302', 'chrome-silicon', 'en10270-1-dm', 'phosphor-bronze'] as const),
-    d: between(0.5, 5), index: between(5, 11), na: between(4, 14),
+    d: between(0.5, 5),
+    index: between(5, 11),
+    na: between(4, 14),
     ends: pick(['squared-ground', 'squared', 'plain'] as const),
-    travelShare: between(0.2, 0.6), preloadShare: between(0.1, 0.5),
-    odSlack: between(-0.01, 0.04), forceSlack: between(-0.03, 0.06), freeSlack: between(-0.01, 0.05),
-    cycles: pick([undefined, 1e6]), grade: pick([1, 2, 3] as const),
-    loadTolerance: pick([0, 0.02, 0.05, 0.1]), guided: u() < 0.5, gapRule: u() < 0.5, solidSafe: u() < 0.5,
-    seating: pick(['fixed-fixed', 'fixed-pivoted', 'pivoted-pivoted'] as const), forcingFrequency: pick([undefined, 5, 40]),
+    travelShare: between(0.2, 0.6),
+    preloadShare: between(0.1, 0.5),
+    odSlack: between(-0.01, 0.04),
+    forceSlack: between(-0.03, 0.06),
+    freeSlack: between(-0.01, 0.05),
+    cycles: pick([undefined, 1e6]),
+    grade: pick([1, 2, 3] as const),
+    loadTolerance: pick([0, 0.02, 0.05, 0.1]),
+    guided: u() < 0.5,
+    gapRule: u() < 0.5,
+    solidSafe: u() < 0.5,
+    seating: pick(['fixed-fixed', 'fixed-pivoted', 'pivoted-pivoted'] as const),
+    forcingFrequency: pick([undefined, 5, 40]),
   };
 }
 
@@ -86,11 +112,20 @@ export function buildSpec(s: Spec): { req: Requirements; spring: DesignedSpring 
   const F1 = k * (L0 - L1);
   const F2 = k * (L0 - L2);
   const req = requirements({
-    material: s.material, ends: s.ends, load: { force: F1, length: L1 },
-    operating_length: L2, operating_force: F2 * (1 + (s.forceSlack * Math.max(s.loadTolerance, 0.01)) / 0.05), load_tolerance: s.loadTolerance,
+    material: s.material,
+    ends: s.ends,
+    load: { force: F1, length: L1 },
+    operating_length: L2,
+    operating_force: F2 * (1 + (s.forceSlack * Math.max(s.loadTolerance, 0.01)) / 0.05),
+    load_tolerance: s.loadTolerance,
     envelope: { max_outer_diameter: solidOuterDiameter(D, d, pitch(L0, s.na, d, s.ends)) * (1 + s.odSlack), max_free_length: L0 * (1 + s.freeSlack) },
-    index: [3, 16], guided: s.guided, coil_gap_rule: s.gapRule, solid_safe: s.solidSafe, seating: s.seating,
-    ...(s.cycles ? { cycles: s.cycles } : {}), ...(s.forcingFrequency ? { forcing_frequency: s.forcingFrequency } : {}),
+    index: [3, 16],
+    guided: s.guided,
+    coil_gap_rule: s.gapRule,
+    solid_safe: s.solidSafe,
+    seating: s.seating,
+    ...(s.cycles ? { cycles: s.cycles } : {}),
+    ...(s.forcingFrequency ? { forcing_frequency: s.forcingFrequency } : {}),
   });
   return { req, spring: designed(s.material, d, D, s.na, s.ends, req) };
 }

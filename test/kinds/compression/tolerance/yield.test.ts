@@ -10,7 +10,14 @@ import { estimateYield, normalCdf, yieldScratch } from '../../../../src/kinds/co
 import { madeSpringChecks, madeSpringContext, yieldChecks } from '../../../../src/kinds/compression/tolerance/madeSpring.js';
 import { Q, TOLERANCED, standardDeviations } from '../../../../src/kinds/compression/tolerance/model.js';
 import { monteCarloYield } from '../../../../src/kinds/compression/tolerance/monteCarlo.js';
-import { analysisEvaluator, designedTolerances, fastEvaluator, madeSpring, nominalQuantities, springYield } from '../../../../src/kinds/compression/tolerance/springYield.js';
+import {
+  analysisEvaluator,
+  designedTolerances,
+  fastEvaluator,
+  madeSpring,
+  nominalQuantities,
+  springYield,
+} from '../../../../src/kinds/compression/tolerance/springYield.js';
 import { STAINLESS, buildSpec, designed, requirements, specArb, uniformSpec } from './specs.js';
 
 const tc = loadToleranceCatalog();
@@ -20,7 +27,7 @@ const tc = loadToleranceCatalog();
  * The specification of the stream the sampling loop draws from, written as a plain list. */
 function polarDeviates(uniform: () => number, count: number): Float64Array {
   const out = new Float64Array(count + 1);
-  for (let m = 0; m < count; ) {
+  for (let m = 0; m < count;) {
     const u = 2 * uniform() - 1;
     const v = 2 * uniform() - 1;
     const r2 = u * u + v * v;
@@ -36,24 +43,33 @@ const grade2 = { grade: 2 as const, overrides: {} };
 
 describe('normal distribution function', () => {
   // Values of Phi: Abramowitz and Stegun, Table 26.1; 26.2.17 is good to 7.5e-8.
-  it.each([[0, 0.5], [1, 0.8413447461], [-1.96, 0.0249978952], [3, 0.9986501020], [-3, 0.0013498980]])('Phi(%f) = %f', (x, p) => {
+  it.each([
+    [0, 0.5],
+    [1, 0.8413447461],
+    [-1.96, 0.0249978952],
+    [3, 0.998650102],
+    [-3, 0.001349898],
+  ])('Phi(%f) = %f', (x, p) => {
     expect(Math.abs(normalCdf(x) - p)).toBeLessThan(7.5e-8);
   });
 });
 
 describe('the made-spring checks agree with the single-spring analysis (property)', () => {
   it('madeSpringChecks equals checkAnalysis(analyzeSpring) on random made springs', () => {
-    fc.assert(fc.property(specArb, fc.array(fc.double({ min: -3, max: 3, noNaN: true }), { minLength: 5, maxLength: 5 }), (s, z) => {
-      const { req, spring } = buildSpec(s);
-      const t = designedTolerances(tc, { grade: s.grade, overrides: { working_force: { fraction: 0.02 } } }, spring, req);
-      const sigma = standardDeviations(t);
-      const q = nominalQuantities(spring, req).map((v, i) => v + z[i] * sigma[i]);
-      const fast = new Float64Array(CHECKS.length);
-      madeSpringChecks(madeSpringContext(req, spring.figures, spring.geometry.ends), q, fast);
-      const m = madeSpring(spring, req, q);
-      const full = checkAnalysis(analyzeSpring(m.geometry, m.figures, springServiceConditions(req)), req);
-      CHECKS.forEach((_, j) => expect(fast[j]).toBeCloseTo(full[j], 9));
-    }), { numRuns: 200 });
+    fc.assert(
+      fc.property(specArb, fc.array(fc.double({ min: -3, max: 3, noNaN: true }), { minLength: 5, maxLength: 5 }), (s, z) => {
+        const { req, spring } = buildSpec(s);
+        const t = designedTolerances(tc, { grade: s.grade, overrides: { working_force: { fraction: 0.02 } } }, spring, req);
+        const sigma = standardDeviations(t);
+        const q = nominalQuantities(spring, req).map((v, i) => v + z[i] * sigma[i]);
+        const fast = new Float64Array(CHECKS.length);
+        madeSpringChecks(madeSpringContext(req, spring.figures, spring.geometry.ends), q, fast);
+        const m = madeSpring(spring, req, q);
+        const full = checkAnalysis(analyzeSpring(m.geometry, m.figures, springServiceConditions(req)), req);
+        CHECKS.forEach((_, j) => expect(fast[j]).toBeCloseTo(full[j], 9));
+      }),
+      { numRuns: 200 },
+    );
   });
 });
 
@@ -70,36 +86,60 @@ function roomy(d: number, C: number, Na: number, stressShare: number) {
   return { k, L2, L1: L2 + 0.5 * y2, L0: L2 + y2, F1: 0.5 * k * y2, F2: k * y2 };
 }
 
-const springArb = [fc.double({ min: 1, max: 3, noNaN: true }), fc.double({ min: 6, max: 9, noNaN: true }), fc.double({ min: 5, max: 12, noNaN: true })] as const;
+const springArb = [
+  fc.double({ min: 1, max: 3, noNaN: true }),
+  fc.double({ min: 6, max: 9, noNaN: true }),
+  fc.double({ min: 5, max: 12, noNaN: true }),
+] as const;
 
 describe('yield at the extremes (property)', () => {
   it('is 1 for a spring far inside every limit', () => {
-    fc.assert(fc.property(...springArb, fc.constantFrom(1 as const, 2 as const, 3 as const), (d, C, Na, grade) => {
-      const r = roomy(d, C, Na, 0.3);
-      const req = requirements({
-        material: 'hard-drawn', load: { force: r.F1, length: r.L1 }, operating_length: r.L2, operating_force: r.F2, load_tolerance: '40%',
-        envelope: { max_outer_diameter: 2 * C * d, min_inner_diameter: 0.5 * C * d, max_free_length: 2 * r.L0 }, index: [3, 16], guided: true, cycles: 1e6,
-      });
-      const y = springYield(tc, { grade, overrides: {} }, designed('hard-drawn', d, C * d, Na, 'squared-ground', req), req, { samples: 2000 });
-      expect(y.estimate).toBeGreaterThan(1 - 1e-9);
-      expect(y.monteCarlo.yield).toBe(1);
-      expect(y.monteCarlo.limiting).toBeNull();
-    }), { numRuns: 30 });
+    fc.assert(
+      fc.property(...springArb, fc.constantFrom(1 as const, 2 as const, 3 as const), (d, C, Na, grade) => {
+        const r = roomy(d, C, Na, 0.3);
+        const req = requirements({
+          material: 'hard-drawn',
+          load: { force: r.F1, length: r.L1 },
+          operating_length: r.L2,
+          operating_force: r.F2,
+          load_tolerance: '40%',
+          envelope: { max_outer_diameter: 2 * C * d, min_inner_diameter: 0.5 * C * d, max_free_length: 2 * r.L0 },
+          index: [3, 16],
+          guided: true,
+          cycles: 1e6,
+        });
+        const y = springYield(tc, { grade, overrides: {} }, designed('hard-drawn', d, C * d, Na, 'squared-ground', req), req, { samples: 2000 });
+        expect(y.estimate).toBeGreaterThan(1 - 1e-9);
+        expect(y.monteCarlo.yield).toBe(1);
+        expect(y.monteCarlo.limiting).toBeNull();
+      }),
+      { numRuns: 30 },
+    );
   });
 
   it('is about 0.5 for a spring exactly on one limit (the free length), every other check far inside', () => {
-    fc.assert(fc.property(...springArb, fc.integer({ min: 1, max: 1000 }), (d, C, Na, seed) => {
-      const r = roomy(d, C, Na, 0.3);
-      const req = requirements({ material: 'hard-drawn', load: { force: r.F1, length: r.L1 }, envelope: { max_free_length: r.L0 }, index: [3, 16], guided: true, seed });
-      const spring = designed('hard-drawn', d, C * d, Na, 'squared-ground', req);
-      expect(spring.geometry.freeLength).toBeCloseTo(r.L0, 9);
-      const y = springYield(tc, grade2, spring, req, { samples: 4000 });
-      expect(y.estimate).toBeCloseTo(0.5, 6);
-      expect(y.estimateLimiting).toBe('free_length');
-      // Four standard errors of a 4000-sample binomial at 0.5 (0.0079 each), plus the curvature of 1/k.
-      expect(Math.abs(y.monteCarlo.yield - 0.5)).toBeLessThan(0.04);
-      expect(y.monteCarlo.limiting).toBe('free_length');
-    }), { numRuns: 20 });
+    fc.assert(
+      fc.property(...springArb, fc.integer({ min: 1, max: 1000 }), (d, C, Na, seed) => {
+        const r = roomy(d, C, Na, 0.3);
+        const req = requirements({
+          material: 'hard-drawn',
+          load: { force: r.F1, length: r.L1 },
+          envelope: { max_free_length: r.L0 },
+          index: [3, 16],
+          guided: true,
+          seed,
+        });
+        const spring = designed('hard-drawn', d, C * d, Na, 'squared-ground', req);
+        expect(spring.geometry.freeLength).toBeCloseTo(r.L0, 9);
+        const y = springYield(tc, grade2, spring, req, { samples: 4000 });
+        expect(y.estimate).toBeCloseTo(0.5, 6);
+        expect(y.estimateLimiting).toBe('free_length');
+        // Four standard errors of a 4000-sample binomial at 0.5 (0.0079 each), plus the curvature of 1/k.
+        expect(Math.abs(y.monteCarlo.yield - 0.5)).toBeLessThan(0.04);
+        expect(y.monteCarlo.limiting).toBe('free_length');
+      }),
+      { numRuns: 20 },
+    );
   });
 });
 
@@ -114,7 +154,7 @@ describe('the Monte Carlo', () => {
     expect(c.monteCarlo.yield).not.toBe(a.monteCarlo.yield);
   });
 
-  it('draws the springs of the polar method\'s deviates taken in turn: same deviates, same order, same verdicts', () => {
+  it("draws the springs of the polar method's deviates taken in turn: same deviates, same order, same verdicts", () => {
     // The sampling loop inlines the polar transform for speed; this is the plain loop it must equal:
     // the same passes and the same failures per check for every seed.
     const reference = (nominal: Float64Array, sigma: ArrayLike<number>, include: Uint8Array, samples: number, seed: number) => {
@@ -128,7 +168,11 @@ describe('the Monte Carlo', () => {
         for (let i = 0; i < q.length; i++) q[i] = nominal[i] + sigma[i] * z[next++];
         madeSpringChecks(context, q, g);
         let ok = true;
-        for (let j = 0; j < include.length; j++) if (include[j] === 1 && !(g[j] <= 0)) { ok = false; failed[j]++; }
+        for (let j = 0; j < include.length; j++)
+          if (include[j] === 1 && !(g[j] <= 0)) {
+            ok = false;
+            failed[j]++;
+          }
         if (ok) passed++;
       }
       return { passed, failed: CHECKS.flatMap((name, j) => (include[j] === 1 ? [[name, failed[j]] as const] : [])) };
@@ -138,7 +182,11 @@ describe('the Monte Carlo', () => {
     const nominal = nominalQuantities(spring, req);
     const sigma = standardDeviations(t);
     const include = yieldChecks(req);
-    for (const [seed, samples] of [[1, 2001], [7, 3000], [42, 999]]) {
+    for (const [seed, samples] of [
+      [1, 2001],
+      [7, 3000],
+      [42, 999],
+    ]) {
       const fast = monteCarloYield((q, g) => madeSpringChecks(context, q, g), nominal, sigma, include, { seed, samples });
       const ref = reference(nominal, sigma, include, samples, seed);
       expect(fast.yield * samples).toBe(ref.passed);
@@ -156,10 +204,16 @@ describe('the Monte Carlo', () => {
     const sigma = standardDeviations(t);
     const outside = new Float64Array(TOLERANCED.length);
     const n = 100_000;
-    monteCarloYield((q, g) => {
-      for (let i = 0; i < q.length; i++) if (Math.abs(q[i] - nominal[i]) > 3 * sigma[i]) outside[i]++;
-      g.fill(-1);
-    }, nominal, sigma, yieldChecks(req), { samples: n, seed: 3 });
+    monteCarloYield(
+      (q, g) => {
+        for (let i = 0; i < q.length; i++) if (Math.abs(q[i] - nominal[i]) > 3 * sigma[i]) outside[i]++;
+        g.fill(-1);
+      },
+      nominal,
+      sigma,
+      yieldChecks(req),
+      { samples: n, seed: 3 },
+    );
     outside.forEach((count) => expect(count / n).toBeCloseTo(0.0027, 3));
   });
 
@@ -170,7 +224,7 @@ describe('the Monte Carlo', () => {
     if (y.monteCarlo.limiting) expect(y.monteCarlo.failures[y.monteCarlo.limiting]).toBe(Math.max(...Object.values(y.monteCarlo.failures).map((v) => v ?? 0)));
   });
 
-  it('leaves the index range out of a made spring\'s checks', () => {
+  it("leaves the index range out of a made spring's checks", () => {
     const on = yieldChecks(req);
     expect(on[CHECK.index_min]).toBe(0);
     expect(on[CHECK.index_max]).toBe(0);
@@ -201,7 +255,9 @@ describe('the in-search estimate against the Monte Carlo over random specs', () 
       yields.push(mc.yield);
     }
     const mean = (v: number[]) => v.reduce((a, b) => a + b, 0) / v.length;
-    console.info(`estimate vs Monte Carlo over ${specs.length} specs: mean |diff| ${mean(diffs).toFixed(4)}, worst ${Math.max(...diffs).toFixed(4)}; independent-checks product: mean ${mean(naive).toFixed(4)}`);
+    console.info(
+      `estimate vs Monte Carlo over ${specs.length} specs: mean |diff| ${mean(diffs).toFixed(4)}, worst ${Math.max(...diffs).toFixed(4)}; independent-checks product: mean ${mean(naive).toFixed(4)}`,
+    );
     expect(Math.min(...yields)).toBeLessThan(0.2);
     expect(Math.max(...yields)).toBeGreaterThan(0.95);
     expect(mean(diffs)).toBeLessThan(0.012);
