@@ -1,4 +1,4 @@
-// No outside values here: the layout the README and DEVELOPERS.md show is the one src/ has (issue 7:
+// source: none needed (no outside values here): the layout the README and DEVELOPERS.md show is the one src/ has (issue 7:
 // "the layout shows the kinds and the registries at a glance"), and DEVELOPERS.md gives each folder
 // the layer this test folder enforces.
 import { readdirSync, readFileSync, statSync } from 'node:fs';

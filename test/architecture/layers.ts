@@ -1,4 +1,4 @@
-// No outside values here: the layers of src/ that test/architecture/ enforces and the docs show.
+// source: none needed (no outside values here): the layers of src/ that test/architecture/ enforces and the docs show.
 //
 // Layers, lowest first (a unit may import its own layer or any lower one):
 //   0 units                 quantities, unit systems, and the field reader of input documents

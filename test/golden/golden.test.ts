@@ -1,4 +1,4 @@
-// Byte-identical outputs (issue 7): the seam restructuring moves code, never output. Each case runs
+// source: none needed (our own recorded outputs, no outside values). Byte-identical outputs (issue 7): the seam restructuring moves code, never output. Each case runs
 // the CLI in-process and compares stdout, stderr and the exit code with the recorded files.
 // Record again (only for a deliberate behaviour change, in its own commit): GOLDEN_UPDATE=1 npx vitest run test/golden
 import { existsSync, mkdirSync, readFileSync, writeFileSync } from 'node:fs';

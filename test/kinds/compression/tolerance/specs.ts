@@ -1,4 +1,4 @@
-// No outside values here (helpers only). Random springs and requirement sets for the yield tests:
+// source: none needed (no outside values here; helpers only). Random springs and requirement sets for the yield tests:
 // scenarios of our own, built around a spring so that its checks sit near their limits.
 import fc from 'fast-check';
 import { findMaterial, loadCatalog } from '../../../../src/catalogs/load.js';
