@@ -27,7 +27,7 @@ import { formatQuantity, quantityWriter, sig } from '../units/format.js';
 import type { UnitSystem } from '../units/systems.js';
 import { bandText, workingBand, type WorkingBand } from './band.js';
 import { serviceNotes } from './service.js';
-import { PASS_TOLERANCE, type CheckLine } from './judge.js';
+import { numericLine, type CheckLine } from './judge.js';
 import { bandRecord, checkLineRecord, failureText, writeMargin, writeValue } from './report.js';
 
 /** A check line of any kind (the compression lines name their checks by a closed list). */
@@ -62,7 +62,6 @@ export interface ExtensionCheckOutcome {
   notes: string[];
 }
 
-const passes = (g: number) => g <= PASS_TOLERANCE;
 type Figure = Pick<GivenLine, 'value' | 'limit' | 'relation' | 'kind'> & { note?: string };
 
 /** The figure and limit behind each extension check, for people; the verdict itself is checkExtension's. */
@@ -178,18 +177,7 @@ export function judgeExtension(spring: ExtensionCase, raw: unknown, req: Extensi
   const active = activeExtensionChecks(req);
   const F1 = a.points[0].force;
   const lines: GivenLine[] = [];
-  const numeric = (name: string, label: string, gv: number, fig: Figure): GivenLine => ({
-    name,
-    label,
-    value: fig.value,
-    limit: fig.limit,
-    relation: fig.relation,
-    kind: fig.kind,
-    ...(fig.note ? { note: fig.note } : {}),
-    g: gv,
-    margin: Number.isNaN(gv) ? null : -gv,
-    pass: passes(gv),
-  });
+  const numeric = (name: string, label: string, gv: number, fig: Figure): GivenLine => numericLine(name, label, gv, fig);
   lines.push(
     numeric('working_force_min', slackAt('working') ? SLACK_LABEL : 'working force below its band', (band.low - F1) / band.force, {
       value: F1,

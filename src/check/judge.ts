@@ -50,6 +50,27 @@ export interface CheckLine {
   unitMargin?: boolean;
 }
 
+/** The spring's figure against its limit, as a check does. */
+export type CheckFigure = Pick<CheckLine, 'value' | 'limit' | 'relation' | 'kind'> & { note?: string; unitMargin?: boolean };
+
+/** One numeric check line from its normalised value g (g <= 0 passes; NaN: not computable): the one
+ * place both kinds' judges build their lines, so margin and verdict are read the same way. */
+export function numericLine<N extends string>(name: N, label: string, g: number, fig: CheckFigure): Omit<CheckLine, 'name'> & { name: N } {
+  return {
+    name,
+    label,
+    value: fig.value,
+    limit: fig.limit,
+    relation: fig.relation,
+    kind: fig.kind,
+    ...(fig.note ? { note: fig.note } : {}),
+    g,
+    margin: Number.isNaN(g) ? null : -g,
+    pass: g <= PASS_TOLERANCE,
+    ...(fig.unitMargin ? { unitMargin: true } : {}),
+  };
+}
+
 /** The distance from the figure to its limit in the figure's own unit, positive inside; null when either is missing. */
 export function spareOf(l: Pick<CheckLine, 'value' | 'limit' | 'relation'>): number | null {
   if (typeof l.value !== 'number' || typeof l.limit !== 'number') return null;
@@ -107,7 +128,7 @@ export function makeJudge(req: Requirements, band: WorkingBand, endsStated: bool
   };
 }
 
-type Figure = Pick<CheckLine, 'value' | 'limit' | 'relation' | 'kind' | 'unitMargin'> & { note?: string };
+type Figure = CheckFigure;
 
 /** The figure and limit behind each design check, for people; the verdict itself is checkAnalysis's. */
 function figureOf(name: CheckName, a: SpringAnalysis, req: Requirements, madeYield: number | null): Figure {
@@ -235,19 +256,7 @@ class JudgedSpring implements Verdict {
     const n = CHECKS.length;
     const F1 = analysis.points[0].force;
     const lines: CheckLine[] = [];
-    const numeric = (name: AnyCheckName, label: string, gv: number, fig: Figure): CheckLine => ({
-      name,
-      label,
-      value: fig.value,
-      limit: fig.limit,
-      relation: fig.relation,
-      kind: fig.kind,
-      ...(fig.note ? { note: fig.note } : {}),
-      g: gv,
-      margin: Number.isNaN(gv) ? null : -gv,
-      pass: passes(gv),
-      ...(fig.unitMargin ? { unitMargin: true } : {}),
-    });
+    const numeric = (name: AnyCheckName, label: string, gv: number, fig: Figure): CheckLine => numericLine(name, label, gv, fig);
     const looseAt = (at: LoosePoint['at']) => this.loose.some((p) => p.at === at);
     lines.push(
       numeric('working_force_min', looseAt('working') ? LOOSE_LABEL : GIVEN_CHECK_LABELS.working_force_min, g[n], {
