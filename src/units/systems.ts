@@ -54,13 +54,17 @@ export function outputUnit(system: UnitSystem, kind: Kind): DisplayUnit {
 }
 
 const GRAM = scale('g', 1e-3);
+/** The avoirdupois ounce, 1/16 lb (NIST Handbook 44, Appendix C). */
+const OUNCE = scale('oz', LB_KG / 16);
 const MPSI = scale('Mpsi', 1e6 * PSI_MPA);
 
-/** The unit a figure of this size reads best in: SI masses under 1 kg in grams, US stresses of a
- * thousand kpsi and more (moduli: no spring is stressed that far) in Mpsi; else outputUnit. */
+/** The unit a figure of this size reads best in: SI masses under 1 kg in grams, US masses under 1 lb
+ * in ounces (0.199 oz, not 0.0124 lb), US stresses of a thousand kpsi and more (moduli: no spring is
+ * stressed that far) in Mpsi; else outputUnit. */
 export function readableUnit(system: UnitSystem, kind: Kind, magnitude: number): DisplayUnit {
   const m = Math.abs(magnitude);
   if (kind === 'mass' && system === 'si' && m < 1) return GRAM;
+  if (kind === 'mass' && system === 'us' && m < LB_KG) return OUNCE;
   if (kind === 'stress' && system === 'us' && m >= MPSI.toCore(1)) return MPSI;
   return outputUnit(system, kind);
 }

@@ -114,7 +114,7 @@ describe('coilfront design, kind: extension', () => {
     });
     const usText = await cli('design', usDemo);
     expect(usText.stdout).toMatch(/d in\s+D in\s+OD in/);
-    expect(usText.stdout).toMatch(/mass lb/);
+    expect(usText.stdout).toMatch(/mass oz/);
   });
 
   it('every spring design reports re-verifies through analyze: same figures, no failing check', async () => {

@@ -3,7 +3,8 @@
 // every row ("20.0 / 20.5", never "19.96" -> "20.00" beside "20.5").
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import { groupedCount, sig } from '../../src/units/format.js';
+import { formatQuantity, groupedCount, sig } from '../../src/units/format.js';
+import { readableUnit } from '../../src/units/systems.js';
 
 const significantDigits = (s: string) => s.replace(/^-/, '').replace('.', '').replace(/^0+/, '').length;
 
@@ -45,5 +46,21 @@ describe('groupedCount', () => {
   it('never writes NaN or Infinity', () => {
     expect(groupedCount(NaN)).toBe('-');
     expect(groupedCount(Infinity)).toBe('-');
+  });
+});
+
+describe('masses in the unit they read best in', () => {
+  // 1 lb = 0.45359237 kg and 1 oz = 1/16 lb exactly (source: NIST Handbook 44, Appendix C).
+  it('US masses under 1 lb in ounces, from 1 lb in pounds; SI under 1 kg in grams', () => {
+    expect(formatQuantity(0.00563, 'mass', 'us')).toBe('0.1986 oz');
+    expect(formatQuantity(0.45359237 / 16, 'mass', 'us')).toBe('1.000 oz');
+    expect(formatQuantity(0.45359237, 'mass', 'us')).toBe('1.000 lb');
+    expect(formatQuantity(0.45359237 * 0.999, 'mass', 'us')).toBe('15.98 oz');
+    expect(formatQuantity(0.00563, 'mass', 'si')).toBe('5.630 g');
+  });
+
+  it('a whole table of springs under 1 lb has its mass column in ounces', () => {
+    expect(readableUnit('us', 'mass', 0.0124 * 0.45359237).symbol).toBe('oz');
+    expect(readableUnit('us', 'mass', 2).symbol).toBe('lb');
   });
 });
