@@ -3,7 +3,7 @@ import { describe, expect, it } from 'vitest';
 import type { FieldDefinition } from '../../src/kinds/kind.js';
 import { fieldColumns, fieldGrid, fieldRecord, fieldRow } from '../../src/report/fields.js';
 import { COMPRESSION_FIELDS, COMPRESSION_JSON_FIELDS, COMPRESSION_TABLE_FIELDS } from '../../src/kinds/compression/fields.js';
-import { EXTENSION_FIELDS, EXTENSION_TABLE_FIELDS } from '../../src/kinds/extension/fields.js';
+import { EXTENSION_FIELDS, EXTENSION_JSON_FIELDS, EXTENSION_TABLE_FIELDS } from '../../src/kinds/extension/fields.js';
 
 interface Toy {
   d: number;
@@ -57,11 +57,19 @@ describe('the kinds define each figure once', () => {
       const same = [...COMPRESSION_FIELDS, ...COMPRESSION_JSON_FIELDS].filter((g) => g.name === f.name);
       for (const g of same) expect(g).toBe(f);
     }
-    for (const f of EXTENSION_TABLE_FIELDS) for (const g of EXTENSION_FIELDS.filter((x) => x.name === f.name)) expect(g).toBe(f);
+    for (const f of [...EXTENSION_TABLE_FIELDS, ...EXTENSION_JSON_FIELDS])
+      for (const g of [...EXTENSION_FIELDS, ...EXTENSION_JSON_FIELDS].filter((x) => x.name === f.name)) expect(g).toBe(f);
   });
 
   it('names are unique within each format', () => {
-    for (const list of [COMPRESSION_FIELDS, COMPRESSION_JSON_FIELDS, COMPRESSION_TABLE_FIELDS, EXTENSION_FIELDS, EXTENSION_TABLE_FIELDS]) {
+    for (const list of [
+      COMPRESSION_FIELDS,
+      COMPRESSION_JSON_FIELDS,
+      COMPRESSION_TABLE_FIELDS,
+      EXTENSION_FIELDS,
+      EXTENSION_JSON_FIELDS,
+      EXTENSION_TABLE_FIELDS,
+    ]) {
       expect(new Set(list.map((f) => f.name)).size).toBe(list.length);
     }
   });

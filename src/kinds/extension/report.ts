@@ -26,7 +26,7 @@ import { loadExtensionCatalog } from './catalog.js';
 import { extensionRelaxAdvice, type ExtensionRelaxAdvice, type ExtensionRelaxChange } from './relax.js';
 import type { ExtensionCase } from './springFile.js';
 import { bandFraction, fatigueSafety, staticSafety } from './figures.js';
-import { EXTENSION_TABLE_FIELDS } from './fields.js';
+import { EXTENSION_TABLE_FIELDS, extensionCandidateRecord } from './fields.js';
 import { fieldGrid } from '../../report/fields.js';
 
 /** Site names as JSON and CSV write them. */
@@ -36,7 +36,7 @@ const SITE_SHORT: Record<ExtensionSite, string> = { body: 'body', loopBending: '
 const orNull = (v: number | undefined): number | null => (v === undefined || !Number.isFinite(v) ? null : v);
 const cyclesValue = (c: number | undefined): number | string | null => (c === undefined ? null : Number.isFinite(c) ? c : 'infinite');
 
-export { bandFraction, fatigueSafety, staticSafety };
+export { bandFraction, fatigueSafety, staticSafety, extensionCandidateRecord };
 
 function siteFatigueJson(s: SiteFatigue): Record<string, unknown> {
   return {
@@ -291,71 +291,6 @@ export function extensionAnalysisText(c: ExtensionCase, a: ExtensionAnalysis, sy
 }
 
 // ---- design ----
-
-/** One designed spring as JSON (SI). */
-export function extensionCandidateRecord(c: ExtensionCandidate): Record<string, unknown> {
-  const a = c.analysis;
-  const g = a.geometry;
-  const checks: Record<string, number> = {};
-  EXTENSION_CHECKS.forEach((name, i) => {
-    if (c.checks[i] !== -1) checks[name] = c.checks[i];
-  });
-  const fa = a.fatigue;
-  return {
-    material: c.item.choice.material.id,
-    material_name: c.item.choice.material.name,
-    loop: g.loop,
-    wire_diameter: g.wireDiameter,
-    mean_diameter: g.meanDiameter,
-    outer_diameter: g.outerDiameter,
-    inner_diameter: g.innerDiameter,
-    spring_index: g.springIndex,
-    body_coils: g.bodyCoils,
-    active_coils: g.activeCoils,
-    free_length: g.freeLength,
-    loop_height: g.loopHeight,
-    loop_radius: g.loopRadius,
-    bend_radius: g.bendRadius,
-    initial_tension: a.initialTension.force,
-    initial_tension_stress: a.initialTension.stress,
-    initial_tension_band: {
-      low: a.initialTension.band.low,
-      high: a.initialTension.band.high,
-      position: a.initialTension.position,
-      fraction: orNull(bandFraction(a)),
-    },
-    rate: a.rate,
-    mass: g.mass,
-    wire_volume: g.wireVolume,
-    relative_cost: g.mass * c.item.choice.material.relativeCost.value,
-    points: a.points.map((p) => ({
-      length: p.length,
-      force: p.force,
-      body_stress: p.bodyStress,
-      loop_bending_stress: p.loopBendingStress,
-      loop_torsion_stress: p.loopTorsionStress,
-    })),
-    tensile_strength: a.material.figures.tensileStrength,
-    allowable_stress: {
-      body_torsion: a.material.allowables.bodyTorsion,
-      loop_bending: a.material.allowables.loopBending,
-      loop_torsion: a.material.allowables.loopTorsion,
-    },
-    static_safety_factors: {
-      body: orNull(a.staticSafety.body),
-      loop_bending: orNull(a.staticSafety.loopBending),
-      loop_torsion: orNull(a.staticSafety.loopTorsion),
-    },
-    fatigue_safety_factors: fa
-      ? { body: orNull(fa.body.safetyFactor), loop_bending: orNull(fa.loopBending.safetyFactor), loop_torsion: orNull(fa.loopTorsion.safetyFactor) }
-      : null,
-    static_safety_factor: orNull(staticSafety(a)),
-    fatigue_safety_factor: fatigueSafety(a),
-    natural_frequency: a.surge.frequency,
-    checks,
-    warnings: a.warnings.map((w) => w.message),
-  };
-}
 
 export function extensionRequirementsRecord(req: ExtensionRequirements): Record<string, unknown> {
   return {
