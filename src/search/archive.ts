@@ -35,6 +35,20 @@ export class TopK {
     return true;
   }
 
+  /** Offer a point that may already be kept under another value (`same` says which kept point is
+   * the same, a cell solved twice at two precisions, say): the list holds it once, at the better value. */
+  offerOnce(x: Float64Array, f: Float64Array, same: (kept: Float64Array, x: Float64Array) => boolean): boolean {
+    for (let i = 0; i < this.size; i++) {
+      if (!same(this.x(i), x)) continue;
+      if (!(f[0] < this.fs[i * this.nf])) return false;
+      this.xs.copyWithin(i * this.nx, (i + 1) * this.nx, this.size * this.nx);
+      this.fs.copyWithin(i * this.nf, (i + 1) * this.nf, this.size * this.nf);
+      this.size--;
+      break;
+    }
+    return this.offer(x, f);
+  }
+
   x(i: number): Float64Array {
     return this.xs.subarray(i * this.nx, (i + 1) * this.nx);
   }

@@ -13,6 +13,7 @@ import { cellKey, decode as decodeGenes, encoding, mutate as mutateGenes, random
 import { TREND, type Problem } from './problem.js';
 import { packResult, type SearchResult } from './result.js';
 import { reachesBound, termination, type StopReason, type Termination } from './termination.js';
+import { RunBounds } from './runBounds.js';
 
 export interface GeneticOptions {
   seed: number | string;
@@ -29,6 +30,10 @@ export interface GeneticOptions {
   searchTolerance?: number;
   /** Scan step while searching, in multiples of the solved variable's resolution (default 4 with discrete genes only). */
   scanCoarsening?: number;
+  /** Use the problem's run bounds (Problem.rangeLowerBound) when it offers them (default true): draw
+   * individuals only from runs they leave open, and stop once the incumbent is proven within the
+   * termination's tolerance of the optimum. Off, the search is the plain genetic one. */
+  runBounds?: boolean;
 }
 
 interface Individual {
@@ -71,11 +76,24 @@ export function geneticSearch(p: Problem, opts: GeneticOptions): SearchResult {
   let cm = memo;
   const fineMemo = new Map<number, { f: number; violation: number; x: Float64Array }>();
   const spent = () => ws.stats.evaluations;
+  // The problem's run bounds, when it offers them: the open runs that individuals are drawn from, and
+  // the proof that ends the run (runBounds.ts). Their refinement gets as much work as the generations
+  // and hill-climbs have had (evaluations and bound calls alike), no more.
+  const runs = (opts.runBounds ?? true) && discreteGenes && RunBounds.applies(p) ? new RunBounds(p, ws.stats) : null;
+  const work = () => ws.stats.evaluations + ws.stats.boundCalls;
+  let proofWork = 0;
   const increasing = p.objectiveTrend !== undefined && p.objectiveTrend[0] === TREND.increasing;
   const x = new Float64Array(n);
+  // A cell enters the list once: the coarse generations, the fine hill-climb and the proof may each
+  // solve it (the integer genes name it; real genes and the solved variable do not).
+  const sameCell = (a: Float64Array, b: Float64Array): boolean => {
+    for (let i = 0; i < n; i++) if (i !== s && a[i] !== b[i]) return false;
+    return true;
+  };
+  const keep = (px: Float64Array, f: Float64Array): boolean => (discreteGenes ? top.offerOnce(px, f, sameCell) : top.offer(px, f));
   const cellBest = { f: Infinity, x: new Float64Array(n) };
   const visitAll = (px: Float64Array, f: Float64Array) => {
-    top.offer(px, f);
+    keep(px, f);
     if (f[0] < cellBest.f) {
       cellBest.f = f[0];
       cellBest.x.set(px);
@@ -111,7 +129,7 @@ export function geneticSearch(p: Problem, opts: GeneticOptions): SearchResult {
         counts.feasible++;
         if (increasing) {
           f = cw.f[0];
-          top.offer(x, cw.f);
+          keep(x, cw.f);
         } else {
           f = cellBest.f;
           x.set(cellBest.x);
@@ -124,7 +142,7 @@ export function geneticSearch(p: Problem, opts: GeneticOptions): SearchResult {
     } else if (evaluateFixed(p, x, cw)) {
       counts.feasible++;
       f = cw.f[0];
-      top.offer(x, cw.f);
+      keep(x, cw.f);
     } else {
       violation = cw.missViolation;
       misses.offer(cw.missX, cw.missG, cw.missF, cw.missViolation);
@@ -139,13 +157,19 @@ export function geneticSearch(p: Problem, opts: GeneticOptions): SearchResult {
     return ind;
   };
 
-  const randomGenes = (): Float64Array => sampleGenes(enc, rng);
+  const randomGenes = (): Float64Array => {
+    if (runs === null) return sampleGenes(enc, rng);
+    const g = new Float64Array(n);
+    return runs.sample(rng, g) ? g : sampleGenes(enc, rng);
+  };
   // A random value now and then lets an integer gene leave its neighbourhood.
   const mutate = (g: Float64Array, rate: number): void => mutateGenes(enc, g, rate, 0.15, rng);
   const tournament = (pop: Individual[]): Individual => pick(pop, better, rng);
-  // The incumbent is proven optimal (within the tolerance) once it reaches the lower bound.
+  // The incumbent is proven optimal (within the tolerance) once it reaches the LP bound; with the run
+  // bounds, the list is proven once its k-th best is within the tolerance of every cell left unsolved.
   let best: Individual = { genes: new Float64Array(n), f: Infinity, violation: Infinity, x: new Float64Array(n) };
-  const proven = (ind: Individual): boolean => ind.violation === 0 && reachesBound(until, ind.f);
+  const proven = (ind: Individual): boolean =>
+    ind.violation === 0 && (reachesBound(until, ind.f) || (runs !== null && runs.proves(top.threshold(), until.boundTolerance)));
   // The run ends early on a proven bound, or when it has gone stallEvaluations without a better
   // incumbent (a run that has found nothing feasible keeps looking until its budget is spent).
   const halted = (): boolean => {
@@ -153,11 +177,42 @@ export function geneticSearch(p: Problem, opts: GeneticOptions): SearchResult {
       stoppedBy = 'bound';
       return true;
     }
+    if (runs !== null && runs.lowerBound() === Infinity) {
+      // Every cell is solved or ruled out by the bounds: what was found is all there is.
+      stoppedBy = incumbent < Infinity ? 'bound' : 'exhausted';
+      return true;
+    }
     if (incumbent < Infinity && spent() - foundAt >= until.stallEvaluations) {
       stoppedBy = 'stall';
       return true;
     }
     return false;
+  };
+
+  // A cell the proof solved feasible: exact already, it joins the list and may be the new best.
+  const found = (genes: Float64Array, px: Float64Array, f: Float64Array): void => {
+    keep(px, f);
+    if (f[0] < bestFeasible && top.size > 0) bestFeasible = top.f(0)[0];
+    if (f[0] < incumbent) {
+      incumbent = f[0];
+      foundAt = spent();
+    }
+    const ind: Individual = { genes: Float64Array.from(genes), f: f[0], violation: 0, x: Float64Array.from(px) };
+    const k = key(genes);
+    const record = { f: ind.f, violation: 0, x: ind.x };
+    memo.set(k, record);
+    fineMemo.set(k, record);
+    if (better(ind, best)) best = ind;
+  };
+  // The proof's turn: refine the least open runs, on the list's k-th best, until its work matches the
+  // search's so far (an even, self-adjusting split: a search that fills the list with good springs
+  // early leaves the proof little to refine).
+  const prove = (): void => {
+    if (runs === null) return;
+    const before = work();
+    const limit = Math.min(before + (before - proofWork) - proofWork, budget + ws.stats.boundCalls);
+    if (limit > before) runs.refine(fineWs, () => top.threshold(), until.boundTolerance, limit, found);
+    proofWork += work() - before;
   };
 
   // Closing hill-climb over the integer genes: moves of one step in one gene or in two genes at once
@@ -205,6 +260,7 @@ export function geneticSearch(p: Problem, opts: GeneticOptions): SearchResult {
   // The budget is checked before each cell, and the reported cells are solved again at the end: keep
   // back what those cost, so that the whole run stays within maxEvaluations.
   const budget = Math.max(0, until.maxEvaluations - 256 - 64 * top.k);
+  prove();
   for (let round = 0; round < 10_000 && spent() < budget; round++) {
     if (halted()) break;
     const cellsBefore = counts.cells;
@@ -234,6 +290,8 @@ export function geneticSearch(p: Problem, opts: GeneticOptions): SearchResult {
         next.push(assess(child));
       }
       pop = next;
+      prove();
+      if (better(best, pop[0]) && better(best, pop[1])) pop[pop.length - 1] = best;
       const genBest = pop.reduce((a, b) => (better(b, a) ? b : a));
       if (better(genBest, best)) {
         best = genBest;
@@ -246,6 +304,7 @@ export function geneticSearch(p: Problem, opts: GeneticOptions): SearchResult {
       bestFeasible = Infinity;
       best = hillClimb(assess(Float64Array.from(best.genes)), budget);
     } else best = hillClimb(best, budget);
+    prove();
     // A whole round that met no combination it had not seen means the space is exhausted.
     if (halted()) break;
     if (counts.cells === cellsBefore) {
@@ -256,6 +315,10 @@ export function geneticSearch(p: Problem, opts: GeneticOptions): SearchResult {
     cw = ws;
     cm = memo;
     while (pop.length < popSize) pop.push(assess(randomGenes()));
+  }
+  if (runs !== null) {
+    counts.cells += runs.cellsSolved;
+    counts.feasible += runs.cellsFeasible;
   }
   if (s < 0) return { ...packResult('genetic', p, top, null, ws, counts, misses, stoppedBy), evaluationsToBest: foundAt };
   // Solve the reported cells again at the grid's tolerance.

@@ -45,6 +45,11 @@ export interface Problem {
    * over all its values. The grid rules out the stiffest and the softest coil counts of a wire by it
    * (a prefix and a suffix of the innermost variable's values) before it visits the rest. */
   rangeInfeasible?(x: Float64Array, variable: number, from: number, to: number): number;
+  /** Optionally, a lower bound on objective 0 over the feasible points of a run of one variable's values
+   * (fixed and free as for rangeInfeasible): Infinity when the run has no feasible point, -Infinity
+   * when there is no bound. With it the genetic search draws its individuals only from runs the bounds
+   * leave open and stops once its incumbent is proven within a tolerance of the optimum (runBounds.ts). */
+  rangeLowerBound?(x: Float64Array, variable: number, from: number, to: number): number;
   /** Optionally, for objective 0 increasing in the solved variable: a value of the solved variable past
    * which objective 0 is at least `bound` for the other values in x (-Infinity when it is everywhere;
    * an upper estimate is fine, a lower one is not). It lets a cell stop short of the points that could

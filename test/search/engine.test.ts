@@ -213,6 +213,22 @@ describe('grid and cell solver', () => {
 });
 
 describe('archives and fronts (property)', () => {
+  it('TopK.offerOnce keeps a point once, at its better value, and the list sorted', () => {
+    const top = new TopK(3, 2, 1);
+    const same = (a: Float64Array, b: Float64Array) => a[0] === b[0];
+    top.offerOnce(Float64Array.of(1, 0), Float64Array.of(5), same);
+    top.offerOnce(Float64Array.of(2, 0), Float64Array.of(4), same);
+    expect(top.offerOnce(Float64Array.of(1, 9), Float64Array.of(6), same)).toBe(false);
+    expect(top.offerOnce(Float64Array.of(1, 7), Float64Array.of(3), same)).toBe(true);
+    top.offerOnce(Float64Array.of(3, 0), Float64Array.of(8), same);
+    expect(top.size).toBe(3);
+    expect([0, 1, 2].map((i) => [top.x(i)[0], top.x(i)[1], top.f(i)[0]])).toEqual([
+      [1, 7, 3],
+      [2, 0, 4],
+      [3, 0, 8],
+    ]);
+  });
+
   it('TopK keeps the k smallest, sorted', () => {
     fc.assert(
       fc.property(fc.array(fc.double({ min: -1e6, max: 1e6, noNaN: true }), { maxLength: 200 }), fc.integer({ min: 1, max: 20 }), (vals, k) => {

@@ -163,9 +163,9 @@ export function runDesign(req: Requirements, opts: DesignOptions = {}): DesignRu
 }
 
 /** When the genetic search of a design stops: its budget spent; 60% of its budget spent without a
- * better incumbent (on the every-material, every-end-type, coil_step 0.01 space, 49 of 50 seeds still
- * reach the grid's optimum within 0.5%, at about 70% of the evaluations: bench/results.md); or its
- * incumbent at the LP bound, within 0.1%. */
+ * better incumbent; or its incumbent proven within 0.1% of the optimum, by the LP bound or by the
+ * problem's run bounds (src/search/runBounds.ts: on the every-material, every-end-type, coil_step 0.01
+ * space every seed stops so, at about a tenth of the budget: bench/results.md). */
 export function geneticTermination(maxEvaluations: number, lowerBound: number | null): Termination {
   return termination({ maxEvaluations, stallEvaluations: 0.6 * maxEvaluations, lowerBound });
 }

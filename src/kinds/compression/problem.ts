@@ -11,7 +11,7 @@ import { minimumGapSum, solidOuterDiameter } from './clash.js';
 import { INFINITE_LIFE_CYCLES, endurancePoint, fatigueSafetyFactorFrom, fullyReversedEndurance, type EndurancePoint } from '../../model/fatigue.js';
 import { inactiveCoils, pitch, solidLength, wireVolume, type EndType } from './geometry.js';
 import { massOfVolume } from '../../model/mass.js';
-import { springRate } from '../../model/rate.js';
+import { directShearFactor, springRate } from '../../model/rate.js';
 import { shearStress } from '../../model/stress.js';
 import { stressFactor } from '../../model/stressFactor.js';
 import { ultimateShearStrength } from '../../model/strength.js';
@@ -166,13 +166,22 @@ export function buildSpringProblem(req: Requirements, tolerances?: ToleranceCata
   // the mean diameters that the index, bore and rod allow need be considered (every other point fails
   // one of those); over them and those coil counts, the rate lies between its values at (Dhi, NaHi)
   // and (Dlo, NaLo), and each check below is bounded from those.
-  function branchCut(i: number, eFrom: number, eTo: number, NaLo: number, NaHi: number): number {
+  // With `rateWindow` (the run bounds of rangeLowerBound), the diameters are narrowed further by the
+  // window of rates the load band and the free-length limit leave (rateWindowOf): the grid's own hints
+  // leave that out, so that what they cut, and the counts that say so, stay as they were.
+  function branchCut(i: number, eFrom: number, eTo: number, NaLo: number, NaHi: number, rateWindow = false): number {
     const d = sd[i];
     if (activeMask[Check.temperature] === 1 && temperature > sTmax[i]) return Check.temperature;
     let Dlo = Cmin * d;
     let Dhi = Cmax * d;
     if (activeMask[Check.outer_diameter] === 1) Dhi = Math.min(Dhi, ODmax - d);
     if (activeMask[Check.inner_diameter] === 1) Dlo = Math.max(Dlo, IDmin + d);
+    if (rateWindow) {
+      rateWindowOf(i, NaLo, NaHi, runD);
+      if (runD[0] > Dlo) Dlo = runD[0];
+      if (runD[1] < Dhi) Dhi = runD[1];
+      if (Dlo > Dhi * (1 + 1e-12)) return runD[0] > Cmin * d ? Check.operating_force_max : Check.free_length;
+    }
     if (Dlo > Dhi * (1 + 1e-12))
       return ODmax - d < Cmin * d || activeMask[Check.inner_diameter] === 0
         ? Check.outer_diameter
@@ -212,6 +221,28 @@ export function buildSpringProblem(req: Requirements, tolerances?: ToleranceCata
     if (surgeNeed > 0 && surgeFrequency(kMax, activeCoilMass(d, Dlo, NaLo, sRho[i]), oneEndFree) < surgeNeed) return Check.surge;
     return -1;
   }
+
+  // The rates a feasible spring may have: at most kStiffest (the top of the load band), at least
+  // kSoftest (the bottom of the band, and the free-length limit: L1 + F1 / k <= L0max).
+  const kStiffest = activeMask[Check.operating_force_min] === 1 && travel > 0 ? (F2req * (1 + tol) - F1) / travel : Infinity;
+  const kSoftest = Math.max(
+    activeMask[Check.operating_force_min] === 1 && travel > 0 ? (F2req * (1 - tol) - F1) / travel : 0,
+    activeMask[Check.free_length] === 1 ? (L0max > L1 ? F1 / (L0max - L1) : Infinity) : 0,
+  );
+  // The direct-shear term softens a spring by at most its factor at the smallest index.
+  const softening = directShear ? directShearFactor(Cmin) : 1;
+  const runD = new Float64Array(2);
+  /** The mean diameters [out[0], out[1]] that the rate window leaves for wire i and coil counts
+   * NaLo..NaHi: G d^4 / (8 D^3 Na s) <= kStiffest with s at most `softening` and Na at most NaHi
+   * bounds D from below; G d^4 / (8 D^3 Na) >= kSoftest with Na at least NaLo bounds it from above
+   * (each eased by a part in 1e12 outwards). */
+  function rateWindowOf(i: number, NaLo: number, NaHi: number, out: Float64Array): void {
+    const d = sd[i];
+    const d4G = d * d * d * d * sG[i];
+    out[0] = kStiffest <= 0 ? Infinity : kStiffest < Infinity ? Math.cbrt(d4G / (8 * NaHi * softening * kStiffest)) * BOUND_EASE : 0;
+    out[1] = kSoftest === Infinity ? -Infinity : kSoftest > 0 ? Math.cbrt(d4G / (8 * NaLo * kSoftest)) / BOUND_EASE : Infinity;
+  }
+  const rankKey = req.rank;
 
   const problem: SpringProblem = {
     name: 'helical compression spring',
@@ -273,6 +304,40 @@ export function buildSpringProblem(req: Requirements, tolerances?: ToleranceCata
     // The coil counts from..to of one wire size and end type: the same bounds between their rates.
     rangeInfeasible(x, variable, from, to) {
       return variable === 2 ? branchCut(x[0], x[1], x[1], NaFewest + from * req.coilStep, NaFewest + to * req.coilStep) : -1;
+    },
+
+    // The least of the ranked quantity over coil counts from..to of one wire size and end type: every
+    // one the registry ranks on (but the safety factors) grows with the mean diameter and the coil
+    // count, so its value at the smallest diameter the index, rod and rate window allow and the
+    // fewest coils bounds it; Infinity when the run's bounds leave no feasible point (branchCut with
+    // the rate window).
+    rangeLowerBound(x, variable, from, to) {
+      if (variable !== 2) return -Infinity;
+      const i = x[0];
+      const e = x[1];
+      const NaLo = NaFewest + from * req.coilStep;
+      const NaHi = NaFewest + to * req.coilStep;
+      if (branchCut(i, e, e, NaLo, NaHi, true) >= 0) return Infinity;
+      const d = sd[i];
+      let D = Cmin * d;
+      if (activeMask[Check.inner_diameter] === 1) D = Math.max(D, IDmin + d);
+      D = Math.max(D, runD[0]);
+      const volume = wireVolume(d, D, NaLo + endQ[e]) * BOUND_EASE;
+      switch (rankKey) {
+        case 'mass':
+          return massOfVolume(volume, sRho[i]);
+        case 'wire_volume':
+          return volume;
+        case 'outer_diameter':
+          return (D + d) * BOUND_EASE;
+        case 'free_length': {
+          // L1 + F1 / k with k at most its value at the smallest diameter and fewest coils, and at most kStiffest.
+          const k = Math.min(springRate(sG[i], d, D, NaLo, false), kStiffest);
+          return (L1 + F1 / k) * BOUND_EASE;
+        }
+        default:
+          return -Infinity;
+      }
     },
 
     // Over a bracket [lo, hi] of mean diameters the rate is at least k(hi), so every force is at least

@@ -157,6 +157,15 @@ function expectNoFeasibleDiameter(p: ReturnType<typeof build>, item: number, e: 
   }
 }
 
+/** A run of coil counts from..to of one wire size and end type, picked by four numbers. */
+function runOf(p: ReturnType<typeof build>, a: number, e0: number, n1: number, n2: number): { x: Float64Array; from: number; to: number } {
+  const x = new Float64Array(4);
+  x[0] = valueAt(p.variables[0], a % valueCount(p.variables[0]));
+  x[1] = e0 % p.ends.length;
+  const count = valueCount(p.variables[2]);
+  return { x, from: Math.min(n1 % count, n2 % count), to: Math.max(n1 % count, n2 % count) };
+}
+
 describe('spring problem in the search', () => {
   it('a wire size the branch hint rules out has no feasible point anywhere under it (property)', () => {
     let ruledOut = 0;
@@ -184,12 +193,7 @@ describe('spring problem in the search', () => {
     fc.assert(
       fc.property(problemArb, fc.nat(), fc.nat(), fc.nat(), fc.nat(), (doc, a, e0, n1, n2) => {
         const p = build({ ...doc, ends: ['plain', 'squared-ground'] });
-        const x = new Float64Array(4);
-        x[0] = valueAt(p.variables[0], a % valueCount(p.variables[0]));
-        x[1] = e0 % p.ends.length;
-        const count = valueCount(p.variables[2]);
-        const from = Math.min(n1 % count, n2 % count);
-        const to = Math.max(n1 % count, n2 % count);
+        const { x, from, to } = runOf(p, a, e0, n1, n2);
         const j = p.rangeInfeasible!(x, 2, from, to);
         if (j < 0) return;
         ruledOut++;
@@ -198,6 +202,44 @@ describe('spring problem in the search', () => {
       { numRuns: 200, seed: 10 },
     );
     expect(ruledOut).toBeGreaterThan(20);
+  });
+
+  it('the run bound is a lower bound of the ranked quantity at every feasible point of its run, and Infinity only where none is (property)', () => {
+    let bounded = 0;
+    let empty = 0;
+    fc.assert(
+      fc.property(
+        problemArb,
+        fc.constantFrom('mass', 'wire_volume', 'outer_diameter', 'free_length'),
+        fc.nat(),
+        fc.nat(),
+        fc.nat(),
+        fc.nat(),
+        (doc, rank, a, e0, n1, n2) => {
+          const p = build({ ...doc, rank, ends: ['plain', 'squared-ground'] });
+          const { x, from, to } = runOf(p, a, e0, n1, n2);
+          const bound = p.rangeLowerBound!(x, 2, from, to);
+          if (bound === Infinity) empty++;
+          const d = p.stock[x[0]].wireDiameter;
+          const g = new Float64Array(CHECKS.length);
+          const f = new Float64Array(p.objectiveNames.length);
+          const [cMin, cMax] = p.req.index;
+          for (let n = from; n <= to; n += Math.max(1, Math.floor((to - from) / 6))) {
+            x[2] = valueAt(p.variables[2], n);
+            for (let t = 0; t <= 400; t++) {
+              x[3] = d * (cMin + ((cMax - cMin) * t) / 400);
+              p.evaluate(x, g, f);
+              if (Math.max(...g) > 0) continue;
+              bounded++;
+              expect(bound).toBeLessThanOrEqual(f[0]);
+            }
+          }
+        },
+      ),
+      { numRuns: 200, seed: 12 },
+    );
+    expect(bounded).toBeGreaterThan(100);
+    expect(empty).toBeGreaterThan(20);
   });
 
   it('the interval bounds, the replayed brackets and the objective ceiling change nothing but the work: the same springs with and without them, for every rank key and per wire (property)', () => {
