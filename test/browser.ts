@@ -67,3 +67,8 @@ export async function openFile(browser: Browser, path: string, viewport = { widt
   await page.waitForLoadState('load');
   return { page, errors, requests, url };
 }
+
+/** Pages of a PDF that Chromium printed: its page objects (Chromium writes them uncompressed). */
+export function pdfPages(pdf: Buffer): number {
+  return (pdf.toString('latin1').match(/\/Type\s*\/Page(?![s\w])/g) ?? []).length;
+}

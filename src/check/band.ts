@@ -2,34 +2,12 @@
 // `check` and `stock` accept the working force within `working_tolerance`; without it, within the
 // load tolerance; and when that is zero too, within 2%: coilfront's own default, a band narrow enough to
 // mean "this force" and wide enough for a spring whose free length was rounded to a drawing's precision.
-import type { Requirements } from '../kinds/compression/requirements.js';
 import { formatQuantity, sig } from '../units/format.js';
 import type { UnitSystem } from '../units/systems.js';
+import type { BandSource, WorkingBand } from '../input/workingBand.js';
 
-export const DEFAULT_WORKING_TOLERANCE = 0.02;
-
-export type BandSource = 'working_tolerance' | 'load_tolerance' | 'default';
-
-export interface WorkingBand {
-  force: number;
-  length: number;
-  tolerance: number;
-  source: BandSource;
-  low: number;
-  high: number;
-}
-
-/** Compression and extension requirements alike: the working force, its length and the two tolerances. */
-export function workingBand(req: Pick<Requirements, 'workingTolerance' | 'loadTolerance' | 'workingForce' | 'workingLength'>): WorkingBand {
-  const [tolerance, source]: [number, BandSource] =
-    req.workingTolerance !== undefined
-      ? [req.workingTolerance, 'working_tolerance']
-      : req.loadTolerance > 0
-        ? [req.loadTolerance, 'load_tolerance']
-        : [DEFAULT_WORKING_TOLERANCE, 'default'];
-  const force = req.workingForce;
-  return { force, length: req.workingLength, tolerance, source, low: force * (1 - tolerance), high: force * (1 + tolerance) };
-}
+// The rule lives below the kinds, where the specification sheets read it too.
+export { DEFAULT_WORKING_TOLERANCE, workingBand, type BandSource, type WorkingBand } from '../input/workingBand.js';
 
 const SOURCE_WORDS: Record<BandSource, string> = {
   working_tolerance: "the requirement's working_tolerance",

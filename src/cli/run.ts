@@ -51,7 +51,11 @@ export function buildProgram(io: Io, setCode: (c: number) => void): Command {
     .option('--json', 'machine-readable output on stdout (always SI units)')
     .addOption(unitsOption())
     .option('--report <file.html>', 'also write a self-contained HTML report')
-    .option('--force', 'overwrite an existing report file')
+    .option(
+      '--spec <file.html>',
+      "also write the spring's one-page specification sheet, where its kind has one from a spring file (else design --spec writes it)",
+    )
+    .option('--force', 'overwrite existing output files')
     .action(async (file: string, opts) => setCode(await analyzeCommand(file, opts, io)));
 
   program

@@ -121,6 +121,9 @@ export interface KindReport<Case, Analysis, Req, Run, Cand = unknown, Front = Ki
    * default) and after it (its own caution): frontier and sweep records are framed by it, as the
    * kind's own design and analysis records are. */
   readonly jsonFrame: { readonly head: Readonly<Record<string, unknown>>; readonly tail: Readonly<Record<string, unknown>> };
+  /** The specification sheet of one given spring (`analyze --spec`), or undefined when the kind writes its
+   * sheet from a design only. Throws InputError (nothing written) when the spring cannot be specified. */
+  analysisSpecSheet?(c: Case, a: Analysis, system: UnitSystem): Promise<string>;
   /** Write the specification sheet of the spring ranked `pick` (1 = best); false (nothing written) when there is none. */
   writeSpecSheet?(path: string, run: Run, system: UnitSystem, force: boolean, pick?: number): Promise<boolean>;
   /** The spring file (as `analyze` and `check` read it) of the spring ranked `pick`, at drawing

@@ -33,4 +33,11 @@ export const GOLDEN_CASES: GoldenCase[] = [
   { name: 'design-washer-trigger-us.html', args: ['design', demo, '--units', 'us', '--report', '{out}'], output: true },
   { name: 'design-extension-pedal-bin.txt', args: ['design', pedalBin] },
   { name: 'design-extension-pedal-bin.json', args: ['design', pedalBin, '--json'] },
+  { name: 'design-washer-trigger-spec.html', args: ['design', demo, '--spec', '{out}'], output: true },
+  { name: 'design-extension-pedal-bin-spec.html', args: ['design', pedalBin, '--spec', '{out}'], output: true },
+  {
+    name: 'analyze-extension-pedal-bin-spring-spec-us.html',
+    args: ['analyze', 'examples/extension-pedal-bin-spring.yaml', '--units', 'us', '--spec', '{out}'],
+    output: true,
+  },
 ];

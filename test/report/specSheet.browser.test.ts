@@ -13,14 +13,9 @@ import { specSheetHtml } from '../../src/kinds/compression/report/specSheet.js';
 import { runDesign } from '../../src/kinds/compression/design.js';
 import { loadToleranceCatalog } from '../../src/kinds/compression/tolerance/catalog.js';
 import { specifySpring } from '../../src/kinds/compression/tolerance/specify.js';
-import { OUT, openFile, useChromium } from '../browser.js';
+import { OUT, openFile, pdfPages, useChromium } from '../browser.js';
 
 const browser = useChromium();
-
-/** Pages of a PDF: its page objects (Chromium writes them uncompressed). */
-function pdfPages(pdf: Buffer): number {
-  return (pdf.toString('latin1').match(/\/Type\s*\/Page(?![s\w])/g) ?? []).length;
-}
 
 function demoSheet(units: 'si' | 'us', extra: Record<string, unknown> = {}) {
   const raw = { ...(parse(readFileSync('examples/washer-trigger.yaml', 'utf8')) as Record<string, unknown>), units: 'si', ...extra };

@@ -106,6 +106,33 @@ export function extensionForcePlot(a: ExtensionAnalysis, system: UnitSystem): st
   return out.join('');
 }
 
+/** The close-wound body of a side view at free length, (Nb + 1) wire diameters long from the inside of
+ * the left loop: a wire line per coil (in the wire group) and the sections at the top and the bottom of
+ * each coil (in the section group). X and Y map mm to the drawing, k is its scale. */
+export function closeWoundBody(
+  g: ExtensionAnalysis['geometry'],
+  X: (v: number) => number,
+  Y: (v: number) => number,
+  k: number,
+): { wire: string[]; sections: string[] } {
+  const d = g.wireDiameter;
+  const ry = g.meanDiameter / 2;
+  const sw = r2(Math.max(1, d * k));
+  const rs = r2(Math.max(0.8, (d * k) / 2));
+  const start = g.loopHeight + d / 2;
+  const coils = Math.max(1, Math.round(g.bodyCoils));
+  const step = (g.bodyLength - d) / coils;
+  const wire: string[] = [];
+  const sections: string[] = [];
+  for (let i = 0; i <= coils; i++) {
+    const xt = start + i * step;
+    if (i < coils) wire.push(`<line x1="${r2(X(xt))}" y1="${r2(Y(ry))}" x2="${r2(X(xt + step / 2))}" y2="${r2(Y(-ry))}" stroke-width="${sw}"/>`);
+    sections.push(`<circle cx="${r2(X(xt))}" cy="${r2(Y(ry))}" r="${rs}"/>`);
+    if (i < coils) sections.push(`<circle cx="${r2(X(xt + step / 2))}" cy="${r2(Y(-ry))}" r="${rs}"/>`);
+  }
+  return { wire, sections };
+}
+
 /** Side view to scale: the close-wound body and a loop at each end, the free length inside the loops
  * and the outer diameter dimensioned. */
 export function extensionSideView(a: ExtensionAnalysis, system: UnitSystem): string {
@@ -138,20 +165,8 @@ export function extensionSideView(a: ExtensionAnalysis, system: UnitSystem): str
       `<ellipse id="${id}" class="loop" cx="${r2(X(cx))}" cy="${r2(cy)}" rx="${r2(rx * k)}" ry="${r2(ry * k)}" fill="none" stroke="currentColor" style="stroke: var(--front)" stroke-width="${sw}"/>`,
     );
   }
-  // The body, close-wound: (Nb + 1) wire diameters long, a section at the top and one at the bottom per coil.
-  const start = h + d / 2;
-  const coils = Math.max(1, Math.round(g.bodyCoils));
-  const step = (g.bodyLength - d) / coils;
-  for (let i = 0; i < coils; i++) {
-    const xt = start + i * step;
-    out.push(`<line x1="${r2(X(xt))}" y1="${r2(Y(ry))}" x2="${r2(X(xt + step / 2))}" y2="${r2(Y(-ry))}" stroke-width="${sw}"/>`);
-  }
-  out.push('</g><g class="section">');
-  for (let i = 0; i <= coils; i++) {
-    const xt = start + i * step;
-    out.push(`<circle cx="${r2(X(xt))}" cy="${r2(Y(ry))}" r="${r2(Math.max(0.8, (d * k) / 2))}"/>`);
-    if (i < coils) out.push(`<circle cx="${r2(X(xt + step / 2))}" cy="${r2(Y(-ry))}" r="${r2(Math.max(0.8, (d * k) / 2))}"/>`);
-  }
+  const body = closeWoundBody(g, X, Y, k);
+  out.push(...body.wire, '</g><g class="section">', ...body.sections);
   out.push('</g>');
   const Ls = (v: number) => `${Number(inUnit(v, 'length', system).toPrecision(4))} ${unitSymbol('length', system)}`;
   const yDim = Y(-g.outerDiameter / 2) + 26;

@@ -2,6 +2,7 @@
 // document says `kind: extension`. Everything here is read from this folder's modules; the registries
 // (checks, objectives, fields) are the lists the search and the reports already use.
 import { loadCatalog } from '../../catalogs/load.js';
+import { writeOutputFile } from '../../report/writeFile.js';
 import { STATIC_SERVICE_CYCLES } from '../../model/fatigue.js';
 import type { CheckDefinition, ObjectiveDefinition, SpringKind, Trend } from '../kind.js';
 import { EXTENSION_CAUTIONS, analyzeExtension, type ExtensionAnalysis } from './analysis.js';
@@ -151,6 +152,18 @@ export const extension: ExtensionKind = {
       const { extensionDesignHtml } = await import('./html.js');
       return extensionDesignHtml(run, system, shown.frontier ?? extensionReportFrontier(run, loadCatalog()), shown.sweep);
     },
+    async analysisSpecSheet(c, a, system) {
+      const { extensionSheetSpring, extensionSpecSheetHtml } = await import('./specSheet.js');
+      return extensionSpecSheetHtml({ spring: extensionSheetSpring(c, a), service: c.service, system, notes: c.notes });
+    },
+    async writeSpecSheet(path, run, system, force, pick = 1) {
+      const c = run.candidates[pick - 1];
+      if (!c) return false;
+      const { extensionSpecSheetHtml } = await import('./specSheet.js');
+      writeOutputFile(path, extensionSpecSheetHtml({ spring: c, service: run.problem.service(), system, requirements: run.req }), force, '--spec');
+      return true;
+    },
+    listed: (run) => run.candidates.length,
     candidateJson: (c) => extensionCandidateRecord(c),
     countsJson: (run) => extensionCountsRecord(run),
     limitingText: (run) => extensionLimitingText(run),

@@ -12,8 +12,8 @@ import { CONFIRM_SAMPLES } from '../tolerance/confirm.js';
 import type { SpringTolerances } from '../tolerance/model.js';
 import { controlledDiameter } from '../tolerance/precision.js';
 import { specifySpring, type SpecSheetInput, type SpecifiedSpring } from '../tolerance/specify.js';
-import { INCH_MM } from '../../../units/kinds.js';
-import { formatQuantity, unitSymbol } from '../../../units/format.js';
+import { formatQuantity } from '../../../units/format.js';
+import { sheetDocument, sheetPercent, sheetRow, sheetTable, sheetWriters, type SheetWriters } from '../../../report/html/sheet.js';
 import type { UnitSystem } from '../../../units/systems.js';
 import { CAUTIONS } from '../../../report/cautions.js';
 import { writeOutputFile } from '../../../report/writeFile.js';
@@ -34,66 +34,8 @@ export function largestSolidLength(a: SpringAnalysis, t: SpringTolerances): numb
   return (ground ? a.geometry.totalCoils : a.geometry.totalCoils + 1.5) * dMax;
 }
 
-const STYLE = `
-@page { margin: 10mm 12mm; }
-* { box-sizing: border-box; }
-html { background: #fff; }
-body { margin: 0; color: #111; font: 8.2pt/1.25 system-ui, -apple-system, "Segoe UI", Roboto, Arial, sans-serif; }
-.sheet { width: 184mm; margin: 0 auto; }
-header { display: flex; justify-content: space-between; align-items: flex-end; border-bottom: 1.6pt solid #111; padding-bottom: 1.5mm; margin-bottom: 1.5mm; }
-h1 { font-size: 13pt; margin: 0; }
-header p { margin: 0.6mm 0 0; color: #333; }
-h2 { font-size: 8.6pt; margin: 2mm 0 0.8mm; text-transform: uppercase; letter-spacing: 0.05em; border-bottom: 0.6pt solid #777; }
-table { border-collapse: collapse; width: 100%; table-layout: fixed; font-variant-numeric: tabular-nums; }
-col.k { width: 22%; } col.v { width: 31%; }
-td, th { padding: 0.35mm 1.2mm; border-bottom: 0.4pt solid #ccc; vertical-align: top; text-align: left; }
-th { font-weight: 600; color: #333; }
-td.v { font-weight: 600; }
-td.n { color: #444; }
-.cols { display: grid; grid-template-columns: 44% 1fr; gap: 4mm; align-items: start; }
-.loads col.k { width: 30%; } .loads col.v { width: 30%; }
-svg { width: 100%; height: auto; display: block; }
-svg .wire line { stroke: #2f5f7f; stroke-linecap: round; }
-svg .section circle { fill: #b4542c; }
-svg .dim line { stroke: #222; stroke-width: 0.8; }
-svg text { font-size: 10px; fill: #111; font-family: inherit; }
-.note { color: #444; font-size: 7.8pt; margin: 1mm 0 0; }
-.warn { color: #8a2f0f; font-weight: 600; }
-.cautions { border-left: 1.6mm solid #a4441f; padding: 1mm 2.5mm; margin-top: 1mm; }
-.cautions ul { margin: 0; padding-left: 4mm; }
-footer { margin-top: 2mm; color: #555; font-size: 7.4pt; }
-@media screen { body { padding: 8mm 0; background: #eee; } .sheet { background: #fff; padding: 10mm 12mm; width: 210mm; box-shadow: 0 0 4mm #aaa; } }
-`;
-
-interface Writers {
-  dia: (v: number) => string;
-  free: (v: number) => string;
-  tol: (v: number) => string;
-  F: (v: number) => string;
-}
-
-function writers(system: UnitSystem): Writers {
-  const unit = unitSymbol('length', system);
-  const fixed = (v: number, mmDecimals: number, inDecimals: number) =>
-    system === 'us' ? `${(v / INCH_MM).toFixed(inDecimals)} ${unit}` : `${v.toFixed(mmDecimals)} ${unit}`;
-  return {
-    dia: (v) => fixed(v, 2, 3),
-    free: (v) => fixed(v, 1, 2),
-    tol: (v) => fixed(v, 3, 4),
-    F: (v) => formatQuantity(v, 'force', system),
-  };
-}
-
-const table = (rows: string[]) => `<table><colgroup><col class="k"><col class="v"><col></colgroup>${rows.join('')}</table>`;
-
-const pct = (v: number) => `${Number((v * 100).toPrecision(3))}%`;
-
-function row(label: string, value: string, note = ''): string {
-  return `<tr><th>${esc(label)}</th><td class="v">${esc(value)}</td><td class="n">${esc(note)}</td></tr>`;
-}
-
 /** A side view at free length, to scale, with the controlled diameter and the free length dimensioned. */
-export function specSideView(a: SpringAnalysis, controlled: 'outer' | 'inner', w: Writers, diaTol: string): string {
+export function specSideView(a: SpringAnalysis, controlled: 'outer' | 'inner', w: SheetWriters, diaTol: string): string {
   const g = a.geometry;
   const dwg = springDrawing({ wireDiameter: g.wireDiameter, meanDiameter: g.meanDiameter, activeCoils: g.activeCoils, ends: g.ends, freeLength: g.freeLength });
   const W = 340;
@@ -146,7 +88,7 @@ const CHECK_WORDS = (name: CheckName | null) => (name ? CHECK_LABELS[name] : 'no
 export function specSheetHtml(input: SpecSheetInput): string {
   const { analysis: a, requirements: req, material: m, tolerances: t } = input;
   const system = req.system;
-  const w = writers(system);
+  const w = sheetWriters(system);
   const g = a.geometry;
   const controlled = controlledDiameter(req);
   const diaTol = `± ${w.tol(t.meanDiameter.halfWidth)}`;
@@ -167,60 +109,64 @@ export function specSheetHtml(input: SpecSheetInput): string {
       : `works over a rod of ${w.dia(req.minInnerDiameter!)}`;
 
   const spring = [
-    row('material', m.name, m.standard),
-    row('wire diameter d', `${w.dia(g.wireDiameter)} ± ${w.tol(t.wireDiameter.halfWidth)}`, t.wireDiameter.source),
-    row(
+    sheetRow('material', m.name, m.standard),
+    sheetRow('wire diameter d', `${w.dia(g.wireDiameter)} ± ${w.tol(t.wireDiameter.halfWidth)}`, t.wireDiameter.source),
+    sheetRow(
       controlled === 'outer' ? 'outer diameter OD (controlled)' : 'inner diameter ID (controlled)',
       `${w.dia(controlled === 'outer' ? g.outerDiameter : g.innerDiameter)} ${diaTol}`,
       `EN 15800 grade ${t.grade}; ${envelope}`,
     ),
-    row('mean diameter D', w.dia(g.meanDiameter), `index ${g.springIndex.toFixed(2)}`),
-    row('free length L0', `${w.free(g.freeLength)} reference`, `adjusted by the maker to meet the working force (about ± ${w.free(t.freeLength.halfWidth)})`),
-    row('total / active coils', `${g.totalCoils} / ${g.activeCoils}`, `active coils ± ${t.activeCoils.halfWidth} held by the coiler`),
-    row('ends', g.ends.replace('-', ', '), g.ends.includes('ground') ? 'ground square to the axis' : 'not ground'),
-    row('coiling direction', direction, ''),
-    row('largest solid length', w.free(lsMax), `EN 13906-1 rule with d max (from memory); shortest working length ${w.free(shortest)}`),
+    sheetRow('mean diameter D', w.dia(g.meanDiameter), `index ${g.springIndex.toFixed(2)}`),
+    sheetRow(
+      'free length L0',
+      `${w.free(g.freeLength)} reference`,
+      `adjusted by the maker to meet the working force (about ± ${w.free(t.freeLength.halfWidth)})`,
+    ),
+    sheetRow('total / active coils', `${g.totalCoils} / ${g.activeCoils}`, `active coils ± ${t.activeCoils.halfWidth} held by the coiler`),
+    sheetRow('ends', g.ends.replace('-', ', '), g.ends.includes('ground') ? 'ground square to the axis' : 'not ground'),
+    sheetRow('coiling direction', direction, ''),
+    sheetRow('largest solid length', w.free(lsMax), `EN 13906-1 rule with d max (from memory); shortest working length ${w.free(shortest)}`),
   ];
   const loads = [
-    row('working force F1', `${w.F(F1)} ± ${pct(band)}`, `at length L1 = ${w.free(L1)}; the toleranced force`),
+    sheetRow('working force F1', `${w.F(F1)} ± ${sheetPercent(band)}`, `at length L1 = ${w.free(L1)}; the toleranced force`),
     operating
-      ? row(
+      ? sheetRow(
           'operating force F2',
-          `${w.F(operating.force)} ± ${pct(req.loadTolerance > 0 ? req.loadTolerance : band)}`,
+          `${w.F(operating.force)} ± ${sheetPercent(req.loadTolerance > 0 ? req.loadTolerance : band)}`,
           `at length L2 = ${w.free(operating.length)}${req.operatingForce !== undefined ? `; required ${w.F(req.operatingForce)}` : ''}`,
         )
-      : row('operating force F2', 'none', 'static spring: one working length'),
-    row('rate', formatQuantity(a.rate, 'rate', system), 'for information'),
+      : sheetRow('operating force F2', 'none', 'static spring: one working length'),
+    sheetRow('rate', formatQuantity(a.rate, 'rate', system), 'for information'),
   ];
   const service = [
-    row('set removal', req.setRemoved ? 'yes' : 'no', req.setRemoved ? 'the allowable stress assumes the set is removed' : ''),
-    row('shot peening', req.peened ? 'yes' : 'no', req.peened ? 'the fatigue strength assumes peened wire' : ''),
-    row('finish', input.finish ?? 'to be agreed', input.finish ? '' : 'state a coating or oil if corrosion matters'),
-    row(
+    sheetRow('set removal', req.setRemoved ? 'yes' : 'no', req.setRemoved ? 'the allowable stress assumes the set is removed' : ''),
+    sheetRow('shot peening', req.peened ? 'yes' : 'no', req.peened ? 'the fatigue strength assumes peened wire' : ''),
+    sheetRow('finish', input.finish ?? 'to be agreed', input.finish ? '' : 'state a coating or oil if corrosion matters'),
+    sheetRow(
       'temperature',
       req.temperature !== undefined ? formatQuantity(req.temperature, 'temperature', system) : 'not given',
       m.maxTemperature ? `material maximum ${formatQuantity(m.maxTemperature.value, 'temperature', system)}` : '',
     ),
-    row(
+    sheetRow(
       'load cycles',
       req.cycles === undefined ? 'static' : Number.isFinite(req.cycles) ? req.cycles.toExponential(1).replace('e+', 'e') : 'infinite life',
       a.fatigue ? `fatigue safety factor ${a.fatigue.safetyFactor.toFixed(2)} (${a.fatigue.criterion})` : '',
     ),
-    row('static safety factor', a.staticSafetyFactor.toFixed(2), `at the shortest working length`),
+    sheetRow('static safety factor', a.staticSafetyFactor.toFixed(2), `at the shortest working length`),
   ];
   const y = input.yield;
   const quality = [
-    row('tolerance grade', `EN 15800 grade ${t.grade}`, t.grade === 1 ? 'fine' : t.grade === 2 ? 'medium' : 'coarse'),
-    row('standards', [...t.standards, 'EN 13906-1'].join(', '), 'tolerances, wire, calculation'),
-    row('shear modulus spread', `± ${pct(t.shearModulus.halfWidth / a.material.shearModulus)}`, t.shearModulus.source),
+    sheetRow('tolerance grade', `EN 15800 grade ${t.grade}`, t.grade === 1 ? 'fine' : t.grade === 2 ? 'medium' : 'coarse'),
+    sheetRow('standards', [...t.standards, 'EN 13906-1'].join(', '), 'tolerances, wire, calculation'),
+    sheetRow('shear modulus spread', `± ${sheetPercent(t.shearModulus.halfWidth / a.material.shearModulus)}`, t.shearModulus.source),
   ];
   if (y) {
-    quality.push(row('yield (estimate)', pct(y.estimate), 'first order, the working force met at adjustment'));
+    quality.push(sheetRow('yield (estimate)', sheetPercent(y.estimate), 'first order, the working force met at adjustment'));
     if (y.monteCarlo)
       quality.push(
-        row(
+        sheetRow(
           'yield (Monte Carlo)',
-          pct(y.monteCarlo.yield),
+          sheetPercent(y.monteCarlo.yield),
           `${y.monteCarlo.samples} samples${y.seed !== undefined ? `, seed ${y.seed}` : ''}; limiting: ${CHECK_WORDS(y.monteCarlo.limiting)}`,
         ),
       );
@@ -230,33 +176,24 @@ export function specSheetHtml(input: SpecSheetInput): string {
     notes.push(`the largest solid length ${w.free(lsMax)} reaches the shortest working length ${w.free(shortest)}: agree the solid length with the maker`);
   const title = input.part ? `Compression spring: ${input.part}` : 'Compression spring specification';
   const unitsLine = system === 'us' ? 'Dimensions in inches, forces in lbf' : 'Dimensions in mm, forces in N';
-  return `<!doctype html>
-<html lang="en">
-<head>
-<meta charset="utf-8">
-<meta name="viewport" content="width=device-width, initial-scale=1">
-<title>${esc(title)}</title>
-<style>${STYLE}</style>
-</head>
-<body>
-<div class="sheet">
-<header><div><h1>${esc(title)}</h1><p>${esc(`${m.name} (${m.standard}), ${g.ends} ends, ${unitsLine}. Tolerances to EN 15800 grade ${t.grade} unless stated.`)}</p></div><p>${esc(input.date ?? 'written by coilfront')}</p></header>
-<section><h2>Spring</h2>${table(spring)}</section>
-<div class="cols">
+  return sheetDocument({
+    title,
+    subtitle: `${m.name} (${m.standard}), ${g.ends} ends, ${unitsLine}. Tolerances to EN 15800 grade ${t.grade} unless stated.`,
+    stamp: input.date ?? 'written by coilfront',
+    sections: [
+      `<section><h2>Spring</h2>${sheetTable(spring)}</section>`,
+      `<div class="cols">
 <section><h2>Side view at free length (to scale)</h2>${specSideView(a, controlled, w, diaTol)}</section>
-<section class="loads"><h2>Loads</h2>${table(loads)}</section>
-</div>
-<section><h2>Service</h2>${table(service)}</section>
-<section><h2>Tolerances and yield</h2>${table(quality)}
-${notes.length ? `<p class="note warn">${notes.map(esc).join('<br>')}</p>` : ''}</section>
-<p class="note">The maker may vary the free length to meet the working force at its length (the one toleranced force). Figures marked "from memory" in the sources could not be checked against the publication: confirm them with the maker.</p>
-<h2>Cautions</h2>
-<div class="cautions"><ul>${CAUTIONS.map((c) => `<li>${esc(c)}</li>`).join('')}</ul></div>
-<footer>Written by coilfront. Requirements: working force ${esc(w.F(req.workingForce))} at ${esc(w.free(L1))}${req.operatingForce !== undefined && req.operatingLength !== undefined ? `, operating force ${esc(w.F(req.operatingForce))} ± ${esc(pct(req.loadTolerance))} at ${esc(w.free(req.operatingLength))}` : ''}.</footer>
-</div>
-</body>
-</html>
-`;
+<section class="loads"><h2>Loads</h2>${sheetTable(loads)}</section>
+</div>`,
+      `<section><h2>Service</h2>${sheetTable(service)}</section>`,
+      `<section><h2>Tolerances and yield</h2>${sheetTable(quality)}
+${notes.length ? `<p class="note warn">${notes.map(esc).join('<br>')}</p>` : ''}</section>`,
+      `<p class="note">The maker may vary the free length to meet the working force at its length (the one toleranced force). Figures marked "from memory" in the sources could not be checked against the publication: confirm them with the maker.</p>`,
+    ],
+    cautions: CAUTIONS,
+    footer: `Written by coilfront. Requirements: working force ${esc(w.F(req.workingForce))} at ${esc(w.free(L1))}${req.operatingForce !== undefined && req.operatingLength !== undefined ? `, operating force ${esc(w.F(req.operatingForce))} ± ${esc(sheetPercent(req.loadTolerance))} at ${esc(w.free(req.operatingLength))}` : ''}.`,
+  });
 }
 
 /** Write the sheet of a reported spring (as drawn, at the requirement's tolerance grade and overrides,
