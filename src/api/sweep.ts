@@ -4,7 +4,6 @@
 // it reads each value's requirements, sizes the search and runs the design.
 import { loadCatalog } from '../catalogs/load.js';
 import type { Catalog } from '../catalogs/types.js';
-import { LIMITS } from '../input/limits.js';
 import { blameOverride, parsePath, sweepValues, withValue } from '../input/overrides.js';
 import { kindOf } from '../kinds/index.js';
 import type { AnySpringKind, InUnits, KindRun } from '../kinds/kind.js';
@@ -38,6 +37,10 @@ export interface SweepPlan {
   values: number[];
   reqs: InUnits[];
   system: UnitSystem;
+  /** Per value, the combinations its search covers (the grid visits each; the genetic search spends its
+   * budget on them), and the strategy it runs. */
+  combinations: number[];
+  strategies: ('grid' | 'genetic')[];
 }
 
 /** The most values one sweep runs (as `--vary` allows). */
@@ -66,7 +69,7 @@ function parseVary(vary: unknown, option: string): { path: string[]; values: num
 
 /**
  * Read the requirements at every value of the sweep. A bad value is blamed on the vary option (with the
- * field and value), a bad override on its own option; the whole sweep is bounded like one search.
+ * field and value), a bad override on its own option; each value's search is bounded as one design's.
  */
 export function planSweep(
   document: unknown,
@@ -74,6 +77,7 @@ export function planSweep(
   overrides: readonly Override[] = [],
   option = 'options.vary',
   catalog: Catalog = loadCatalog(),
+  strategy?: StrategyChoice,
 ): SweepPlan {
   const { path, values } = parseVary(vary, option);
   const kind = kindOf(document);
@@ -86,16 +90,26 @@ export function planSweep(
       throw blameOverride(e, overrides);
     }
   });
-  // The whole sweep is bounded like one search: a thousand values of a large search would run for hours.
-  const total = reqs.reduce((n: number, r) => n + kind.searchSize(r, catalog), 0);
-  if (total > LIMITS.combinations) {
-    throw new InputError(
-      option,
-      `a sweep of at most ${LIMITS.combinations.toLocaleString('en-US')} combinations in all; ${values.length} values of about ${Math.round(total / values.length).toLocaleString('en-US')} each make ${total.toLocaleString('en-US')} (a larger step, or a smaller search)`,
-      vary,
-    );
-  }
-  return { kind, catalog, path, values, reqs, system: reqs.length ? reqs[reqs.length - 1].system : 'si' };
+  // Each value's search is bounded as design bounds one (LIMITS.gridCombinations): the kind refuses a
+  // grid too large, naming the setting and offering the genetic search where it applies, and the
+  // automatic choice takes the genetic search past it, whose work is its evaluation budget. The
+  // refusal comes before any search runs, and names the value.
+  const name = path.join('.');
+  const strategies = reqs.map((r, i) => {
+    try {
+      return kind.strategyFor(r, catalog, strategy);
+    } catch (e) {
+      if (e instanceof InputError) throw new InputError(`${option} ${name}=${values[i]}`, `each value's search within what one design allows (${e.message})`);
+      throw e;
+    }
+  });
+  const combinations = reqs.map((r) => kind.searchSize(r, catalog));
+  return { kind, catalog, path, values, reqs, system: reqs.length ? reqs[reqs.length - 1].system : 'si', combinations, strategies };
+}
+
+/** The combinations of the whole sweep, over all its values, and of its largest value. */
+export function sweepWork(plan: Pick<SweepPlan, 'combinations'>): { total: number; largest: number } {
+  return { total: plan.combinations.reduce((a, b) => a + b, 0), largest: Math.max(0, ...plan.combinations) };
 }
 
 /** One design per value, in order; onStep after each. */
@@ -108,13 +122,15 @@ export function runSweepPlan(plan: SweepPlan, options: { strategy?: StrategyChoi
 }
 
 /** The JSON record of a sweep, as `sweep --json` prints it: framed by the kind (jsonFrame). */
-export function sweepResult(kind: AnySpringKind, path: readonly string[], rows: readonly SweepRow[]): SweepResult {
+export function sweepResult(kind: AnySpringKind, path: readonly string[], rows: readonly SweepRow[], plan?: Pick<SweepPlan, 'combinations'>): SweepResult {
   const name = path.join('.');
+  const work = plan ? sweepWork(plan) : null;
   return sanitize({
     units: SI_UNITS,
     ...kind.report.jsonFrame.head,
     vary: name,
     note: `${name} values are as given on the command line, in the file's unit system`,
+    ...(work ? { combinations: { total: work.total, largest_value: work.largest } } : {}),
     rows: rows.map((r) => ({
       value: r.value,
       feasible: r.run.result.feasibleCells,
@@ -129,6 +145,6 @@ export function sweepResult(kind: AnySpringKind, path: readonly string[], rows: 
 export function sweep(requirements: unknown, options: SweepOptions): SweepResult {
   const o: Partial<SweepOptions> = options ?? {};
   const { document, overrides } = withRequirementOptions(requirements, o);
-  const plan = planSweep(document, o.vary as SweepVary, overrides, 'options.vary', o.catalog);
-  return sweepResult(plan.kind, plan.path, runSweepPlan(plan, { strategy: o.strategy, onStep: o.onProgress }));
+  const plan = planSweep(document, o.vary as SweepVary, overrides, 'options.vary', o.catalog, o.strategy);
+  return sweepResult(plan.kind, plan.path, runSweepPlan(plan, { strategy: o.strategy, onStep: o.onProgress }), plan);
 }

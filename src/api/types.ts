@@ -112,6 +112,9 @@ export interface SweepResult {
   cautions: string[];
   vary: string;
   note: string;
+  /** The combinations of the whole sweep's searches, over all its values, and of its largest value
+   * (each value's search is bounded as one design's). */
+  combinations: { total: number; largest_value: number };
   rows: SweepRowRecord[];
 }
 

@@ -2,7 +2,7 @@
 // costs), thin over the library API (src/api/sweep.ts). The document's `kind` picks the spring kind;
 // its fields give the CSV columns.
 import type { Command } from 'commander';
-import { planSweep, runSweepPlan, sweepResult } from '../api/sweep.js';
+import { planSweep, runSweepPlan, sweepResult, sweepWork } from '../api/sweep.js';
 import { fieldColumns, fieldRow } from '../report/fields.js';
 import { toJson } from '../report/json.js';
 import { writeOutputFile } from '../report/writeFile.js';
@@ -28,14 +28,14 @@ async function sweepCommand(file: string, opts: SweepOptions, io: Io): Promise<n
     [file],
   );
   const { doc, overrides } = tracedOverrides(file, opts);
-  const plan = planSweep(doc, opts.vary, overrides, '--vary');
+  const plan = planSweep(doc, opts.vary, overrides, '--vary', undefined, opts.strategy);
   const kind = plan.kind;
   const rows = runSweepPlan(plan, { strategy: opts.strategy, onStep: io.interactive ? (done, total) => io.stderr(`\rsweep ${done}/${total}`) : undefined });
   if (io.interactive) io.stderr('\r' + ' '.repeat(30) + '\r');
   const system = opts.units ?? plan.system;
   const name = plan.path.join('.');
   if (opts.json) {
-    io.stdout(toJson(sweepResult(kind, plan.path, rows)) + '\n');
+    io.stdout(toJson(sweepResult(kind, plan.path, rows, plan)) + '\n');
   } else {
     const columns = fieldColumns(kind.fields, system);
     const text = (await csv()).toCsv(
@@ -49,7 +49,7 @@ async function sweepCommand(file: string, opts: SweepOptions, io: Io): Promise<n
     );
     if (opts.output) {
       writeOutputFile(opts.output, text, !!opts.force, '--output');
-      io.stderr(`coilfront: ${rows.length} runs of ${name} written to ${opts.output}\n`);
+      io.stderr(`coilfront: ${rows.length} runs of ${name} (${sweepWork(plan).total.toLocaleString('en-US')} combinations in all) written to ${opts.output}\n`);
     } else io.stdout(text);
   }
   if (opts.report) {

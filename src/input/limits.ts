@@ -28,10 +28,9 @@ export const LIMITS = {
   /** Material x wire size x end type x coil count combinations one grid search may visit (the grid
    * visits every one: about 5 s at this size on a busy 2-core machine, see bench/results.md). Above it
    * the automatic choice is the genetic search, whose work is bounded by its evaluation budget instead,
-   * and a grid the user forces is refused. */
+   * and a grid the user forces is refused. A sweep bounds each value's search by the same rule, and
+   * its number of values by --vary's own limit. */
   gridCombinations: 2_000_000,
-  /** Combinations a whole sweep may visit, over all its values. */
-  combinations: 1_000_000,
   /** The genetic search's evaluation budget: 50 of 50 seeds reach the grid's optimum within 0.5% on
    * the every-material, every-end-type, coil_step 0.01 space at this budget (bench/results.md). */
   geneticEvaluations: 500_000,

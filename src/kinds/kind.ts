@@ -175,6 +175,9 @@ export interface SpringKind<
   /** The search alone, each spring re-verified, without what only a listed design adds (the advice,
    * compression's per-spring yield confirmation, which costs some 25 searches): a sweep's run per value. */
   search(req: Req, catalog: Catalog, request?: SearchRequest): Run;
+  /** The strategy a search of these requirements would run, refusing (InputError, naming the setting)
+   * a grid too large as design refuses it: a sweep checks every value by it before any search runs. */
+  strategyFor(req: Req, catalog: Catalog, strategy?: SearchRequest['strategy']): 'grid' | 'genetic';
   /** Whether a design run found any spring (the exit code of `design`). */
   found(run: Run): boolean;
   /** The trade-off frontier on two of the kind's frontier axes (x and y are keys of its objectives

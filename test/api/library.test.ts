@@ -110,3 +110,43 @@ describe('bad input throws an InputError with the field and what was expected', 
     expect(thrown(() => sweep(read(demo), { vary: 'envelope.max_outer_diameter=-2:2:2' })).field).toMatch(/^options\.vary envelope\.max_outer_diameter=-2$/);
   });
 });
+
+// A sweep bounds each value's search as one design bounds it, not the sum over its values: many small
+// values run, a value past one grid's size runs the genetic search under the automatic choice (as
+// design does) and is refused, naming the value and the setting, where a grid is forced; the whole
+// sweep's combinations are reported.
+/** The demo over every material and end type at coil_step 0.01: about 2 million combinations a value. */
+const everything = (): Record<string, unknown> => ({
+  ...read(demo),
+  material: 'any',
+  ends: ['plain', 'squared', 'squared-ground', 'plain-ground'],
+  coil_step: 0.01,
+});
+
+describe('the work bound of a sweep', () => {
+  it('is per value: twenty values of 89,133 combinations each (1.78 million in all, past the old whole-sweep cap of one million) run, and the total is reported', () => {
+    const values = Array.from({ length: 20 }, (_, i) => 15 + i * 0.05);
+    const s = sweep({ ...read(demo), coil_step: 0.01 }, { vary: { path: 'envelope.max_outer_diameter', values } });
+    expect(s.rows).toHaveLength(20);
+    // 33 metric wire sizes of stainless 302 in its strength range x 1 end type x 2701 coil counts.
+    expect(s.combinations.largest_value).toBe(33 * 2701);
+    expect(s.combinations.total).toBe(20 * 33 * 2701);
+    expect(s.rows.every((r) => r.best !== null)).toBe(true);
+  });
+
+  it('a value past one grid search runs the genetic search under the automatic choice, as design does, and finds what design finds', () => {
+    const s = sweep({ ...everything(), best_per_wire: false }, { vary: { path: 'envelope.max_outer_diameter', values: [16] } });
+    const d = design({ ...everything(), best_per_wire: false, envelope: { ...(read(demo).envelope as object), max_outer_diameter: 16 } });
+    expect(s.rows[0].best).not.toBeNull();
+    expect((s.rows[0].best as { mass: number }).mass).toBe((d.candidates as { mass: number }[])[0].mass);
+    expect(s.combinations.largest_value).toBeGreaterThan(2_000_000);
+  });
+
+  it('a value past one grid search where a grid is forced is refused before any search, naming the value and the setting, offering the genetic search', () => {
+    const e = thrown(() => sweep(everything(), { vary: 'envelope.max_outer_diameter=14:16:1', strategy: 'grid' }));
+    expect(e.field).toBe('options.vary envelope.max_outer_diameter=14');
+    expect(e.message).toContain('coil_step');
+    expect(e.message).toContain('2,000,000 combinations');
+    expect(e.message).toMatch(/--strategy (auto|genetic)/);
+  });
+});

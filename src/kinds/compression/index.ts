@@ -6,7 +6,7 @@ import { readRequirements, searchSize, type Requirements } from './requirements.
 import { readSpringCase, type SpringCase } from './springFile.js';
 import { analysisJson, analysisText } from './report/analysisReport.js';
 import { candidateRecord, countsRecord, designJson, designText, limitingText } from './report/designReport.js';
-import { candidateAt, runDesign, type Candidate, type DesignRun } from './design.js';
+import { candidateAt, chooseStrategy, runDesign, type Candidate, type DesignRun } from './design.js';
 import { buildSpringProblem } from './problem.js';
 import { confirmRun } from './tolerance/confirm.js';
 import { springFileText } from './springDoc.js';
@@ -32,6 +32,7 @@ export const compression: CompressionKind = {
   design: (req, _catalog, request = {}) =>
     confirmRun(runDesign(req, { strategy: request.strategy, onProgress: request.onProgress, document: request.document })),
   search: (req, _catalog, request = {}) => runDesign(req, { strategy: request.strategy, onProgress: request.onProgress }),
+  strategyFor: (req, _catalog, strategy) => chooseStrategy(req, buildSpringProblem(req), { strategy }),
   found: (run) => run.candidates.length > 0,
   // The axes are checked against the objectives registry before this is called (frontierAxis()).
   frontier: (req, _catalog, x, y, request = {}) => computeFrontier(req, x as FrontierKey, y as FrontierKey, request.onProgress, request.strategy),

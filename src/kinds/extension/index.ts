@@ -8,7 +8,7 @@ import type { CheckDefinition, ObjectiveDefinition, SpringKind, Trend } from '..
 import { EXTENSION_CAUTIONS, analyzeExtension, type ExtensionAnalysis } from './analysis.js';
 import { loadExtensionCatalog } from './catalog.js';
 import { EXTENSION_CHECKS, EXTENSION_CHECK_LABELS, activeExtensionChecks, type ExtensionCheck } from './checks.js';
-import { designExtension, extensionCandidateAt, type ExtensionCandidate, type ExtensionDesignRun } from './design.js';
+import { chooseExtensionStrategy, designExtension, extensionCandidateAt, type ExtensionCandidate, type ExtensionDesignRun } from './design.js';
 import { EXTENSION_FIELDS } from './fields.js';
 import { computeExtensionFrontier, extensionReportFrontier, type ExtensionFrontier, type ExtensionFrontierKey } from './frontier.js';
 import { buildExtensionProblem, combinations } from './problem.js';
@@ -122,6 +122,8 @@ export const extension: ExtensionKind = {
     ),
   search: (req, catalog, request = {}) =>
     designExtension(req, catalog, { strategy: request.strategy, onProgress: request.onProgress }, loadExtensionCatalog(catalog.materials)),
+  strategyFor: (req, catalog, strategy) =>
+    chooseExtensionStrategy(req, buildExtensionProblem(req, catalog, loadExtensionCatalog(catalog.materials)), { strategy }),
   found: (run) => run.candidates.length > 0,
   // The axes are checked against the objectives registry before this is called (frontierAxis()).
   frontier: (req, catalog, x, y, request = {}) =>
