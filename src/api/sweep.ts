@@ -121,6 +121,11 @@ export function runSweepPlan(plan: SweepPlan, options: { strategy?: StrategyChoi
   });
 }
 
+/** How the rows' springs were confirmed beyond the search, when they were (the kind's own words). */
+export function sweepConfirmation(rows: readonly SweepRow[]): string | null {
+  return rows.find((r) => r.run.confirmation !== undefined)?.run.confirmation ?? null;
+}
+
 /** The JSON record of a sweep, as `sweep --json` prints it: framed by the kind (jsonFrame). */
 export function sweepResult(kind: AnySpringKind, path: readonly string[], rows: readonly SweepRow[], plan?: Pick<SweepPlan, 'combinations'>): SweepResult {
   const name = path.join('.');
@@ -131,6 +136,7 @@ export function sweepResult(kind: AnySpringKind, path: readonly string[], rows: 
     vary: name,
     note: `${name} values are as given on the command line, in the file's unit system`,
     ...(work ? { combinations: { total: work.total, largest_value: work.largest } } : {}),
+    ...(sweepConfirmation(rows) !== null ? { confirmation: sweepConfirmation(rows) } : {}),
     rows: rows.map((r) => ({
       value: r.value,
       feasible: r.run.result.feasibleCells,

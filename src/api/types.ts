@@ -115,6 +115,9 @@ export interface SweepResult {
   /** The combinations of the whole sweep's searches, over all its values, and of its largest value
    * (each value's search is bounded as one design's). */
   combinations: { total: number; largest_value: number };
+  /** How each value's best spring was confirmed beyond the search, when it was (compression under
+   * min_yield: the seeded Monte Carlo, as design confirms its list). */
+  confirmation?: string;
   rows: SweepRowRecord[];
 }
 

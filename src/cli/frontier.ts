@@ -7,7 +7,7 @@ import { frontierAxis, frontierOfPlan, frontierResult } from '../api/frontier.js
 import { planDesign } from '../api/design.js';
 import { KINDS, kindOf } from '../kinds/index.js';
 import { frontierAxes } from '../kinds/kind.js';
-import { fieldColumns, fieldRow } from '../report/fields.js';
+import { fieldColumns, fieldRow, presentFields } from '../report/fields.js';
 import { toJson } from '../report/json.js';
 import { writeOutputFile } from '../report/writeFile.js';
 import { InputError } from '../units/parse.js';
@@ -57,9 +57,10 @@ async function frontierCommand(file: string, opts: FrontierOptions, io: Io): Pro
   if (opts.json) {
     io.stdout(toJson(frontierResult(kind, fr)) + '\n');
   } else {
+    const fields = presentFields(kind.fields, fr.front);
     const text = (await csv()).toCsv(
-      ['rank', ...fieldColumns(kind.fields, system)],
-      fr.front.map((c, i) => [i + 1, ...fieldRow(kind.fields, c, system)]),
+      ['rank', ...fieldColumns(fields, system)],
+      fr.front.map((c, i) => [i + 1, ...fieldRow(fields, c, system)]),
     );
     if (opts.output) {
       writeOutputFile(opts.output, text, !!opts.force, '--output');

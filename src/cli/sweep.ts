@@ -2,8 +2,8 @@
 // costs), thin over the library API (src/api/sweep.ts). The document's `kind` picks the spring kind;
 // its fields give the CSV columns.
 import type { Command } from 'commander';
-import { planSweep, runSweepPlan, sweepResult, sweepWork } from '../api/sweep.js';
-import { fieldColumns, fieldRow } from '../report/fields.js';
+import { planSweep, runSweepPlan, sweepConfirmation, sweepResult, sweepWork } from '../api/sweep.js';
+import { fieldColumns, fieldRow, presentFields } from '../report/fields.js';
 import { toJson } from '../report/json.js';
 import { writeOutputFile } from '../report/writeFile.js';
 import { InputError } from '../units/parse.js';
@@ -37,13 +37,17 @@ async function sweepCommand(file: string, opts: SweepOptions, io: Io): Promise<n
   if (opts.json) {
     io.stdout(toJson(sweepResult(kind, plan.path, rows, plan)) + '\n');
   } else {
-    const columns = fieldColumns(kind.fields, system);
+    const fields = presentFields(
+      kind.fields,
+      rows.flatMap((r) => (r.best ? [r.best] : [])),
+    );
+    const columns = fieldColumns(fields, system);
     const text = (await csv()).toCsv(
       [`${name} (${plan.system === 'us' ? 'in/lbf/psi' : 'mm/N/MPa'})`, 'feasible_combinations', ...columns, 'limiting_check'],
       rows.map((r) => [
         r.value,
         r.run.result.feasibleCells,
-        ...(r.best ? fieldRow(kind.fields, r.best, system) : columns.map((_, i) => (i === 0 ? 'none' : null))),
+        ...(r.best ? fieldRow(fields, r.best, system) : columns.map((_, i) => (i === 0 ? 'none' : null))),
         r.limiting,
       ]),
     );
@@ -58,6 +62,8 @@ async function sweepCommand(file: string, opts: SweepOptions, io: Io): Promise<n
     writeOutputFile(opts.report, await kind.report.designHtml(shown, system, { sweep: { name, rows } }), !!opts.force, '--report');
     io.stderr(`coilfront: report written to ${opts.report}\n`);
   }
+  const confirmation = sweepConfirmation(rows);
+  if (!opts.json && confirmation) io.stderr(`coilfront: ${confirmation}\n`);
   if (!opts.json) io.stderr(cautionsOf(kind));
   return rows.some((r) => r.best) ? EXIT.ok : EXIT.infeasible;
 }

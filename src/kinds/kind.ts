@@ -77,6 +77,9 @@ export interface KindRun<Req = unknown, Cand = unknown> {
   readonly req: Req;
   readonly result: SearchResult;
   readonly candidates: readonly Cand[];
+  /** How the listed springs were confirmed beyond the search, in words, when they were (compression
+   * under min_yield: the seeded Monte Carlo): a sweep says it with its output. */
+  readonly confirmation?: string;
 }
 
 /** The trade-off frontier of a kind on two of its frontier axes. */

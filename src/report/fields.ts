@@ -41,6 +41,12 @@ export interface FieldColumn<Cand> {
   cell?(c: Cand, system: UnitSystem): string;
 }
 
+/** The fields some of the candidates carry: a field with `present` is left out when none does (the
+ * confirmed yield of a sweep's rows, say), so that a CSV has no column empty by construction. */
+export function presentFields<C>(fields: readonly FieldDefinition<C>[], cands: readonly C[]): FieldDefinition<C>[] {
+  return fields.filter((f) => !f.present || cands.some((c) => f.present!(c)));
+}
+
 export function fieldColumns<C>(fields: readonly FieldDefinition<C>[], system: UnitSystem): string[] {
   return fields.map((f) => (f.unit && f.unit !== 'volume' ? `${f.name}_${unitSymbol(f.unit, system)}` : f.name));
 }

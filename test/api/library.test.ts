@@ -150,3 +150,27 @@ describe('the work bound of a sweep', () => {
     expect(e.message).toMatch(/--strategy (auto|genetic)/);
   });
 });
+
+describe('a compression sweep under min_yield', () => {
+  it("confirms each value's best spring by the seeded Monte Carlo as design does: the same spring and yield as design's first, and says so", async () => {
+    const doc: Record<string, unknown> = { ...read(demo), min_yield: 0.95 };
+    const s = sweep(doc, { vary: { path: 'envelope.max_outer_diameter', values: [15, 16] } });
+    expect(s.confirmation).toMatch(/seeded Monte Carlo/);
+    for (const row of s.rows) {
+      const d = design({ ...doc, envelope: { ...(doc.envelope as object), max_outer_diameter: row.value } });
+      const first = (d.candidates as Record<string, unknown>[])[0];
+      expect(row.best).not.toBeNull();
+      for (const key of ['mass', 'wire_diameter', 'active_coils', 'yield', 'yield_samples', 'yield_standard_error', 'yield_estimate'])
+        expect((row.best as Record<string, unknown>)[key]).toBe(first[key]);
+    }
+    const text = await cli('sweep', demo, '--set', 'min_yield=0.95', '--vary', 'envelope.max_outer_diameter=15:16:1');
+    expect(text.stdout.split('\n')[0]).toContain(',yield,yield_standard_error,yield_estimate,yield_limited_by,');
+    expect(text.stderr).toContain('seeded Monte Carlo');
+  });
+
+  it('without min_yield nothing is confirmed: no yield columns, no note', async () => {
+    const text = await cli('sweep', demo, '--vary', 'envelope.max_outer_diameter=15:16:1');
+    expect(text.stdout).not.toContain('yield');
+    expect(sweep(read(demo), { vary: 'envelope.max_outer_diameter=15:16:1' }).confirmation).toBeUndefined();
+  });
+});

@@ -65,6 +65,8 @@ export interface DesignRun {
   yields?: CandidateYield[];
   /** Springs the estimate admitted under min_yield that the Monte Carlo refused. */
   refused?: { candidate: Candidate; yield: CandidateYield }[];
+  /** Set where the list was confirmed beyond the search (confirmBest): said with a sweep's output. */
+  confirmation?: string;
 }
 
 /** Grid cells of the problem: stock x end types x coil counts. */

@@ -166,6 +166,11 @@ export const COMPRESSION_FIELDS = pick([
   'natural_frequency',
   'mass',
   'relative_cost',
+  // Only where a spring carries its confirmed yield (a sweep under min_yield): see presentFields.
+  'yield',
+  'yield_standard_error',
+  'yield_estimate',
+  'yield_limited_by',
 ]);
 
 /** The JSON record of a candidate (SI), in its key order. */

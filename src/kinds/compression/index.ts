@@ -8,7 +8,7 @@ import { analysisJson, analysisText } from './report/analysisReport.js';
 import { candidateRecord, countsRecord, designJson, designText, limitingText } from './report/designReport.js';
 import { candidateAt, chooseStrategy, runDesign, type Candidate, type DesignRun } from './design.js';
 import { buildSpringProblem } from './problem.js';
-import { confirmRun } from './tolerance/confirm.js';
+import { confirmBest, confirmRun } from './tolerance/confirm.js';
 import { springFileText } from './springDoc.js';
 import type { SpringKind } from '../kind.js';
 import { computeFrontier, reportFrontier, type Frontier, type FrontierKey } from './frontier.js';
@@ -31,7 +31,11 @@ export const compression: CompressionKind = {
   // Every reported spring's yield by the seeded Monte Carlo; under min_yield, the ones it refutes leave the list.
   design: (req, _catalog, request = {}) =>
     confirmRun(runDesign(req, { strategy: request.strategy, onProgress: request.onProgress, document: request.document })),
-  search: (req, _catalog, request = {}) => runDesign(req, { strategy: request.strategy, onProgress: request.onProgress }),
+  // A sweep's row under min_yield is the best spring design would list: confirmed by the Monte Carlo.
+  search: (req, _catalog, request = {}) => {
+    const run = runDesign(req, { strategy: request.strategy, onProgress: request.onProgress });
+    return req.minYield !== undefined ? confirmBest(run) : run;
+  },
   strategyFor: (req, _catalog, strategy) => chooseStrategy(req, buildSpringProblem(req), { strategy }),
   found: (run) => run.candidates.length > 0,
   // The axes are checked against the objectives registry before this is called (frontierAxis()).

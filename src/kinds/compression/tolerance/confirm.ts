@@ -79,6 +79,25 @@ export function confirmCandidates(
   return out;
 }
 
+/**
+ * The run's best spring confirmed as design confirms its list (a sweep's row under min_yield): the
+ * candidates are sampled in turn, by candidateYield, until one passes; it leads the list with its yield
+ * attached, the ones refused before it move out, the rest stay as the search left them.
+ */
+export function confirmBest(run: DesignRun, catalog: ToleranceCatalog = loadToleranceCatalog(), samples = CONFIRM_SAMPLES): DesignRun {
+  const refused: ConfirmedList['refused'] = [];
+  const confirmation =
+    `each value's best spring confirmed by the seeded Monte Carlo as design confirms its list (${samples.toLocaleString('en-US')} samples at the requirement's seed): ` +
+    "its yield is the sampled figure (yield_estimate is the search's first-order estimate), and a spring the Monte Carlo refuses under min_yield gives way to the next";
+  for (let i = 0; i < run.candidates.length; i++) {
+    const c = run.candidates[i];
+    const y = candidateYield(c, run.req, catalog, samples);
+    if (y.refused) refused.push({ candidate: c, yield: y });
+    else return { ...run, candidates: [{ ...c, yield: y }, ...run.candidates.slice(i + 1)], refused, confirmation };
+  }
+  return { ...run, candidates: [], refused, confirmation };
+}
+
 /** The run with its candidates confirmed: yields attached, refused springs moved out of the list. */
 export function confirmRun(run: DesignRun, catalog: ToleranceCatalog = loadToleranceCatalog(), samples = CONFIRM_SAMPLES): DesignRun {
   const c = confirmCandidates(run.candidates, run.req, catalog, samples);
