@@ -9,6 +9,13 @@
 // those works alone, the best pair of them and, as a last resort, margins (safety factors, never
 // below 1; clash allowance, never below 10%). A safety factor is never advised below 1.
 // Which checks a change eases is the checks registry's to say (relaxedBy in checks.ts).
+//
+// Under min_yield the search judges the yield by its estimate, and design then confirms each listed
+// spring by the Monte Carlo: so every change the advice gives there is run once more as `design` runs
+// it (search, then confirmation), and kept only when a spring survives; each then says the made yield
+// of the best spring it admits. The yield's own knobs: a finer EN 15800 tolerance grade (1 is finer
+// than 2, 2 than 3), and a lower min_yield, never below the yield the best spring reaches with no
+// min_yield at all (below that the requirement asks for nothing).
 import type { Catalog } from '../../catalogs/types.js';
 import { FAMILIES } from '../../catalogs/types.js';
 import { loadCatalog } from '../../catalogs/load.js';
@@ -19,8 +26,9 @@ import { SEATINGS, endConditionConstant } from './buckling.js';
 import { INFINITE_LIFE_CYCLES, STATIC_SERVICE_CYCLES } from '../../model/fatigue.js';
 import { END_TYPES } from './geometry.js';
 import { CHECKS, activeChecks, type CheckName } from './verify.js';
-import { admitsSpring, type DesignRun } from './design.js';
+import { admitsSpring, runDesign, type DesignRun } from './design.js';
 import { easedBy } from './checks.js';
+import { confirmRun } from './tolerance/confirm.js';
 import { requirementsDocument } from './requirementsDoc.js';
 
 /** limit: an envelope or duty value; setting: a choice (guided, seating, ends, peening, material);
@@ -42,6 +50,10 @@ export interface RelaxChange {
   group: RelaxGroup;
   /** The checks this change eases. */
   eases: CheckName[];
+  /** Under min_yield: the made yield (Monte Carlo) of the best spring `design` lists with this change,
+   * and the min_yield it ran under (met within the Monte Carlo's standard error, so reaches may sit just below). */
+  reaches?: number;
+  asked?: number;
 }
 
 export interface RelaxAdvice {
@@ -130,7 +142,7 @@ function linear(
 
 /** Every knob that can relax these requirements, with the range tried. The ranges stop at values a
  * spring maker still builds (index 3 to 20, at least 2 active coils: common practice). */
-function knobs(req: Requirements, doc: Record<string, unknown>, catalog: Catalog): Knob[] {
+function knobs(req: Requirements, doc: Record<string, unknown>, catalog: Catalog, nominalYield: number | null): Knob[] {
   const on = activeChecks(req);
   const active = (c: CheckName) => on[CHECKS.indexOf(c)];
   const out: (Knob | null)[] = [];
@@ -182,7 +194,17 @@ function knobs(req: Requirements, doc: Record<string, unknown>, catalog: Catalog
     linear('active_coils', 'limit', easedBy('active_coils (higher)'), nHi, 1, Math.max(3 * nHi, nLo + 1), null, { raw: (v) => [nLo, v], fromRaw: [nLo, nHi] }),
   );
 
+  if (active('yield') && req.minYield !== undefined && nominalYield !== null && nominalYield < req.minYield) {
+    // A lower min_yield, down to the yield the best spring reaches without one (absolute steps: a fraction).
+    out.push(linear('min_yield', 'limit', easedBy('min_yield'), req.minYield, -1, nominalYield, null, { absolute: true }));
+  }
+
   // Settings.
+  if (active('yield')) {
+    // Each finer EN 15800 grade, the nearest first (the advice keeps only the coarsest that works).
+    for (let g = req.tolerance.grade - 1; g >= 1; g--)
+      out.push({ kind: 'choice', path: 'tolerance_grade', group: 'setting', eases: easedBy('tolerance_grade'), fromRaw: req.tolerance.grade, toRaw: g });
+  }
   if (active('buckling')) {
     out.push({ kind: 'choice', path: 'guided', group: 'setting', eases: easedBy('guided'), fromRaw: false, toRaw: true });
     const alpha = endConditionConstant(req.seating);
@@ -236,12 +258,39 @@ function yamlText(v: unknown): string {
 class Prober {
   runs = 0;
   private readonly seen = new Map<string, boolean>();
+  private readonly confirmed = new Map<string, number | null>();
   constructor(
     readonly doc: Record<string, unknown>,
     readonly catalog: Catalog,
     readonly system: Requirements['system'],
     readonly run: (req: Requirements) => boolean,
+    readonly confirmYield: (req: Requirements) => number | null,
   ) {}
+
+  /** One run on the document with these changes, memoised by the changes; a value the reader refuses
+   * (say, an operating force at the working force) admits nothing. */
+  private probe<T>(memo: Map<string, T>, changes: { path: string; value: unknown }[], run: (req: Requirements) => T, none: T): T {
+    const key = JSON.stringify(changes);
+    if (memo.has(key)) return memo.get(key)!;
+    let doc: Record<string, unknown> = this.doc;
+    let out = none;
+    try {
+      for (const c of changes) doc = withValue(doc, c.path.split('.'), c.value);
+      const req = readRequirements(doc, this.catalog);
+      this.runs++;
+      out = run(req);
+    } catch {
+      out = none;
+    }
+    memo.set(key, out);
+    return out;
+  }
+
+  /** The made yield of the best spring `design` lists with these changes (search, then the Monte
+   * Carlo), or null when it lists none. Always run (never cut by the budget): it guards the advice. */
+  confirm(changes: { path: string; value: unknown }[]): number | null {
+    return this.probe(this.confirmed, changes, this.confirmYield, null);
+  }
 
   /** The value as the document must hold it: in a US-unit file, quantities spell out their SI unit. */
   docValue(k: Knob, raw: unknown): unknown {
@@ -253,30 +302,22 @@ class Prober {
   }
 
   admits(changes: { path: string; value: unknown }[]): boolean | null {
-    const key = JSON.stringify(changes);
-    const known = this.seen.get(key);
-    if (known !== undefined) return known;
-    if (this.spent) return null;
-    let doc: Record<string, unknown> = this.doc;
-    for (const c of changes) doc = withValue(doc, c.path.split('.'), c.value);
-    let ok: boolean;
-    try {
-      const req = readRequirements(doc, this.catalog);
-      this.runs++;
-      ok = this.run(req);
-    } catch {
-      // A value the reader refuses (say, an operating force at the working force) admits nothing.
-      ok = false;
-    }
-    this.seen.set(key, ok);
-    return ok;
+    if (!this.seen.has(JSON.stringify(changes)) && this.spent) return null;
+    return this.probe(this.seen, changes, this.run, false);
   }
 }
 
+/** The value each change puts in the document (for running it again). */
+const docValues = new WeakMap<RelaxChange, unknown>();
+
 function change(p: Prober, k: Knob, toRaw: unknown, relative: number | null): RelaxChange {
   const docValue = p.docValue(k, toRaw);
-  return { path: k.path, from: k.fromRaw, to: toRaw, set: `${k.path}=${yamlText(docValue)}`, relative, group: k.group, eases: k.eases };
+  const c: RelaxChange = { path: k.path, from: k.fromRaw, to: toRaw, set: `${k.path}=${yamlText(docValue)}`, relative, group: k.group, eases: k.eases };
+  docValues.set(c, docValue);
+  return c;
 }
+
+const assignments = (cs: RelaxChange[]) => cs.map((c) => ({ path: c.path, value: docValues.get(c) }));
 
 /** The smallest r in (0, maxR] that admits a spring, or null. */
 function smallestChange(p: Prober, k: NumericKnob, ladder: number[], others: { path: string; value: unknown }[] = []): number | null {
@@ -307,7 +348,7 @@ function smallestChange(p: Prober, k: NumericKnob, ladder: number[], others: { p
 }
 
 function relativeOf(k: NumericKnob, v: number): number {
-  return k.path === 'load_tolerance' || k.path === 'clash_allowance' ? Math.abs(v - k.from) : Math.abs(v - k.from) / Math.abs(k.from);
+  return k.path === 'load_tolerance' || k.path === 'clash_allowance' || k.path === 'min_yield' ? Math.abs(v - k.from) : Math.abs(v - k.from) / Math.abs(k.from);
 }
 
 /** The ladder of relative changes tried before bisecting: a hint from the search first, when it has one. */
@@ -325,24 +366,56 @@ export interface RelaxOptions {
   catalog?: Catalog;
   /** Whether a set of requirements admits a spring (a design run); injectable for tests. */
   admits?: (req: Requirements) => boolean;
+  /** Under min_yield: the made yield of the best spring a whole design run lists (search, then the
+   * Monte Carlo confirmation), null when it lists none; injectable for tests. */
+  confirmYield?: (req: Requirements) => number | null;
 }
+
+/** A whole design run as the command runs it (search, then each listed spring confirmed by the Monte
+ * Carlo): the made yield of the best spring it lists, or null when it lists none. */
+export function confirmedBestYield(req: Requirements): number | null {
+  const run = confirmRun(runDesign(req));
+  return run.candidates.length ? run.yields![0].monteCarlo.yield : null;
+}
+
+/** Steps toward the far end of a knob's range when its smallest change (found on the estimate) is
+ * refused by the Monte Carlo: the share of the remaining range added. */
+const CONFIRM_STEPS = [0, 0.25, 0.5, 1];
 
 /** Advice for an infeasible run: the smallest single changes that admit a spring, else the best pair. */
 export function relaxAdvice(run: DesignRun, opts: RelaxOptions = {}): RelaxAdvice {
   const catalog = opts.catalog ?? loadCatalog();
   const given = opts.document ?? run.document;
   const doc = isRecord(given) ? given : requirementsDocument(run.req);
-  const p = new Prober(doc, catalog, isRecord(given) ? run.req.system : 'si', opts.admits ?? admitsSpring);
-  const all = knobs(run.req, doc, catalog);
+  const confirmYield = opts.confirmYield ?? confirmedBestYield;
+  const p = new Prober(doc, catalog, isRecord(given) ? run.req.system : 'si', opts.admits ?? admitsSpring, confirmYield);
+  const yieldOn = run.req.minYield !== undefined;
+  // The yield the best spring reaches with no min_yield: the floor of a lower min_yield.
+  const nominalYield = yieldOn ? (p.runs++, confirmYield({ ...run.req, minYield: undefined })) : null;
+  const all = knobs(run.req, doc, catalog, nominalYield);
   const found: RelaxChange[] = [];
+  /** The change as design runs it: under min_yield kept only when the Monte Carlo confirms a spring. */
+  const confirmed = (cs: RelaxChange[]): RelaxChange[] | null => {
+    if (!yieldOn) return cs;
+    const y = p.confirm(assignments(cs));
+    if (y === null) return null;
+    const asked = Number(cs.find((c) => c.path === 'min_yield')?.to ?? run.req.minYield);
+    return cs.map((c) => ({ ...c, reaches: y, asked }));
+  };
   const tryKnob = (k: Knob): RelaxChange | null => {
-    if (k.kind === 'choice') return p.admits([{ path: k.path, value: k.toRaw }]) ? change(p, k, k.toRaw, null) : null;
+    if (k.kind === 'choice') return p.admits([{ path: k.path, value: k.toRaw }]) ? (confirmed([change(p, k, k.toRaw, null)])?.[0] ?? null) : null;
     const r = smallestChange(p, k, ladderFor(k, run));
     if (r === null) return null;
-    const v = k.at(r);
-    return change(p, k, k.raw(v), relativeOf(k, v));
+    for (const step of yieldOn ? CONFIRM_STEPS : [0]) {
+      const v = k.at(r + step * (k.maxR - r));
+      const c = confirmed([change(p, k, k.raw(v), relativeOf(k, v))]);
+      if (c) return c[0];
+    }
+    return null;
   };
   for (const k of all.filter((k) => k.group !== 'margin')) {
+    // A finer tolerance grade than one that already works only costs more.
+    if (k.path === 'tolerance_grade' && found.some((c) => c.path === 'tolerance_grade')) continue;
     const c = tryKnob(k);
     if (c) found.push(c);
   }
@@ -352,11 +425,12 @@ export function relaxAdvice(run: DesignRun, opts: RelaxOptions = {}): RelaxAdvic
   let single = [...limits, ...settings];
   let pair: RelaxChange[] | null = null;
   if (!single.length) {
-    pair = bestPair(
+    const best = bestPair(
       p,
       all.filter((k) => k.group !== 'margin'),
       run,
     );
+    pair = best && confirmed(best);
     const margins: RelaxChange[] = [];
     for (const k of all.filter((k) => k.group === 'margin')) {
       const c = tryKnob(k);

@@ -59,6 +59,11 @@ export function requirementsDocument(req: Requirements): Record<string, unknown>
   if (req.temperature !== undefined) doc.temperature = req.temperature;
   if (req.forcingFrequency !== undefined) doc.forcing_frequency = req.forcingFrequency;
   if (req.allowableStress !== undefined) doc.allowable_stress = req.allowableStress;
+  // The made spring's tolerances and the yield asked of it (a fraction override as the percentage it was read from).
+  doc.tolerance_grade = req.tolerance.grade;
+  const overrides = Object.entries(req.tolerance.overrides);
+  if (overrides.length) doc.tolerances = Object.fromEntries(overrides.map(([k, o]) => [k, 'fraction' in o ? `${o.fraction * 100}%` : o.absolute]));
+  if (req.minYield !== undefined) doc.min_yield = req.minYield;
   if (req.wireSizesLabel === 'the listed diameters') doc.wire_sizes = req.wireSizes(req.materials[0]);
   else if (req.wireSizesLabel !== "each material's own series") doc.wire_sizes = req.wireSizesLabel;
   return doc;

@@ -11,7 +11,7 @@ import { readInputFile } from '../../../src/input/document.js';
 import { readRequirements, type Requirements } from '../../../src/kinds/compression/requirements.js';
 import { requirementsRecord } from '../../../src/kinds/compression/report/designReport.js';
 import { admitsSpring, runDesign } from '../../../src/kinds/compression/design.js';
-import { RELAX_LIMITS, limitingCheck, outward, relaxAdvice } from '../../../src/kinds/compression/relax.js';
+import { RELAX_LIMITS, confirmedBestYield, limitingCheck, outward, relaxAdvice } from '../../../src/kinds/compression/relax.js';
 import { ADVICE_ORDER, COMPRESSION_CHECKS, easedBy } from '../../../src/kinds/compression/checks.js';
 import { requirementsDocument } from '../../../src/kinds/compression/requirementsDoc.js';
 import { readFileSync } from 'node:fs';
@@ -318,7 +318,12 @@ describe('the advice as a library', () => {
   });
 
   it('the rebuilt document reads back to the same requirements', () => {
-    for (const path of [demo, clamp, slender, peened, inches, ownAllowable]) {
+    const robust = trigger(`envelope: { max_outer_diameter: 16 }
+tolerance_grade: 3
+tolerances: { mean_diameter: "1.5%", wire_diameter: 0.02 }
+min_yield: 0.95
+`);
+    for (const path of [demo, clamp, slender, peened, inches, ownAllowable, robust]) {
       const { req } = read(path);
       const again = readRequirements(requirementsDocument(req), catalog);
       expect(requirementsRecord(again)).toEqual(requirementsRecord(req));
@@ -346,5 +351,66 @@ describe('the advice as a library', () => {
     const run = runDesign(req);
     expect(run.candidates).toHaveLength(0);
     expect(limitingCheck(run)).toMatch(/static_stress|clash|outer_diameter|operating_force/);
+  });
+});
+
+// The `yield` check (min_yield at an EN 15800 tolerance grade) is relaxed by a lower min_yield or a
+// finer grade (relaxedBy in checks.ts). Under min_yield design confirms each listed spring by the Monte
+// Carlo, so every change advised there must survive that confirmation, not only the search's estimate.
+// Grades 1 (fine), 2 (medium), 3 (coarse): EN 15800. The demo at grade 3 cannot reach 99%.
+// Each case runs the design and its advice (a few dozen runs, each confirmed by a Monte Carlo): minutes on a loaded machine.
+describe('advice for the yield check (min_yield, tolerance_grade)', { timeout: 600_000 }, () => {
+  const coarse = [demo, '--set', 'min_yield=0.99', '--set', 'tolerance_grade=3'];
+  const bestYield = async (sets: string[]): Promise<number | null> => {
+    const r = await cli('design', ...coarse, ...sets.flatMap((s) => ['--set', s]), '--json');
+    return r.code === 0 ? (JSON.parse(r.stdout).candidates[0].yield as number) : null;
+  };
+
+  it('advises the nearest finer grade and a lower min_yield; each, run as design runs it (search, then Monte Carlo), lists a spring of the yield it says', async () => {
+    const inf = await infeasible(coarse);
+    const grades = inf.relax.filter((e) => e.path === 'tolerance_grade');
+    expect(grades.map((e) => e.to)).toEqual([2]); // grade 2 works, so the dearer grade 1 is not advised
+    expect(grades[0].eases).toEqual(['yield']);
+    const lower = inf.relax.find((e) => e.path === 'min_yield')!;
+    expect(lower.from).toBe(0.99);
+    expect(Number(lower.to)).toBeLessThan(0.99);
+    for (const e of inf.relax) {
+      const y = await bestYield([e.set]);
+      expect(y, e.set).not.toBeNull();
+      expect(y).toBe((e as Entry & { best_made_yield: number }).best_made_yield);
+      expect(e.suggestion).toMatch(/the best spring then reaches a made yield of \d+\.\d%/);
+    }
+  });
+
+  it('never advises a min_yield below the yield the best spring reaches with no min_yield at all', async () => {
+    const inf = await infeasible(coarse);
+    const lower = inf.relax.find((e) => e.path === 'min_yield')!;
+    const r = await cli('design', demo, '--set', 'tolerance_grade=3', '--json');
+    const nominal = JSON.parse(r.stdout).candidates[0].yield as number;
+    expect(Number(lower.to)).toBeGreaterThanOrEqual(nominal);
+    // ...and a min_yield halfway back to the asked one admits nothing (design as the command runs it,
+    // without the advice an infeasible run prints): the change is not far larger than needed.
+    const halfway = Number(((Number(lower.to) + 0.99) / 2).toFixed(4));
+    const doc = { ...(readInputFile(demo) as Record<string, unknown>), tolerance_grade: 3, min_yield: halfway };
+    expect(confirmedBestYield(readRequirements(doc, loadCatalog()))).toBeNull();
+  });
+
+  it('keeps a change only when the Monte Carlo confirms a spring, taking a larger one when the smallest (by the estimate) is refused', () => {
+    const catalog = loadCatalog();
+    const req = readRequirements({ ...(readInputFile(demo) as Record<string, unknown>), min_yield: 0.99, tolerance_grade: 3 }, catalog);
+    const run = runDesign(req);
+    expect(run.candidates).toHaveLength(0);
+    // Stand-ins for the design runs: the estimate admits from a 17 mm bore, the Monte Carlo only from
+    // 20 mm; the nominal best spring reaches 50%, and nothing is admitted by a lower min_yield or a grade.
+    const od = (r: Requirements) => r.maxOuterDiameter ?? 0;
+    const a = relaxAdvice(run, {
+      admits: (r) => od(r) >= 17 && r.minYield === 0.99 && r.tolerance.grade === 3,
+      confirmYield: (r) => (r.minYield === undefined ? 0.5 : od(r) >= 20 && r.minYield === 0.99 && r.tolerance.grade === 3 ? 0.991 : null),
+    });
+    const bore = a.single.find((c) => c.path === 'envelope.max_outer_diameter')!;
+    expect(Number(bore.to)).toBeGreaterThanOrEqual(20);
+    expect(bore.reaches).toBe(0.991);
+    expect(a.single.every((c) => c.reaches !== undefined)).toBe(true);
+    expect(a.single.some((c) => c.path === 'tolerance_grade' || c.path === 'min_yield')).toBe(false);
   });
 });

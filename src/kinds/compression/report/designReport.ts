@@ -113,10 +113,17 @@ const pct = (r: number) => `${sig(r * 100, 3)}%`;
 export function describeChange(c: RelaxChange, system: UnitSystem): string {
   const kind = UNIT_KIND[c.path];
   const arg = /[\s{}[\]]/.test(c.set) ? `"${c.set}"` : c.set;
-  const tail = ` [--set ${arg}]`;
+  // Under min_yield every change was confirmed by the Monte Carlo: say what the best spring then reaches.
+  const reach =
+    c.reaches === undefined
+      ? ''
+      : `; the best spring then reaches a made yield of ${yieldPercent(c.reaches)}${c.asked !== undefined && c.reaches < c.asked ? ` (min_yield ${yieldPercent(c.asked)} met within the Monte Carlo's standard error)` : ''}`;
+  const tail = `${reach} [--set ${arg}]`;
+  if (c.path === 'tolerance_grade')
+    return `order the finer EN 15800 tolerance grade ${String(c.to)} instead of ${String(c.from)} (tighter tolerances: a dearer spring)${tail}`;
   if (typeof c.to === 'number' && typeof c.from === 'number') {
     const up = c.to > c.from;
-    const fraction = c.path === 'load_tolerance' || c.path === 'clash_allowance';
+    const fraction = c.path === 'load_tolerance' || c.path === 'clash_allowance' || c.path === 'min_yield';
     const show = (v: number) =>
       kind ? formatQuantity(v, kind, system) : fraction ? pct(v) : c.path === 'cycles' ? String(Number(v.toPrecision(4))) : sig(v, 4);
     // The new value is shown rounded in the relaxing direction, so the figure read off the screen
@@ -194,6 +201,7 @@ function infeasibleRecord(run: DesignRun): Record<string, unknown> {
     relative_change: c.relative,
     group: c.group,
     eases: c.eases,
+    ...(c.reaches !== undefined ? { best_made_yield: c.reaches } : {}),
     suggestion: describeChange(c, 'si'),
   });
   return {
