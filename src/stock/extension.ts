@@ -5,9 +5,8 @@
 // like design, the rows that fail closest, and the counts per check. A table of compression springs
 // runs against a compression requirement (./run.ts); a row of the other kind is a bad row, named.
 import type { Catalog } from '../catalogs/types.js';
-import { bandText, workingBand, type WorkingBand } from '../check/band.js';
-import { judgeExtension, type ExtensionVerdict, type GivenLine } from '../check/extension.js';
-import { bandRecord, checkLineRecord, failureText, writeMargin } from '../check/report.js';
+import { workingBand, type WorkingBand } from '../check/band.js';
+import { judgeExtension, type ExtensionVerdict } from '../check/extension.js';
 import { isRecord } from '../units/fields.js';
 import { EXTENSION_CAUTIONS } from '../kinds/extension/analysis.js';
 import { loadExtensionCatalog } from '../kinds/extension/catalog.js';
@@ -15,17 +14,13 @@ import { EXTENSION_CHECK_LABELS } from '../kinds/extension/checks.js';
 import { extensionRequirementsRecord, fatigueSafety, staticSafety } from '../kinds/extension/report.js';
 import { readExtensionRequirements, type ExtensionRequirements } from '../kinds/extension/requirements.js';
 import { readExtensionSpring } from '../kinds/extension/springFile.js';
-import { cautionText, cautionsOf } from '../report/cautions.js';
-import { toCsv } from '../report/csv.js';
-import { SI_UNITS } from '../report/json.js';
-import { table } from '../report/table.js';
-import { formatQuantity, inUnit, sig, unitSymbol } from '../units/format.js';
-import type { Kind } from '../units/kinds.js';
+import { formatQuantity, sig, unitSymbol } from '../units/format.js';
 import { InputError } from '../units/parse.js';
-import { readableUnit, type UnitSystem } from '../units/systems.js';
+import type { UnitSystem } from '../units/systems.js';
 import { DIAMETER_FIELDS, readHeader, type FieldType, type Layout } from './columns.js';
 import { readMaterialMap, resolveMaterial, type MaterialMap } from './materialMap.js';
-import { DEFAULT_RATE_DEVIATION, failedByLines, settleRows, type StockOptions, type StockRankKey } from './shared.js';
+import { csvUnit, num, six, stockFigures, type StockFigures, type StockView } from './render.js';
+import { DEFAULT_RATE_DEVIATION, settleRows, type StockOptions, type StockRankKey } from './shared.js';
 import { RowError, numberCell, quantityCell, rawRows, type BadRow } from './table.js';
 
 /** The columns of a table of extension springs (a unit suffix as for compression tables). Lengths are
@@ -82,6 +77,8 @@ export interface ExtensionRowResult {
   /** Sum of the positive check values (text checks count 1): how far the row is from passing. */
   violation: number;
   rankValue: number;
+  /** coilfront's rate, N/mm. */
+  rate: number;
   rateDeviation: number | null;
   /** The table's own limits (max_load, max_extended_length) that the requirement goes beyond. */
   beyondMakerLimits: string[];
@@ -229,6 +226,7 @@ function judgeRow(
     pass: verdict.pass,
     violation,
     rankValue: rankValue(verdict, row, rank),
+    rate: a.rate,
     rateDeviation,
     beyondMakerLimits,
     notes,
@@ -284,9 +282,10 @@ export function runExtensionStock(
   };
 }
 
-// ---- output ----
+// ---- what the renderer (./render.ts) shows of an extension spring ----
 
-const limitingRecord = (v: ExtensionVerdict) => (v.limiting ? { name: v.limiting.name, margin: v.limiting.margin } : null);
+const figures = (v: ExtensionVerdict): StockFigures =>
+  stockFigures(v.spring.materialChoice.material.id, v.analysis, staticSafety(v.analysis), fatigueSafety(v.analysis));
 
 function springRecord(v: ExtensionVerdict): Record<string, unknown> {
   const a = v.analysis;
@@ -320,238 +319,57 @@ function springRecord(v: ExtensionVerdict): Record<string, unknown> {
   };
 }
 
-function rowRecord(r: ExtensionRowResult): Record<string, unknown> {
-  const v = r.verdict;
-  return {
-    line: r.row.line,
-    part_number: r.row.partNumber,
-    material_word: r.row.materialWord,
-    price: r.row.price ?? null,
-    table_rate: r.row.tableRate ?? null,
-    rate_deviation: r.rateDeviation,
-    beyond_maker_limits: r.beyondMakerLimits,
-    pass: v.pass,
-    failing: v.failing.map((l) => ({ name: l.name, by: l.margin === null ? null : -l.margin })),
-    limiting_check: limitingRecord(v),
-    spring: springRecord(v),
-    checks: v.lines.map(checkLineRecord),
-    notes: r.notes,
-  };
-}
-
-const rateNotes = (run: ExtensionStockRun) => run.results.filter((r) => r.rateDeviation !== null && Math.abs(r.rateDeviation) > run.rateDeviationLimit);
-
-export function extensionStockJson(run: ExtensionStockRun): Record<string, unknown> {
-  return {
-    units: SI_UNITS,
-    kind: 'extension',
-    requirements: extensionRequirementsRecord(run.req),
-    working_band: bandRecord(run.band),
-    table: {
-      units: run.table.system,
-      rows: run.table.total,
-      checked: run.results.length,
-      bad: run.bad.length,
-      passing: run.passing.length,
-      failing: run.results.length - run.passing.length,
-      ignored_columns: run.table.layout.ignored,
-    },
-    rank: run.rank,
-    passing: run.passing.slice(0, run.top).map(rowRecord),
-    near_misses: run.misses.map(rowRecord),
-    failed_by: run.failedBy,
-    rate_deviation_limit: run.rateDeviationLimit,
-    rate_notes: rateNotes(run).map((r) => ({
-      line: r.row.line,
-      part_number: r.row.partNumber,
-      table_rate: r.row.tableRate,
-      rate: r.verdict.analysis.rate,
-      deviation: r.rateDeviation,
-    })),
-    bad_rows: run.bad.map((b) => ({ line: b.line, part_number: b.partNumber, field: b.field, message: b.message })),
-    compare: null,
-    notes: [EXTENSION_STOCK_NOTE],
-    cautions: cautionsOf(EXTENSION_CAUTIONS),
-  };
-}
-
-const num = (v: number, kind: Kind, system: UnitSystem, digits = 4) => sig(inUnit(v, kind, system), digits);
-const smallest = (v: ExtensionVerdict) => (v.limiting ? `${v.limiting.name} ${writeMargin(v.limiting.margin)}` : '-');
-
-/** The columns of the text table (and of the HTML report's). */
-export function extensionStockGrid(rows: ExtensionRowResult[], system: UnitSystem, ranked: boolean): { header: string[]; cells: string[][] } {
-  const u = (k: Kind) => unitSymbol(k, system);
-  // Masses in grams when every spring listed is under 1 kg (SI), as in the compression table.
-  const mass = readableUnit(system, 'mass', Math.max(0, ...rows.map((r) => r.verdict.analysis.geometry.mass)));
-  const header = [
-    ranked ? '#' : 'line',
-    'part',
-    'material',
-    `d ${u('length')}`,
-    `OD ${u('length')}`,
-    'Nb',
-    'loop',
-    `L0 ${u('length')}`,
-    `Fi ${u('force')}`,
-    'Fi band',
-    `k ${u('rate')}`,
-    `forces ${u('force')}`,
-    'SF static',
-    'SF fatigue',
-    `mass ${mass.symbol}`,
-    'price',
-    'smallest margin',
-  ];
-  const cells = rows.map((r, i) => {
-    const a = r.verdict.analysis;
-    const g = a.geometry;
-    const fatigue = fatigueSafety(a);
-    return [
-      ranked ? String(i + 1) : String(r.row.line),
-      r.row.partNumber + (r.beyondMakerLimits.length ? ' !' : ''),
-      r.verdict.spring.materialChoice.material.id,
-      num(g.wireDiameter, 'length', system),
-      num(g.outerDiameter, 'length', system),
-      sig(g.bodyCoils, 4),
-      g.loop,
-      num(g.freeLength, 'length', system),
-      num(a.initialTension.force, 'force', system, 3),
-      a.initialTension.position,
-      num(a.rate, 'rate', system),
-      a.points.map((p) => num(p.force, 'force', system, 3)).join(' / '),
-      sig(staticSafety(a), 3),
-      fatigue === null ? '-' : sig(fatigue, 3),
-      sig(mass.fromCore(g.mass), 3),
-      r.row.price !== undefined ? sig(r.row.price, 4) : '-',
-      smallest(r.verdict),
-    ];
-  });
-  return { header, cells };
-}
-
-const label = (name: string) =>
-  EXTENSION_CHECK_LABELS[name as keyof typeof EXTENSION_CHECK_LABELS] ??
-  (name.startsWith('working_force') ? `working force ${name.endsWith('min') ? 'below' : 'above'} its band` : name);
-
-export function extensionStockText(run: ExtensionStockRun, system: UnitSystem, tableLabel: string): string {
-  const req = run.req;
-  const F = (v: number) => formatQuantity(v, 'force', system);
-  const L = (v: number) => formatQuantity(v, 'length', system);
-  const out: string[] = [];
-  out.push(
-    `Stock extension springs for ${F(req.workingForce)} at ${L(req.workingLength)} inside the loops` +
+/** What a table of extension springs shows of its own. */
+export const EXTENSION_STOCK_VIEW: StockView<ExtensionVerdict, ExtensionRowResult, ExtensionStockRun> = {
+  jsonKind: { kind: 'extension' },
+  cautions: EXTENSION_CAUTIONS,
+  title: 'Stock extension springs',
+  note: EXTENSION_STOCK_NOTE,
+  makerLimitsNote: "marks a part that the requirement takes beyond the table's own max_extended_length or max_load: ask the maker before using it there",
+  requirementsRecord: (run) => extensionRequirementsRecord(run.req),
+  heading: (run, system, tableLabel) => {
+    const req = run.req;
+    const F = (v: number) => formatQuantity(v, 'force', system);
+    const L = (v: number) => formatQuantity(v, 'length', system);
+    return (
+      `Stock extension springs for ${F(req.workingForce)} at ${L(req.workingLength)} inside the loops` +
       (req.operatingLength !== undefined
         ? `, stretched to ${L(req.operatingLength)}${req.operatingForce !== undefined ? ` at ${F(req.operatingForce)}` : ''}`
         : '') +
-      `; table ${tableLabel} (plain numbers in ${run.table.system === 'us' ? 'in, lbf' : 'mm, N'})`,
-  );
-  out.push(`Working force band: ${bandText(run.band, system)}`);
-  out.push(
-    `Table: ${run.table.total} rows, ${run.results.length} checked, ${run.bad.length} bad${run.bad.length ? ' (each on stderr with its line and column)' : ''}; ${run.passing.length} pass every check${run.passing.length ? `, ranked by ${run.rank.replace('_', ' ')}` : ''}.`,
-  );
-  out.push('');
-  if (run.passing.length) {
-    const shown = run.passing.slice(0, run.top);
-    const t = extensionStockGrid(shown, system, true);
-    out.push(table([t.header, ...t.cells]));
-    if (run.passing.length > shown.length) out.push(`  ... and ${run.passing.length - shown.length} more (--top)`);
-  } else out.push('No row passes every check.');
-  if (run.misses.length) {
-    out.push('');
-    out.push('Best near misses (least total violation) and what they fail, by how much:');
-    const t = extensionStockGrid(run.misses, system, false);
-    out.push(table([t.header, ...t.cells]));
-    for (const r of run.misses)
-      out.push(`  - ${r.row.partNumber} (line ${r.row.line}) fails ${r.verdict.failing.map((l: GivenLine) => failureText(l, system)).join('; ')}`);
-  }
-  if ([...run.passing.slice(0, run.top), ...run.misses].some((r) => r.beyondMakerLimits.length)) {
-    out.push("  ! marks a part that the requirement takes beyond the table's own max_extended_length or max_load: ask the maker before using it there");
-  }
-  out.push(...failedByLines(run.failedBy, label));
-  const rates = rateNotes(run);
-  if (rates.length) {
-    out.push('');
-    out.push(
-      `The table's rate differs from coilfront's k = G d^4 / (8 D^3 Na) by more than ${sig(run.rateDeviationLimit * 100, 3)}% on ${rates.length} row${rates.length === 1 ? '' : 's'} (the checks use coilfront's):`,
+      `; table ${tableLabel} (plain numbers in ${run.table.system === 'us' ? 'in, lbf' : 'mm, N'})`
     );
-    for (const r of rates.slice(0, 20))
-      out.push(
-        `  - ${r.row.partNumber} (line ${r.row.line}): table ${num(r.row.tableRate!, 'rate', system)}, coilfront ${num(r.verdict.analysis.rate, 'rate', system)} ${unitSymbol('rate', system)}`,
-      );
-  }
-  out.push('');
-  out.push('Notes:');
-  out.push(`  ! ${EXTENSION_STOCK_NOTE}`);
-  if (run.table.layout.ignored.length) out.push(`  ! columns read past (not stock fields): ${run.table.layout.ignored.join(', ')}`);
-  for (const r of run.passing.slice(0, run.top)) for (const n of r.notes.filter((x) => !/table's rate/.test(x))) out.push(`  ! ${r.row.partNumber}: ${n}`);
-  out.push('');
-  out.push(cautionText(EXTENSION_CAUTIONS));
-  return out.join('\n') + '\n';
-}
-
-/** Every checked row for a spreadsheet: passing rows in rank order, then the rest by how close they came. */
-export function extensionStockCsv(run: ExtensionStockRun, system: UnitSystem): string {
-  const s = (k: Kind) => unitSymbol(k, system).replace('/', '_per_').replace('^', '');
-  const header = [
-    'rank',
-    'verdict',
-    'line',
-    'part_number',
-    'material',
-    'loop',
-    `wire_diameter_${s('length')}`,
-    `mean_diameter_${s('length')}`,
-    `outer_diameter_${s('length')}`,
-    'body_coils',
-    'active_coils',
-    `free_length_${s('length')}`,
-    `initial_tension_${s('force')}`,
-    'initial_tension_band',
-    `rate_${s('rate')}`,
-    `table_rate_${s('rate')}`,
-    `working_force_${s('force')}`,
-    `operating_force_${s('force')}`,
-    'static_safety_factor',
-    'fatigue_safety_factor',
-    `mass_${s('mass')}`,
-    'price',
-    'limiting_check',
-    'smallest_margin',
-    'failing_checks',
-  ];
-  const failing = run.results.filter((r) => !r.pass).sort((a, b) => a.violation - b.violation || a.row.line - b.row.line);
-  const six = (v: number, k: Kind) => Number(sig(inUnit(v, k, system), 6));
-  const rows = [...run.passing, ...failing].map((r, i) => {
-    const a = r.verdict.analysis;
-    const g = a.geometry;
-    const fatigue = fatigueSafety(a);
+  },
+  figures,
+  springRecord,
+  gridColumns: (system) => {
+    const g = (r: ExtensionRowResult) => r.verdict.analysis.geometry;
+    const it = (r: ExtensionRowResult) => r.verdict.analysis.initialTension;
     return [
-      r.pass ? i + 1 : null,
-      r.pass ? 'pass' : 'fail',
-      r.row.line,
-      r.row.partNumber,
-      r.verdict.spring.materialChoice.material.id,
-      g.loop,
-      six(g.wireDiameter, 'length'),
-      six(g.meanDiameter, 'length'),
-      six(g.outerDiameter, 'length'),
-      g.bodyCoils,
-      g.activeCoils,
-      six(g.freeLength, 'length'),
-      six(a.initialTension.force, 'force'),
-      a.initialTension.position,
-      six(a.rate, 'rate'),
-      r.row.tableRate !== undefined ? six(r.row.tableRate, 'rate') : null,
-      six(a.points[0].force, 'force'),
-      a.points.length > 1 ? six(a.points[a.points.length - 1].force, 'force') : null,
-      Number(sig(staticSafety(a), 5)),
-      fatigue === null ? null : Number(sig(fatigue, 5)),
-      six(g.mass, 'mass'),
-      r.row.price ?? null,
-      r.verdict.limiting?.name ?? null,
-      r.verdict.limiting?.margin !== undefined && r.verdict.limiting.margin !== null ? Number(sig(r.verdict.limiting.margin, 5)) : null,
-      r.verdict.failing.map((l) => (l.margin === null ? l.name : `${l.name} ${sig(-l.margin * 100, 3)}%`)).join('; '),
+      { head: 'Nb', cell: (r) => sig(g(r).bodyCoils, 4) },
+      { head: 'loop', cell: (r) => g(r).loop },
+      { head: `L0 ${unitSymbol('length', system)}`, cell: (r) => num(g(r).freeLength, 'length', system) },
+      { head: `Fi ${unitSymbol('force', system)}`, cell: (r) => num(it(r).force, 'force', system, 3) },
+      { head: 'Fi band', cell: (r) => it(r).position },
     ];
-  });
-  return toCsv(header, rows);
-}
+  },
+  csvShape: (system) => {
+    const L = `_${csvUnit('length', system)}`;
+    const g = (r: ExtensionRowResult) => r.verdict.analysis.geometry;
+    const it = (r: ExtensionRowResult) => r.verdict.analysis.initialTension;
+    return [
+      { head: 'loop', value: (r) => g(r).loop },
+      { head: `wire_diameter${L}`, value: (r) => six(g(r).wireDiameter, 'length', system) },
+      { head: `mean_diameter${L}`, value: (r) => six(g(r).meanDiameter, 'length', system) },
+      { head: `outer_diameter${L}`, value: (r) => six(g(r).outerDiameter, 'length', system) },
+      { head: 'body_coils', value: (r) => g(r).bodyCoils },
+      { head: 'active_coils', value: (r) => g(r).activeCoils },
+      { head: `free_length${L}`, value: (r) => six(g(r).freeLength, 'length', system) },
+      { head: `initial_tension_${csvUnit('force', system)}`, value: (r) => six(it(r).force, 'force', system) },
+      { head: 'initial_tension_band', value: (r) => it(r).position },
+    ];
+  },
+  csvStresses: () => [],
+  label: (name) =>
+    EXTENSION_CHECK_LABELS[name as keyof typeof EXTENSION_CHECK_LABELS] ??
+    (name.startsWith('working_force') ? `working force ${name.endsWith('min') ? 'below' : 'above'} its band` : name),
+};

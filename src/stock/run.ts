@@ -17,6 +17,7 @@ import { readMaterialMap } from './materialMap.js';
 import { RowError, readStockTable, type BadRow, type StockRow, type StockTable } from './table.js';
 import { runExtensionStock, type ExtensionStockRun } from './extension.js';
 import { DEFAULT_RATE_DEVIATION, settleRows, type StockOptions, type StockRankKey } from './shared.js';
+import type { StockComparison } from './render.js';
 import { kindOf } from '../kinds/index.js';
 
 export { STOCK_RANK_KEYS, DEFAULT_RATE_DEVIATION, type StockRankKey, type StockOptions } from './shared.js';
@@ -75,10 +76,11 @@ export class RowResult {
   }
 }
 
-export interface Comparison {
+/** The best custom spring beside the stock rows: the design run, its best candidate, and that
+ * candidate judged as a stock row is (`custom`). */
+export interface Comparison extends StockComparison<Verdict> {
   run: DesignRun;
-  custom: Candidate | null;
-  verdict: Verdict | null;
+  candidate: Candidate | null;
 }
 
 export interface StockRun {
@@ -193,8 +195,15 @@ export function runCompressionStock(rawRequirements: unknown, input: string | Re
   let compare: Comparison | null = null;
   if (o.compare) {
     const run = runDesign(req, { strategy: o.strategy });
-    const custom = run.candidates[0] ?? null;
-    compare = { run, custom, verdict: custom ? judge(givenCustom(custom, req), j) : null };
+    const candidate = run.candidates[0] ?? null;
+    compare = {
+      run,
+      candidate,
+      strategy: run.result.strategy,
+      feasible: run.result.feasibleCells,
+      custom: candidate ? judge(givenCustom(candidate, req), j) : null,
+      workingForce: req.workingForce,
+    };
   }
   return {
     kind: 'compression',
