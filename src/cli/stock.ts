@@ -5,14 +5,12 @@ import { Option } from 'commander';
 import { loadCatalog } from '../catalogs/load.js';
 import { toJson } from '../report/json.js';
 import { writeOutputFile } from '../report/writeFile.js';
-import { designHtml } from '../kinds/compression/report/designHtml.js';
-import { stockHtml, stockSection, writeStockReport } from '../stock/html.js';
+import { stockReport, writeStockReport } from '../stock/html.js';
 import { stockCsv, stockJson, stockText } from '../stock/report.js';
 import { runStock, STOCK_RANK_KEYS, type StockRankKey } from '../stock/run.js';
 import { InputError, parseFraction, parseNumber } from '../units/parse.js';
 import type { UnitSystem } from '../units/systems.js';
 import type { StrategyChoice } from '../kinds/compression/design.js';
-import { reportFrontier } from '../kinds/compression/frontier.js';
 import { EXIT, type Io } from './io.js';
 import { addOverrideOptions, rawWithOverrides, type CommonOptions } from './searchCommands.js';
 
@@ -65,10 +63,7 @@ export function stockCommand(reqFile: string, tableFile: string, opts: StockCliO
     io.stderr(`coilfront: ${run.results.length} checked rows written to ${opts.output}\n`);
   }
   if (opts.report) {
-    const html = run.compare
-      ? designHtml(run.compare.run, system, reportFrontier(run.compare.run), undefined, stockSection(run, system, tableFile))
-      : stockHtml(run, system, tableFile);
-    writeStockReport(opts.report, html, !!opts.force);
+    writeStockReport(opts.report, stockReport(run, system, tableFile), !!opts.force);
     io.stderr(`coilfront: report written to ${opts.report}\n`);
   }
   if (opts.json) io.stdout(toJson(stockJson(run)) + '\n');
@@ -102,7 +97,10 @@ export function registerStockCommand(program: Command, io: Io, setCode: (c: numb
       .addOption(new Option('--strategy <name>', 'search strategy of --compare').choices(['auto', 'grid', 'genetic']).default('auto'))
       .option('--seed <n>', "random seed of --compare's genetic strategy (overrides the file)")
       .option('-o, --output <file.csv>', 'also write every checked row as CSV (units in the column names)')
-      .option('--report <file.html>', 'also write a self-contained HTML report (the design report with a stock section under --compare)')
+      .option(
+        '--report <file.html>',
+        'also write a self-contained HTML report (under --compare: for compression springs the design report with a stock section, for extension springs the stock report with the comparison)',
+      )
       .option('--force', 'overwrite existing output files'),
   ).action((reqFile: string, tableFile: string, opts: StockCliOptions) => setCode(stockCommand(reqFile, tableFile, opts, io)));
 }

@@ -13,13 +13,14 @@ import { loadExtensionCatalog } from '../kinds/extension/catalog.js';
 import { EXTENSION_CHECK_LABELS } from '../kinds/extension/checks.js';
 import { extensionRequirementsRecord, fatigueSafety, staticSafety } from '../kinds/extension/report.js';
 import { readExtensionRequirements, type ExtensionRequirements } from '../kinds/extension/requirements.js';
-import { readExtensionSpring } from '../kinds/extension/springFile.js';
+import { readExtensionSpring, type ExtensionCase } from '../kinds/extension/springFile.js';
+import { designExtension, type ExtensionCandidate, type ExtensionDesignRun } from '../kinds/extension/design.js';
 import { formatQuantity, sig, unitSymbol } from '../units/format.js';
 import { InputError } from '../units/parse.js';
 import type { UnitSystem } from '../units/systems.js';
 import { DIAMETER_FIELDS, readHeader, type FieldType, type Layout } from './columns.js';
 import { readMaterialMap, resolveMaterial, type MaterialMap } from './materialMap.js';
-import { csvUnit, num, six, stockFigures, type StockFigures, type StockView } from './render.js';
+import { comparison, csvUnit, num, six, stockFigures, type StockComparison, type StockFigures, type StockView } from './render.js';
 import { DEFAULT_RATE_DEVIATION, settleRows, type StockOptions, type StockRankKey } from './shared.js';
 import { RowError, numberCell, quantityCell, rawRows, type BadRow } from './table.js';
 
@@ -99,8 +100,14 @@ export interface ExtensionStockRun {
   misses: ExtensionRowResult[];
   top: number;
   failedBy: Record<string, number>;
-  /** --compare is for compression tables only so far. */
-  compare: null;
+  compare: ExtensionComparison | null;
+}
+
+/** The best custom spring beside the stock rows (--compare): the extension design run, its best
+ * candidate, and that candidate judged as a stock row is (`custom`). */
+export interface ExtensionComparison extends StockComparison<ExtensionVerdict> {
+  run: ExtensionDesignRun;
+  candidate: ExtensionCandidate | null;
 }
 
 interface RowContext {
@@ -240,8 +247,6 @@ export function runExtensionStock(
   catalog: Catalog,
   o: StockOptions = {},
 ): ExtensionStockRun {
-  if (o.compare)
-    throw new InputError('--compare', 'a table of compression springs (the stock-against-custom comparison of extension springs is not built yet)');
   const ext = loadExtensionCatalog(catalog.materials);
   const req = readExtensionRequirements(rawRequirements, catalog, ext);
   const label = o.label ?? 'stock table';
@@ -265,6 +270,11 @@ export function runExtensionStock(
     }
   }
   const { passing, misses, failedBy } = settleRows(results, bad, label, o.misses);
+  let compare: ExtensionComparison | null = null;
+  if (o.compare) {
+    const run = designExtension(req, catalog, { strategy: o.strategy }, ext);
+    compare = comparison(run, (c) => judgeExtension(customCase(c, run), {}, req, band, loopStated), req.workingForce);
+  }
   return {
     kind: 'extension',
     req,
@@ -278,7 +288,21 @@ export function runExtensionStock(
     misses,
     top: o.top ?? req.top,
     failedBy,
-    compare: null,
+    compare,
+  };
+}
+
+/** The best custom spring as a given spring, as a spring file of it would read (the requirement's
+ * peening: judged with an empty spring document). */
+function customCase(c: ExtensionCandidate, run: ExtensionDesignRun): ExtensionCase {
+  return {
+    kind: 'extension',
+    system: 'si',
+    materialChoice: c.item.choice,
+    material: c.item.material,
+    geometry: c.geometry,
+    service: run.problem.service(),
+    notes: [],
   };
 }
 

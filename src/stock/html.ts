@@ -9,11 +9,20 @@ import { extensionCautionSection, extensionConventionsSection, extensionSpringSe
 import { extensionService } from '../kinds/extension/checks.js';
 import type { UnitSystem } from '../units/systems.js';
 import { writeOutputFile } from '../report/writeFile.js';
-import { springSections } from '../kinds/compression/report/designHtml.js';
+import { designHtml, springSections } from '../kinds/compression/report/designHtml.js';
+import { reportFrontier } from '../kinds/compression/frontier.js';
 import { CONVENTIONS, htmlTable, page } from '../report/html/page.js';
 
 export function stockSection(run: StockRun, system: UnitSystem, tableLabel: string): string[] {
   return renderStockSection(COMPRESSION_STOCK_VIEW, run, system, tableLabel);
+}
+
+/** The HTML report of a stock run (--report): under --compare, for a compression table, the design
+ * report with the stock section under it; else the stock report, which carries the comparison. */
+export function stockReport(run: AnyStockRun, system: UnitSystem, tableLabel: string): string {
+  if (run.kind === 'compression' && run.compare)
+    return designHtml(run.compare.run, system, reportFrontier(run.compare.run), undefined, stockSection(run, system, tableLabel));
+  return stockHtml(run, system, tableLabel);
 }
 
 /** A report of its own when no design was run: the stock section and the best stock spring in full. */

@@ -50,6 +50,16 @@ export interface StockComparison<V extends StockVerdict> {
   workingForce: number;
 }
 
+/** The comparison from a design run: its best candidate, judged as a stock row is by `judge`. */
+export function comparison<Run extends { result: { strategy: string; feasibleCells: number }; candidates: C[] }, C, V extends StockVerdict>(
+  run: Run,
+  judge: (candidate: C) => V,
+  workingForce: number,
+): StockComparison<V> & { run: Run; candidate: C | null } {
+  const candidate = run.candidates[0] ?? null;
+  return { run, candidate, strategy: run.result.strategy, feasible: run.result.feasibleCells, custom: candidate ? judge(candidate) : null, workingForce };
+}
+
 export interface StockRunOf<V extends StockVerdict, R extends StockRowResult<V>> {
   band: WorkingBand;
   table: { system: UnitSystem; total: number; layout: { ignored: string[] } };

@@ -17,7 +17,7 @@ import { readMaterialMap } from './materialMap.js';
 import { RowError, readStockTable, type BadRow, type StockRow, type StockTable } from './table.js';
 import { runExtensionStock, type ExtensionStockRun } from './extension.js';
 import { DEFAULT_RATE_DEVIATION, settleRows, type StockOptions, type StockRankKey } from './shared.js';
-import type { StockComparison } from './render.js';
+import { comparison, type StockComparison } from './render.js';
 import { kindOf } from '../kinds/index.js';
 
 export { STOCK_RANK_KEYS, DEFAULT_RATE_DEVIATION, type StockRankKey, type StockOptions } from './shared.js';
@@ -195,15 +195,7 @@ export function runCompressionStock(rawRequirements: unknown, input: string | Re
   let compare: Comparison | null = null;
   if (o.compare) {
     const run = runDesign(req, { strategy: o.strategy });
-    const candidate = run.candidates[0] ?? null;
-    compare = {
-      run,
-      candidate,
-      strategy: run.result.strategy,
-      feasible: run.result.feasibleCells,
-      custom: candidate ? judge(givenCustom(candidate, req), j) : null,
-      workingForce: req.workingForce,
-    };
+    compare = comparison(run, (c) => judge(givenCustom(c, req), j), req.workingForce);
   }
   return {
     kind: 'compression',

@@ -78,7 +78,7 @@ describe('stock with an extension requirement', () => {
     expect(ju.failed_by).toEqual(j.failed_by);
   });
 
-  it('a row of another kind is a bad row naming the kind column; --compare is refused by name; a table without body_coils names the header', async () => {
+  it('a row of another kind is a bad row naming the kind column; a table without body_coils names the header', async () => {
     const t = inputFile(
       'part_number,material,wire_diameter,outer_diameter,body_coils,initial_tension,kind\nA,music-wire,0.65,6.8,23,1.6,extension\nB,music-wire,0.65,6.8,23,1.6,compression\n',
       'csv',
@@ -87,12 +87,31 @@ describe('stock with an extension requirement', () => {
     expect(j.table.checked).toBe(1);
     expect(j.bad_rows[0]).toMatchObject({ line: 3, field: 'kind' });
     expect(j.bad_rows[0].message).toMatch(/^expected extension \(the requirements are for extension springs/);
-    const compare = await cli('stock', REQ, TABLE, '--compare');
-    expect(compare.code).toBe(2);
-    expect(compare.stderr).toMatch(/^coilfront: error: --compare: /);
     const noCoils = await cli('stock', REQ, inputFile('part_number,material,wire_diameter,outer_diameter,initial_tension\nA,music-wire,0.65,6.8,1.6\n', 'csv'));
     expect(noCoils.code).toBe(2);
     expect(noCoils.stderr).toMatch(/header: expected a column body_coils/);
+  });
+
+  it('--compare runs the extension design and judges its best spring as a stock row: the same spring design lists, passing, beside the best stock one', async () => {
+    const printed = await cli('stock', REQ, TABLE, '--compare', '--json');
+    expect(printed.code).toBe(0);
+    const c = JSON.parse(printed.stdout).compare;
+    const design = JSON.parse((await cli('design', REQ, '--json')).stdout);
+    const best = design.candidates[0];
+    for (const k of ['material', 'wire_diameter', 'mean_diameter', 'body_coils', 'free_length', 'initial_tension', 'rate', 'mass'])
+      expect(c.best_custom[k], k).toBe(best[k]);
+    expect(c.design_strategy).toBe(design.strategy);
+    expect(c.design_feasible).toBe(design.feasible);
+    // Judged through check's path, the designed spring passes every check, its working force in the band.
+    expect(c.best_custom.limiting_check.margin).toBeGreaterThanOrEqual(0);
+    expect(c.best_stock.part_number).toBe(PASSING[0]);
+    expect(c.stock_over_custom_mass).toBeCloseTo(c.best_stock.mass / c.best_custom.mass, 12);
+    // The library gives the same record.
+    expect(JSON.stringify(stock(req, text, { label: TABLE, compare: true }), null, 2) + '\n').toBe(printed.stdout);
+    const t = (await cli('stock', REQ, TABLE, '--compare')).stdout;
+    expect(t).toMatch(/Stock against custom \(--compare: the best spring `design` finds for the same requirements\):/);
+    expect(t).toMatch(new RegExp(`best stock: ${PASSING[0]}`));
+    expect(t).toMatch(/The best stock spring \(XM-065-068-23\) is [\d.]+% heavier than the best custom spring/);
   });
 
   it('-o writes every checked row as CSV and --report an HTML page with the best row in full and the caution', async () => {
