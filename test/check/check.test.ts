@@ -10,7 +10,7 @@ import { readInputFile } from '../../src/input/document.js';
 import { readRequirements } from '../../src/kinds/compression/requirements.js';
 import { candidateAt, runDesign } from '../../src/kinds/compression/design.js';
 import { springDocument } from '../../src/kinds/compression/springDoc.js';
-import { cli, inputFile } from '../helpers.js';
+import { cli, inputFile, requirementSpace } from '../helpers.js';
 
 const catalog = loadCatalog();
 
@@ -25,41 +25,22 @@ free_length: 49.7
 `;
 const DEMO = 'examples/washer-trigger.yaml';
 
-const reqArb = fc.record({
-  force: fc.double({ min: 5, max: 150, noNaN: true }),
-  length: fc.double({ min: 20, max: 70, noNaN: true }),
-  stroke: fc.double({ min: 0.1, max: 0.45, noNaN: true }),
-  rateFixed: fc.boolean(),
-  forceRise: fc.double({ min: 1.2, max: 2.2, noNaN: true }),
-  od: fc.double({ min: 7, max: 40, noNaN: true }),
-  material: fc.constantFrom('music-wire', 'stainless-302', 'chrome-silicon', 'phosphor-bronze'),
-  ends: fc.constantFrom('squared-ground', 'squared', 'plain'),
-  seating: fc.constantFrom('fixed-fixed', 'pivoted-pivoted', 'fixed-free'),
-  cycles: fc.constantFrom(undefined, 1e5, 'infinite'),
-  tolerance: fc.constantFrom(0, 0.05),
-  solidSafe: fc.boolean(),
+const { arb: reqArb, doc: requirementsDoc } = requirementSpace({
+  force: [5, 150],
+  length: [20, 70],
+  stroke: [0.1, 0.45],
+  forceRise: [1.2, 2.2],
+  od: [7, 40],
+  materials: ['music-wire', 'stainless-302', 'chrome-silicon', 'phosphor-bronze'],
+  ends: ['squared-ground', 'squared', 'plain'],
+  seatings: ['fixed-fixed', 'pivoted-pivoted', 'fixed-free'],
+  cycles: [undefined, 1e5, 'infinite'],
+  tolerances: [0, 0.05],
+  peenedAndGuided: false,
+  freeLengthFactor: 2.5,
+  coilStep: 1,
+  top: 4,
 });
-
-type ReqCase = typeof reqArb extends fc.Arbitrary<infer T> ? T : never;
-
-function requirementsDoc(r: ReqCase): Record<string, unknown> {
-  const doc: Record<string, unknown> = {
-    units: 'si',
-    material: r.material,
-    ends: r.ends,
-    seating: r.seating,
-    load: { force: r.force, length: r.length },
-    operating_length: r.length * (1 - r.stroke),
-    envelope: { max_outer_diameter: r.od, max_free_length: r.length * 2.5 },
-    load_tolerance: r.tolerance,
-    solid_safe: r.solidSafe,
-    coil_step: 1,
-    top: 4,
-  };
-  if (r.rateFixed) doc.operating_force = r.force * r.forceRise;
-  if (r.cycles !== undefined) doc.cycles = r.cycles;
-  return doc;
-}
 
 describe('check agrees with design', () => {
   it('every spring design reports passes check, read back from its spring file; every nearest miss fails check on the checks design saw fail (property)', () => {

@@ -1,4 +1,4 @@
-// Invariants of the spring search (property tests with fast-check, over requirements of our own making).
+// source: none needed. Invariants of the spring search (property tests with fast-check, over requirements of our own making).
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { loadCatalog } from '../../../src/catalogs/load.js';
@@ -10,48 +10,26 @@ import { checkAnalysis } from '../../../src/kinds/compression/verify.js';
 import { runDesign } from '../../../src/kinds/compression/design.js';
 import { springDocument } from '../../../src/kinds/compression/springDoc.js';
 import { computeFrontier } from '../../../src/kinds/compression/frontier.js';
+import { requirementSpace } from '../../helpers.js';
 
 const catalog = loadCatalog();
 
-const reqArb = fc.record({
-  force: fc.double({ min: 5, max: 200, noNaN: true }),
-  length: fc.double({ min: 20, max: 80, noNaN: true }),
-  stroke: fc.double({ min: 0.1, max: 0.5, noNaN: true }),
-  rateFixed: fc.boolean(),
-  forceRise: fc.double({ min: 1.2, max: 2.5, noNaN: true }),
-  od: fc.double({ min: 8, max: 40, noNaN: true }),
-  material: fc.constantFrom('music-wire', 'stainless-302', 'chrome-silicon', 'phosphor-bronze', 'en10270-1-dm'),
-  ends: fc.constantFrom('squared-ground', 'squared', 'plain', 'plain-ground'),
-  seating: fc.constantFrom('fixed-fixed', 'fixed-pivoted', 'pivoted-pivoted', 'fixed-free'),
-  cycles: fc.constantFrom(undefined, 1e5, 1e6, 'infinite'),
-  peened: fc.boolean(),
-  solidSafe: fc.boolean(),
-  tolerance: fc.constantFrom(0, 0.05, 0.1),
-  guided: fc.boolean(),
+const { arb: reqArb, doc: requirementsDoc } = requirementSpace({
+  force: [5, 200],
+  length: [20, 80],
+  stroke: [0.1, 0.5],
+  forceRise: [1.2, 2.5],
+  od: [8, 40],
+  materials: ['music-wire', 'stainless-302', 'chrome-silicon', 'phosphor-bronze', 'en10270-1-dm'],
+  ends: ['squared-ground', 'squared', 'plain', 'plain-ground'],
+  seatings: ['fixed-fixed', 'fixed-pivoted', 'pivoted-pivoted', 'fixed-free'],
+  cycles: [undefined, 1e5, 1e6, 'infinite'],
+  tolerances: [0, 0.05, 0.1],
+  peenedAndGuided: true,
+  freeLengthFactor: 3,
+  coilStep: 0.5,
+  top: 5,
 });
-
-type ReqCase = typeof reqArb extends fc.Arbitrary<infer T> ? T : never;
-
-function requirementsDoc(r: ReqCase): Record<string, unknown> {
-  const doc: Record<string, unknown> = {
-    units: 'si',
-    material: r.material,
-    ends: r.ends,
-    seating: r.seating,
-    load: { force: r.force, length: r.length },
-    operating_length: r.length * (1 - r.stroke),
-    envelope: { max_outer_diameter: r.od, max_free_length: r.length * 3 },
-    peened: r.peened,
-    solid_safe: r.solidSafe,
-    guided: r.guided,
-    load_tolerance: r.tolerance,
-    coil_step: 0.5,
-    top: 5,
-  };
-  if (r.rateFixed) doc.operating_force = r.force * r.forceRise;
-  if (r.cycles !== undefined) doc.cycles = r.cycles;
-  return doc;
-}
 
 describe('spring search invariants (property)', () => {
   it('every spring the search reports re-verifies through the single-spring analysis, read from its own spring file', () => {
