@@ -6,12 +6,39 @@
 // Usage: node scripts/build.mjs (after tsc; `npm run build` does both).
 import { spawnSync } from 'node:child_process';
 import { chmodSync, copyFileSync, mkdirSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
+import { createRequire } from 'node:module';
 import { dirname, join } from 'node:path';
 import { fileURLToPath } from 'node:url';
 import { isDeepStrictEqual } from 'node:util';
 import { build } from 'esbuild';
 
 const root = join(dirname(fileURLToPath(import.meta.url)), '..');
+const require = createRequire(import.meta.url);
+
+// Node's child_process and crypto cost a start about as much as all of coilfront's own modules (they
+// pull in net, stream, dgram, the OpenSSL bindings...), and a run hardly ever uses them: commander
+// requires child_process for subcommands run as separate programs (coilfront has none), the LP solver
+// for an external solver it is never asked for, seedrandom crypto to seed itself when given no seed
+// (coilfront always gives one). In the bundle each of them is a stand-in with every export of the real
+// module as a getter that requires it on first use: same behaviour, no cost until then.
+const LAZY_BUILTINS = ['child_process', 'crypto'];
+const lazyBuiltins = {
+  name: 'lazy-builtins',
+  setup(b) {
+    const filter = new RegExp(`^(node:)?(${LAZY_BUILTINS.join('|')})$`);
+    b.onResolve({ filter }, (args) =>
+      args.namespace === 'lazy-builtin' ? { path: args.path, external: true } : { path: args.path.replace(/^node:/, ''), namespace: 'lazy-builtin' },
+    );
+    b.onLoad({ filter: /.*/, namespace: 'lazy-builtin' }, (args) => {
+      const names = Object.keys(require(`node:${args.path}`));
+      const getters = names.map((n) => `  ${JSON.stringify(n)}: { enumerable: true, get: () => load()[${JSON.stringify(n)}] },`);
+      return {
+        contents: `let real;\nconst load = () => (real ??= require('node:${args.path}'));\nObject.defineProperties(module.exports, {\n${getters.join('\n')}\n});\n`,
+        loader: 'js',
+      };
+    });
+  },
+};
 const cliDir = join(root, 'dist', 'cli');
 
 const { loadCatalogFromYaml, PREBUILT_CATALOG } = await import(join(root, 'dist', 'src', 'catalogs', 'load.js'));
@@ -41,6 +68,7 @@ await build({
   banner: { js: "var __coilfrontModuleUrl = require('node:url').pathToFileURL(__filename).href;" },
   // Not minified: minifying measured no faster to start, and a readable bundle keeps stack traces
   // (COILFRONT_DEBUG=1) and licence comments as they are.
+  plugins: [lazyBuiltins],
   logLevel: 'warning',
 });
 // The launcher wraps the bundle in a function: a #! line inside it would not parse.
@@ -68,6 +96,17 @@ if (!isDeepStrictEqual(JSON.parse(toleranceJson), tolerance)) {
   throw new Error('build: the validated tolerance catalog does not survive JSON unchanged (a value JSON cannot hold?)');
 }
 for (const dir of [cliDir, join(root, 'dist', 'src', 'kinds', 'compression', 'tolerance')]) writeFileSync(join(dir, PREBUILT_TOLERANCE_CATALOG), toleranceJson);
+
+// The default seed's first standard normal deviates, computed once here by the module that would
+// compute them at every run (src/kinds/compression/tolerance/monteCarlo.ts reads them when present):
+// each listed spring's Monte Carlo then starts without the generator's cold start.
+const { computeDeviates, DEVIATES_TABLE_SEED, DEVIATES_TABLE_LENGTH, DEVIATES_TABLE_FILE } = await import(
+  join(root, 'dist', 'src', 'kinds', 'compression', 'tolerance', 'monteCarlo.js')
+);
+const deviates = computeDeviates(DEVIATES_TABLE_SEED, DEVIATES_TABLE_LENGTH);
+const table = Buffer.alloc(deviates.length * 8);
+deviates.forEach((z, i) => table.writeDoubleLE(z, i * 8));
+writeFileSync(join(cliDir, DEVIATES_TABLE_FILE), table);
 
 // The code cache: what V8 compiled during one run of the demo, for the next starts to reuse.
 const record = spawnSync(process.execPath, [launcher, 'design', join(root, 'examples', 'washer-trigger.yaml')], {
