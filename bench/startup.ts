@@ -24,6 +24,14 @@ const BEFORE =
 const YIELD_SPEEDUP =
   "Yield shown for every listed spring (2026-12-02, against commit 8686427; the same 20,000-sample Monte Carlo, same seed, outputs byte for byte the same): the polar transform written into the sampling loop, the tolerance catalog pre-validated into tolerance-catalog.json at build time, the sample count written without toLocaleString (whose first call loads ICU, about 12 ms). Whole process (21 interleaved pairs with `node -e 0`, medians, load average 2.5 to 3.5): before 3.21x wall, 3.32x CPU (213 ms against 63 ms); after 2.27x wall, 2.37x CPU (141 ms against 61 ms); after against before, paired: 0.73x wall, 0.71x CPU. Samples per second through the made-spring checks (washer-trigger's best spring, 200,000 samples, median of 5, warm): 1.37 M before, 1.54 M after (1.12x; medians of 7 processes each, interleaved, 0.87 M to 1.74 M run to run on the busy machine). Cold, the 20,000 samples of one listed spring in a fresh process: 49 ms before, 55 ms after (medians of 7; 46 to 102 ms, no difference above the noise): most of the cold cost is the time before the JIT optimises the loop, and most of the whole-process gain is the catalog and ICU.";
 
+// This session's change, measured once against the build it started from (commit f92bc04) and kept here
+// as history like the lines above.
+const COLD_SAMPLING =
+  "Cold sampling and a lighter load (2026-12-02, against commit f92bc04; outputs byte for byte the same, goldens untouched): the Monte Carlo's uniforms come from seedrandom's own generator written over a typed array (src/kinds/compression/tolerance/arc4Stream.ts, checked number for number against the seedrandom package), its deviates and verdicts run in batches of 64 samples, and the default seed's first 100,000 deviates (a design's 20,000 samples x 5 quantities) are computed at build time by the same code into dist/cli/deviates-seed-1.f64 (800 KB), which the built command reads (other seeds compute them); in the bundle, child_process and crypto are stand-ins loaded on first use; the bundle is kept to ASCII and read as Latin-1 (no UTF-8 decoding of 1.2 MB); a design no longer loads perf_hooks for its one timing. Whole process (21 interleaved pairs each, medians, load 5.6 to 7): before 2.24x wall, 2.35x CPU `node -e 0`; after 2.07x wall, 2.12x CPU; after against before, paired: 0.89x wall, 0.91x CPU. Instructions (valgrind callgrind, two runs each, less the random-length prime test of OpenSSL's start): `node -e 0` 494 M; before 975 to 979 M (1.98x); after 825 to 843 M (1.69x). The Monte Carlo of one listed spring alone, in a fresh process with V8 single-threaded (so that its compiler's work is counted where it happens): 246 M instructions before, 220 M with the new generator and batches, 166 M with the table. What keeps the ratio near 2x: V8 compiling and running cold the grid search and the made-spring checks (their optimised code arrives after some thousands of the 20,000 samples on a busy machine) and deserialising the 700 KB code cache.";
+
+/** The targets table's "before this session" column for this target. */
+const BEFORE_SESSION = '2.27x wall, 2.37x CPU (commit f92bc04, load 2.5 to 3.5); 2.24x wall, 2.35x CPU re-measured beside this build at load 6';
+
 const pkg = JSON.parse(readFileSync('package.json', 'utf8')) as { bin: Record<string, string> };
 const bin = pkg.bin.coilfront;
 const scratch = mkdtempSync(join(tmpdir(), 'coilfront-startup-'));
@@ -88,9 +96,24 @@ const lines = [
   BEFORE,
   '',
   YIELD_SPEEDUP,
+  '',
+  COLD_SAMPLING,
 ];
 const text = lines.join('\n') + '\n';
 process.stderr.write(text);
+
+// The start-up row of the targets table at the top (bench/run.ts writes it as "see below"): this run's ratio.
+const TARGET_ROW = '| whole `design` on the demo at most 2x `node -e 0` |';
+const designRatio = ratio('design');
+const verdict =
+  designRatio <= 1.5
+    ? 'met (and the 1.5x moonshot)'
+    : designRatio <= 1.9
+      ? 'met'
+      : designRatio <= 2
+        ? 'met in this run, at the edge (a busy machine moves it by a tenth)'
+        : 'not met';
+const targetRow = `${TARGET_ROW} **${designRatio.toFixed(2)}x** wall (${ROUNDS} interleaved rounds, medians, load ${loadAtStart.toFixed(1)}; "Whole-command start-up" below) | ${BEFORE_SESSION} | ${verdict} |`;
 
 // Replace this section of bench/results.md (bench/run.ts writes the rest), or add it at the end.
 let results = '';
@@ -106,4 +129,8 @@ if (start >= 0) {
 } else {
   results = (results ? results.replace(/\n*$/, '\n\n') : '') + text;
 }
+results = results
+  .split('\n')
+  .map((line) => (line.startsWith(TARGET_ROW) ? targetRow : line))
+  .join('\n');
 writeFileSync(RESULTS, results);

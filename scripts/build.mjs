@@ -5,6 +5,7 @@
 // source of truth: edit it and build again.
 // Usage: node scripts/build.mjs (after tsc; `npm run build` does both).
 import { spawnSync } from 'node:child_process';
+import { isAscii } from 'node:buffer';
 import { chmodSync, copyFileSync, mkdirSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
 import { createRequire } from 'node:module';
 import { dirname, join } from 'node:path';
@@ -71,8 +72,15 @@ await build({
   plugins: [lazyBuiltins],
   logLevel: 'warning',
 });
-// The launcher wraps the bundle in a function: a #! line inside it would not parse.
-writeFileSync(bundle, readFileSync(bundle, 'utf8').replace(/^#![^\n]*\n/, ''));
+// The launcher wraps the bundle in a function: a #! line inside it would not parse. And the bundle is
+// kept to ASCII, so that the launcher can read it as Latin-1, a plain copy, instead of decoding UTF-8
+// (about 20 M instructions for 1.2 MB, 4% of a bare node start): esbuild escapes non-ASCII characters
+// in strings but leaves them in regular expression literals, where \uXXXX means the same character.
+const source = readFileSync(bundle, 'utf8')
+  .replace(/^#![^\n]*\n/, '')
+  .replace(/[^\x00-\x7f]/g, (c) => `\\u${c.charCodeAt(0).toString(16).padStart(4, '0')}`);
+if (!isAscii(Buffer.from(source))) throw new Error('build: the bundle is not ASCII after escaping');
+writeFileSync(bundle, source);
 const launcher = join(cliDir, 'coilfront.cjs');
 copyFileSync(join(root, 'scripts', 'launcher.cjs'), launcher);
 chmodSync(launcher, 0o755);

@@ -6,6 +6,7 @@
 // A cache made by another Node.js version or under other V8 flags is rejected by V8 itself and the
 // bundle compiles as usual; the bundle also runs alone (`node coilfront-bundle.cjs ...`).
 'use strict';
+const { isAscii } = require('node:buffer');
 const { readFileSync, writeFileSync } = require('node:fs');
 const { createRequire } = require('node:module');
 const { join } = require('node:path');
@@ -20,7 +21,10 @@ try {
   /* no cache: V8 compiles the bundle */
 }
 // Wrapped as Node wraps a CommonJS module, on the first line so that line numbers stay true.
-const script = new Script(`(function (exports, require, module, __filename, __dirname) {${readFileSync(bundle, 'utf8')}\n})`, { filename: bundle, cachedData });
+// The build keeps the bundle to ASCII, which reads as Latin-1 without decoding (UTF-8 otherwise).
+const bytes = readFileSync(bundle);
+const source = bytes.toString(isAscii(bytes) ? 'latin1' : 'utf8');
+const script = new Script(`(function (exports, require, module, __filename, __dirname) {${source}\n})`, { filename: bundle, cachedData });
 if (process.env.COILFRONT_DEBUG)
   process.stderr.write(`coilfront: code cache ${cachedData === undefined ? 'absent' : script.cachedDataRejected ? 'rejected' : 'used'}\n`);
 // The build runs the demo once with this set, then keeps what V8 compiled for the next starts.
