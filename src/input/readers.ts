@@ -120,3 +120,41 @@ export function readRange(f: Fields, key: string, fallback: [number, number], ru
   if (!(b >= a)) throw new InputError(f.name(key), '[low, high] with high at or above low', f.get(key));
   return [a, b];
 }
+
+/** A `[low, high]` range of coil counts (compression `active_coils`, extension `body_coils`), within
+ * LIMITS.activeCoils. */
+export function readCoilRange(f: Fields, key: string, fallback: [number, number]): [number, number] {
+  return readRange(f, key, fallback, { min: LIMITS.activeCoils[0], max: LIMITS.activeCoils[1] });
+}
+
+/** `coil_step`: the coil-count step of the search, within LIMITS.coilStep. */
+export function readCoilStep(f: Fields, fallback: number): number {
+  return f.number('coil_step', { min: LIMITS.coilStep[0], max: LIMITS.coilStep[1] }) ?? fallback;
+}
+
+/** `index`: the spring-index range, at most LIMITS.indexMax, its low end above `floor` (`why` says
+ * what needs it there). */
+export function readIndexRange(f: Fields, fallback: [number, number], floor: number, why: string): [number, number] {
+  const index = readRange(f, 'index', fallback, { positive: true, max: LIMITS.indexMax });
+  if (index[0] <= floor) throw new InputError('index[0]', `a spring index above ${floor}${why ? ` (${why})` : ''}`, index[0]);
+  return index;
+}
+
+/** `diameter_resolution`: the mean-diameter scan step (mm), within LIMITS.diameterResolution. */
+export function readDiameterResolution(f: Fields, fallback: number): number {
+  const v = f.quantity('diameter_resolution', 'length', { positive: true }) ?? fallback;
+  const [lo, hi] = LIMITS.diameterResolution;
+  if (v < lo || v > hi) {
+    throw new InputError(
+      'diameter_resolution',
+      `a length from ${formatQuantity(lo, 'length', f.system)} to ${formatQuantity(hi, 'length', f.system)} (finer than a wire maker can hold is no more exact, only slower)`,
+      f.get('diameter_resolution'),
+    );
+  }
+  return v;
+}
+
+/** `seed`: a whole number a double holds exactly (so the same seed is the same run). */
+export function readSeed(f: Fields, fallback: number): number {
+  return f.number('seed', { integer: true, min: -Number.MAX_SAFE_INTEGER, max: Number.MAX_SAFE_INTEGER }) ?? fallback;
+}

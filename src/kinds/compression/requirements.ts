@@ -3,7 +3,6 @@
 import type { Catalog } from '../../catalogs/types.js';
 import { RANK_KEYS, type RankKey } from './objectives.js';
 import { inStrengthRange } from '../../catalogs/properties.js';
-import { formatQuantity } from '../../units/format.js';
 import { SEATINGS, type Seating } from './buckling.js';
 import { FATIGUE_CRITERIA, type FatigueCriterion } from '../../model/fatigue.js';
 import { END_TYPES, type EndType } from './geometry.js';
@@ -13,7 +12,17 @@ import type { UnitSystem } from '../../units/systems.js';
 import { Fields } from '../../units/fields.js';
 import { applyStrengthBasis, STRENGTH_BASES, type MaterialChoice, type StrengthBasis } from '../../input/material.js';
 import { SURGE_ENDS, type SurgeEnds } from '../../model/surge.js';
-import { checkWireSizes, readMaterials, readRange, readSafety, readWireSizes } from '../../input/readers.js';
+import {
+  checkWireSizes,
+  readCoilRange,
+  readCoilStep,
+  readDiameterResolution,
+  readIndexRange,
+  readMaterials,
+  readSafety,
+  readSeed,
+  readWireSizes,
+} from '../../input/readers.js';
 import { LIMITS } from '../../input/limits.js';
 import { parseCycles } from '../../input/cycles.js';
 import { DEFAULTS } from '../../input/defaults.js';
@@ -171,10 +180,9 @@ export function readRequirements(raw: unknown, catalog: Catalog): Requirements {
   checkWireSizes(f, materials, sizes);
   const { wireSizes, label: wireSizesLabel } = sizes;
 
-  const activeCoils = readRange(f, 'active_coils', COMPRESSION_DEFAULTS.activeCoils, { min: LIMITS.activeCoils[0], max: LIMITS.activeCoils[1] });
-  const coilStep = f.number('coil_step', { min: LIMITS.coilStep[0], max: LIMITS.coilStep[1] }) ?? COMPRESSION_DEFAULTS.coilStep;
-  const index = readRange(f, 'index', COMPRESSION_DEFAULTS.index, { positive: true, max: LIMITS.indexMax });
-  if (index[0] <= 1) throw new InputError('index[0]', 'a spring index above 1', index[0]);
+  const activeCoils = readCoilRange(f, 'active_coils', COMPRESSION_DEFAULTS.activeCoils);
+  const coilStep = readCoilStep(f, COMPRESSION_DEFAULTS.coilStep);
+  const index = readIndexRange(f, COMPRESSION_DEFAULTS.index, 1, '');
 
   const safety = readSafety(f, COMPRESSION_DEFAULTS.safety);
   const req: Requirements = {
@@ -219,17 +227,10 @@ export function readRequirements(raw: unknown, catalog: Catalog): Requirements {
     bestPerWireAsked: f.bool('best_per_wire') === true && f.bool('variants') !== true,
     rank: (f.choice('rank', RANK_KEYS) ?? COMPRESSION_DEFAULTS.rank) as RankKey,
     top: f.number('top', { integer: true, positive: true, max: 1000 }) ?? COMPRESSION_DEFAULTS.top,
-    seed: f.number('seed', { integer: true, min: -Number.MAX_SAFE_INTEGER, max: Number.MAX_SAFE_INTEGER }) ?? COMPRESSION_DEFAULTS.seed,
-    diameterResolution: f.quantity('diameter_resolution', 'length', { positive: true }) ?? COMPRESSION_DEFAULTS.diameterResolution,
+    seed: readSeed(f, COMPRESSION_DEFAULTS.seed),
+    diameterResolution: readDiameterResolution(f, COMPRESSION_DEFAULTS.diameterResolution),
     ...readToleranceRequirements(f),
   };
-  if (req.diameterResolution < LIMITS.diameterResolution[0] || req.diameterResolution > LIMITS.diameterResolution[1]) {
-    throw new InputError(
-      'diameter_resolution',
-      `a length from ${formatQuantity(LIMITS.diameterResolution[0], 'length', system)} to ${formatQuantity(LIMITS.diameterResolution[1], 'length', system)} (finer than a wire maker can hold is no more exact, only slower)`,
-      f.get('diameter_resolution'),
-    );
-  }
   if (req.loadTolerance >= 1) throw new InputError('load_tolerance', 'a fraction below 1 (such as 0.1 or "10%")', f.get('load_tolerance'));
   if (req.workingTolerance !== undefined && req.workingTolerance >= 1)
     throw new InputError('working_tolerance', 'a fraction below 1 (such as 0.02 or "2%")', f.get('working_tolerance'));

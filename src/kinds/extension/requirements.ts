@@ -7,7 +7,17 @@ import { FATIGUE_CRITERIA, type FatigueCriterion } from '../../model/fatigue.js'
 import type { StressCorrection } from '../../model/stressFactor.js';
 import { Fields } from '../../units/fields.js';
 import type { MaterialChoice } from '../../input/material.js';
-import { readMaterials, readRange, readSafety, readWireSizes } from '../../input/readers.js';
+import {
+  checkWireSizes,
+  readCoilRange,
+  readCoilStep,
+  readDiameterResolution,
+  readIndexRange,
+  readMaterials,
+  readSafety,
+  readSeed,
+  readWireSizes,
+} from '../../input/readers.js';
 import { DEFAULTS } from '../../input/defaults.js';
 import { parseCycles } from '../../input/cycles.js';
 import { formatQuantity } from '../../units/format.js';
@@ -78,7 +88,9 @@ export function readExtensionRequirements(
   readKind(f, 'extension');
   const system = f.system;
   const materials = readMaterials(f, catalog);
-  const { wireSizes, label } = readWireSizes(f, catalog);
+  const sizes = readWireSizes(f, catalog);
+  checkWireSizes(f, materials, sizes);
+  const { wireSizes, label } = sizes;
 
   const loopId = f.string('loop') ?? 'full';
   const loop = loopRule(ext, loopId);
@@ -115,11 +127,10 @@ export function readExtensionRequirements(
       env.get('max_extended_length'),
     );
 
-  const bodyCoils = readRange(f, 'body_coils', EXTENSION_DEFAULTS.bodyCoils, { positive: true });
-  const coilStep = f.number('coil_step', { positive: true }) ?? EXTENSION_DEFAULTS.coilStep;
-  if ((bodyCoils[1] - bodyCoils[0]) / coilStep > 100000) throw new InputError('coil_step', 'a step that gives at most 100000 coil counts in body_coils');
-  const index = readRange(f, 'index', DEFAULTS.index, { positive: true });
-  if (index[0] <= 1.75) throw new InputError('index[0]', 'a spring index above 1.75 (the loop formulas need C1 = C above it)', index[0]);
+  // The same bounds as compression requirements (src/input/readers.ts, src/input/limits.ts).
+  const bodyCoils = readCoilRange(f, 'body_coils', EXTENSION_DEFAULTS.bodyCoils);
+  const coilStep = readCoilStep(f, EXTENSION_DEFAULTS.coilStep);
+  const index = readIndexRange(f, DEFAULTS.index, 1.75, 'the loop formulas need C1 = C above it');
 
   const safety = readSafety(f, DEFAULTS.safety);
   const req: ExtensionRequirements = {
@@ -154,13 +165,12 @@ export function readExtensionRequirements(
     rank: (f.choice('rank', EXTENSION_RANK_KEYS) ?? DEFAULTS.rank) as ExtensionRankKey,
     bestPerWire: f.bool('best_per_wire') ?? false,
     top: f.number('top', { integer: true, positive: true, max: 1000 }) ?? DEFAULTS.top,
-    seed: f.number('seed', { integer: true }) ?? DEFAULTS.seed,
-    diameterResolution: f.quantity('diameter_resolution', 'length', { positive: true }) ?? DEFAULTS.diameterResolution,
+    seed: readSeed(f, DEFAULTS.seed),
+    diameterResolution: readDiameterResolution(f, DEFAULTS.diameterResolution),
   };
   if (req.loadTolerance >= 1) throw new InputError('load_tolerance', 'a fraction below 1 (such as 0.1 or "10%")', f.get('load_tolerance'));
   if (req.workingTolerance !== undefined && req.workingTolerance >= 1)
     throw new InputError('working_tolerance', 'a fraction below 1 (such as 0.02 or "2%")', f.get('working_tolerance'));
-  if (req.diameterResolution < 1e-4) throw new InputError('diameter_resolution', 'a scan step of at least 0.0001 mm', f.get('diameter_resolution'));
   f.get('material_map'); // a stock table's material words; read and checked by src/stock/materialMap.ts
   f.rejectUnknown();
   return req;

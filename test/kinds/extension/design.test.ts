@@ -36,7 +36,8 @@ const reqArb = fc
     units: 'si',
     material: r.material,
     loop: r.loop,
-    wire_sizes: WIRES,
+    // Each listed size one the material is made in (hard-drawn starts at 0.7 mm): the reader refuses others.
+    wire_sizes: r.material === 'hard-drawn' ? WIRES.filter((d) => d >= 0.7) : WIRES,
     body_coils: [3, 60],
     coil_step: 0.5,
     load: { force: r.force, length: r.length },

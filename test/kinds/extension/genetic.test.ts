@@ -48,7 +48,7 @@ describe('the genetic search on extension springs', () => {
   });
 
   it('a space too large for the grid goes to the genetic search under auto; a grid forced on it is refused naming coil_step', () => {
-    const big = req({ ...demo, material: 'any', body_coils: [3, 80], coil_step: 0.005, top: 1 });
+    const big = req({ ...demo, material: 'any', body_coils: [3, 160], coil_step: 0.01, top: 1 });
     const n = combinations(buildExtensionProblem(big, catalog));
     expect(n).toBeGreaterThan(LIMITS.gridCombinations);
     const run = designExtension(big, catalog);
