@@ -130,8 +130,9 @@ export function makeJudge(req: Requirements, band: WorkingBand, endsStated: bool
 
 type Figure = CheckFigure;
 
-/** The figure and limit behind each design check, for people; the verdict itself is checkAnalysis's. */
-function figureOf(name: CheckName, a: SpringAnalysis, req: Requirements, madeYield: number | null): Figure {
+/** The figure and limit behind each design check, for people; the verdict itself is checkAnalysis's.
+ * Also read by design's nearest-miss lines, so a miss reads in the unit the check command shows. */
+export function figureOf(name: CheckName, a: SpringAnalysis, req: Requirements, madeYield: number | null): Figure {
   const g = a.geometry;
   switch (name) {
     case 'index_min':

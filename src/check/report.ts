@@ -63,9 +63,10 @@ export function bandRecord(b: WorkingBand): Record<string, unknown> {
   return { force: b.force, length: b.length, tolerance: b.tolerance, source: b.source, low: b.low, high: b.high };
 }
 
-/** The failing checks and by how much (a fraction of the limit; null for a categorical check). */
-export function failingRecord(v: Verdict): { name: string; by: number | null }[] {
-  return v.failing.map((l) => ({ name: l.name, by: l.margin === null ? null : -l.margin }));
+/** The failing checks and by how much: `by` a fraction of the limit (null for a categorical check),
+ * `spare` the margin in the check's own unit (SI, negative: so many mm of clearance short), as in `checks`. */
+export function failingRecord(v: Verdict): { name: string; by: number | null; spare: number | null }[] {
+  return v.failing.map((l) => ({ name: l.name, by: l.margin === null ? null : -l.margin, spare: spareOf(l) }));
 }
 
 /** What a loose spring means, in words: where, by how much, and the free length that would give the
@@ -87,7 +88,7 @@ export function checkJson(v: Verdict, band: WorkingBand, notes: string[]): Recor
     units: SI_UNITS,
     pass: v.pass,
     failing: failingRecord(v),
-    limiting_check: v.limiting ? { name: v.limiting.name, margin: v.limiting.margin } : null,
+    limiting_check: v.limiting ? { name: v.limiting.name, margin: v.limiting.margin, spare: spareOf(v.limiting) } : null,
     working_band: bandRecord(band),
     spring: givenSpringRecord(v),
     checks: v.lines.map(checkLineRecord),
@@ -119,18 +120,26 @@ export function writeLineMargin(l: Omit<CheckLine, 'name'>, system: UnitSystem):
   return spare === null ? '' : `${spare >= 0 ? '+' : '-'}${writeValue(Math.abs(spare), l.kind, system)}`;
 }
 
+/** How far a failing line misses, as every output writes it: "by 0.0500 mm" in the check's own unit
+ * (clash, buckling), else "by 2.5%" of the limit; null for a categorical line. */
+export function shortfallText(l: Omit<CheckLine, 'name'>, system: UnitSystem): string | null {
+  const spare = l.unitMargin ? spareOf(l) : null;
+  if (spare !== null) return `by ${writeValue(-spare, l.kind, system)}`;
+  return l.margin === null ? null : `by ${sig(-l.margin * 100, 3)}%`;
+}
+
 /** "outer_diameter by 2.5% (16.4 mm, limit 16 mm)" */
 export function failureText(l: Omit<CheckLine, 'name'> & { name: string }, system: UnitSystem): string {
   // Five figures: a near miss by a fraction of a percent must not read "10.35 N against <= 10.35 N".
   if (l.value === null && l.kind !== 'text') return `${l.name} (not judged)`;
-  const spare = l.unitMargin ? spareOf(l) : null;
-  if (spare !== null)
-    return `${l.name} by ${writeValue(-spare, l.kind, system)} (${writeValue(l.value, l.kind, system, 5)} against ${l.relation} ${writeValue(l.limit, l.kind, system, 5)})`;
-  const by =
-    l.margin === null
-      ? `(${writeValue(l.value, l.kind, system)}, not ${l.limit})`
-      : `by ${sig(-l.margin * 100, 3)}% (${writeValue(l.value, l.kind, system, 5)} against ${l.relation} ${writeValue(l.limit, l.kind, system, 5)})`;
-  return `${l.name} ${by}`;
+  const by = shortfallText(l, system);
+  if (by === null) return `${l.name} (${writeValue(l.value, l.kind, system)}, not ${l.limit})`;
+  return `${l.name} ${by} (${writeValue(l.value, l.kind, system, 5)} against ${l.relation} ${writeValue(l.limit, l.kind, system, 5)})`;
+}
+
+/** The smallest-margin cell of a table row ("static_stress +3.43%", "clash +0.250 mm"), '-' without one. */
+export function smallestMarginText(l: (Omit<CheckLine, 'name'> & { name: string }) | null, system: UnitSystem): string {
+  return l ? `${l.name} ${writeLineMargin(l, system)}` : '-';
 }
 
 export function checkTable(v: Verdict, system: UnitSystem): string {
@@ -151,7 +160,7 @@ export function checkTable(v: Verdict, system: UnitSystem): string {
 
 export function verdictSummary(v: Verdict, system: UnitSystem): string {
   if (v.pass)
-    return `Result: all ${v.lines.length} checks pass${v.limiting ? `; the smallest margin is ${v.limiting.name} at ${writeMargin(v.limiting.margin)}${v.limiting.unitMargin ? ` (${writeLineMargin(v.limiting, system)})` : ''}` : ''}.`;
+    return `Result: all ${v.lines.length} checks pass${v.limiting ? `; the smallest margin is ${v.limiting.name} at ${writeLineMargin(v.limiting, system)}` : ''}.`;
   return `Result: FAILS ${v.failing.length} of ${v.lines.length} checks: ${v.failing.map((l) => failureText(l, system)).join('; ')}.`;
 }
 

@@ -5,7 +5,7 @@
 // record, the columns of its shape, its wording and its cautions.
 import { bandText, type WorkingBand } from '../check/band.js';
 import type { GivenLine } from '../check/extension.js';
-import { bandRecord, checkLineRecord, failureText, writeMargin } from '../check/report.js';
+import { bandRecord, checkLineRecord, failureText, smallestMarginText } from '../check/report.js';
 import { cautionText, cautionsOf, type CautionKind } from '../report/cautions.js';
 import { toCsv } from '../report/csv.js';
 import { htmlTable } from '../report/html/page.js';
@@ -163,7 +163,8 @@ type AnyView = StockView<StockVerdict, StockRowResult, StockRunOf<StockVerdict, 
 type AnyRun = StockRunOf<StockVerdict, StockRowResult>;
 
 const limitingRecord = (v: StockVerdict) => (v.limiting ? { name: v.limiting.name, margin: v.limiting.margin } : null);
-const smallestMargin = (v: StockVerdict) => (v.limiting ? `${v.limiting.name} ${writeMargin(v.limiting.margin)}` : '-');
+// In the check's own unit where it has one (clash: mm of coil clearance), as the check command writes it.
+const smallestMargin = (v: StockVerdict, system: UnitSystem) => smallestMarginText(v.limiting, system);
 
 export function rowRecord(view: AnyView, r: StockRowResult): Record<string, unknown> {
   const v = r.verdict;
@@ -281,7 +282,7 @@ export function stockGrid(view: AnyView, rows: StockRowResult[], system: UnitSys
       f.fatigueSafety === null ? '-' : sig(f.fatigueSafety, 3),
       sig(mass.fromCore(f.mass), 3),
       r.row.price !== undefined ? sig(r.row.price, 4) : '-',
-      smallestMargin(r.verdict),
+      smallestMargin(r.verdict, system),
     ];
   });
   return { header, cells };
@@ -308,7 +309,7 @@ export function compareRows(view: AnyView, run: AnyRun, system: UnitSystem): str
       formatQuantity(f.rate, 'rate', system),
       sig(f.staticSafety, 3),
       f.fatigueSafety === null ? '-' : sig(f.fatigueSafety, 3),
-      smallestMargin(v),
+      smallestMargin(v, system),
     ];
   };
   return [

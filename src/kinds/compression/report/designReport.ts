@@ -15,6 +15,8 @@ import { table } from '../../../report/table.js';
 import { fieldGrid, fieldRecord } from '../../../report/fields.js';
 import { COMPRESSION_JSON_FIELDS, COMPRESSION_TABLE_FIELDS, TABLE_NOTE } from '../fields.js';
 import type { CandidateYield } from '../tolerance/springYield.js';
+import { figureOf, numericLine, spareOf } from '../../../check/judge.js';
+import { shortfallText } from '../../../check/report.js';
 
 /** One candidate as JSON (SI), rendered from the compression fields registry; with its yield at the
  * tolerances where the run was confirmed. */
@@ -207,7 +209,7 @@ function infeasibleRecord(run: DesignRun): Record<string, unknown> {
   return {
     nearest_misses: run.result.nearestMisses.map((m) => {
       const c = candidateAt(run.problem, m.x, m.f);
-      return { ...candidateRecord(c), violation: m.violation, failing_checks: failing(c) };
+      return { ...candidateRecord(c), violation: m.violation, failing_checks: failing(c), failing_spare: failingSpare(c, run.req) };
     }),
     relax: a.single.map(entry),
     relax_pair: a.pair ? a.pair.map(entry) : null,
@@ -227,6 +229,17 @@ function failing(c: Candidate): Record<string, number> {
     if (c.checks[i] > 1e-9) out[name] = c.checks[i];
   });
   return out;
+}
+
+/** A miss's failing checks as the check command judges them (src/check/judge.ts): the figure, the
+ * limit and so the shortfall in the check's own unit (clash: mm of coil clearance, not a share). */
+function failingLines(c: Candidate, req: Requirements) {
+  return Object.entries(failing(c)).map(([name, g]) => numericLine(name, '', g, figureOf(name as CheckName, c.analysis, req, null)));
+}
+
+/** Per failing check, its margin in its own unit (SI; negative: short by so much), as `spare` in the check JSON. */
+function failingSpare(c: Candidate, req: Requirements): Record<string, number | null> {
+  return Object.fromEntries(failingLines(c, req).map((l) => [l.name, spareOf(l)]));
 }
 
 /** The ranked-candidate columns, shared by the terminal table and the HTML report: rendered from the
@@ -343,8 +356,8 @@ export function infeasibleText(run: DesignRun, system: UnitSystem): string {
     out.push('Nearest misses (least total violation) and the checks they fail:');
     out.push(candidateTable(misses, system));
     misses.forEach((c, i) => {
-      const f = Object.entries(failing(c))
-        .map(([k, v]) => `${k} by ${sig(v * 100, 3)}%`)
+      const f = failingLines(c, run.req)
+        .map((l) => `${l.name} ${shortfallText(l, system) ?? `by ${sig(l.g * 100, 3)}%`}`)
         .join(', ');
       out.push(`  #${i + 1} fails: ${f}`);
     });
