@@ -59,6 +59,9 @@ export interface DesignResult extends SearchCounts {
   /** The cautions of the spring's kind, in the words the text output ends with (general ones first). */
   cautions: string[];
   requirements: Record<string, unknown>;
+  /** What the requirements mean for the checks, as the notes on stderr say it (compression springs:
+   * cycles with no operating_length is no load cycle, so no fatigue check). */
+  notes?: string[];
   /** Present with `timing: true` only (it makes the output differ from run to run). */
   search_ms?: number;
   /** Best first; empty when no spring meets every requirement (then `infeasible` says why). */

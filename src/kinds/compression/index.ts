@@ -1,7 +1,7 @@
 // Helical compression springs as one SpringKind: what `design`, `analyze` and the library API call
 // when a document says `kind: compression` or says no kind at all.
 import { analyzeSpring, type SpringAnalysis } from './analysis.js';
-import { STATIC_SERVICE_CYCLES } from '../../model/fatigue.js';
+import { serviceNotes } from '../../check/service.js';
 import { readRequirements, searchSize, type Requirements } from './requirements.js';
 import { readSpringCase, type SpringCase } from './springFile.js';
 import { analysisJson, analysisText } from './report/analysisReport.js';
@@ -76,10 +76,9 @@ export const compression: CompressionKind = {
       return { text, notes };
     },
     listed: (run) => run.candidates.length,
-    requirementNotes: (req) =>
-      req.cycles !== undefined && req.cycles < STATIC_SERVICE_CYCLES
-        ? [`cycles ${req.cycles} is below ${STATIC_SERVICE_CYCLES.toExponential(0).replace('+', '')}: judged as static service (no fatigue check)`]
-        : [],
+    // The same notes as `check` gives (src/check/service.ts): a life below fatigue service, or a life
+    // with one working length (no load cycle), each drops the fatigue check, and says so.
+    requirementNotes: (req) => serviceNotes(req),
   },
   cautions: [],
 };

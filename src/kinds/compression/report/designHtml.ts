@@ -19,6 +19,7 @@ import { COMPRESSION_FIELDS, TABLE_NOTE } from '../fields.js';
 import { surgeEndsLabel } from '../../../model/surge.js';
 import { strengthBasisSummary } from '../../../input/material.js';
 import { esc } from '../../../report/html/svg.js';
+import { serviceNotes } from '../../../check/service.js';
 
 export interface SweepSummary {
   name: string;
@@ -111,6 +112,8 @@ export function designHtml(run: DesignRun, system: UnitSystem, frontier: Frontie
   const sections: string[] = [];
   sections.push('<h2>Requirements</h2>');
   sections.push(htmlTable(['requirement', 'value'], requirementRows(req, system), { cls: 'kv' }));
+  const notes = serviceNotes(req);
+  if (notes.length) sections.push(`<p class="note warn">${notes.map((n) => `Note: ${esc(n)}`).join('<br>')}</p>`);
   const r = run.result;
   const counts = [
     ['strategy', r.strategy],

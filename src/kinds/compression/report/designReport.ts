@@ -17,6 +17,7 @@ import { COMPRESSION_JSON_FIELDS, COMPRESSION_TABLE_FIELDS, TABLE_NOTE } from '.
 import type { CandidateYield } from '../tolerance/springYield.js';
 import { figureOf, numericLine, spareOf } from '../../../check/judge.js';
 import { shortfallText } from '../../../check/report.js';
+import { serviceNotes } from '../../../check/service.js';
 
 /** One candidate as JSON (SI), rendered from the compression fields registry; with its yield at the
  * tolerances where the run was confirmed. */
@@ -80,6 +81,8 @@ export function designJson(run: DesignRun, showTiming = false): Record<string, u
   return {
     units: SI_UNITS,
     requirements: requirementsRecord(run.req),
+    // What the requirements mean for the checks (a life with no stroke is no fatigue check), as on stderr.
+    notes: serviceNotes(run.req),
     ...countsRecord(run, showTiming),
     candidates: run.candidates.map((c, i) => candidateRecord(c, run.yields?.[i])),
     ...(run.refused?.length ? { refused_by_monte_carlo: run.refused.map((r) => candidateRecord(r.candidate, r.yield)) } : {}),
