@@ -26,7 +26,7 @@ import { table } from '../report/table.js';
 import { formatQuantity, quantityWriter, sig } from '../units/format.js';
 import type { UnitSystem } from '../units/systems.js';
 import { bandText, workingBand, type WorkingBand } from './band.js';
-import { serviceNotes } from './service.js';
+import { serviceNotes } from '../input/serviceNotes.js';
 import { numericLine, type CheckLine } from './judge.js';
 import { bandRecord, checkLineRecord, failureText, writeMargin, writeValue } from './report.js';
 

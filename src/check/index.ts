@@ -13,7 +13,7 @@ import { judge, makeJudge, type Verdict } from './judge.js';
 import { checkJson, checkText } from './report.js';
 import { kindOf } from '../kinds/index.js';
 import { InputError } from '../units/parse.js';
-import { serviceNotes } from './service.js';
+import { serviceNotes } from '../input/serviceNotes.js';
 import { checkExtensionDocuments, extensionCheckJson, extensionCheckText, type ExtensionCheckOutcome } from './extension.js';
 import type { UnitSystem } from '../units/systems.js';
 

@@ -6,10 +6,10 @@
 import type { Requirements } from '../kinds/compression/requirements.js';
 import { analyzeSpring, type ServiceConditions, type SpringAnalysis } from '../kinds/compression/analysis.js';
 import { springServiceConditions } from '../kinds/compression/problem.js';
-import { CHECK, CHECKS, CHECK_LABELS, activeChecks, checkAnalysis, figuresUnder, forceBand, staticLimit, type CheckName } from '../kinds/compression/verify.js';
+import { CHECK, CHECKS, CHECK_LABELS, activeChecks, checkAnalysis, figuresUnder, type CheckName } from '../kinds/compression/verify.js';
 import type { EndType } from '../kinds/compression/geometry.js';
-import type { Kind } from '../units/kinds.js';
-import { sig } from '../units/format.js';
+import type { CheckFigure, ValueKind } from '../report/checkFigure.js';
+import { checkFigure } from '../kinds/compression/checkFigures.js';
 import { springYieldFigures, yieldShortfall } from '../kinds/compression/tolerance/confirm.js';
 import type { WorkingBand } from './band.js';
 import { givenService, type GivenSpring } from './given.js';
@@ -26,16 +26,17 @@ export const GIVEN_CHECK_LABELS = {
 export type GivenCheckName = keyof typeof GIVEN_CHECK_LABELS;
 export type AnyCheckName = CheckName | GivenCheckName;
 
-/** How a value is written: a quantity kind, a plain number, a percentage, or words. */
-export type ValueKind = Kind | 'number' | 'percent' | 'text';
+// A check's figure, its spare and how far it misses are defined below the kinds (src/report/checkFigure.ts)
+// so a kind's own reports read them too; the figures of the compression checks are checkFigures.ts's.
+export { spareOf, type CheckFigure, type ValueKind } from '../report/checkFigure.js';
 
 export interface CheckLine {
   name: AnyCheckName;
   label: string;
   /** The spring's figure and the requirement's limit, SI (text for the categorical checks). */
-  value: number | string | null;
-  limit: number | string | null;
-  relation: '<=' | '>=' | '<' | 'in';
+  value: CheckFigure['value'];
+  limit: CheckFigure['limit'];
+  relation: CheckFigure['relation'];
   kind: ValueKind;
   /** Normalised check value, g <= 0 passes (as src/kinds/compression/verify.ts defines it); NaN: not computable. */
   g: number;
@@ -49,9 +50,6 @@ export interface CheckLine {
    * for checks whose normalised value is not a share of the limit (clash, buckling). */
   unitMargin?: boolean;
 }
-
-/** The spring's figure against its limit, as a check does. */
-export type CheckFigure = Pick<CheckLine, 'value' | 'limit' | 'relation' | 'kind'> & { note?: string; unitMargin?: boolean };
 
 /** One numeric check line from its normalised value g (g <= 0 passes; NaN: not computable): the one
  * place both kinds' judges build their lines, so margin and verdict are read the same way. */
@@ -69,12 +67,6 @@ export function numericLine<N extends string>(name: N, label: string, g: number,
     pass: g <= PASS_TOLERANCE,
     ...(fig.unitMargin ? { unitMargin: true } : {}),
   };
-}
-
-/** The distance from the figure to its limit in the figure's own unit, positive inside; null when either is missing. */
-export function spareOf(l: Pick<CheckLine, 'value' | 'limit' | 'relation'>): number | null {
-  if (typeof l.value !== 'number' || typeof l.limit !== 'number') return null;
-  return l.relation === '>=' ? l.value - l.limit : l.limit - l.value;
 }
 
 /** A working length at which a given compression spring is loose: beyond its free length nothing
@@ -128,95 +120,6 @@ export function makeJudge(req: Requirements, band: WorkingBand, endsStated: bool
   };
 }
 
-type Figure = CheckFigure;
-
-/** The figure and limit behind each design check, for people; the verdict itself is checkAnalysis's.
- * Also read by design's nearest-miss lines, so a miss reads in the unit the check command shows. */
-export function figureOf(name: CheckName, a: SpringAnalysis, req: Requirements, madeYield: number | null): Figure {
-  const g = a.geometry;
-  switch (name) {
-    case 'index_min':
-      return { value: g.springIndex, limit: req.index[0], relation: '>=', kind: 'number' };
-    case 'index_max':
-      return { value: g.springIndex, limit: req.index[1], relation: '<=', kind: 'number' };
-    case 'outer_diameter':
-      return { value: g.outerDiameter, limit: req.maxOuterDiameter ?? null, relation: '<=', kind: 'length' };
-    case 'inner_diameter':
-      return { value: g.innerDiameter, limit: req.minInnerDiameter ?? null, relation: '>=', kind: 'length' };
-    case 'free_length':
-      return { value: g.freeLength, limit: req.maxFreeLength ?? null, relation: '<=', kind: 'length' };
-    case 'solid_length':
-      return { value: g.solidLength, limit: req.maxSolidLength ?? null, relation: '<=', kind: 'length' };
-    case 'clash': {
-      // In mm at the shortest working length: the coil clearance left to solid against the clearance the
-      // clash allowance asks for (that share of the deflection there); the same test as the force overrun.
-      const Lmin = a.clash.shortestLength;
-      const overrun = Number.isFinite(a.clash.overrun) ? `${sig(a.clash.overrun * 100, 3)}% force overrun to solid` : 'no force there';
-      return {
-        value: Lmin - g.solidLength,
-        limit: req.clashAllowance * (g.freeLength - Lmin),
-        relation: '>=',
-        kind: 'length',
-        unitMargin: true,
-        note: `coil clearance to solid at the ${req.operatingLength !== undefined ? 'operating' : 'working'} length against ${sig(req.clashAllowance * 100, 3)}% of the deflection there (${overrun}, asked ${sig(req.clashAllowance * 100, 3)}%)`,
-      };
-    }
-    case 'coil_gaps':
-      return { value: a.clash.gapSum, limit: a.clash.minGapSum, relation: '>=', kind: 'length', note: 'sum of coil gaps at the shortest length (EN 13906-1)' };
-    case 'outer_diameter_at_solid':
-      return { value: a.solid.outerDiameter, limit: req.maxOuterDiameter ?? null, relation: '<=', kind: 'length' };
-    case 'static_stress': {
-      const { limit, factor } = staticLimit(req, a.material.allowableStress);
-      const tau = a.points.reduce((m, p) => Math.max(m, p.stress), -Infinity);
-      return {
-        value: tau,
-        limit: limit / factor,
-        relation: '<=',
-        kind: 'stress',
-        note: factor !== 1 ? `allowable / static safety factor ${factor}` : "the requirement's allowable_stress",
-      };
-    }
-    case 'solid_stress':
-      return { value: a.solid.stress, limit: staticLimit(req, a.material.allowableStress).limit, relation: '<=', kind: 'stress' };
-    case 'fatigue':
-      return { value: a.fatigue ? a.fatigue.safetyFactor : null, limit: req.safety.fatigue, relation: '>=', kind: 'number', note: 'fatigue safety factor' };
-    case 'buckling':
-      return a.buckling.absolutelyStable
-        ? {
-            value: a.buckling.maxDeflection,
-            limit: null,
-            relation: '<',
-            kind: 'length',
-            unitMargin: true,
-            note: `largest deflection; absolutely stable at ${req.seating} seating (no deflection buckles it)`,
-          }
-        : {
-            value: a.buckling.maxDeflection,
-            limit: a.buckling.criticalDeflection,
-            relation: '<',
-            kind: 'length',
-            unitMargin: true,
-            note: `largest deflection against the critical deflection at ${req.seating} seating`,
-          };
-    case 'surge':
-      return { value: a.surge.relevant, limit: req.forcingFrequency ? req.safety.surge * req.forcingFrequency : null, relation: '>=', kind: 'frequency' };
-    case 'operating_force_min':
-      return { value: a.points[a.points.length - 1].force, limit: req.operatingForce! * (1 - forceBand(req)), relation: '>=', kind: 'force' };
-    case 'operating_force_max':
-      return { value: a.points[a.points.length - 1].force, limit: req.operatingForce! * (1 + forceBand(req)), relation: '<=', kind: 'force' };
-    case 'temperature':
-      return { value: req.temperature ?? null, limit: a.material.maxTemperature, relation: '<=', kind: 'temperature' };
-    case 'yield':
-      return {
-        value: madeYield,
-        limit: req.minYield ?? null,
-        relation: '>=',
-        kind: 'percent',
-        note: `share of made springs that pass every check: seeded Monte Carlo at EN 15800 grade ${req.tolerance.grade}${Object.keys(req.tolerance.overrides).length ? ' and the given tolerances' : ''}, accepted within its standard error`,
-      };
-  }
-}
-
 const passes = (g: number) => g <= PASS_TOLERANCE;
 
 class JudgedSpring implements Verdict {
@@ -257,7 +160,7 @@ class JudgedSpring implements Verdict {
     const n = CHECKS.length;
     const F1 = analysis.points[0].force;
     const lines: CheckLine[] = [];
-    const numeric = (name: AnyCheckName, label: string, gv: number, fig: Figure): CheckLine => numericLine(name, label, gv, fig);
+    const numeric = (name: AnyCheckName, label: string, gv: number, fig: CheckFigure): CheckLine => numericLine(name, label, gv, fig);
     const looseAt = (at: LoosePoint['at']) => this.loose.some((p) => p.at === at);
     lines.push(
       numeric('working_force_min', looseAt('working') ? LOOSE_LABEL : GIVEN_CHECK_LABELS.working_force_min, g[n], {
@@ -271,7 +174,7 @@ class JudgedSpring implements Verdict {
     CHECKS.forEach((name, i) => {
       if (!j.active[i]) return;
       const label = name === 'operating_force_min' && looseAt('operating') ? LOOSE_LABEL : CHECK_LABELS[name];
-      lines.push(numeric(name, label, g[CHECK[name]], figureOf(name, analysis, req, this.madeYield)));
+      lines.push(numeric(name, label, g[CHECK[name]], checkFigure(name, analysis, req, this.madeYield)));
     });
     const id = this.spring.choice.material.id;
     lines.push({

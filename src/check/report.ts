@@ -10,6 +10,7 @@ import type { UnitSystem } from '../units/systems.js';
 import { bandText, type WorkingBand } from './band.js';
 import { givenService } from './given.js';
 import { spareOf, type CheckLine, type ValueKind, type Verdict } from './judge.js';
+import { shortfallText } from '../report/checkFigure.js';
 
 /** The spring itself and its main figures, SI. */
 export function givenSpringRecord(v: Verdict): Record<string, unknown> {
@@ -118,14 +119,6 @@ export function writeLineMargin(l: Omit<CheckLine, 'name'>, system: UnitSystem):
   if (!l.unitMargin) return writeMargin(l.margin);
   const spare = spareOf(l);
   return spare === null ? '' : `${spare >= 0 ? '+' : '-'}${writeValue(Math.abs(spare), l.kind, system)}`;
-}
-
-/** How far a failing line misses, as every output writes it: "by 0.0500 mm" in the check's own unit
- * (clash, buckling), else "by 2.5%" of the limit; null for a categorical line. */
-export function shortfallText(l: Omit<CheckLine, 'name'>, system: UnitSystem): string | null {
-  const spare = l.unitMargin ? spareOf(l) : null;
-  if (spare !== null) return `by ${writeValue(-spare, l.kind, system)}`;
-  return l.margin === null ? null : `by ${sig(-l.margin * 100, 3)}%`;
 }
 
 /** "outer_diameter by 2.5% (16.4 mm, limit 16 mm)" */

@@ -1,7 +1,7 @@
 // Helical compression springs as one SpringKind: what `design`, `analyze` and the library API call
 // when a document says `kind: compression` or says no kind at all.
 import { analyzeSpring, type SpringAnalysis } from './analysis.js';
-import { serviceNotes } from '../../check/service.js';
+import { serviceNotes } from '../../input/serviceNotes.js';
 import { readRequirements, searchSize, type Requirements } from './requirements.js';
 import { readSpringCase, type SpringCase } from './springFile.js';
 import { analysisJson, analysisText } from './report/analysisReport.js';
@@ -76,7 +76,7 @@ export const compression: CompressionKind = {
       return { text, notes };
     },
     listed: (run) => run.candidates.length,
-    // The same notes as `check` gives (src/check/service.ts): a life below fatigue service, or a life
+    // The same notes as `check` gives (src/input/serviceNotes.ts): a life below fatigue service, or a life
     // with one working length (no load cycle), each drops the fatigue check, and says so.
     requirementNotes: (req) => serviceNotes(req),
   },

@@ -19,7 +19,7 @@ import { COMPRESSION_FIELDS, TABLE_NOTE } from '../fields.js';
 import { surgeEndsLabel } from '../../../model/surge.js';
 import { strengthBasisSummary } from '../../../input/material.js';
 import { esc } from '../../../report/html/svg.js';
-import { serviceNotes } from '../../../check/service.js';
+import { serviceNotes } from '../../../input/serviceNotes.js';
 
 export interface SweepSummary {
   name: string;

@@ -15,9 +15,9 @@ import { table } from '../../../report/table.js';
 import { fieldGrid, fieldRecord } from '../../../report/fields.js';
 import { COMPRESSION_JSON_FIELDS, COMPRESSION_TABLE_FIELDS, TABLE_NOTE } from '../fields.js';
 import type { CandidateYield } from '../tolerance/springYield.js';
-import { figureOf, numericLine, spareOf } from '../../../check/judge.js';
-import { shortfallText } from '../../../check/report.js';
-import { serviceNotes } from '../../../check/service.js';
+import { shortfallText, spareOf } from '../../../report/checkFigure.js';
+import { serviceNotes } from '../../../input/serviceNotes.js';
+import { checkFigure } from '../checkFigures.js';
 
 /** One candidate as JSON (SI), rendered from the compression fields registry; with its yield at the
  * tolerances where the run was confirmed. */
@@ -237,7 +237,7 @@ function failing(c: Candidate): Record<string, number> {
 /** A miss's failing checks as the check command judges them (src/check/judge.ts): the figure, the
  * limit and so the shortfall in the check's own unit (clash: mm of coil clearance, not a share). */
 function failingLines(c: Candidate, req: Requirements) {
-  return Object.entries(failing(c)).map(([name, g]) => numericLine(name, '', g, figureOf(name as CheckName, c.analysis, req, null)));
+  return Object.entries(failing(c)).map(([name, g]) => ({ name, g, margin: -g, ...checkFigure(name as CheckName, c.analysis, req, null) }));
 }
 
 /** Per failing check, its margin in its own unit (SI; negative: short by so much), as `spare` in the check JSON. */
