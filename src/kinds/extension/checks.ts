@@ -50,6 +50,41 @@ export const EXTENSION_CHECK_LABELS: Record<ExtensionCheck, string> = {
   temperature: "service temperature above the material's maximum",
 };
 
+// What eases each check: the changes the advice (relax.ts) tries for it, by the name it gives them (the
+// `--set` path, with the direction where a path moves both ways). The advice tries only the changes
+// named here for the checks that cut, and says which of those each change eases. A stronger material
+// or more room for the wire (a larger bore) eases the stresses; the working load itself is the job,
+// never advised away, nor is a safety factor.
+const stresses = ['operating_length', 'operating_force (lower)', 'envelope.max_outer_diameter', 'body_coils (higher)', 'material'] as const;
+const fatigue = ['cycles', 'operating_length', 'operating_force (lower)', 'envelope.max_outer_diameter', 'material'] as const;
+export const EXTENSION_RELAXED_BY: Record<ExtensionCheck, readonly string[]> = {
+  index_min: ['index (lower)'],
+  index_max: ['index (higher)'],
+  outer_diameter: ['envelope.max_outer_diameter'],
+  free_length: ['envelope.max_free_length', 'body_coils (lower)'],
+  working_extension: ['body_coils (lower)'],
+  // Fi = F1 - k (L1 - L0): a softer spring (more coils, a smaller rise to the operating force) needs more of it.
+  initial_tension_min: ['initial_tension_range', 'body_coils (higher)', 'operating_force (lower)', 'load_tolerance'],
+  initial_tension_max: ['body_coils (lower)', 'operating_force (higher)', 'load_tolerance'],
+  body_stress: stresses,
+  loop_bending_stress: stresses,
+  loop_torsion_stress: stresses,
+  body_fatigue: fatigue,
+  loop_bending_fatigue: fatigue,
+  loop_torsion_fatigue: fatigue,
+  operating_force_min: ['operating_force (lower)', 'load_tolerance', 'body_coils (lower)'],
+  operating_force_max: ['operating_force (higher)', 'load_tolerance', 'body_coils (higher)'],
+  extended_stress: ['envelope.max_extended_length', 'material'],
+  // Fewer coils raise the surge frequency (f ~ d / (D^2 Na)).
+  surge: ['body_coils (lower)', 'envelope.max_outer_diameter'],
+  temperature: ['material'],
+};
+
+/** The checks a change eases (a relaxedBy entry), in registry order. */
+export function extensionEasedBy(change: string): ExtensionCheck[] {
+  return EXTENSION_CHECKS.filter((c) => EXTENSION_RELAXED_BY[c].includes(change));
+}
+
 export function extensionFatigueApplies(req: ExtensionRequirements): boolean {
   return req.cycles !== undefined && req.cycles >= STATIC_SERVICE_CYCLES && req.operatingLength !== undefined;
 }

@@ -7,7 +7,7 @@ import { STATIC_SERVICE_CYCLES } from '../../model/fatigue.js';
 import type { CheckDefinition, ObjectiveDefinition, SpringKind, Trend } from '../kind.js';
 import { EXTENSION_CAUTIONS, analyzeExtension, type ExtensionAnalysis } from './analysis.js';
 import { loadExtensionCatalog } from './catalog.js';
-import { EXTENSION_CHECKS, EXTENSION_CHECK_LABELS, activeExtensionChecks, type ExtensionCheck } from './checks.js';
+import { EXTENSION_CHECKS, EXTENSION_CHECK_LABELS, EXTENSION_RELAXED_BY, activeExtensionChecks, type ExtensionCheck } from './checks.js';
 import { chooseExtensionStrategy, designExtension, extensionCandidateAt, type ExtensionCandidate, type ExtensionDesignRun } from './design.js';
 import { EXTENSION_FIELDS } from './fields.js';
 import { computeExtensionFrontier, extensionReportFrontier, type ExtensionFrontier, type ExtensionFrontierKey } from './frontier.js';
@@ -51,35 +51,13 @@ const CHECK_TRENDS: Record<ExtensionCheck, (r: ExtensionRequirements) => Trend> 
   temperature: () => inc,
 };
 
-const stressRelief = ['operating_length', 'operating_force', 'body_coils', 'material', 'safety.static'];
-const CHECK_RELAXED_BY: Record<ExtensionCheck, readonly string[]> = {
-  index_min: ['index'],
-  index_max: ['index'],
-  outer_diameter: ['envelope.max_outer_diameter'],
-  free_length: ['envelope.max_free_length', 'loop'],
-  working_extension: ['load', 'body_coils', 'loop'],
-  initial_tension_min: ['initial_tension_range', 'load'],
-  initial_tension_max: ['load', 'body_coils'],
-  body_stress: stressRelief,
-  loop_bending_stress: stressRelief,
-  loop_torsion_stress: [...stressRelief, 'bend_index'],
-  body_fatigue: ['cycles', 'operating_length', 'material', 'safety.fatigue'],
-  loop_bending_fatigue: ['cycles', 'operating_length', 'material', 'safety.fatigue'],
-  loop_torsion_fatigue: ['cycles', 'operating_length', 'bend_index', 'material', 'safety.fatigue'],
-  operating_force_min: ['operating_force', 'load_tolerance', 'body_coils'],
-  operating_force_max: ['operating_force', 'load_tolerance', 'body_coils'],
-  extended_stress: ['envelope.max_extended_length', 'material'],
-  surge: ['safety.surge'],
-  temperature: ['material'],
-};
-
 /** The checks of an extension spring, in the order of the search's g[] (checks.ts, XC). */
 export const EXTENSION_CHECK_DEFINITIONS: readonly CheckDefinition<ExtensionRequirements>[] = EXTENSION_CHECKS.map((name, i) => ({
   name,
   label: EXTENSION_CHECK_LABELS[name],
   trend: CHECK_TRENDS[name],
   active: (r: ExtensionRequirements) => activeExtensionChecks(r)[i],
-  relaxedBy: CHECK_RELAXED_BY[name],
+  relaxedBy: EXTENSION_RELAXED_BY[name],
 }));
 
 /** The objectives, in the order of the search's f[1..] (problem.ts, XO). */

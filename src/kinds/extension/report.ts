@@ -23,7 +23,7 @@ import { EXTENSION_CHECKS, EXTENSION_CHECK_LABELS, activeExtensionChecks } from 
 import { extensionCandidateAt, type ExtensionCandidate, type ExtensionDesignRun } from './design.js';
 import type { ExtensionRequirements } from './requirements.js';
 import { loadExtensionCatalog } from './catalog.js';
-import { extensionRelaxAdvice, type ExtensionRelaxAdvice, type ExtensionRelaxChange } from './relax.js';
+import { extensionLimitingChecks, extensionRelaxAdvice, type ExtensionRelaxAdvice, type ExtensionRelaxChange } from './relax.js';
 import type { ExtensionCase } from './springFile.js';
 import { bandFraction, fatigueSafety, staticSafety } from './figures.js';
 import { EXTENSION_TABLE_FIELDS, extensionCandidateRecord } from './fields.js';
@@ -335,12 +335,10 @@ export function extensionCountsRecord(run: ExtensionDesignRun): Record<string, u
   return { strategy: r.strategy, evaluated: r.evaluations, cells: r.cells, feasible: r.feasibleCells, pruned: r.prunedCells, cut_by: cut };
 }
 
-/** The check that cut the most combinations of an infeasible run, in a few words. */
+/** The check that limits an infeasible run (the one its nearest misses fail most: relax.ts), in a few words. */
 export function extensionLimitingText(run: ExtensionDesignRun): string {
-  let best: string | null = null;
-  for (const c of reportedExtensionChecks(run.req))
-    if ((run.result.cutBy[c] ?? 0) > 0 && (best === null || run.result.cutBy[c] > run.result.cutBy[best])) best = c;
-  return best ? `${best}: ${EXTENSION_CHECK_LABELS[best as keyof typeof EXTENSION_CHECK_LABELS]}` : 'no wire stock fits';
+  const best = extensionLimitingChecks(run)[0];
+  return best ? `${best}: ${EXTENSION_CHECK_LABELS[best]}` : 'no wire stock fits';
 }
 
 function failingChecks(c: ExtensionCandidate): Record<string, number> {
@@ -364,7 +362,7 @@ export function extensionAdviceFor(run: ExtensionDesignRun): ExtensionRelaxAdvic
   let a = adviceCache.get(run);
   if (!a) {
     const catalog = loadCatalog();
-    a = extensionRelaxAdvice(run.req, run.document, catalog, loadExtensionCatalog(catalog.materials));
+    a = extensionRelaxAdvice(run.req, run.document, catalog, loadExtensionCatalog(catalog.materials), extensionLimitingChecks(run));
     adviceCache.set(run, a);
   }
   return a;
