@@ -16,7 +16,7 @@ import { InputError } from '../../units/parse.js';
 import { workingBand, type BandSource } from '../../input/workingBand.js';
 import { EXTENSION_CAUTION, EXTENSION_SITES, extensionWarnings, siteWords, type ExtensionService, type ExtensionSite } from './analysis.js';
 import type { ExtensionCandidate } from './design.js';
-import { EXTENSION_FIELDS } from './fields.js';
+import { EXTENSION_FIELDS, EXTENSION_JSON_FIELDS } from './fields.js';
 import { closeWoundBody } from './html.js';
 import { bandFraction } from './figures.js';
 import type { ExtensionRequirements } from './requirements.js';
@@ -50,7 +50,7 @@ export function extensionSheetSpring(c: ExtensionCase, a: ExtensionAnalysis): Ex
 
 /** A figure of the fields registry, the one the tables, CSV and JSON show. */
 export function sheetFigure(c: ExtensionCandidate, name: string): number {
-  const f = EXTENSION_FIELDS.find((x) => x.name === name);
+  const f = EXTENSION_FIELDS.find((x) => x.name === name) ?? EXTENSION_JSON_FIELDS.find((x) => x.name === name);
   if (!f) throw new Error(`the extension specification sheet reads no field '${name}'; please report this`);
   const v = f.read(c);
   if (typeof v !== 'number' || !Number.isFinite(v)) throw new Error(`the extension field '${name}' has no figure for this spring; please report this`);
@@ -169,7 +169,7 @@ export function extensionSpecSheetHtml(input: ExtensionSheetInput): string {
     sheetRow('material', m.name, m.standard),
     sheetRow('wire diameter d', w.dia(d), `tolerance per ${m.standard}`),
     sheetRow('outer diameter OD', odText, diaTol ? `${grade}${bore}` : `tolerance ${TO_BE_AGREED} (outside DIN 2097: D 0.63-200 mm, index 4-20)${bore}`),
-    sheetRow('mean / inner diameter', `${w.dia(D)} / ${w.dia(g.innerDiameter)}`, `index C ${C.toFixed(2)}; references`),
+    sheetRow('mean / inner diameter', `${w.dia(D)} / ${w.dia(fig('inner_diameter'))}`, `index C ${C.toFixed(2)}; references`),
     sheetRow('free length L0', l0Text, `inside the loops; ${lenTol ? grade : `tolerance ${TO_BE_AGREED}`}; body (Nb + 1) d = ${w.free(g.bodyLength)}`),
     sheetRow('body coils Nb', String(Number(Nb.toFixed(2))), 'close-wound, either hand; reference if two forces are toleranced'),
     sheetRow('active coils Na', Na.toFixed(2), 'Nb + G/E (Shigley eq. 10-40); for information'),
@@ -179,11 +179,11 @@ export function extensionSpecSheetHtml(input: ExtensionSheetInput): string {
   const loops = [
     sheetRow('loop type', `${g.loop}, both ends`, LOOP_WORDS[g.loop] ?? ''),
     sheetRow('loop orientation', 'in line (0°)', posTol ? `± ${posTol.halfWidth}° (commercial practice)` : 'tolerance to be agreed'),
-    sheetRow('loop height h', w.free(g.loopHeight), 'inside; reference'),
-    sheetRow('loop radius r1', w.dia(g.loopRadius), `C1 ${g.loopIndex.toFixed(2)}, (K)A ${a.factors.loopBending.toFixed(3)}`),
+    sheetRow('loop height h', w.free(fig('loop_height')), 'inside; reference'),
+    sheetRow('loop radius r1', w.dia(fig('loop_radius')), `C1 ${g.loopIndex.toFixed(2)}, (K)A ${a.factors.loopBending.toFixed(3)}`),
     sheetRow(
       'bend radius r2',
-      w.dia(g.bendRadius),
+      w.dia(fig('bend_radius')),
       `C2 ${g.bendIndex.toFixed(2)}${g.bendIndex < 4 ? ' (below 4)' : ''}, (K)B ${a.factors.loopTorsion.toFixed(3)}`,
     ),
     sheetRow('opening, protrusion', 'to be agreed', 'with the spring maker'),
@@ -271,7 +271,7 @@ export function extensionSpecSheetHtml(input: ExtensionSheetInput): string {
     sheetRow(
       'temperature',
       service.temperature !== undefined ? formatQuantity(service.temperature, 'temperature', system) : 'not given',
-      `material maximum ${formatQuantity(a.material.figures.maxTemperature, 'temperature', system)}; natural frequency ${sig(a.surge.frequency, 4)} Hz${service.forcingFrequency ? ` (forcing ${sig(service.forcingFrequency, 4)} Hz)` : ''}`,
+      `material maximum ${formatQuantity(a.material.figures.maxTemperature, 'temperature', system)}; natural frequency ${sig(fig('natural_frequency'), 4)} Hz${service.forcingFrequency ? ` (forcing ${sig(service.forcingFrequency, 4)} Hz)` : ''}`,
     ),
   ];
 

@@ -160,6 +160,36 @@ describe('design --spec (extension)', () => {
   });
 });
 
+describe('design --spec across the requirement shapes (extension)', () => {
+  // Static service, one working length, half and extended loops, a stroke with no force: every sheet whole, its
+  // figures finite, its cautions there, its F2 line saying what applies.
+  const variants: { name: string; sets: string[]; expect: RegExp }[] = [
+    {
+      name: 'static, one working length',
+      sets: ['cycles=none', 'operating_length=none', 'operating_force=none', 'envelope.max_extended_length=none'],
+      expect: /operating force F2 none/,
+    },
+    { name: 'half loops', sets: ['loop=half'], expect: /loop type half, both ends height about 2\/3 ID/ },
+    { name: 'extended loops 12 mm', sets: ['loop=extended', 'loop_length=12', 'envelope.max_free_length=80'], expect: /loop height h 12\.0 mm/ },
+    { name: 'a stroke without a required force', sets: ['operating_force=none'], expect: /operating force F2 [\d.]+ N reference/ },
+  ];
+  for (const v of variants)
+    it(
+      v.name,
+      async () => {
+        const p = tempPath('xspec-variant.html');
+        const r = await cli('design', DEMO, ...v.sets.flatMap((x) => ['--set', x]), '--spec', p);
+        expect(r.code, r.stderr).toBe(0);
+        const html = readFileSync(p, 'utf8');
+        expectClean(html);
+        const text = textOf(html);
+        expect(text).toMatch(v.expect);
+        expectCautions(text);
+      },
+      60_000,
+    );
+});
+
 describe('analyze --spec (extension)', () => {
   it("writes the given spring's sheet, its figures those of analyze --json; force tolerances left to be agreed", async () => {
     const p = tempPath('xspec-analyze.html');
