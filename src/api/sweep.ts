@@ -9,6 +9,7 @@ import { kindOf } from '../kinds/index.js';
 import type { AnySpringKind, InUnits, KindRun } from '../kinds/kind.js';
 import { cautionsOf } from '../report/cautions.js';
 import { SI_UNITS, sanitize } from '../report/json.js';
+import { feasibleCompleteRecord } from '../report/feasibleCount.js';
 import type { StrategyChoice } from '../kinds/compression/design.js';
 import { InputError } from '../units/parse.js';
 import type { UnitSystem } from '../units/systems.js';
@@ -140,6 +141,8 @@ export function sweepResult(kind: AnySpringKind, path: readonly string[], rows: 
     rows: rows.map((r) => ({
       value: r.value,
       feasible: r.run.result.feasibleCells,
+      pruned: r.run.result.prunedCells,
+      ...feasibleCompleteRecord(r.run.result),
       best: r.best ? kind.report.candidateJson(r.best) : null,
       limiting_check: r.limiting,
     })),

@@ -45,8 +45,13 @@ export interface SearchCounts {
   strategy: string;
   evaluated: number;
   cells: number;
+  /** Feasible combinations among those evaluated: every feasible one when feasible_complete. */
   feasible: number;
+  /** Combinations skipped unevaluated: their lightest possible spring could not make the list. */
   pruned: number;
+  /** Whether `feasible` counts the whole space (a grid that skipped nothing); a genetic search or a
+   * pruned grid counts only what it evaluated, which can grow as a requirement tightens. */
+  feasible_complete: boolean;
   cut_by: Record<string, number>;
   lp_bound: number | null;
   lp_status: string;
@@ -102,7 +107,10 @@ export interface FrontierResult extends SearchCounts {
 /** One run of a sweep: the value of the varied requirement and the best spring at it. */
 export interface SweepRowRecord {
   value: number;
+  /** As SearchCounts: feasible among the combinations evaluated, skipped (pruned), and whether that is all. */
   feasible: number;
+  pruned: number;
+  feasible_complete: boolean;
   best: CandidateRecord | null;
   /** The check that cut most when nothing is feasible. */
   limiting_check: string | null;

@@ -5,6 +5,7 @@
 // Self-contained pages (src/report/html/page.ts): inline CSS and SVG, no scripts.
 import { CONVENTIONS, figure, htmlTable, page } from '../../report/html/page.js';
 import { generalCautions } from '../../report/cautions.js';
+import { feasibleCountLabel } from '../../report/feasibleCount.js';
 import { cloudPlot } from '../../report/html/plots.js';
 import { FRAME, axes, esc, polyline, r2, svgOpen } from '../../report/html/svg.js';
 import { formatQuantity, inUnit, quantityWriter, sig, unitSymbol } from '../../units/format.js';
@@ -316,7 +317,7 @@ export function extensionDesignHtml(run: ExtensionDesignRun, system: UnitSystem,
     ['strategy', r.strategy],
     ['combinations', String(r.cells)],
     ['candidate evaluations', String(r.evaluations)],
-    ['feasible combinations', String(r.feasibleCells)],
+    [feasibleCountLabel(r), String(r.feasibleCells)],
     ['pruned by the incumbent bound', String(r.prunedCells)],
     ...reportedExtensionChecks(req)
       .filter((c) => (r.cutBy[c] ?? 0) > 0)

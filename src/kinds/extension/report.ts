@@ -5,6 +5,7 @@ import { loadCatalog } from '../../catalogs/load.js';
 import { enduranceSourceLabel } from '../../model/fatigue.js';
 import { cautionText } from '../../report/cautions.js';
 import { SI_UNITS } from '../../report/json.js';
+import { feasibleCompleteRecord, feasibleCountText } from '../../report/feasibleCount.js';
 import { table } from '../../report/table.js';
 import { formatQuantity, quantityWriter, sig, unitSymbol } from '../../units/format.js';
 import type { UnitSystem } from '../../units/systems.js';
@@ -332,7 +333,15 @@ export function extensionCountsRecord(run: ExtensionDesignRun): Record<string, u
   const r = run.result;
   const cut: Record<string, number> = {};
   for (const c of reportedExtensionChecks(run.req)) cut[c] = r.cutBy[c] ?? 0;
-  return { strategy: r.strategy, evaluated: r.evaluations, cells: r.cells, feasible: r.feasibleCells, pruned: r.prunedCells, cut_by: cut };
+  return {
+    strategy: r.strategy,
+    evaluated: r.evaluations,
+    cells: r.cells,
+    feasible: r.feasibleCells,
+    pruned: r.prunedCells,
+    ...feasibleCompleteRecord(r),
+    cut_by: cut,
+  };
 }
 
 /** The check that limits an infeasible run (the one its nearest misses fail most: relax.ts), in a few words. */
@@ -446,7 +455,10 @@ export function extensionCountsText(run: ExtensionDesignRun, showTiming = false)
     `Searched ${r.cells} combinations of material, wire and body coil count (${run.problem.stock.length} wire stock items) with the ${r.strategy} strategy: ${r.evaluations} candidate evaluations${showTiming ? ` in ${sig(run.searchMs, 3)} ms` : ''}.`,
   );
   lines.push(
-    `Feasible combinations: ${r.feasibleCells}${r.prunedCells ? `; ${r.prunedCells} skipped because their lightest possible spring ${run.req.bestPerWire ? 'could not beat the best found for its wire' : `could not enter the top ${run.req.top}`}` : ''}.`,
+    feasibleCountText(
+      r,
+      `their lightest possible spring ${run.req.bestPerWire ? 'could not beat the best found for its wire' : `could not enter the top ${run.req.top}`}`,
+    ),
   );
   const cut = reportedExtensionChecks(run.req)
     .filter((c) => (r.cutBy[c] ?? 0) > 0)

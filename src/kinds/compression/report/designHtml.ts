@@ -15,6 +15,7 @@ import { cloudPlot, sweepPlot } from '../../../report/html/plots.js';
 import { fatiguePlot, forceLengthPlot, sideView } from './plots.js';
 import { candidateGrid, relaxLines, yieldNote } from './designReport.js';
 import { fieldNotes } from '../../../report/fields.js';
+import { feasibleCountLabel } from '../../../report/feasibleCount.js';
 import { COMPRESSION_FIELDS, TABLE_NOTE } from '../fields.js';
 import { surgeEndsLabel } from '../../../model/surge.js';
 import { strengthBasisSummary } from '../../../input/material.js';
@@ -119,7 +120,7 @@ export function designHtml(run: DesignRun, system: UnitSystem, frontier: Frontie
     ['strategy', r.strategy],
     ['combinations', String(r.cells)],
     ['candidate evaluations', String(r.evaluations)],
-    ['feasible combinations', String(r.feasibleCells)],
+    [feasibleCountLabel(r), String(r.feasibleCells)],
     ['pruned by the incumbent bound', String(r.prunedCells)],
     ...reportedChecks(req)
       .filter((c) => r.cutBy[c] > 0)

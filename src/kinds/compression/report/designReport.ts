@@ -10,6 +10,7 @@ import type { Kind } from '../../../units/kinds.js';
 import type { UnitSystem } from '../../../units/systems.js';
 import { cautionText } from '../../../report/cautions.js';
 import { SI_UNITS } from '../../../report/json.js';
+import { feasibleCompleteRecord, feasibleCountText } from '../../../report/feasibleCount.js';
 import { strengthBasisOf, strengthBasisSummary } from '../../../input/material.js';
 import { table } from '../../../report/table.js';
 import { fieldGrid, fieldRecord } from '../../../report/fields.js';
@@ -69,6 +70,7 @@ export function countsRecord(run: DesignRun, showTiming = false): Record<string,
     cells: run.result.cells,
     feasible: run.result.feasibleCells,
     pruned: run.result.prunedCells,
+    ...feasibleCompleteRecord(run.result),
     cut_by: cut,
     lp_bound: run.lp.value,
     lp_status: run.lp.status,
@@ -283,10 +285,7 @@ export function countsText(run: DesignRun, system: UnitSystem, showTiming = fals
   lines.push(
     `Searched ${r.cells} combinations of material, wire, ends and coil count (${run.problem.stock.length} wire stock items) with the ${r.strategy} strategy: ${r.evaluations} candidate evaluations${showTiming ? ` in ${sig(run.searchMs, 3)} ms` : ''}.`,
   );
-  const skipped = `could not enter the top ${run.req.top}`;
-  lines.push(
-    `Feasible combinations: ${r.feasibleCells}${r.prunedCells ? `; ${r.prunedCells} skipped because their lightest possible spring ${skipped}` : ''}.`,
-  );
+  lines.push(feasibleCountText(r, `their lightest possible spring could not enter the top ${run.req.top}`));
   const cut = reportedChecks(run.req)
     .filter((c) => r.cutBy[c] > 0)
     .map((c) => [c, String(r.cutBy[c]), CHECK_LABELS[c as CheckName]]);
