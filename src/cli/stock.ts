@@ -11,7 +11,7 @@ import { runStock, STOCK_RANK_KEYS, type StockRankKey } from '../stock/run.js';
 import { InputError, parseFraction, parseNumber } from '../units/parse.js';
 import type { UnitSystem } from '../units/systems.js';
 import type { StrategyChoice } from '../kinds/compression/design.js';
-import { EXIT, type Io } from './io.js';
+import { checkOutputPaths, EXIT, type Io } from './io.js';
 import { addOverrideOptions, rawWithOverrides, type CommonOptions } from './searchCommands.js';
 
 interface StockCliOptions extends CommonOptions {
@@ -42,6 +42,15 @@ function readTable(path: string): string {
 }
 
 export function stockCommand(reqFile: string, tableFile: string, opts: StockCliOptions, io: Io): number {
+  // Every output path is checked before any work: a refused --report must not leave --output written.
+  checkOutputPaths(
+    [
+      { option: '--output', path: opts.output },
+      { option: '--report', path: opts.report },
+    ],
+    !!opts.force,
+    [reqFile, tableFile],
+  );
   // --rank and --top are the stock listing's (price is a stock-only key); the rest override the requirements.
   const requirements = rawWithOverrides(reqFile, { ...opts, rank: undefined, top: undefined });
   const run = runStock(requirements, readTable(tableFile), loadCatalog(), {

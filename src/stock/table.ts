@@ -4,7 +4,7 @@
 import { parse } from 'csv-parse/sync';
 import type { Catalog } from '../catalogs/types.js';
 import { END_TYPES, type EndType } from '../kinds/compression/geometry.js';
-import { InputError, parseNumber, parseQuantity } from '../units/parse.js';
+import { checkRange, InputError, parseNumber, parseQuantity } from '../units/parse.js';
 import type { UnitSystem } from '../units/systems.js';
 import { COIL_FIELDS, DIAMETER_FIELDS, STOCK_FIELDS, readHeader, type Column, type Layout, type StockField } from './columns.js';
 import { resolveMaterial, type MaterialMap } from './materialMap.js';
@@ -105,13 +105,12 @@ export function quantityCell(
   kind: 'length' | 'force' | 'rate' = STOCK_FIELDS[col.field as StockField] as 'length' | 'force' | 'rate',
 ): number {
   let v: number;
-  if (PLAIN_NUMBER.test(cell)) v = Number(cell) * col.toSI;
-  else {
-    try {
-      v = parseQuantity(cell, kind, system, col.name);
-    } catch (e) {
-      throw new RowError(col.name, (e as InputError).expected + `, got ${JSON.stringify(cell)}`);
-    }
+  try {
+    // A plain number is in the column's unit; either way the value passes the limits a spring file's does.
+    if (PLAIN_NUMBER.test(cell)) checkRange((v = Number(cell) * col.toSI), kind, system, col.name, cell);
+    else v = parseQuantity(cell, kind, system, col.name);
+  } catch (e) {
+    throw new RowError(col.name, (e as InputError).expected + `, got ${JSON.stringify(cell)}`);
   }
   if (!(v > 0)) throw new RowError(col.name, `a positive ${kind === 'rate' ? 'spring rate' : kind}, got ${JSON.stringify(cell)}`);
   return v;

@@ -73,7 +73,11 @@ export const SANE_RANGE: Record<Kind, { min: number; max: number; floor?: number
   volume: { min: 1e-9, max: 1e15 }, // 1 um^3 .. 1 m^3
 };
 
-function checkRange(value: number, kind: Kind, system: UnitSystem, field: string, raw: unknown): void {
+/** Refuse a core value outside SANE_RANGE for its kind (an infinite one too), naming the field: what
+ * every quantity read from a file passes, also where the number was read some other way (a stock
+ * table's plain cells, in the column's unit). */
+export function checkRange(value: number, kind: Kind, system: UnitSystem, field: string, raw: unknown): void {
+  if (Number.isNaN(value)) throw new InputError(field, KIND_WORDS[kind], raw);
   const r = SANE_RANGE[kind];
   const u = displayUnit(system, kind);
   const show = (core: number) => `${Number(u.fromCore(core).toPrecision(6))} ${u.symbol}`;
