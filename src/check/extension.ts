@@ -144,10 +144,13 @@ function figureOf(name: ExtensionCheck, a: ExtensionAnalysis, req: ExtensionRequ
     case 'extended_stress':
       return {
         value: req.maxExtendedLength ?? null,
-        limit: a.safeExtension.length,
+        // Past the allowable already at the free length, no stretch is within it: the free length is the limit.
+        limit: a.safeExtension.pastAtFreeLength ? a.geometry.freeLength : a.safeExtension.length,
         relation: '<=',
         kind: 'length',
-        note: 'the largest extended length against the longest stretch within every allowable',
+        note: a.safeExtension.pastAtFreeLength
+          ? 'the spring is past its allowable at its free length (its initial tension alone): no stretch is within every allowable'
+          : 'the largest extended length against the longest stretch within every allowable',
       };
     case 'surge':
       return { value: a.surge.frequency, limit: req.forcingFrequency ? req.safety.surge * req.forcingFrequency : null, relation: '>=', kind: 'frequency' };

@@ -45,9 +45,15 @@ export function unitSymbol(kind: Kind, system: UnitSystem): string {
 }
 
 /** Writers for warnings in the chosen system. */
-export function quantityWriter(system: UnitSystem): { stress(v: number): string; length(v: number): string; temperature(v: number): string } {
+export function quantityWriter(system: UnitSystem): {
+  stress(v: number): string;
+  length(v: number): string;
+  temperature(v: number): string;
+  force(v: number): string;
+} {
   return {
     stress: (v) => formatQuantity(v, 'stress', system),
+    force: (v) => formatQuantity(v, 'force', system),
     length: (v) => formatQuantity(v, 'length', system),
     temperature: (v) => formatQuantity(v, 'temperature', system),
   };

@@ -118,8 +118,10 @@ export interface ExtensionAnalysis {
   points: ExtensionPoint[];
   /** Static safety factors at the longest evaluated length: allowable over stress, each site alone. */
   staticSafety: { body: number; loopBending: number; loopTorsion: number; governing: ExtensionSite };
-  /** The largest force (and length) before the first site reaches its allowable. */
-  safeExtension: { force: number; length: number; governing: ExtensionSite };
+  /** The largest force (and length) before the first site reaches its allowable. `pastAtFreeLength`:
+   * the initial tension alone is above that force, so the spring is past its allowable before it is
+   * pulled at all, and `length` (below the free length) is no length it can have. */
+  safeExtension: { force: number; length: number; governing: ExtensionSite; pastAtFreeLength: boolean };
   fatigue: ExtensionFatigue | null;
   surge: { frequency: number };
   warnings: Warning[];
@@ -269,7 +271,7 @@ export function analyzeExtension(g: ExtensionGeometry, m: ExtensionMaterial, s: 
     material: { ...m, ultimateShear: ssu },
     points,
     staticSafety: { ...staticValues, governing: governingOf(staticValues, true) },
-    safeExtension: { force: safeForce, length: L0 + (safeForce - Fi) / k, governing: safeSite },
+    safeExtension: { force: safeForce, length: L0 + (safeForce - Fi) / k, governing: safeSite, pastAtFreeLength: safeForce < Fi },
     fatigue,
     surge: { frequency: surge },
     warnings: [],
@@ -294,9 +296,15 @@ export function siteWords(site: ExtensionSite): string {
 export interface WarningWriter {
   stress(v: number): string;
   temperature(v: number): string;
+  force(v: number): string;
+  length(v: number): string;
 }
 const n = (v: number, p = 4) => Number(v.toPrecision(p)).toString();
-const SI_WRITER: WarningWriter = { stress: (v) => `${n(v)} MPa`, temperature: (v) => `${n(v)} degC` };
+const SI_WRITER: WarningWriter = { stress: (v) => `${n(v)} MPa`, temperature: (v) => `${n(v)} degC`, force: (v) => `${n(v)} N`, length: (v) => `${n(v)} mm` };
+
+/** A loop radius more than this share off the coil's mean radius D/2 is warned about (common practice: a
+ * loop formed from the end coil keeps about the coil's radius). */
+export const LOOP_RADIUS_NEAR = 0.1;
 
 /** The rules of thumb a designer checks by habit; each broken one becomes a warning (SI figures unless
  * a writer for another unit system is given). */
@@ -307,6 +315,12 @@ export function extensionWarnings(a: ExtensionAnalysis, s: ExtensionService, q: 
     w.push({
       code: 'index',
       message: `spring index ${n(g.springIndex)} is outside 4 to 12 (common practice): ${g.springIndex < 4 ? 'hard to coil, high curvature stress' : 'prone to tangling, poor tolerances'}`,
+    });
+  const half = g.meanDiameter / 2;
+  if (Math.abs(g.loopRadius - half) > LOOP_RADIUS_NEAR * half)
+    w.push({
+      code: 'loop-radius',
+      message: `loop radius r1 ${q.length(g.loopRadius)} is ${n((100 * Math.abs(g.loopRadius - half)) / half, 2)}% off the coil's mean radius D/2 ${q.length(half)}: the loop stresses take D/2 as the loop's moment arm (Shigley eq. 10-34), true of a loop formed from the end coil; ask the maker how the loop is formed`,
     });
   if (g.bendIndex < 4)
     w.push({
@@ -323,6 +337,12 @@ export function extensionWarnings(a: ExtensionAnalysis, s: ExtensionService, q: 
     w.push({
       code: 'initial-tension',
       message: `initial-tension stress ${q.stress(it.stress)} is below the preferred range ${q.stress(it.band.low)} to ${q.stress(it.band.high)} for index ${n(g.springIndex)}: hard to hold to tolerance`,
+    });
+  const safe = a.safeExtension;
+  if (safe.pastAtFreeLength)
+    w.push({
+      code: 'overstress',
+      message: `the initial tension ${q.force(a.initialTension.force)} is above the ${q.force(safe.force)} that ${SITE_WORDS[safe.governing]} allows: the spring is past its allowable at its free length and will take a set or break when made`,
     });
   for (const site of EXTENSION_SITES) {
     const v = a.staticSafety[site];

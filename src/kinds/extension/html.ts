@@ -14,7 +14,7 @@ import { EXTENSION_CAUTION, extensionWarnings, siteWords, stressPerNewton, type 
 import type { ExtensionCandidate, ExtensionDesignRun } from './design.js';
 import { EXTENSION_FRONTIER_KEYS, frontierValue, type ExtensionFrontier } from './frontier.js';
 import { EXTENSION_CHECK_LABELS } from './checks.js';
-import { bandFraction, extensionCandidateGrid, extensionRelaxLines, reportedExtensionChecks } from './report.js';
+import { bandFraction, extensionCandidateGrid, extensionRelaxLines, reportedExtensionChecks, safeExtensionText } from './report.js';
 import type { ExtensionRequirements } from './requirements.js';
 import type { ExtensionCase } from './springFile.js';
 import type { SweepSummary } from '../kind.js';
@@ -74,7 +74,8 @@ export function extensionForcePlot(a: ExtensionAnalysis, system: UnitSystem): st
   const longest = Math.max(g.freeLength, ...a.points.map((p) => p.length));
   const safe = a.safeExtension;
   // Show the set point when it is not far beyond the working range (else the points crowd at the left).
-  const showSafe = Number.isFinite(safe.length) && safe.length <= longest + 1.5 * Math.max(longest - g.freeLength, g.freeLength * 0.1);
+  const showSafe =
+    !safe.pastAtFreeLength && Number.isFinite(safe.length) && safe.length <= longest + 1.5 * Math.max(longest - g.freeLength, g.freeLength * 0.1);
   const end = Math.max(longest, showSafe ? safe.length : longest) + 0.08 * Math.max(longest - g.freeLength, g.freeLength * 0.1);
   const fAt = (len: number) => Fi + a.rate * (len - g.freeLength);
   const ax = axes(
@@ -247,10 +248,7 @@ export function extensionSpringSections(a: ExtensionAnalysis, service: Extension
       'initial tension',
       `${formatQuantity(it.force, 'force', system)}, stress ${S(it.stress)}; preferred ${S(it.band.low)} to ${S(it.band.high)}: ${it.position}${Number.isFinite(frac) ? ` (${sig(frac * 100, 3)}% up the range)` : ''}`,
     ],
-    [
-      'largest pull before a set',
-      `${formatQuantity(a.safeExtension.force, 'force', system)} at ${L(a.safeExtension.length)} (${siteWords(a.safeExtension.governing)})`,
-    ],
+    ['largest pull before a set', safeExtensionText(a, (v) => formatQuantity(v, 'force', system), L)],
     ['natural frequency', `${sig(a.surge.frequency, 4)} Hz`],
     ['mass', formatQuantity(g.mass, 'mass', system)],
   ];

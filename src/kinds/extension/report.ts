@@ -80,6 +80,15 @@ function materialJson(c: { materialChoice: ExtensionCase['materialChoice'] }, a:
   };
 }
 
+/** The largest pull before a set, in words: the force and its length, or, when the initial tension alone
+ * is past the allowable, that the spring is past it at its free length (no length below it is one). */
+export function safeExtensionText(a: ExtensionAnalysis, force: (v: number) => string, length: (v: number) => string): string {
+  const s = a.safeExtension;
+  if (s.pastAtFreeLength)
+    return `none: the spring is already past its allowable at its free length (initial tension ${force(a.initialTension.force)} above the ${force(s.force)} that ${siteWords(s.governing)} allows)`;
+  return `${force(s.force)} at ${length(s.length)} (${siteWords(s.governing)} reaches its allowable first)`;
+}
+
 /** The whole analysis as JSON (SI). */
 export function extensionAnalysisRecord(a: ExtensionAnalysis, correction: string): Record<string, unknown> {
   const g = a.geometry;
@@ -141,7 +150,13 @@ export function extensionAnalysisRecord(a: ExtensionAnalysis, correction: string
           }
         : null,
     },
-    safe_extension: { force: a.safeExtension.force, length: a.safeExtension.length, governing: SITE_KEYS[a.safeExtension.governing] },
+    // Past the allowable at the free length, there is no length to give (it would lie below the free length).
+    safe_extension: {
+      force: a.safeExtension.force,
+      length: a.safeExtension.pastAtFreeLength ? null : a.safeExtension.length,
+      governing: SITE_KEYS[a.safeExtension.governing],
+      past_allowable_at_free_length: a.safeExtension.pastAtFreeLength,
+    },
     fatigue: fa && {
       life: fa.life,
       cycles: cyclesValue(fa.cycles),
@@ -243,9 +258,7 @@ export function extensionAnalysisLines(a: ExtensionAnalysis, service: ExtensionS
       `  static safety factors at the longest length: body ${sig(s.body, 3)}, loop bending ${sig(s.loopBending, 3)}, loop torsion ${sig(s.loopTorsion, 3)} (${siteWords(s.governing)} governs)`,
     );
   }
-  out.push(
-    `  largest pull before a set: ${F(a.safeExtension.force)} at ${L(a.safeExtension.length)} (${siteWords(a.safeExtension.governing)} reaches its allowable first)`,
-  );
+  out.push(`  largest pull before a set: ${safeExtensionText(a, F, L)}`);
   out.push('');
   const fa = a.fatigue;
   if (fa) {

@@ -16,6 +16,11 @@ import { bodyLength, extensionActiveCoils, loopHeight } from './geometry.js';
 import { extensionMaterial, type ExtensionMaterial } from './material.js';
 import { springRate } from '../../model/rate.js';
 
+/** Loop radii a spring file may give, as multiples of the coil's mean radius D/2: beyond them the loop is
+ * not one formed from the end coil (see readExtensionSpring); within them, one more than LOOP_RADIUS_NEAR
+ * from D/2 is warned about (analysis.ts). */
+export const LOOP_RADIUS_RANGE = [0.5, 2] as const;
+
 export interface ExtensionCase {
   kind: 'extension';
   system: UnitSystem;
@@ -71,9 +76,25 @@ export function readExtensionSpring(raw: unknown, catalog: Catalog, ext: Extensi
   }
   const r1 = f.quantity('loop_radius', 'length', { positive: true }) ?? D / 2;
   if (!(2 * r1 > d)) throw new InputError('loop_radius', `a loop radius above half the wire diameter (${q(d / 2)})`, f.get('loop_radius'));
+  // The loop types the model knows are formed from the end coil: the loop stresses take the body's D/2 as
+  // the loop's moment arm (Shigley eq. 10-34), so a loop of another size is not one of them.
+  const [r1Low, r1High] = LOOP_RADIUS_RANGE.map((x) => (x * D) / 2);
+  if (r1 < r1Low || r1 > r1High)
+    throw new InputError(
+      'loop_radius',
+      `a loop radius near the coil's mean radius D/2 = ${q(D / 2)} (${q(r1Low)} to ${q(r1High)}): ${rule.id} loops are formed from the end coil, and their stresses take D/2 as the loop's moment arm (Shigley eq. 10-34)`,
+      f.get('loop_radius'),
+    );
   const r2given = f.quantity('bend_radius', 'length', { positive: true });
   const r2 = r2given ?? (ext.bendIndex.value * d) / 2;
   if (!(2 * r2 > d)) throw new InputError('bend_radius', `a bend radius above half the wire diameter (${q(d / 2)})`, f.get('bend_radius'));
+  // The bend from the body into the loop is part of the loop: it cannot be wider than the loop itself.
+  if (r2given !== undefined && r2 > r1 * (1 + 1e-9))
+    throw new InputError(
+      'bend_radius',
+      `a bend radius at most the loop radius r1 = ${q(r1)} (the bend into the loop is part of the loop)`,
+      f.get('bend_radius'),
+    );
 
   const criterion = (f.choice('fatigue_criterion', FATIGUE_CRITERIA) ?? 'gerber') as FatigueCriterion;
   const correction = (f.choice('stress_factor', ['bergstrasser', 'wahl'] as const) ?? 'bergstrasser') as StressCorrection;
