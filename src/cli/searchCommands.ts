@@ -155,6 +155,21 @@ function readPick(opts: DesignOptions): number {
   return n;
 }
 
+/** The list settings every kind's requirements carry. */
+interface ListSettings {
+  top?: number;
+  bestPerWire?: boolean;
+}
+
+/** Why the list of springs --pick chooses from ends where it does, and what lists more: --top only
+ * when the list is full; a list of the best of each wire (per wire) ends with its wires, and --variants
+ * lists every feasible spring; else every spring the search kept is listed. */
+function pickRange(req: ListSettings, listed: number): string {
+  if (req.top !== undefined && listed >= req.top) return 'the springs listed; --top lists more';
+  if (req.bestPerWire) return 'the springs listed, the best of each material, wire size and end type; --variants lists every feasible spring';
+  return 'every feasible spring the search found is listed';
+}
+
 async function designCommand(file: string, opts: DesignOptions, io: Io): Promise<number> {
   checkOutputPaths(
     [
@@ -180,7 +195,7 @@ async function designCommand(file: string, opts: DesignOptions, io: Io): Promise
   // Everything that could refuse an output is settled before the first file is written.
   const listed = kind.report.listed ? kind.report.listed(run) : 0;
   if ((opts.spec || opts.springFile) && listed > 0 && pick > listed) {
-    throw new InputError('--pick', `a rank from 1 to ${listed} (the springs listed; --top lists more)`, String(pick));
+    throw new InputError('--pick', `a rank from 1 to ${listed} (${pickRange(req as ListSettings, listed)})`, String(pick));
   }
   if (opts.springFile && !kind.report.springFile)
     throw new InputError('--spring-file', `a kind that exports spring files (the ${kind.label} export is not built yet)`);
