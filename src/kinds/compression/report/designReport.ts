@@ -116,9 +116,19 @@ const UNIT_KIND: Record<string, Kind> = {
 
 const pct = (r: number) => `${sig(r * 100, 3)}%`;
 
+/** The `--set` argument in the user's units, with its unit whatever the file's system: a length or force
+ * in mm or N (the exact value), or under --units us in in or lbf, rounded outward as the figure beside
+ * it is (so it admits a spring too). */
+function setArgument(c: RelaxChange, kind: Kind | undefined, system: UnitSystem): string {
+  if (!kind || typeof c.to !== 'number' || typeof c.from !== 'number') return c.set;
+  const shown = system === 'si' ? c.to : Number(sig(outward(inUnit(c.to, kind, system), c.to > c.from ? 1 : -1, 4), 4));
+  return `${c.path}=${shown} ${unitSymbol(kind, system)}`;
+}
+
 /** One change in words, in the user's units, with the exact `--set` that applies it. */
 export function describeChange(c: RelaxChange, system: UnitSystem): string {
   const kind = UNIT_KIND[c.path];
+  c = { ...c, set: setArgument(c, kind, system) };
   const arg = /[\s{}[\]]/.test(c.set) ? `"${c.set}"` : c.set;
   // Under min_yield every change was confirmed by the Monte Carlo: say what the best spring then reaches.
   const reach =
