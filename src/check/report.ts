@@ -7,6 +7,7 @@ import { SI_UNITS } from '../report/json.js';
 import { table } from '../report/table.js';
 import { formatQuantity, quantityWriter, sig } from '../units/format.js';
 import type { UnitSystem } from '../units/systems.js';
+import { PASS_TOLERANCE } from './judge.js';
 import { bandText, type WorkingBand } from './band.js';
 import { givenService } from './given.js';
 import { spareOf, type CheckLine, type ValueKind, type Verdict } from './judge.js';
@@ -110,6 +111,9 @@ export function writeValue(x: number | string | null, kind: ValueKind, system: U
 
 export function writeMargin(m: number | null): string {
   if (m === null) return '';
+  // A spring at its limit, within the tolerance a check passes by, reads 0%, not +1.63e-8% or a
+  // negative share beside "pass"; past it, three figures (never fewer than 0.0001%: no exponent).
+  if (Math.abs(m) <= PASS_TOLERANCE) return '0%';
   return `${m >= 0 ? '+' : ''}${sig(m * 100, 3)}%`;
 }
 

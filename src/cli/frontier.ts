@@ -6,11 +6,13 @@ import { Option } from 'commander';
 import { frontierAxis, frontierOfPlan, frontierResult } from '../api/frontier.js';
 import { planDesign } from '../api/design.js';
 import { KINDS, kindOf } from '../kinds/index.js';
-import { frontierAxes } from '../kinds/kind.js';
+import { frontierAxes, objectiveValue, type AnySpringKind, type KindCandidate, type ObjectiveDefinition } from '../kinds/kind.js';
 import { fieldColumns, fieldRow, presentFields } from '../report/fields.js';
 import { toJson } from '../report/json.js';
 import { writeOutputFile } from '../report/writeFile.js';
+import { inUnit, sig, unitSymbol } from '../units/format.js';
 import { InputError } from '../units/parse.js';
+import type { UnitSystem } from '../units/systems.js';
 import { checkOutputPaths, EXIT, type Io } from './io.js';
 import { addCommon, cautionsOf, planOf, progress, requirementNotes, tracedOverrides, type CommonOptions } from './searchCommands.js';
 
@@ -21,6 +23,31 @@ interface FrontierOptions extends CommonOptions {
   x: string;
   y: string;
   output?: string;
+}
+
+/**
+ * The frontier's axes as CSV columns where no field gives them already (safety_factor, the lowest of
+ * static and fatigue; wire_volume): the CSV shows both figures the frontier was drawn on, as the
+ * objective the search ranked by, in the chosen units.
+ */
+function axisColumns(
+  kind: AnySpringKind,
+  fields: readonly { name: string }[],
+  axes: readonly string[],
+  system: UnitSystem,
+): { head: string; value: (c: KindCandidate) => number | null }[] {
+  return axes
+    .filter((key) => !fields.some((f) => f.name === key || f.name.startsWith(`${key}_`)))
+    .map((key) => {
+      const unit = kind.objectives.find((o: ObjectiveDefinition) => o.key === key)?.unit ?? null;
+      return {
+        head: unit ? `${key}_${unitSymbol(unit, system)}` : key,
+        value: (c) => {
+          const v = objectiveValue(kind.objectives, c, key);
+          return Number.isFinite(v) ? Number(sig(unit ? inUnit(v, unit, system) : v, 6)) : null;
+        },
+      };
+    });
 }
 
 async function frontierCommand(file: string, opts: FrontierOptions, io: Io): Promise<number> {
@@ -58,9 +85,10 @@ async function frontierCommand(file: string, opts: FrontierOptions, io: Io): Pro
     io.stdout(toJson(frontierResult(kind, fr)) + '\n');
   } else {
     const fields = presentFields(kind.fields, fr.front);
+    const axes = axisColumns(kind, fields, [x, y], system);
     const text = (await csv()).toCsv(
-      ['rank', ...fieldColumns(fields, system)],
-      fr.front.map((c, i) => [i + 1, ...fieldRow(fields, c, system)]),
+      ['rank', ...fieldColumns(fields, system), ...axes.map((a) => a.head)],
+      fr.front.map((c, i) => [i + 1, ...fieldRow(fields, c, system), ...axes.map((a) => a.value(c as KindCandidate))]),
     );
     if (opts.output) {
       writeOutputFile(opts.output, text, !!opts.force, '--output');

@@ -62,7 +62,7 @@ export function buildProgram(io: Io, setCode: (c: number) => void): Command {
     .command('materials')
     .description('list the catalog materials and wire-size series, with their sources')
     .option('--json', 'machine-readable output (SI units)')
-    .addOption(unitsOption())
+    .addOption(unitsOption('si'))
     .action((opts) => setCode(materialsCommand(opts, io)));
 
   registerSearchCommands(program, io, setCode);

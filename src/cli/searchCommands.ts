@@ -58,7 +58,7 @@ export function addCommon(cmd: Command, ranked = true): Command {
   const hide = (o: Option) => (ranked ? o : o.hideHelp());
   addOverrideOptions(cmd)
     .addOption(new Option('--strategy <name>', 'search strategy').choices(['auto', 'grid', 'genetic']).default('auto'))
-    .option('--seed <n>', 'random seed for the genetic strategy (overrides the file)')
+    .option('--seed <n>', "random seed of the genetic strategy and of the yield's Monte Carlo (overrides the file)")
     .addOption(hide(new Option('--top <n>', 'how many candidates to list (overrides the file)')))
     .addOption(hide(new Option('--rank <key>', 'ranking objective (overrides the file)').choices([...RANK_KEYS])))
     .addOption(
@@ -238,7 +238,7 @@ export function registerSearchCommands(program: Command, io: Io, setCode: (c: nu
     .option('--spec <file.html>', "also write the chosen spring's one-page specification sheet (as drawn, at the tolerance grade, 2 unless given)")
     .option(
       '--spring-file <file.yaml>',
-      "also write the chosen spring as a spring file (as `analyze` and `check` read it), at drawing precision, with the requirement's service conditions",
+      "also write the chosen spring as a spring file (as `analyze` and `check` read it), at drawing precision, with the requirement's service conditions (compression springs; not yet for kind: extension)",
     )
     .option('--pick <n>', 'the rank of the spring --spec and --spring-file write (default 1, the best)')
     .option('--force', 'overwrite existing output files')

@@ -15,7 +15,12 @@ export function readInputFile(path: string): unknown {
   try {
     const st = statSync(path);
     if (st.isDirectory()) throw new InputError(path, 'a YAML or JSON file (this is a folder)');
-    if (st.size > MAX_INPUT_BYTES) throw new InputError(path, `an input file of at most 1 MiB (this one is ${(st.size / (1 << 20)).toFixed(1)} MiB)`);
+    // To two decimals, never down to the limit itself: 1.05 MiB, not 1.0; a byte over reads 1.01 MiB.
+    if (st.size > MAX_INPUT_BYTES)
+      throw new InputError(
+        path,
+        `an input file of at most 1 MiB (this one is ${Math.max(1.01, Math.round((st.size / (1 << 20)) * 100) / 100).toFixed(2)} MiB)`,
+      );
     bytes = readFileSync(path);
   } catch (e) {
     if (e instanceof InputError) throw e;
@@ -83,7 +88,8 @@ export function parseText(text: string, label: string): unknown {
       if (offset !== undefined) where = ` at line ${lineOfOffset(text, offset)}`;
       throw new InputError(`${label}${where}`, 'well-formed JSON', firstLine((e as Error).message));
     }
-    if (jsonValue === null || typeof jsonValue !== 'object') throw new InputError(label, 'a mapping of fields ({ "key": value })', jsonValue);
+    if (jsonValue === null || typeof jsonValue !== 'object' || Array.isArray(jsonValue))
+      throw new InputError(label, 'a mapping of fields ({ "key": value }) at the top of the file', jsonValue);
   }
   const lines = new LineCounter();
   let doc: Document;
@@ -121,6 +127,8 @@ export function parseText(text: string, label: string): unknown {
     throw new InputError(label, 'well-formed YAML or JSON', firstLine(msg));
   }
   if (value === null || value === undefined) throw new InputError(label, 'a mapping of fields (key: value); the file is empty');
+  // A list or a lone value is no input file: said here, where the file's name is known.
+  if (typeof value !== 'object' || Array.isArray(value)) throw new InputError(label, 'a mapping of fields (key: value) at the top of the file', value);
   return value;
 }
 

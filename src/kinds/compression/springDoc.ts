@@ -3,8 +3,9 @@
 import type { Requirements } from './requirements.js';
 import type { Candidate } from './design.js';
 import { drawnSpring, type DrawnSpring } from './tolerance/precision.js';
-import { INCH_MM } from '../../units/kinds.js';
-import type { UnitSystem } from '../../units/systems.js';
+import { INCH_MM, type Kind } from '../../units/kinds.js';
+import { displayUnit, type UnitSystem } from '../../units/systems.js';
+import { isRecord } from '../../units/fields.js';
 import { stringify as stringifyYaml } from 'yaml';
 import { CAUTIONS } from '../../report/cautions.js';
 
@@ -58,10 +59,33 @@ export function springDocument(c: Candidate, req: Requirements): Record<string, 
   return doc;
 }
 
-/** A length as a drawing writes it: mm as a number in SI, "0.620 in" in US (binary noise cleaned). */
-function drawnLength(mm: number, system: UnitSystem): number | string {
-  return system === 'us' ? `${Number((mm / INCH_MM).toPrecision(10))} in` : Number(mm.toPrecision(10));
+/** A length as a drawing writes it, a plain number in the file's system (binary noise cleaned): mm in SI,
+ * inches in US. */
+function drawnLength(mm: number, system: UnitSystem): number {
+  return Number((system === 'us' ? mm / INCH_MM : mm).toPrecision(10));
 }
+
+/** The wire as listed: in a US file a wire listed in inches is a plain number of inches; one listed in
+ * mm (a metric size: 1.6 mm is 0.06299... in) keeps its mm, spelt out. */
+function drawnWire(mm: number, system: UnitSystem): number | string {
+  if (system !== 'us') return drawnLength(mm, system);
+  const inches = Number((mm / INCH_MM).toPrecision(4));
+  return Math.abs(inches * INCH_MM - mm) <= 1e-9 * mm ? inches : `${Number(mm.toPrecision(10))} mm`;
+}
+
+/** A quantity of the service conditions or the material, plain in the file's system (10 figures). */
+function inFileUnits(core: number, kind: Kind, system: UnitSystem): number {
+  return Number(displayUnit(system, kind).fromCore(core).toPrecision(10));
+}
+
+// The material's overrides by their unit.
+const OVERRIDE_KINDS: Record<string, Kind> = {
+  shear_modulus: 'stress',
+  elastic_modulus: 'stress',
+  tensile_strength: 'stress',
+  allowable_stress: 'stress',
+  density: 'density',
+};
 
 export interface ExportedSpring {
   /** The spring file (plain data, as `analyze` and `check` read it). */
@@ -82,8 +106,18 @@ export function drawnSpringDocument(c: Candidate, req: Requirements): ExportedSp
   const base = springDocument({ ...c, geometry: g }, req);
   const doc: Record<string, unknown> = {};
   for (const [k, v] of Object.entries(base)) {
-    if (k === 'mean_diameter') doc[drawn.controlled === 'outer' ? 'outer_diameter' : 'inner_diameter'] = drawnLength(drawn.controlledValue, req.system);
-    else if (k === 'wire_diameter' || k === 'free_length') doc[k] = drawnLength(v as number, req.system);
+    // In the requirement's unit system throughout: a US file is drawn in inches (units: us), its service
+    // conditions and material overrides in US units, as a US user wrote the requirement.
+    if (k === 'units') doc[k] = req.system;
+    else if (k === 'mean_diameter') doc[drawn.controlled === 'outer' ? 'outer_diameter' : 'inner_diameter'] = drawnLength(drawn.controlledValue, req.system);
+    else if (k === 'wire_diameter') doc[k] = drawnWire(v as number, req.system);
+    else if (k === 'free_length') doc[k] = drawnLength(v as number, req.system);
+    else if (k === 'lengths') doc[k] = (v as number[]).map((L) => inFileUnits(L, 'length', req.system));
+    else if (k === 'temperature') doc[k] = inFileUnits(v as number, 'temperature', req.system);
+    else if (k === 'material' && isRecord(v))
+      doc[k] = Object.fromEntries(
+        Object.entries(v).map(([m, x]) => [m, typeof x === 'number' && OVERRIDE_KINDS[m] ? inFileUnits(x, OVERRIDE_KINDS[m], req.system) : x]),
+      );
     else doc[k] = v;
   }
   return { doc, drawn };
