@@ -18,6 +18,7 @@ import { readableUnit, type UnitSystem } from '../units/systems.js';
 import type { StockRankKey } from './shared.js';
 import { failedByLines } from './shared.js';
 import type { BadRow } from './table.js';
+import { feasibleCountComplete } from '../report/feasibleCount.js';
 
 /** A verdict of any kind: its check lines, the failing ones and the one with the smallest margin. */
 export interface StockVerdict {
@@ -45,19 +46,29 @@ export interface StockComparison<V extends StockVerdict> {
   /** The strategy the design ran and its count of feasible combinations. */
   strategy: string;
   feasible: number;
+  /** Whether `feasible` counts every feasible combination (src/report/feasibleCount.ts). */
+  feasibleComplete: boolean;
   custom: V | null;
   /** The working force design meets exactly (a stock row meets it within its band). */
   workingForce: number;
 }
 
 /** The comparison from a design run: its best candidate, judged as a stock row is by `judge`. */
-export function comparison<Run extends { result: { strategy: string; feasibleCells: number }; candidates: C[] }, C, V extends StockVerdict>(
-  run: Run,
-  judge: (candidate: C) => V,
-  workingForce: number,
-): StockComparison<V> & { run: Run; candidate: C | null } {
+export function comparison<
+  Run extends { result: { strategy: 'grid' | 'genetic'; feasibleCells: number; prunedCells: number }; candidates: C[] },
+  C,
+  V extends StockVerdict,
+>(run: Run, judge: (candidate: C) => V, workingForce: number): StockComparison<V> & { run: Run; candidate: C | null } {
   const candidate = run.candidates[0] ?? null;
-  return { run, candidate, strategy: run.result.strategy, feasible: run.result.feasibleCells, custom: candidate ? judge(candidate) : null, workingForce };
+  return {
+    run,
+    candidate,
+    strategy: run.result.strategy,
+    feasible: run.result.feasibleCells,
+    feasibleComplete: feasibleCountComplete(run.result),
+    custom: candidate ? judge(candidate) : null,
+    workingForce,
+  };
 }
 
 export interface StockRunOf<V extends StockVerdict, R extends StockRowResult<V>> {
@@ -196,6 +207,7 @@ function compareRecord(view: AnyView, run: AnyRun): Record<string, unknown> | nu
   return {
     design_strategy: c.strategy,
     design_feasible: c.feasible,
+    design_feasible_complete: c.feasibleComplete,
     best_custom: c.custom ? { ...view.springRecord(c.custom), limiting_check: limitingRecord(c.custom) } : null,
     best_stock: best
       ? {

@@ -57,6 +57,13 @@ describe('feasible counts under pruning', () => {
     expect((await cli('design', 'examples/washer-trigger.yaml')).stdout).toContain(`Feasible combinations: ${json.feasible}.`);
   });
 
+  it("stock --compare's design count says whether it is whole (pruned extension design: no; grouped compression grid: yes)", async () => {
+    const ext = JSON.parse((await cli('stock', 'examples/stock-extension-tray.yaml', 'examples/stock-extension-springs.csv', '--compare', '--json')).stdout);
+    expect(ext.compare).toMatchObject({ design_feasible_complete: false });
+    const comp = JSON.parse((await cli('stock', 'examples/stock-dispenser.yaml', 'examples/stock-springs.csv', '--compare', '--json')).stdout);
+    expect(comp.compare).toMatchObject({ design_feasible_complete: true });
+  });
+
   it('a genetic run counts only what it evaluated, and says so', async () => {
     const r = await cli('design', 'examples/washer-trigger.yaml', '--strategy', 'genetic', '--seed', '7');
     expect(r.stdout).toMatch(/Feasible among the combinations the genetic search evaluated: \d+/);
