@@ -168,6 +168,18 @@ describe('a compression sweep under min_yield', () => {
     expect(text.stderr).toContain('seeded Monte Carlo');
   });
 
+  it("where the Monte Carlo refuses the search's best spring (min_yield 0.9, an 18 mm bore), the row gives way to the next, design's first", () => {
+    const doc: Record<string, unknown> = { ...read(demo), min_yield: 0.9 };
+    const row = sweep(doc, { vary: { path: 'envelope.max_outer_diameter', values: [18] } }).rows[0];
+    const d = design({ ...doc, envelope: { ...(doc.envelope as object), max_outer_diameter: 18 } });
+    const refused = d.refused_by_monte_carlo as Record<string, unknown>[];
+    expect(refused.length).toBeGreaterThan(0);
+    const best = row.best as Record<string, unknown>;
+    expect(best.mean_diameter).toBe((d.candidates as Record<string, unknown>[])[0].mean_diameter);
+    expect(best.yield).toBe((d.candidates as Record<string, unknown>[])[0].yield);
+    expect(refused.map((r) => r.mean_diameter)).not.toContain(best.mean_diameter);
+  });
+
   it('without min_yield nothing is confirmed: no yield columns, no note', async () => {
     const text = await cli('sweep', demo, '--vary', 'envelope.max_outer_diameter=15:16:1');
     expect(text.stdout).not.toContain('yield');
