@@ -13,6 +13,7 @@ import { judge, makeJudge, type Judge, type Verdict } from '../check/judge.js';
 import { readRequirements, type Requirements } from '../kinds/compression/requirements.js';
 import { shortestLength } from '../kinds/compression/verify.js';
 import { runDesign, type Candidate, type DesignRun } from '../kinds/compression/design.js';
+import { confirmRun } from '../kinds/compression/tolerance/confirm.js';
 import { readMaterialMap } from './materialMap.js';
 import { RowError, readStockTable, type BadRow, type StockRow, type StockTable } from './table.js';
 import { runExtensionStock, type ExtensionStockRun } from './extension.js';
@@ -194,7 +195,9 @@ export function runCompressionStock(rawRequirements: unknown, input: string | Re
   const { passing, misses, failedBy } = settleRows(results, bad, label, o.misses);
   let compare: Comparison | null = null;
   if (o.compare) {
-    const run = runDesign(req, { strategy: o.strategy });
+    // As the design command runs it: under min_yield each listed spring confirmed by the Monte Carlo.
+    const searched = runDesign(req, { strategy: o.strategy });
+    const run = req.minYield !== undefined ? confirmRun(searched) : searched;
     compare = comparison(run, (c) => judge(givenCustom(c, req), j), req.workingForce);
   }
   return {

@@ -71,6 +71,17 @@ describe('the stock demo', () => {
     expect(t.stdout).toMatch(/best stock: PH-090-100-040/);
   });
 
+  it('--compare under min_yield shows the spring design lists: the first one the Monte Carlo confirms, passing the yield check', async () => {
+    // At grade 3 and 97% the search's lightest spring is refused by the Monte Carlo (design lists the next one).
+    const sets = ['--set', 'min_yield=0.97', '--set', 'tolerance_grade=3', '--set', 'top=3'];
+    const design = JSON.parse((await cli('design', REQ, '--json', ...sets)).stdout);
+    expect(design.refused_by_monte_carlo.some((r: { mass: number }) => r.mass < design.candidates[0].mass)).toBe(true);
+    const j = JSON.parse((await cli('stock', REQ, TABLE, '--compare', '--json', ...sets)).stdout);
+    for (const k of ['material', 'wire_diameter', 'mean_diameter', 'active_coils', 'free_length', 'mass'])
+      expect(j.compare.best_custom[k], k).toBe(design.candidates[0][k]);
+    expect(j.compare.best_custom.limiting_check.margin).toBeGreaterThanOrEqual(0);
+  });
+
   it('the library function returns exactly what --json prints', async () => {
     const r = await cli('stock', REQ, TABLE, '--json');
     const lib = stock(readInputFile(REQ), readFileSync(TABLE, 'utf8'), { label: TABLE });
