@@ -5,7 +5,7 @@ import type { Requirements } from '../kinds/compression/requirements.js';
 import { cautionText, cautionsOf } from '../report/cautions.js';
 import { SI_UNITS } from '../report/json.js';
 import { table } from '../report/table.js';
-import { formatQuantity, quantityWriter, sig } from '../units/format.js';
+import { formatQuantity, quantityWriter, sig, yieldPercent } from '../units/format.js';
 import type { UnitSystem } from '../units/systems.js';
 import { PASS_TOLERANCE } from './judge.js';
 import { bandText, type WorkingBand } from './band.js';
@@ -105,7 +105,7 @@ export function writeValue(x: number | string | null, kind: ValueKind, system: U
   if (x === null) return '-';
   if (typeof x === 'string') return x;
   if (kind === 'text' || kind === 'number') return sig(x, digits);
-  if (kind === 'percent') return `${sig(x * 100, digits - 1)}%`;
+  if (kind === 'percent') return yieldPercent(x); // as design and the spring file print a yield
   return formatQuantity(x, kind, system, digits);
 }
 

@@ -6,6 +6,8 @@ import { drawnSpring, type DrawnSpring } from './tolerance/precision.js';
 import { INCH_MM, type Kind } from '../../units/kinds.js';
 import { displayUnit, type UnitSystem } from '../../units/systems.js';
 import { isRecord } from '../../units/fields.js';
+import { designedSpring } from './tolerance/confirm.js';
+import { yieldPercent } from '../../units/format.js';
 import { stringify as stringifyYaml } from 'yaml';
 import { CAUTIONS } from '../../report/cautions.js';
 
@@ -97,11 +99,12 @@ export interface ExportedSpring {
 /**
  * The spring file of a reported spring at drawing precision (src/kinds/compression/tolerance/precision.ts): the wire as
  * listed, the controlled diameter (outer in a bore, inner over a rod) to 0.01 mm or 0.001 in, the free
- * length to 0.1 mm or 0.01 in, the coils to the coil step, with the requirement's service conditions.
+ * length to 0.1 mm or 0.01 in, the coils to the coil step, with the requirement's service conditions;
+ * of the drawings near the design, one that passes every check `check` applies when there is one.
  * Lengths of the spring are written in the requirement's unit system.
  */
 export function drawnSpringDocument(c: Candidate, req: Requirements): ExportedSpring {
-  const drawn = drawnSpring(c.geometry, c.item.figures, req);
+  const drawn = drawnSpring(designedSpring(c), req);
   const g = drawn.geometry;
   const base = springDocument({ ...c, geometry: g }, req);
   const doc: Record<string, unknown> = {};
@@ -135,6 +138,11 @@ export function springFileText(c: Candidate, req: Requirements, rank: number): {
     drawn.failing.length
       ? `As drawn it FAILS ${drawn.failing.join(', ')}: check it with \`coilfront check\` before use.`
       : `As drawn it passes every check of the requirements it was designed for (\`coilfront check\` this file against them).`,
+    ...(drawn.madeYield && req.minYield !== undefined
+      ? [
+          `Yield as drawn: ${yieldPercent(drawn.madeYield.yield)} of made springs pass (seeded Monte Carlo, seed ${req.seed}, ${drawn.madeYield.samples} springs; min_yield ${yieldPercent(req.minYield)}): the figure \`coilfront check\` prints for this file.`,
+        ]
+      : []),
     `Working force at the working length as drawn: ${Number(drawn.workingForce.toPrecision(5))} N (${Number((drawn.workingForceDeviation * 100).toPrecision(3))}% from the requirement).`,
     ...CAUTIONS,
   ];

@@ -92,9 +92,11 @@ describe('the exported spring file (property)', () => {
           a.points.forEach((p, k) =>
             expect(Math.abs(p.force - c.analysis.points[k].force)).toBeLessThanOrEqual(c.analysis.rate * step + 0.01 * c.analysis.points[k].force),
           );
-          // check on the drawn file names the same failing design checks as the re-check at drawing precision.
+          // check on the drawn file names the same failing checks as the re-check at drawing precision: the
+          // design checks, the working-force band and, under min_yield, the yield by the same figure.
           const drawnVerdict = checkDocuments(doc, raw, catalog).verdict;
-          expect(failingNames(drawnVerdict.failingNames.filter((n) => n !== 'yield'))).toEqual([...drawn.failing].sort());
+          expect([...drawnVerdict.failingNames].sort()).toEqual([...drawn.failing].sort());
+          if (req.minYield !== undefined) expect(drawnVerdict.lines.find((l) => l.name === 'yield')!.value).toBe(drawn.madeYield!.yield);
           // The reported spring itself (exact figures) passes every check, the yield included: design listed it.
           const exact = checkDocuments(springDocument(c, req), raw, catalog).verdict;
           expect(exact.failingNames).toEqual([]);
@@ -142,6 +144,24 @@ describe('design --spring-file and --pick', () => {
     const c = await cli('check', out, 'examples/washer-trigger.yaml');
     expect(c.code).toBe(0);
   });
+
+  it('under min_yield, design, the spring file and check judge the yield by one figure and one rule', async () => {
+    // The audit case: with min_yield 0.9 the demo's best spring sampled 89.9%; design listed it (within its
+    // standard error), the file said it passes every check, and check failed it on its yield.
+    const listed = await cli('design', 'examples/washer-trigger.yaml', '--set', 'min_yield=0.9', '--json');
+    for (const c of JSON.parse(listed.stdout).candidates) expect(c.yield).toBeGreaterThanOrEqual(0.9);
+    const text = await cli('design', 'examples/washer-trigger.yaml', '--set', 'min_yield=0.9');
+    expect(text.stdout).toMatch(/Refused: .* Monte Carlo gives 89\.9% .* below min_yield: it is left out \(its other coil counts: --variants\)/);
+    const out = join(dir, 'yield.yaml');
+    const r = await cli('design', 'examples/washer-trigger.yaml', '--set', 'min_yield=0.9', '--variants', '--spring-file', out);
+    expect(r.code).toBe(0);
+    const file = readFileSync(out, 'utf8');
+    expect(file).toMatch(/As drawn it passes every check/);
+    const figure = /Yield as drawn: (\d+\.\d)%/.exec(file)![1];
+    const c = await cli('check', out, 'examples/washer-trigger.yaml', '--set', 'min_yield=0.9');
+    expect(c.code).toBe(0);
+    expect(c.stdout).toMatch(new RegExp(`\\n  yield +${figure.replace('.', '\\.')}% +>= +90\\.0%.*pass`));
+  }, 60_000);
 
   it('refuses to overwrite without --force, and checks every output path before writing any', async () => {
     const existing = join(dir, 'taken.yaml');

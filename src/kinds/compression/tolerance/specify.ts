@@ -40,7 +40,7 @@ export function specifySpring(
   req: Requirements,
   opts: MonteCarloOptions = {},
 ): SpecifiedSpring {
-  const drawn = drawnSpring(spring.geometry, spring.figures, req);
+  const drawn = drawnSpring(spring, req);
   const y = springYield(catalog, request, { geometry: drawn.geometry, figures: spring.figures, material: spring.material }, req, opts);
   return {
     drawn,
