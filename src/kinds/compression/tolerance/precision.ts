@@ -79,14 +79,14 @@ export interface DrawnSpring {
 interface Drawing {
   geometry: SpringGeometry;
   controlledValue: number;
-  /** Steps of the controlled diameter from its exact value (for the order of preference). */
-  diameterOffset: number;
+  /** Order of preference of the controlled diameter: steps from its nearest rounding, then distance from its exact value. */
+  diameterOffset: [number, number];
   analysis: SpringAnalysis;
   checks: Float64Array;
   workingForce: number;
 }
 
-function drawing(geometry: SpringGeometry, controlledValue: number, diameterOffset: number, figures: MaterialFigures, req: Requirements): Drawing {
+function drawing(geometry: SpringGeometry, controlledValue: number, diameterOffset: [number, number], figures: MaterialFigures, req: Requirements): Drawing {
   const analysis = analyzeSpring(geometry, figures, springServiceConditions(req));
   return {
     geometry,
@@ -155,10 +155,15 @@ export function drawnSpring(
     const solved = roundToStep(req.workingLength + req.workingForce / rate, precision.freeLength);
     for (let j = -window.freeLengthSteps; j <= window.freeLengthSteps; j++) {
       const freeLength = roundToStep(solved + j * precision.freeLength, precision.freeLength);
-      drawings.push(drawing({ ...geometry, meanDiameter, activeCoils, freeLength }, c, Math.abs(c - exact) / precision.diameter, figures, req));
+      drawings.push(drawing({ ...geometry, meanDiameter, activeCoils, freeLength }, c, [Math.abs(i), Math.abs(c - exact)], figures, req));
     }
   }
-  drawings.sort((a, b) => a.diameterOffset - b.diameterOffset || Math.abs(a.workingForce - req.workingForce) - Math.abs(b.workingForce - req.workingForce));
+  drawings.sort(
+    (a, b) =>
+      a.diameterOffset[0] - b.diameterOffset[0] ||
+      a.diameterOffset[1] - b.diameterOffset[1] ||
+      Math.abs(a.workingForce - req.workingForce) - Math.abs(b.workingForce - req.workingForce),
+  );
   // The yield is a property of the made population: it depends on the drawn diameter, not on the free
   // length (each made spring's free length is set to its working force), so one Monte Carlo per diameter.
   const yields = new Map<number, YieldResult>();
