@@ -7,6 +7,7 @@ import type { Material } from '../../../catalogs/types.js';
 import type { Requirements } from '../requirements.js';
 import type { MaterialFigures, SpringAnalysis, SpringGeometry } from '../analysis.js';
 import { CHECK_LABELS, shortestLength, type CheckName } from '../verify.js';
+import { workingBand, type WorkingBand } from '../../../input/workingBand.js';
 import { loadToleranceCatalog, type ToleranceGrade } from '../tolerance/catalog.js';
 import { CONFIRM_SAMPLES } from '../tolerance/confirm.js';
 import type { SpringTolerances } from '../tolerance/model.js';
@@ -20,11 +21,26 @@ import { writeOutputFile } from '../../../report/writeFile.js';
 import { springDrawing } from './springDrawing.js';
 import { esc, r2 } from '../../../report/html/svg.js';
 
-/** The working force's band on the sheet: the requirement's load tolerance, 2% when that is zero, or
- * the residual given as the working-force tolerance when wider (the maker adjusts the free length to it). */
-export function workingForceBand(req: Requirements, t: SpringTolerances): number {
-  const band = req.loadTolerance > 0 ? req.loadTolerance : 0.02;
-  return Math.max(band, t.workingForce.halfWidth / req.workingForce);
+/** The force bands on the sheet: each the requirement's own, so a spring the maker delivers inside the
+ * sheet's bands meets the requirement (EN 15800 practice: a force at a length with its tolerance). The
+ * working force's is the band `check` judges (src/input/workingBand.ts); the operating force's the
+ * requirement's operating force with its load tolerance, when the requirement gives one. */
+export interface SheetForceBands {
+  working: WorkingBand;
+  operating: { force: number; tolerance: number; low: number; high: number } | null;
+  /** The force tolerance of the tolerance grade, relative, when wider than the working band (agree it with the maker). */
+  gradeWider: number | null;
+}
+
+export function sheetForceBands(req: Requirements, t: SpringTolerances): SheetForceBands {
+  const working = workingBand(req);
+  const lt = req.loadTolerance;
+  const operating =
+    req.operatingForce !== undefined
+      ? { force: req.operatingForce, tolerance: lt, low: req.operatingForce * (1 - lt), high: req.operatingForce * (1 + lt) }
+      : null;
+  const grade = t.workingForce.halfWidth / req.workingForce;
+  return { working, operating, gradeWider: grade > working.tolerance * (1 + 1e-9) ? grade : null };
 }
 
 /** Largest solid length, EN 13906-1 (from memory): Nt d_max with ground ends, (Nt + 1.5) d_max unground. */
@@ -92,7 +108,8 @@ export function specSheetHtml(input: SpecSheetInput): string {
   const g = a.geometry;
   const controlled = controlledDiameter(req);
   const diaTol = `± ${w.tol(t.meanDiameter.halfWidth)}`;
-  const band = workingForceBand(req, t);
+  const bands = sheetForceBands(req, t);
+  const wb = bands.working;
   const L1 = req.workingLength;
   // The maker meets the working force by adjusting the free length: the forces are those of the
   // spring's rate with F1 met, whatever the rounding of the reference free length.
@@ -127,15 +144,26 @@ export function specSheetHtml(input: SpecSheetInput): string {
     sheetRow('coiling direction', direction, ''),
     sheetRow('largest solid length', w.free(lsMax), `EN 13906-1 rule with d max (from memory); shortest working length ${w.free(shortest)}`),
   ];
+  const ob = bands.operating;
   const loads = [
-    sheetRow('working force F1', `${w.F(F1)} ± ${sheetPercent(band)}`, `at length L1 = ${w.free(L1)}; the toleranced force`),
-    operating
-      ? sheetRow(
-          'operating force F2',
-          `${w.F(operating.force)} ± ${sheetPercent(req.loadTolerance > 0 ? req.loadTolerance : band)}`,
-          `at length L2 = ${w.free(operating.length)}${req.operatingForce !== undefined ? `; required ${w.F(req.operatingForce)}` : ''}`,
-        )
-      : sheetRow('operating force F2', 'none', 'static spring: one working length'),
+    sheetRow(
+      'working force F1',
+      `${w.F(F1)} ± ${sheetPercent(wb.tolerance)}`,
+      `at length L1 = ${w.free(L1)}: ${w.F(wb.low)} to ${w.F(wb.high)}, ${wb.source === 'default' ? "coilfront's default 2% (the requirement gives no tolerance): agree it with the maker" : `the requirement's ${wb.source}`}`,
+    ),
+    !operating
+      ? sheetRow('operating force F2', 'none', 'static spring: one working length')
+      : ob
+        ? sheetRow(
+            'operating force F2',
+            ob.tolerance > 0 ? `${w.F(ob.force)} ± ${sheetPercent(ob.tolerance)}` : w.F(ob.force),
+            `at length L2 = ${w.free(operating.length)}: ${ob.tolerance > 0 ? `${w.F(ob.low)} to ${w.F(ob.high)} required` : 'exact in the requirements (load_tolerance 0): agree a tolerance with the maker'}; this spring as drawn ${w.F(a.points[a.points.length - 1].force)}`,
+          )
+        : sheetRow(
+            'operating force F2',
+            `${w.F(operating.force)} reference`,
+            `at length L2 = ${w.free(operating.length)}; for information (the requirements give no operating force)`,
+          ),
     sheetRow('rate', formatQuantity(a.rate, 'rate', system), 'for information'),
   ];
   const service = [
@@ -172,6 +200,10 @@ export function specSheetHtml(input: SpecSheetInput): string {
       );
   }
   const notes = [...t.notes];
+  if (bands.gradeWider !== null)
+    notes.push(
+      `the working-force band ± ${sheetPercent(wb.tolerance)} is tighter than the force tolerance of EN 15800 grade ${t.grade} (± ${sheetPercent(bands.gradeWider)}): agree it with the maker`,
+    );
   if (lsMax >= shortest)
     notes.push(`the largest solid length ${w.free(lsMax)} reaches the shortest working length ${w.free(shortest)}: agree the solid length with the maker`);
   const title = input.part ? `Compression spring: ${input.part}` : 'Compression spring specification';
@@ -189,7 +221,7 @@ export function specSheetHtml(input: SpecSheetInput): string {
       `<section><h2>Service</h2>${sheetTable(service)}</section>`,
       `<section><h2>Tolerances and yield</h2>${sheetTable(quality)}
 ${notes.length ? `<p class="note warn">${notes.map(esc).join('<br>')}</p>` : ''}</section>`,
-      `<p class="note">The maker may vary the free length to meet the working force at its length (the one toleranced force). Figures marked "from memory" in the sources could not be checked against the publication: confirm them with the maker.</p>`,
+      `<p class="note">The maker may vary the free length to meet the working force at its length; the forces are toleranced at their lengths by the requirement's own bands, so a spring inside them meets the requirement. Figures marked "from memory" in the sources could not be checked against the publication: confirm them with the maker.</p>`,
     ],
     cautions: CAUTIONS,
     footer: `Written by coilfront. Requirements: working force ${esc(w.F(req.workingForce))} at ${esc(w.free(L1))}${req.operatingForce !== undefined && req.operatingLength !== undefined ? `, operating force ${esc(w.F(req.operatingForce))} ± ${esc(sheetPercent(req.loadTolerance))} at ${esc(w.free(req.operatingLength))}` : ''}.`,

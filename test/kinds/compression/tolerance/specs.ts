@@ -129,3 +129,54 @@ export function buildSpec(s: Spec): { req: Requirements; spring: DesignedSpring 
   });
   return { req, spring: designed(s.material, d, D, s.na, s.ends, req) };
 }
+
+/** A requirements document of our own around a random spring (for the drawing and sheet properties): loads from the spring's
+ * own rate and a stress well inside the allowable, an envelope a little larger than the spring. */
+export const requirementArb = fc
+  .record({
+    material: fc.constantFrom('music-wire', 'hard-drawn', 'stainless-302', 'chrome-vanadium', 'chrome-silicon', 'oil-tempered'),
+    ends: fc.constantFrom('squared-ground', 'squared', 'plain', 'plain-ground'),
+    seating: fc.constantFrom('pivoted-pivoted', 'fixed-fixed', 'fixed-pivoted'),
+    d: fc.double({ min: 0.6, max: 4, noNaN: true }),
+    index: fc.double({ min: 5, max: 11, noNaN: true }),
+    na: fc.double({ min: 4, max: 14, noNaN: true }),
+    stress: fc.double({ min: 300, max: 600, noNaN: true }),
+    strokeShare: fc.double({ min: 0.3, max: 0.7, noNaN: true }),
+    overrun: fc.double({ min: 0.2, max: 0.6, noNaN: true }),
+    loadTolerance: fc.constantFrom(0.02, 0.05, 0.1, 0.15),
+    odRoom: fc.double({ min: 1, max: 1.15, noNaN: true }),
+    freeRoom: fc.double({ min: 1, max: 1.4, noNaN: true }),
+    rod: fc.option(fc.double({ min: 0.5, max: 0.95, noNaN: true }), { nil: undefined }),
+    cycles: fc.constantFrom(undefined, 1e5, 1e6, 1e7),
+    guided: fc.boolean(),
+    units: fc.constantFrom('si', 'si', 'us'),
+  })
+  .map((v) => {
+    const D = v.index * v.d;
+    const k = (79300 * v.d ** 4) / (8 * D ** 3 * v.na);
+    const F2 = (v.stress * Math.PI * v.d ** 3) / (8 * D * 1.15);
+    const stroke = (v.strokeShare * F2) / k;
+    const L2 = v.d * (v.na + 3) + (v.overrun * F2) / k;
+    const L1 = L2 + stroke;
+    const L0 = L1 + (F2 - k * stroke) / k;
+    const r = (x: number) => Number(x.toFixed(1));
+    const doc: Record<string, unknown> = {
+      units: v.units,
+      material: v.material,
+      ends: v.ends,
+      seating: v.seating,
+      load: { force: `${r(F2 - k * stroke)} N`, length: `${r(L1)} mm` },
+      operating_length: `${r(L2)} mm`,
+      operating_force: `${r(F2)} N`,
+      load_tolerance: v.loadTolerance,
+      envelope: {
+        max_outer_diameter: `${r((D + v.d) * v.odRoom)} mm`,
+        max_free_length: `${r(L0 * v.freeRoom)} mm`,
+        ...(v.rod !== undefined ? { min_inner_diameter: `${r((D - v.d) * v.rod)} mm` } : {}),
+      },
+      guided: v.guided,
+      top: 3,
+      ...(v.cycles !== undefined ? { cycles: v.cycles } : {}),
+    };
+    return doc;
+  });
