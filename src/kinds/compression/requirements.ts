@@ -10,7 +10,8 @@ import type { StressCorrection } from '../../model/stressFactor.js';
 import { InputError } from '../../units/parse.js';
 import type { UnitSystem } from '../../units/systems.js';
 import { Fields } from '../../units/fields.js';
-import { applyStrengthBasis, STRENGTH_BASES, type MaterialChoice, type StrengthBasis } from '../../input/material.js';
+import { applyStrengthBasis, materialFigures, STRENGTH_BASES, type MaterialChoice, type StrengthBasis } from '../../input/material.js';
+import { ultimateShearStrength } from '../../model/strength.js';
 import { SURGE_ENDS, type SurgeEnds } from '../../model/surge.js';
 import {
   checkWireSizes,
@@ -234,7 +235,29 @@ export function readRequirements(raw: unknown, catalog: Catalog): Requirements {
   if (req.loadTolerance >= 1) throw new InputError('load_tolerance', 'a fraction below 1 (such as 0.1 or "10%")', f.get('load_tolerance'));
   if (req.workingTolerance !== undefined && req.workingTolerance >= 1)
     throw new InputError('working_tolerance', 'a fraction below 1 (such as 0.02 or "2%")', f.get('working_tolerance'));
+  if (req.allowableStress !== undefined) checkAllowableStress(req, f.get('allowable_stress'));
   f.get('material_map'); // the stock table's material words; read and checked by src/stock/materialMap.ts
   f.rejectUnknown();
   return req;
+}
+
+/** A requirement-level allowable_stress replaces every wire's own (figuresUnder); above a wire's
+ * torsional ultimate Ssu = 0.67 Sut (Budynas and Nisbett, Shigley, eq. 10-30) the static check would pass
+ * a spring whose stress breaks it. So the allowable must not exceed the ultimate of the weakest wire the
+ * search may use (the wires of problem.ts's stock: in the material's strength range, able to fit the bore). */
+function checkAllowableStress(req: Requirements, given: unknown): void {
+  let weakest: { ssu: number; material: string; d: number } | null = null;
+  for (const m of req.materials)
+    for (const d of req.wireSizes(m)) {
+      if (m.tensileStrength === undefined && !inStrengthRange(m.material, d)) continue;
+      if (req.maxOuterDiameter !== undefined && d * (req.index[0] + 1) > req.maxOuterDiameter) continue;
+      const ssu = ultimateShearStrength(materialFigures(m, d, req.setRemoved).tensileStrength);
+      if (!weakest || ssu < weakest.ssu) weakest = { ssu, material: m.material.id, d };
+    }
+  if (weakest && req.allowableStress! > weakest.ssu)
+    throw new InputError(
+      'allowable_stress',
+      `a stress at most the torsional ultimate strength of every wire the search may use, Ssu = 0.67 Sut (Shigley eq. 10-30); the weakest, ${weakest.material} of ${formatQuantity(weakest.d, 'length', req.system)}, has Ssu ${formatQuantity(weakest.ssu, 'stress', req.system)}: lower allowable_stress, or narrow material or wire_sizes to stronger wires`,
+      given,
+    );
 }

@@ -1,6 +1,7 @@
 // A requirement-level `allowable_stress` is the allowable of every printed figure (issue 12, item 2).
 // Sources: 1 psi = 6.894 757 293 168 kPa (NIST SP 811, Appendix B.8, lbf/in^2 to Pa); the 302 stainless scenario with a
-// 90 kpsi allowable is invented for the test (the trigger spring of our own demo).
+// 90 kpsi allowable is invented for the test (the trigger spring of our own demo); the torsional ultimate
+// Ssu = 0.67 Sut is Budynas and Nisbett, Shigley's Mechanical Engineering Design, eq. 10-30.
 import { describe, expect, it } from 'vitest';
 import { loadCatalog } from '../../../src/catalogs/load.js';
 import { readInputFile } from '../../../src/input/document.js';
@@ -9,6 +10,7 @@ import { readSpringCase } from '../../../src/kinds/compression/springFile.js';
 import { analyzeSpring } from '../../../src/kinds/compression/analysis.js';
 import { runDesign } from '../../../src/kinds/compression/design.js';
 import { springDocument } from '../../../src/kinds/compression/springDoc.js';
+import { materialFigures } from '../../../src/input/material.js';
 import { cli } from '../../helpers.js';
 
 const KPSI = 6.894757293168;
@@ -88,5 +90,28 @@ describe('a requirement-level allowable_stress', () => {
     const best = runDesign(req).candidates[0];
     expect(best.analysis.staticSafetyFactor).toBeGreaterThanOrEqual(1 - 1e-9);
     expect(best.analysis.staticSafetyFactor).toBeLessThan(1.1);
+  });
+});
+
+describe('an allowable_stress above the wire can carry', () => {
+  it('is refused naming the field, the limit Ssu = 0.67 Sut of the weakest wire and its source: exit 2, nothing on stdout', async () => {
+    const r = await cli('design', demo, '--set', 'allowable_stress=5000', '--set', 'envelope.min_inner_diameter=none');
+    expect(r.code).toBe(2);
+    expect(r.stdout).toBe('');
+    expect(r.stderr).toMatch(/allowable_stress: expected a stress at most the torsional ultimate strength/);
+    expect(r.stderr).toContain('Ssu = 0.67 Sut (Shigley eq. 10-30)');
+    expect(r.stderr).not.toMatch(/\n\s+at /); // no stack trace
+  });
+
+  it('is judged against the weakest wire the search may use (stainless 302 of 3 mm in the demo bore)', async () => {
+    // The demo's wires fit a 16 mm bore up to 3.2 mm (index 4): the largest listed size is 3.0 mm.
+    const catalog = loadCatalog();
+    const req = readRequirements(readInputFile(demo), catalog);
+    const m = req.materials[0];
+    const ssu = 0.67 * materialFigures(m, 3, false).tensileStrength; // Shigley eq. 10-30
+    const limit = /has Ssu ([\d.]+) MPa/.exec((await cli('design', demo, '--set', 'allowable_stress=5000')).stderr);
+    expect(Number(limit![1])).toBeCloseTo(ssu, -1);
+    expect((await cli('design', demo, '--set', `allowable_stress=${Math.floor(ssu) - 1}`, '--top', '1')).code).not.toBe(2);
+    expect((await cli('design', demo, '--set', `allowable_stress=${Math.ceil(ssu) + 1}`, '--top', '1')).code).toBe(2);
   });
 });

@@ -273,12 +273,12 @@ export function yieldNote(run: DesignRun): string[] {
   const lines = [
     `Yield: the share of made springs that pass every check, EN 15800 grade ${req.tolerance.grade}${Object.keys(req.tolerance.overrides).length ? ' with the given tolerances' : ''}, each tolerance taken as 3 sigma, the free length adjusted to the working force; seeded Monte Carlo of ${groupedCount(n)} springs (seed ${req.seed}).` +
       (req.minYield !== undefined
-        ? ` min_yield ${yieldPercent(req.minYield)}: the search required it by its estimate, and every listed spring's Monte Carlo yield (the figure shown) reaches it; \`coilfront check\` with the same seed prints the same figure for the same spring (standard error about ${sig(Math.sqrt((req.minYield * (1 - req.minYield)) / Math.max(n, 1)) * 100, 2)}%).`
+        ? ` min_yield ${yieldPercent(req.minYield)}: the search required it by its estimate; the Monte Carlo (the figure shown) confirms each listed spring to within its standard error, and \`coilfront check\` with the same seed prints the same figure for the same spring and judges it by the same rule (standard error about ${sig(Math.sqrt((req.minYield * (1 - req.minYield)) / Math.max(n, 1)) * 100, 2)}%).`
         : ' Add min_yield (such as 0.99) to design for it.'),
   ];
   for (const r of run.refused ?? []) {
     lines.push(
-      `Refused: a ${r.candidate.item.choice.material.id} spring of d ${formatQuantity(r.candidate.geometry.wireDiameter, 'length', req.system)}, Na ${r.candidate.geometry.activeCoils} passed the search by its yield estimate (${yieldPercent(r.yield.estimate)}) but the Monte Carlo gives ${yieldPercent(r.yield.monteCarlo.yield)} +- ${sig(r.yield.monteCarlo.standardError * 100, 2)}%, below min_yield: it is left out${run.grouped ? ' (its other coil counts: --variants)' : ''}.`,
+      `Refused: a ${r.candidate.item.choice.material.id} spring of d ${formatQuantity(r.candidate.geometry.wireDiameter, 'length', req.system)}, Na ${r.candidate.geometry.activeCoils} passed the search by its yield estimate (${yieldPercent(r.yield.estimate)}) but the Monte Carlo gives ${yieldPercent(r.yield.monteCarlo.yield)} +- ${sig(r.yield.monteCarlo.standardError * 100, 2)}%, below min_yield by more than its standard error: it is left out${run.grouped ? ' (its other coil counts: --variants)' : ''}.`,
     );
   }
   return lines;

@@ -97,7 +97,7 @@ export interface CandidateYield {
   monteCarlo: YieldResult;
   /** The check that limits the yield: the one the sampled springs failed most often (else the estimate's). */
   limiting: CheckName | null;
-  /** min_yield is set and the Monte Carlo yield is below it (confirm.ts yieldShortfall). */
+  /** min_yield is set and the Monte Carlo yield is below it by more than its standard error (confirm.ts yieldShortfall). */
   refused: boolean;
 }
 
