@@ -6,6 +6,7 @@ import type { Catalog, Material } from '../catalogs/types.js';
 import type { MaterialFigures } from '../model/figures.js';
 import { staticAllowable } from '../model/strength.js';
 import { InputError } from '../units/parse.js';
+import { formatQuantity } from '../units/format.js';
 import type { UnitSystem } from '../units/systems.js';
 import { Fields, isRecord } from '../units/fields.js';
 
@@ -116,7 +117,11 @@ export function materialFigures(choice: MaterialChoice, d: number, setRemoved: b
   };
 }
 
-export function strengthRangeNote(choice: MaterialChoice, d: number): string | undefined {
+/** The note on a wire outside the diameters its material's strength is sourced for, in the unit system
+ * of the file that gave the wire (a US spring file reads inches). An existing spring is analysed with it:
+ * a warning, not a refusal (a requirements file's wire_sizes are refused instead: readers.ts). */
+export function strengthRangeNote(choice: MaterialChoice, d: number, system: UnitSystem = 'si'): string | undefined {
   if (choice.tensileStrength !== undefined || inStrengthRange(choice.material, d)) return undefined;
-  return `wire diameter ${d.toPrecision(3)} mm is outside the sourced strength range of ${choice.material.id} (${choice.material.minDiameter} to ${choice.material.maxDiameter} mm): the strength law is extrapolated`;
+  const L = (v: number) => formatQuantity(v, 'length', system);
+  return `wire diameter ${L(d)} is outside the sourced strength range of ${choice.material.id} (${L(choice.material.minDiameter)} to ${L(choice.material.maxDiameter)}): the strength law is extrapolated`;
 }

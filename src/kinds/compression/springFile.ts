@@ -116,7 +116,7 @@ export function readSpringCase(raw: unknown, catalog: Catalog): SpringCase {
   };
   f.rejectUnknown();
   const notes: string[] = [];
-  const range = strengthRangeNote(choice, d);
+  const range = strengthRangeNote(choice, d, system);
   if (range) notes.push(range);
   if (cycles !== undefined && cycles < 1e4) notes.push(`${cycles} cycles is below 1e4: judged as static service`);
   return {

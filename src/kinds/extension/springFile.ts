@@ -130,7 +130,7 @@ export function readExtensionSpring(raw: unknown, catalog: Catalog, ext: Extensi
   };
   f.rejectUnknown();
   const notes: string[] = [];
-  const range = strengthRangeNote(choice, d);
+  const range = strengthRangeNote(choice, d, system);
   if (range) notes.push(range);
   if (r2given === undefined) notes.push(`bend_radius not given: r2 = ${q(r2)} assumed (bend index C2 = ${ext.bendIndex.value}; ${ext.bendIndex.source})`);
   if (cycles !== undefined && cycles < 1e4) notes.push(`${cycles} cycles is below 1e4: judged as static service`);

@@ -17,7 +17,7 @@ import { analyzeSpring } from '../../../src/kinds/compression/analysis.js';
 import { CHECKS } from '../../../src/kinds/compression/verify.js';
 import { candidateAt } from '../../../src/kinds/compression/design.js';
 import { drawnSpringDocument, springDocument, springFileText } from '../../../src/kinds/compression/springDoc.js';
-import { cli } from '../../helpers.js';
+import { cli, inputFile } from '../../helpers.js';
 
 const catalog = loadCatalog();
 const demoDoc = parse(readFileSync('examples/washer-trigger.yaml', 'utf8')) as Record<string, unknown>;
@@ -190,5 +190,47 @@ describe('design --spring-file and --pick', () => {
     const alone = await cli('design', 'examples/washer-trigger.yaml', '--pick', '2');
     expect(alone.code).toBe(2);
     expect(alone.stderr).toMatch(/--pick.*--spring-file/);
+  });
+});
+
+describe('a spring file whose wire lies outside the sourced strength range', () => {
+  // An existing spring is analysed, not refused: the strength law is extrapolated and the warning says so,
+  // in the file's own units (a US file read "wire diameter 40.6 mm is outside ... (0.1 to 6.5 mm)").
+  const us = [
+    'units: us',
+    'material: music-wire',
+    'wire_diameter: 1.6',
+    'outer_diameter: 12',
+    'active_coils: 8',
+    'ends: squared-ground',
+    'free_length: 20',
+    'lengths: [18, 16]',
+  ];
+  it('is analysed with a warning in inches when the file is in US units', async () => {
+    const path = inputFile(us.join('\n') + '\n');
+    const r = await cli('analyze', path);
+    expect(r.code).toBe(0);
+    expect(r.stdout).toMatch(
+      /wire diameter 1\.600 in is outside the sourced strength range of music-wire \([\d.]+ in to [\d.]+ in\): the strength law is extrapolated/,
+    );
+    expect(r.stdout).not.toMatch(/outside[^\n]* mm/);
+  });
+
+  it('is analysed with the warning in mm in an SI file, while a requirements file refuses such a wire size', async () => {
+    const path = inputFile(
+      us
+        .join('\n')
+        .replace('units: us', 'units: si')
+        .replace('wire_diameter: 1.6', 'wire_diameter: 12')
+        .replace('outer_diameter: 12', 'outer_diameter: 90')
+        .replace('free_length: 20', 'free_length: 200')
+        .replace('[18, 16]', '[180, 160]') + '\n',
+    );
+    const r = await cli('analyze', path);
+    expect(r.code).toBe(0);
+    expect(r.stdout).toMatch(/wire diameter 12\.00 mm is outside the sourced strength range of music-wire/);
+    const d = await cli('design', 'examples/washer-trigger.yaml', '--set', 'wire_sizes=[40]');
+    expect(d.code).toBe(2);
+    expect(d.stderr).toMatch(/wire_sizes\[0\]: expected a diameter the chosen material is made in/);
   });
 });
