@@ -24,7 +24,10 @@ import { withValue } from '../../input/overrides.js';
 import { readRequirements, type Requirements } from './requirements.js';
 import { SEATINGS, endConditionConstant } from './buckling.js';
 import { INFINITE_LIFE_CYCLES, STATIC_SERVICE_CYCLES } from '../../model/fatigue.js';
-import { END_TYPES } from './geometry.js';
+import { END_TYPES, inactiveCoils, solidLength } from './geometry.js';
+import { inStrengthRange } from '../../catalogs/properties.js';
+import { materialFigures } from '../../input/material.js';
+import { springRate } from '../../model/rate.js';
 import { CHECKS, activeChecks, type CheckName } from './verify.js';
 import { admitsSpring, runDesign, type DesignRun } from './design.js';
 import { easedBy } from './checks.js';
@@ -140,21 +143,64 @@ function linear(
   };
 }
 
-/** Every knob that can relax these requirements, with the range tried. The ranges stop at values a
- * spring maker still builds (index 3 to 20, at least 2 active coils: common practice). */
+/** Where each envelope limit stops binding: the largest outer diameter (a generous 25% over the free
+ * outer diameter for the growth at solid), free length (the softest coil meeting the working force) and
+ * solid length any spring of the request's wires, index and coil range can have. Raising a limit past
+ * its value cannot admit a spring that a smaller raise does not, so the advice tries up to there. */
+export function envelopeReach(req: Requirements): { outerDiameter: number; freeLength: number; solidLength: number } {
+  const reach = { outerDiameter: 0, freeLength: 0, solidLength: 0 };
+  const nMax = req.activeCoils[1];
+  for (const m of req.materials)
+    for (const d of req.wireSizes(m)) {
+      if (m.tensileStrength === undefined && !inStrengthRange(m.material, d)) continue;
+      const D = req.index[1] * d;
+      const k = springRate(materialFigures(m, d, req.setRemoved).shearModulus, d, D, nMax, req.directShear);
+      reach.outerDiameter = Math.max(reach.outerDiameter, 1.25 * (D + d));
+      reach.freeLength = Math.max(reach.freeLength, req.workingLength + req.workingForce / k);
+      for (const e of req.ends) reach.solidLength = Math.max(reach.solidLength, solidLength(d, nMax + inactiveCoils(e), e));
+    }
+  return reach;
+}
+
+/** Every knob that can relax these requirements, with the range tried. The envelope limits are tried up
+ * to where they stop binding (envelopeReach), at least to twice their value; the other ranges stop at
+ * values a spring maker still builds (index 3 to 20, at least 2 active coils: common practice). */
 function knobs(req: Requirements, doc: Record<string, unknown>, catalog: Catalog, nominalYield: number | null): Knob[] {
+  const reach = envelopeReach(req);
   const on = activeChecks(req);
   const active = (c: CheckName) => on[CHECKS.indexOf(c)];
   const out: (Knob | null)[] = [];
   const env = 'envelope.';
   if (req.maxOuterDiameter !== undefined)
-    out.push(linear(`${env}max_outer_diameter`, 'limit', easedBy(`${env}max_outer_diameter`), req.maxOuterDiameter, 1, 2 * req.maxOuterDiameter, 'mm'));
+    out.push(
+      linear(
+        `${env}max_outer_diameter`,
+        'limit',
+        easedBy(`${env}max_outer_diameter`),
+        req.maxOuterDiameter,
+        1,
+        Math.max(2 * req.maxOuterDiameter, reach.outerDiameter),
+        'mm',
+      ),
+    );
   if (req.minInnerDiameter !== undefined)
     out.push(linear(`${env}min_inner_diameter`, 'limit', easedBy(`${env}min_inner_diameter`), req.minInnerDiameter, -1, 0.1 * req.minInnerDiameter, 'mm'));
   if (req.maxFreeLength !== undefined)
-    out.push(linear(`${env}max_free_length`, 'limit', easedBy(`${env}max_free_length`), req.maxFreeLength, 1, 2 * req.maxFreeLength, 'mm'));
+    out.push(
+      linear(`${env}max_free_length`, 'limit', easedBy(`${env}max_free_length`), req.maxFreeLength, 1, Math.max(2 * req.maxFreeLength, reach.freeLength), 'mm'),
+    );
   if (req.maxSolidLength !== undefined)
-    out.push(linear(`${env}max_solid_length`, 'limit', easedBy(`${env}max_solid_length`), req.maxSolidLength, 1, 2 * req.maxSolidLength, 'mm'));
+    out.push(
+      linear(
+        `${env}max_solid_length`,
+        'limit',
+        easedBy(`${env}max_solid_length`),
+        req.maxSolidLength,
+        1,
+        Math.max(2 * req.maxSolidLength, reach.solidLength),
+        'mm',
+      ),
+    );
   if (req.operatingLength !== undefined) {
     // A shorter stroke: the operating length moves toward the working length (it must stay below it).
     out.push(

@@ -11,7 +11,7 @@ import { readInputFile } from '../../../src/input/document.js';
 import { readRequirements, type Requirements } from '../../../src/kinds/compression/requirements.js';
 import { requirementsRecord } from '../../../src/kinds/compression/report/designReport.js';
 import { admitsSpring, runDesign } from '../../../src/kinds/compression/design.js';
-import { RELAX_LIMITS, confirmedBestYield, limitingCheck, outward, relaxAdvice } from '../../../src/kinds/compression/relax.js';
+import { RELAX_LIMITS, confirmedBestYield, envelopeReach, limitingCheck, outward, relaxAdvice } from '../../../src/kinds/compression/relax.js';
 import { ADVICE_ORDER, COMPRESSION_CHECKS, easedBy } from '../../../src/kinds/compression/checks.js';
 import { requirementsDocument } from '../../../src/kinds/compression/requirementsDoc.js';
 import { readFileSync } from 'node:fs';
@@ -208,7 +208,7 @@ describe('relax advice', () => {
     const r = await cli('design', clamp, '--report', html);
     expect(r.code).toBe(1);
     const page = readFileSync(html, 'utf8');
-    expect(page).toMatch(/<p>No single change of a limit or setting admits a spring.<\/p>/);
+    expect(page).toMatch(/<p>No single change of a limit or setting admits a spring[^<]*<\/p>/);
     const list = /<ul>(<li>[\s\S]*?)<\/ul>/.exec(page.slice(page.indexOf('No single change')))![1];
     expect(list.match(/<li>/g)).toHaveLength(2);
     const inf = await infeasible([clamp]);
@@ -414,5 +414,32 @@ describe('advice for the yield check (min_yield, tolerance_grade)', { timeout: 6
     expect(bore.reaches).toBe(0.991);
     expect(a.single.every((c) => c.reaches !== undefined)).toBe(true);
     expect(a.single.some((c) => c.path === 'tolerance_grade' || c.path === 'min_yield')).toBe(false);
+  });
+});
+
+describe('the range each envelope limit is tried over', () => {
+  // source: none needed (our own advice, re-verified by running design). The audit case: a 6.6 mm bore
+  // was said to need a pair of changes because the bore was tried only up to twice its size (13.2 mm).
+  it('reaches where the limit stops binding: a 6.6 mm bore is advised open to about 14 mm alone, and that change admits a spring', async () => {
+    const r = await cli('design', demo, '--max-od', '6.6');
+    expect(r.code).toBe(1);
+    expect(r.stdout).not.toContain('No single change');
+    const m = /raise envelope\.max_outer_diameter from 6\.600 mm to ([\d.]+) mm .*\[--set envelope\.max_outer_diameter=([\d.]+)\]/.exec(r.stdout);
+    expect(m).not.toBeNull();
+    expect(Number(m![2])).toBeGreaterThan(13.2);
+    const again = await cli('design', demo, '--set', `envelope.max_outer_diameter=${m![2]}`);
+    expect(again.code).toBe(0);
+  }, 60_000);
+
+  it('envelopeReach bounds the outer diameter, free length and solid length of every spring of the space', () => {
+    const req = readRequirements(readInputFile(demo) as Record<string, unknown>, loadCatalog());
+    const reach = envelopeReach(req);
+    const run = runDesign({ ...req, maxOuterDiameter: undefined, maxFreeLength: undefined, bestPerWire: false, top: 50 });
+    expect(run.candidates.length).toBeGreaterThan(10);
+    for (const c of run.candidates) {
+      expect(c.analysis.solid.outerDiameter).toBeLessThanOrEqual(reach.outerDiameter);
+      expect(c.geometry.freeLength).toBeLessThanOrEqual(reach.freeLength * (1 + 1e-9));
+      expect(c.analysis.geometry.solidLength).toBeLessThanOrEqual(reach.solidLength * (1 + 1e-9));
+    }
   });
 });

@@ -196,7 +196,9 @@ export function relaxLines(run: DesignRun, system: UnitSystem): string[] {
     for (const c of alone) out.push(`  - ${describeChange(c, system)}`);
     return out;
   }
-  out.push('No single change of a limit or setting admits a spring.');
+  out.push(
+    'No single change of a limit or setting admits a spring (envelope limits tried up to where they stop binding, the operating force to twice its value, the other limits over the ranges a spring maker builds).',
+  );
   if (a.pair) {
     out.push('These two changes together admit one (tried):');
     for (const c of a.pair) out.push(`  - ${describeChange(c, system)}`);
