@@ -8,6 +8,7 @@ import { FATIGUE_CRITERIA, type FatigueCriterion } from '../../model/fatigue.js'
 import { END_TYPES, type EndType } from './geometry.js';
 import type { StressCorrection } from '../../model/stressFactor.js';
 import { InputError } from '../../units/parse.js';
+import { formatQuantity } from '../../units/format.js';
 import type { UnitSystem } from '../../units/systems.js';
 import { Fields } from '../../units/fields.js';
 import { applyStrengthBasis, materialFigures, STRENGTH_BASES, type MaterialChoice, type StrengthBasis } from '../../input/material.js';
