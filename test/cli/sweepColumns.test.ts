@@ -1,7 +1,7 @@
 // The sweep CSV's first column names the varied requirement in its own unit, in the chosen system:
 // a cycle count has none, load_tolerance is a fraction, a diameter a length (audit finding 15: every
 // varied column was headed "(mm/N/MPa)", also under --units us).
-// Outside value: 1 in = 25.4 mm exactly (NIST SP 811, Appendix B.8).
+// Outside value: 1 in = 25.4 mm exactly (source: NIST SP 811, Appendix B.8); everything else is our own output.
 import { describe, expect, it } from 'vitest';
 import { cli } from '../helpers.js';
 
@@ -33,7 +33,7 @@ describe('sweep CSV: the varied column in its own unit', () => {
     ]);
     expect(await firstColumn('examples/washer-trigger.yaml', '--vary', 'envelope.max_outer_diameter=14:16:2', '--units', 'us')).toEqual([
       'envelope.max_outer_diameter (in)',
-      '0.551181',
+      '0.551181', // 14 mm / 25.4 (source: NIST SP 811, Appendix B.8: 1 in = 25.4 mm exactly)
       '0.629921',
     ]);
   });

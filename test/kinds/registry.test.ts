@@ -1,4 +1,4 @@
-// No outside values here: the dispatch on the `kind` field is coilfront's own interface (issue 7).
+// source: none needed. No outside values here: the dispatch on the `kind` field is coilfront's own interface (issue 7).
 import { readFileSync } from 'node:fs';
 import { describe, expect, it } from 'vitest';
 import { KINDS, kindOf } from '../../src/kinds/index.js';

@@ -1,4 +1,5 @@
-// No outside values here beyond the inch's definition (1 in = 25.4 mm exactly, so 1 in^3 = 16387.064 mm^3).
+// No outside values here beyond the inch's definition (source: NIST SP 811, Appendix B.8: 1 in = 25.4 mm
+// exactly, so 1 in^3 = 16387.064 mm^3).
 // Wire volume is written in the volume unit of the chosen system: the LP bound of a volume-ranked design
 // in the text and the HTML report, and the frontier plot's axis.
 import { readFileSync } from 'node:fs';
@@ -17,7 +18,7 @@ describe('wire volume in output', () => {
     expect(siBound).not.toBeNull();
     expect(usBound).not.toBeNull();
     expect(Number(siBound![1])).toBeCloseTo(json.lp_bound, 0);
-    expect(Number(usBound![1]) * 16387.064).toBeCloseTo(json.lp_bound, 0);
+    expect(Number(usBound![1]) * 16387.064).toBeCloseTo(json.lp_bound, 0); // mm^3 per in^3 (source: NIST SP 811, Appendix B.8)
   });
 
   it("the HTML report writes the bound and the frontier axis in the report's units", async () => {

@@ -1,6 +1,6 @@
 // The outputs of extension springs: text, JSON (SI, snake_case, null where a figure does not apply),
 // CSV rows and the HTML sections, all read from the analysis the search re-verified. Properties of our
-// own output, no outside values (the figures themselves are checked in analysis.test.ts).
+// own output, no outside values (the figures themselves are checked in analysis.test.ts): source: none needed.
 import { readFileSync } from 'node:fs';
 import { parse } from 'yaml';
 import { describe, expect, it } from 'vitest';

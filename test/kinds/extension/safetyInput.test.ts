@@ -1,6 +1,6 @@
 // Extension requirements and spring files refuse a safety factor or surge margin below 1, as compression
 // ones do (test/cli/battery.cases.ts): below 1 the spring would be designed past its own allowable.
-// No outside values: the inputs are the pedal-bin demo, a scenario of our own.
+// No outside values: the inputs are the pedal-bin demo, a scenario of our own (source: none needed).
 import { readFileSync } from 'node:fs';
 import { parse } from 'yaml';
 import { describe, expect, it } from 'vitest';
