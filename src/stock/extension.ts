@@ -22,7 +22,7 @@ import { DIAMETER_FIELDS, readHeader, type FieldType, type Layout } from './colu
 import { readMaterialMap, resolveMaterial, type MaterialMap } from './materialMap.js';
 import { comparison, csvUnit, num, six, stockFigures, type StockComparison, type StockFigures, type StockView } from './render.js';
 import { DEFAULT_RATE_DEVIATION, settleRows, type StockOptions, type StockRankKey } from './shared.js';
-import { RowError, numberCell, quantityCell, rawRows, type BadRow } from './table.js';
+import { RowError, firstFilled, numberCell, quantityCell, rawRows, type BadRow } from './table.js';
 
 /** The columns of a table of extension springs (a unit suffix as for compression tables). Lengths are
  * inside the loops, as in an extension spring file. */
@@ -144,14 +144,7 @@ function readRow(cells: string[], line: number, layout: Layout<ExtensionStockFie
       `a catalog material id or a word that the requirements' material_map maps to one, got ${JSON.stringify(materialWord)}`,
     );
   const q = (f: ExtensionStockField) => quantityCell(cell(f)!, cols[f]!, o.system, EXTENSION_STOCK_FIELDS[f] as 'length' | 'force' | 'rate');
-  const diameter = DIAMETER_FIELDS.find((f) => cell(f) !== undefined);
-  if (!diameter)
-    throw new RowError(
-      DIAMETER_FIELDS.filter((f) => cols[f])
-        .map((f) => cols[f]!.name)
-        .join(' | '),
-      'a coil diameter (the cells are empty)',
-    );
+  const diameter = firstFilled(DIAMETER_FIELDS, cols, cell, 'a coil diameter');
   need('wire_diameter', 'a wire diameter');
   need('body_coils', 'a body-coil count');
   const fi = need('initial_tension', 'an initial tension');

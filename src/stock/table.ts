@@ -125,6 +125,26 @@ export function numberCell(cell: string, col: Column<string>, rule: { positive?:
 }
 
 /** One data row into a spring file and the table's own figures. */
+/** The first of a row's alternative columns (a coil diameter given as mean, outer or inner; a coil count as
+ * active or total) that holds a value; a row with all of them empty names every such column it has. */
+export function firstFilled<F extends string>(
+  fields: readonly F[],
+  cols: Partial<Record<F, { name: string }>>,
+  cell: (f: F) => string | undefined,
+  what: string,
+): F {
+  const found = fields.find((f) => cell(f) !== undefined);
+  if (found === undefined)
+    throw new RowError(
+      fields
+        .filter((f) => cols[f])
+        .map((f) => cols[f]!.name)
+        .join(' | '),
+      `${what} (the cells are empty)`,
+    );
+  return found;
+}
+
 function readRow(cells: string[], line: number, layout: Layout, o: TableOptions): StockRow {
   const cols = layout.columns;
   const cell = (f: StockField): string | undefined => {
@@ -164,22 +184,8 @@ function readRow(cells: string[], line: number, layout: Layout, o: TableOptions)
       `an end type (${END_TYPES.join(' | ')}, or closed / closed and ground / open / open ground), got ${JSON.stringify(endsWord)}`,
     );
   const q = (f: StockField) => quantityCell(cell(f)!, cols[f]!, o.system);
-  const diameter = DIAMETER_FIELDS.find((f) => cell(f) !== undefined);
-  if (!diameter)
-    throw new RowError(
-      DIAMETER_FIELDS.filter((f) => cols[f])
-        .map((f) => cols[f]!.name)
-        .join(' | '),
-      'a coil diameter (the cells are empty)',
-    );
-  const coils = COIL_FIELDS.find((f) => cell(f) !== undefined);
-  if (!coils)
-    throw new RowError(
-      COIL_FIELDS.filter((f) => cols[f])
-        .map((f) => cols[f]!.name)
-        .join(' | '),
-      'a coil count (the cells are empty)',
-    );
+  const diameter = firstFilled(DIAMETER_FIELDS, cols, cell, 'a coil diameter');
+  const coils = firstFilled(COIL_FIELDS, cols, cell, 'a coil count');
   need('wire_diameter', 'a wire diameter');
   need('free_length', 'a free length');
   const columnOf: Record<string, string> = {};
